@@ -1,0 +1,28 @@
+// Sample autocorrelations of residuals, r_k = c_k / c_0 with the divisor-n autocovariances
+// of the demeaned series, and the ±1.96/√n band inside which about 95% of them fall when the
+// residuals are white noise (Bartlett 1946; Box & Jenkins, common practice).
+import { autocovariances, demean } from './autocovariances.js';
+import { defaultAcfLags } from './defaultAcfLags.js';
+import { finiteSeries } from './finiteSeries.js';
+import type { AcfResult } from './types.js';
+
+/** Autocorrelations at lags 1..lags (default min(10, floor(n/5))) with their white-noise band. */
+export function residualAcf(residuals: ArrayLike<number>, options: { lags?: number } = {}): AcfResult {
+  const series = finiteSeries(residuals, 'residualAcf');
+  const n = series.length;
+  return { ...autocorrelations(series, options.lags ?? defaultAcfLags(n), 'residualAcf'), bound: 1.96 / Math.sqrt(n) };
+}
+
+/** Lags 1..lags and r_k for them; shared with the Ljung-Box statistic. */
+export function autocorrelations(
+  series: Float64Array,
+  lags: number,
+  caller: string,
+): Pick<AcfResult, 'lag' | 'acf'> {
+  if (!Number.isInteger(lags) || lags < 1) throw new Error(`${caller} needs a whole number of lags, at least 1`);
+  if (lags >= series.length) throw new Error(`${caller} needs more observations than lags`);
+  const c = autocovariances(demean(series), lags);
+  if (!(c[0] > 0)) throw new Error(`${caller} needs residuals that are not all equal`);
+  const lag = Array.from({ length: lags }, (_, i) => i + 1);
+  return { lag, acf: lag.map((k) => c[k] / c[0]) };
+}

@@ -1,0 +1,92 @@
+// Records of the evidence stage. Keys are snake_case because they go into the
+// AnalysisRecord as plain JSON; once landed they are fixed (add keys, rename none).
+
+/** Critical values of the KPSS statistic by test size in percent (KPSS 1992, Table 1). */
+export interface KpssCritical {
+  '10': number;
+  '5': number;
+  '2.5': number;
+  '1': number;
+}
+
+/**
+ * How the lag truncation was set: 'auto' chosen from the data (Hobijn, Franses & Ooms 2004),
+ * 'fixed' not chosen from the data (the ceil(12(n/100)^{1/4}) rule, or a count the caller gave).
+ */
+export type KpssLagRule = 'auto' | 'fixed';
+
+/** KPSS test of level- or trend-stationarity. */
+export interface KpssResult {
+  stat: number;
+  lags: number;
+  /** Interpolated in KPSS Table 1; at the table's edge when `p_bound` is set. */
+  p_value: number;
+  /** 'below': the true p-value is under 0.01; 'above': it is over 0.10. */
+  p_bound?: 'below' | 'above';
+  critical: KpssCritical;
+  regression: 'level' | 'trend';
+  lag_rule: KpssLagRule;
+}
+
+/** Critical values of the ADF statistic by test size in percent (MacKinnon 2010). */
+export interface AdfCritical {
+  '1': number;
+  '5': number;
+  '10': number;
+}
+
+/** 'aic': lag order chosen by AIC on a common sample; 'fixed': the caller's lag order. */
+export type AdfLagRule = 'aic' | 'fixed';
+
+/** Augmented Dickey-Fuller test of a unit root. */
+export interface AdfResult {
+  /** t-ratio of the lagged level in the test regression. */
+  stat: number;
+  /** Lagged differences in the test regression. */
+  lags: number;
+  /** Rows of the test regression. */
+  nobs: number;
+  /** MacKinnon (1994) approximate p-value. */
+  p_value: number;
+  critical: AdfCritical;
+  regression: 'constant' | 'trend';
+  lag_rule: AdfLagRule;
+}
+
+/** Ljung-Box portmanteau test on residuals. */
+export interface LjungBoxResult {
+  lags: number;
+  /** Chi-square degrees of freedom: lags − p − q. */
+  df: number;
+  stat: number;
+  p_value: number;
+}
+
+/** Sample autocorrelations at lags 1..L with the ±1.96/√n bounds. */
+export interface AcfResult {
+  lag: number[];
+  acf: number[];
+  bound: number;
+}
+
+/** Jarque-Bera normality test. */
+export interface JarqueBeraResult {
+  stat: number;
+  p_value: number;
+  skewness: number;
+  /** Raw (not excess) kurtosis: 3 for a normal distribution. */
+  kurtosis: number;
+}
+
+/** What the KPSS and ADF trend tests say together. */
+export type TrendVerdictKind = 'deterministic' | 'stochastic' | 'conflicting' | 'inconclusive';
+
+/** The combined reading of the KPSS-trend and ADF-trend tests. */
+export interface TrendVerdict {
+  verdict: TrendVerdictKind;
+  significance: number;
+  kpss_rejects: boolean;
+  adf_rejects: boolean;
+  /** One plain-language sentence with the numbers behind the verdict. */
+  summary: string;
+}

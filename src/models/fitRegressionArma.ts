@@ -1,0 +1,179 @@
+// Exact maximum likelihood for regression with ARMA(p,q) errors: BFGS over the
+// unconstrained ARMA parameters from several starts (zeros, Hannan-Rissanen, and any the
+// caller passes, e.g. a neighbouring order's optimum), best log-likelihood kept.
+import { choleskyInverse } from '../linalg/smallSpd.js';
+import { leastSquares } from '../linalg/leastSquares.js';
+import { minimizeBfgs } from './bfgs.js';
+import { unconstrainAr, unconstrainMa } from './constraints.js';
+import { hannanRissanen } from './hannanRissanen.js';
+import { createProfileLikelihood, type ProfileLikelihood } from './profileLikelihood.js';
+
+/** BFGS iterations every start gets before the starts are ranked. */
+const HEAT_ITERATIONS = 8;
+/** Extra starts run to convergence after the heats. */
+const FINALISTS = 1;
+
+export interface RegressionArmaFit {
+  p: number;
+  q: number;
+  ar: Float64Array;
+  ma: Float64Array;
+  /** GLS regression coefficients, in the order of the regressors. */
+  beta: Float64Array;
+  /** Var(β̂) = σ² (X'Ω⁻¹X)⁻¹, k×k row-major. */
+  covBeta: Float64Array;
+  sigma2: number;
+  loglik: number;
+  /** Observations in the likelihood. */
+  nobs: number;
+  converged: boolean;
+  /** The optimum in the unconstrained space (a warm start for larger orders). */
+  unconstrained: Float64Array;
+  /** One-step prediction errors of y − Xβ̂ (NaN where y is missing) and their variances / σ². */
+  residuals: Float64Array;
+  residualVariance: Float64Array;
+  /** Predicted state a_{n+1|n} for each filtered column (y first) and P_{n+1|n} / σ². */
+  finalState: Float64Array[];
+  finalCovariance: Float64Array;
+  evaluations: number;
+}
+
+export interface FitOptions {
+  /** Extra unconstrained starting points of length p + q. */
+  starts?: readonly Float64Array[];
+}
+
+export function fitRegressionArma(
+  y: Float64Array,
+  regressors: readonly Float64Array[],
+  p: number,
+  q: number,
+  options: FitOptions = {},
+): RegressionArmaFit {
+  // Filter the OLS residuals rather than y itself: the GLS step then solves for a small
+  // correction to the OLS coefficients, and Σv²/F does not lose digits to a large level
+  // (a series near 580 would otherwise leave SSR as the difference of two numbers ~1e7).
+  const ols = olsFit(y, regressors);
+  const likelihood = createProfileLikelihood(ols.residuals, regressors, p, q);
+  const nobs = countObserved(y);
+  const objective = (x: Float64Array): number => -likelihood.atUnconstrained(x) / nobs;
+  const base = [new Float64Array(p + q), ...startFromHannanRissanen(ols.residuals, p, q)];
+  const baseStarts = base.length;
+  const starts = [...base, ...(options.starts ?? [])];
+  // Race the extra starts: a few iterations each, then only the most promising run to the
+  // end. The zero and Hannan-Rissanen starts always run to the end.
+  let evaluations = 0;
+  const heats = starts.map((start, index) => {
+    const result = minimizeBfgs(objective, start, { maxIterations: index < baseStarts ? 500 : HEAT_ITERATIONS });
+    evaluations += result.evaluations;
+    return result;
+  });
+  const finalists = [...heats.slice(0, baseStarts), ...heats.slice(baseStarts).sort((a, b) => a.value - b.value).slice(0, FINALISTS)];
+  let best: { x: Float64Array; value: number; converged: boolean } | undefined;
+  for (const heat of finalists) {
+    const result = heat.converged ? heat : minimizeBfgs(objective, heat.x);
+    evaluations += heat.converged ? 0 : result.evaluations;
+    if (best === undefined || result.value < best.value - 1e-12 || (result.value <= best.value && result.converged && !best.converged)) {
+      best = { x: result.x, value: result.value, converged: result.converged };
+    }
+  }
+  if (best === undefined || !Number.isFinite(best.value)) {
+    throw new Error(`fitRegressionArma: no start gave a finite likelihood for ARMA(${p},${q})`);
+  }
+  const fit = summarise(likelihood, best.x, best.converged, evaluations);
+  return { ...fit, beta: fit.beta.map((b, i) => b + ols.coefficients[i]) };
+}
+
+function summarise(likelihood: ProfileLikelihood, x: Float64Array, converged: boolean, evaluations: number): RegressionArmaFit {
+  const { ar, ma } = likelihood.coefficientsOf(x);
+  const loglik = likelihood.atCoefficients(ar, ma);
+  const ws = likelihood.workspace;
+  const k = ws.ncol - 1;
+  const n = ws.n;
+  const beta = ws.gramRhs.slice(0, k);
+  const ssr = residualSum(ws.innovations, ws.variances, beta, n, k);
+  const sigma2 = ssr / ws.nobs;
+  const covBeta = k > 0 ? choleskyInverse(ws.gramFactor.slice(0, k * k), k).map((v) => v * sigma2) : new Float64Array(0);
+  const residuals = new Float64Array(n);
+  for (let t = 0; t < n; t++) {
+    let v = ws.innovations[t];
+    for (let c = 0; c < k; c++) v -= beta[c] * ws.innovations[(c + 1) * n + t];
+    residuals[t] = v;
+  }
+  const finalState: Float64Array[] = [];
+  for (let c = 0; c <= k; c++) finalState.push(ws.state.slice(c * ws.r, (c + 1) * ws.r));
+  return {
+    p: likelihood.p,
+    q: likelihood.q,
+    ar,
+    ma,
+    beta,
+    covBeta,
+    sigma2,
+    loglik,
+    nobs: ws.nobs,
+    converged,
+    unconstrained: x,
+    residuals,
+    residualVariance: ws.variances.slice(),
+    finalState,
+    finalCovariance: ws.pmat.slice(),
+    evaluations,
+  };
+}
+
+function residualSum(innovations: Float64Array, f: Float64Array, beta: Float64Array, n: number, k: number): number {
+  let sum = 0;
+  for (let t = 0; t < n; t++) {
+    if (Number.isNaN(f[t])) continue;
+    let v = innovations[t];
+    for (let c = 0; c < k; c++) v -= beta[c] * innovations[(c + 1) * n + t];
+    sum += (v * v) / f[t];
+  }
+  return sum;
+}
+
+function countObserved(y: Float64Array): number {
+  let count = 0;
+  for (let t = 0; t < y.length; t++) if (!Number.isNaN(y[t])) count++;
+  return count;
+}
+
+interface OlsPart {
+  coefficients: Float64Array;
+  /** y − X b (NaN where y is missing). */
+  residuals: Float64Array;
+}
+
+function olsFit(y: Float64Array, regressors: readonly Float64Array[]): OlsPart {
+  const k = regressors.length;
+  const observed: number[] = [];
+  for (let t = 0; t < y.length; t++) if (!Number.isNaN(y[t])) observed.push(t);
+  const fit = k > 0 ? leastSquares(observed.map((t) => regressors.map((column) => column[t])), observed.map((t) => y[t])) : undefined;
+  if (k > 0 && fit === undefined) throw new Error('fitRegressionArma: the regressors are collinear');
+  const coefficients = fit?.coefficients ?? new Float64Array(0);
+  const residuals = y.map((value, t) => {
+    let fitted = 0;
+    for (let c = 0; c < k; c++) fitted += coefficients[c] * regressors[c][t];
+    return value - fitted;
+  });
+  return { coefficients, residuals };
+}
+
+/** Hannan-Rissanen on the OLS residuals, mapped to the unconstrained space (shrunk if needed). */
+function startFromHannanRissanen(eta: Float64Array, p: number, q: number): Float64Array[] {
+  if (p + q === 0) return [];
+  const start = hannanRissanen(eta.map((v) => (Number.isNaN(v) ? 0 : v)), p, q);
+  if (start === undefined) return [];
+  for (let shrink = 1; shrink > 0.3; shrink *= 0.9) {
+    const xAr = unconstrainAr(start.ar.map((v, i) => v * shrink ** (i + 1)));
+    const xMa = unconstrainMa(start.ma.map((v, j) => v * shrink ** (j + 1)));
+    if (xAr !== undefined && xMa !== undefined) {
+      const x = new Float64Array(p + q);
+      x.set(xAr, 0);
+      x.set(xMa, p);
+      return [x];
+    }
+  }
+  return [];
+}

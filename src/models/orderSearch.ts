@@ -1,0 +1,117 @@
+// Order selection over every (p, q) with p ≤ maxP, q ≤ maxQ by AICc, one model at a time
+// (AICc of the two trend models are never compared: they describe different data).
+// Each order is started, besides zeros and Hannan-Rissanen, from the optima of its smaller
+// neighbours padded with a zero partial autocorrelation, which reproduces the smaller
+// model exactly, so a larger model never ends below a nested smaller one.
+import { unconstrainAr, unconstrainMa } from './constraints.js';
+import { fitRegressionArma, type RegressionArmaFit } from './fitRegressionArma.js';
+
+/** Real roots of the common factor tried by `cancellingStart` from the (p−1, q−1) optimum. */
+const CANCELLING_ROOTS = [0.8, -0.8];
+/** The complex pair tried from the (p−2, q−2) optimum. */
+const CANCELLING_PAIR = { modulus: 0.8, angle: 0.8 };
+
+export interface Candidate {
+  p: number;
+  q: number;
+  loglik: number;
+  aicc: number;
+  converged: boolean;
+}
+
+export interface OrderSearchResult {
+  best: RegressionArmaFit;
+  bestAicc: number;
+  candidates: Candidate[];
+}
+
+/**
+ * AICc = −2 logL + 2k + 2k(k+1)/(m − k − 1), k = p + q + regression coefficients + 1 (σ²),
+ * m = observations in the likelihood (Hurvich & Tsai 1989). Infinite when m ≤ k + 1.
+ */
+export function aicc(loglik: number, parameters: number, nobs: number): number {
+  if (nobs - parameters - 1 <= 0) return Number.POSITIVE_INFINITY;
+  return -2 * loglik + 2 * parameters + (2 * parameters * (parameters + 1)) / (nobs - parameters - 1);
+}
+
+export function searchOrders(y: Float64Array, regressors: readonly Float64Array[], maxP: number, maxQ: number): OrderSearchResult {
+  const fits = new Map<string, RegressionArmaFit>();
+  const candidates: Candidate[] = [];
+  let best: RegressionArmaFit | undefined;
+  let bestAicc = Number.POSITIVE_INFINITY;
+  const nobs = countObserved(y);
+  for (let p = 0; p <= maxP; p++) {
+    for (let q = 0; q <= maxQ; q++) {
+      const parameters = p + q + regressors.length + 1;
+      if (nobs - parameters - 1 <= 0) continue;
+      const starts = [fits.get(key(p - 1, q)), fits.get(key(p, q - 1))]
+        .filter((fit): fit is RegressionArmaFit => fit !== undefined)
+        .map((fit) => padStart(fit, p, q));
+      const diagonal = fits.get(key(p - 1, q - 1));
+      if (diagonal !== undefined) {
+        for (const root of CANCELLING_ROOTS) starts.push(...cancellingStart(diagonal, [-root]));
+      }
+      const second = fits.get(key(p - 2, q - 2));
+      if (second !== undefined) {
+        // A complex pair ρe^{±iω}: (1 − 2ρ cos ω B + ρ² B²).
+        const { modulus, angle } = CANCELLING_PAIR;
+        starts.push(...cancellingStart(second, [-2 * modulus * Math.cos(angle), modulus * modulus]));
+      }
+      const fit = fitRegressionArma(y, regressors, p, q, { starts });
+      fits.set(key(p, q), fit);
+      const value = aicc(fit.loglik, parameters, fit.nobs);
+      candidates.push({ p, q, loglik: fit.loglik, aicc: value, converged: fit.converged });
+      if (value < bestAicc) {
+        bestAicc = value;
+        best = fit;
+      }
+    }
+  }
+  if (best === undefined) throw new Error('searchOrders: no order fits this many observations');
+  return { best, bestAicc, candidates };
+}
+
+/**
+ * A smaller fit's optimum with a common factor (1 + f₁B + …) multiplied into both its AR
+ * and MA polynomials: the likelihood is unchanged, and the optimiser can pull the new roots
+ * apart, which reaches optima with near-cancelling roots that the padded starts miss.
+ */
+function cancellingStart(fit: RegressionArmaFit, factor: readonly number[]): Float64Array[] {
+  // AR polynomial 1 − a₁B − …: negate into "1 + c₁B + …" form, multiply, negate back.
+  const ar = multiplyPolynomials(fit.ar.map((v) => -v), factor).map((v) => -v);
+  const ma = multiplyPolynomials(fit.ma, factor);
+  const xAr = unconstrainAr(ar);
+  const xMa = unconstrainMa(ma);
+  if (xAr === undefined || xMa === undefined) return [];
+  const x = new Float64Array(ar.length + ma.length);
+  x.set(xAr, 0);
+  x.set(xMa, ar.length);
+  return [x];
+}
+
+/** Coefficients after the leading 1 of (1 + a₁B + …)(1 + b₁B + …). */
+function multiplyPolynomials(a: ArrayLike<number>, b: readonly number[]): Float64Array {
+  const full = [1, ...Array.from(a)];
+  const other = [1, ...b];
+  const out = new Float64Array(full.length + other.length - 1);
+  for (let i = 0; i < full.length; i++) for (let j = 0; j < other.length; j++) out[i + j] += full[i] * other[j];
+  return out.slice(1);
+}
+
+/** A smaller fit's optimum as a start for (p, q): extra partial autocorrelations set to 0. */
+function padStart(fit: RegressionArmaFit, p: number, q: number): Float64Array {
+  const x = new Float64Array(p + q);
+  x.set(fit.unconstrained.subarray(0, fit.p), 0);
+  x.set(fit.unconstrained.subarray(fit.p, fit.p + fit.q), p);
+  return x;
+}
+
+function key(p: number, q: number): string {
+  return `${p},${q}`;
+}
+
+function countObserved(y: Float64Array): number {
+  let count = 0;
+  for (let t = 0; t < y.length; t++) if (!Number.isNaN(y[t])) count++;
+  return count;
+}

@@ -1,0 +1,122 @@
+// ARMA(p,q) in state-space form, Harvey (1989) §3.2 / Durbin & Koopman (2012) §3.4:
+//   η_t = Z α_t,  α_{t+1} = T α_t + R ε_{t+1},  ε ~ N(0, σ²)
+// with state dimension r = max(p, q + 1), Z = e₁, T = [φ | I_{r−1} ; 0], R = (1, θ₁, …, θ_{r−1})'.
+// The filter works with σ² = 1 (σ² is concentrated out), so P here is P/σ².
+
+/** The pieces of the ARMA state-space form the filter needs (T is implied by `phi`). */
+export interface ArmaStateSpace {
+  /** State dimension max(p, q + 1). */
+  readonly r: number;
+  /** AR coefficients padded with zeros to length r. */
+  readonly phi: Float64Array;
+  /** (1, θ₁, …) padded with zeros to length r. */
+  readonly rvec: Float64Array;
+  /** Stationary initial covariance (r×r, row-major), scaled by 1/σ². */
+  readonly p0: Float64Array;
+}
+
+export function stateDimension(p: number, q: number): number {
+  return Math.max(p, q + 1);
+}
+
+/**
+ * Builds the state-space form for AR coefficients `ar` and MA coefficients `ma`
+ * (sign convention: η_t = Σ φ_i η_{t−i} + ε_t + Σ θ_j ε_{t−j}).
+ */
+export function toStateSpace(ar: ArrayLike<number>, ma: ArrayLike<number>): ArmaStateSpace {
+  const r = stateDimension(ar.length, ma.length);
+  const phi = new Float64Array(r);
+  const rvec = new Float64Array(r);
+  for (let i = 0; i < ar.length; i++) phi[i] = ar[i];
+  rvec[0] = 1;
+  for (let j = 0; j < ma.length; j++) rvec[j + 1] = ma[j];
+  const p0 = new Float64Array(r * r);
+  const scratch = new Float64Array(lyapunovScratchSize(r));
+  stationaryCovariance(phi, rvec, r, p0, scratch);
+  return { r, phi, rvec, p0 };
+}
+
+/** Scratch size `stationaryCovariance` needs for state dimension r. */
+export function lyapunovScratchSize(r: number): number {
+  const m = (r * (r + 1)) / 2;
+  return m * (m + 1);
+}
+
+/**
+ * Solves the discrete Lyapunov equation P = T P T' + R R' for the companion-form T by
+ * Gaussian elimination over the r(r+1)/2 distinct entries of the symmetric P
+ * (Gardner, Harvey & Phillips 1980, AS 154; Durbin & Koopman 2012, §5.6.2).
+ * `scratch` must hold `lyapunovScratchSize(r)` numbers; nothing is allocated, so the
+ * likelihood loop can call it. Returns false when the system is singular (a unit root).
+ */
+export function stationaryCovariance(
+  phi: Float64Array,
+  rvec: Float64Array,
+  r: number,
+  out: Float64Array,
+  scratch: Float64Array,
+): boolean {
+  const m = (r * (r + 1)) / 2;
+  const w = m + 1; // augmented row width
+  // Row (i,j), i ≤ j: P_ij − Σ_{k,l} T_ik T_jl P_kl = R_i R_j, with T_ik = φ_i·[k = 0] + [k = i + 1].
+  for (let i = 0; i < r; i++) {
+    for (let j = i; j < r; j++) {
+      const base = packedIndex(i, j, r) * w;
+      for (let c = 0; c < w; c++) scratch[base + c] = 0;
+      scratch[base + packedIndex(i, j, r)] = 1;
+      addTerm(scratch, base, r, phi[i] * phi[j], 0, 0);
+      if (j + 1 < r) addTerm(scratch, base, r, phi[i], 0, j + 1);
+      if (i + 1 < r) addTerm(scratch, base, r, phi[j], i + 1, 0);
+      if (i + 1 < r && j + 1 < r) addTerm(scratch, base, r, 1, i + 1, j + 1);
+      scratch[base + m] = rvec[i] * rvec[j];
+    }
+  }
+  for (let col = 0; col < m; col++) {
+    let pivot = col;
+    let best = Math.abs(scratch[col * w + col]);
+    for (let row = col + 1; row < m; row++) {
+      const value = Math.abs(scratch[row * w + col]);
+      if (value > best) {
+        best = value;
+        pivot = row;
+      }
+    }
+    if (best < 1e-12) return false;
+    if (pivot !== col) {
+      for (let c = col; c < w; c++) {
+        const tmp = scratch[col * w + c];
+        scratch[col * w + c] = scratch[pivot * w + c];
+        scratch[pivot * w + c] = tmp;
+      }
+    }
+    const diag = scratch[col * w + col];
+    for (let row = col + 1; row < m; row++) {
+      const factor = scratch[row * w + col] / diag;
+      if (factor === 0) continue;
+      for (let c = col; c < w; c++) scratch[row * w + c] -= factor * scratch[col * w + c];
+    }
+  }
+  // Back-substitution, writing the solution into the augmented column.
+  for (let row = m - 1; row >= 0; row--) {
+    let sum = scratch[row * w + m];
+    for (let c = row + 1; c < m; c++) sum -= scratch[row * w + c] * scratch[c * w + m];
+    scratch[row * w + m] = sum / scratch[row * w + row];
+  }
+  for (let i = 0; i < r; i++) {
+    for (let j = i; j < r; j++) {
+      const value = scratch[packedIndex(i, j, r) * w + m];
+      out[i * r + j] = value;
+      out[j * r + i] = value;
+    }
+  }
+  return true;
+}
+
+/** Position of P_ij (i ≤ j) among the packed upper-triangle unknowns. */
+function packedIndex(i: number, j: number, r: number): number {
+  return i * r - (i * (i - 1)) / 2 + (j - i);
+}
+
+function addTerm(scratch: Float64Array, base: number, r: number, coef: number, k: number, l: number): void {
+  if (coef !== 0) scratch[base + packedIndex(Math.min(k, l), Math.max(k, l), r)] -= coef;
+}
