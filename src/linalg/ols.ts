@@ -33,7 +33,15 @@ export function ols(y: ArrayLike<number>, columns: readonly ArrayLike<number>[])
   });
   const response = Matrix.columnVector(Array.from(y));
   const qr = new QrDecomposition(design);
-  if (!qr.isFullRank()) throw new Error('ols needs regressor columns of full rank');
+  const upper = qr.upperTriangularMatrix;
+  // A diagonal of R below max|R_ii|·max(n, k)·ε counts as zero, the tolerance numpy's
+  // matrix_rank applies to singular values (common practice); exact collinearity leaves
+  // rounding-sized diagonals rather than zeros.
+  const diagonal = Array.from({ length: k }, (_, j) => Math.abs(upper.get(j, j)));
+  const rankTolerance = Math.max(...diagonal) * Math.max(nobs, k) * Number.EPSILON;
+  if (diagonal.some((value) => value <= rankTolerance)) {
+    throw new Error('ols needs regressor columns of full rank');
+  }
   const beta = qr.solve(response);
 
   const coefficients = new Float64Array(k);
@@ -49,7 +57,7 @@ export function ols(y: ArrayLike<number>, columns: readonly ArrayLike<number>[])
   const sigma2 = ssr / (nobs - k);
 
   // (X'X)⁻¹ = R⁻¹R⁻ᵀ, so its diagonal is the row sums of squares of R⁻¹.
-  const rInverse = inverse(qr.upperTriangularMatrix);
+  const rInverse = inverse(upper);
   const standardErrors = new Float64Array(k);
   for (let j = 0; j < k; j++) {
     let sum = 0;
