@@ -1,0 +1,89 @@
+// Checks that the period labels form one unbroken, ordered run of a single frequency.
+
+import { dataMessages, type InputLocation, type InputProblem } from '../errors.js';
+import { formatPeriod, periodFromIndex, periodIndex, type Frequency, type Period } from './period.js';
+
+export interface DatedLine {
+  line: number;
+  label: string;
+  period: Period;
+}
+
+export interface PeriodCheck {
+  /** The given frequency, else the first label's; undefined only when there are no labels. */
+  frequency: Frequency | undefined;
+  problems: InputProblem[];
+}
+
+function frequencyProblems(dated: readonly DatedLine[], frequency: Frequency, given: boolean, column: InputLocation): InputProblem[] {
+  const odd = dated.filter((entry) => entry.period.frequency !== frequency);
+  if (odd.length === 0) return [];
+  const [head] = odd;
+  const at = { ...column, line: head.line };
+  const lines = odd.map((entry) => entry.line);
+  if (given) return [dataMessages.frequencyMismatch(at, head.label, head.period.frequency, frequency, lines)];
+  const first = dated[0];
+  return [dataMessages.mixedFrequency(at, head.label, head.period.frequency, { ...first, frequency }, lines)];
+}
+
+function orderProblems(dated: readonly DatedLine[], column: InputLocation): InputProblem[] {
+  const problems: InputProblem[] = [];
+  const firstLineOf = new Map<number, number>();
+  let latest: DatedLine | undefined;
+  let descending = dated.length > 1;
+  for (let i = 0; i < dated.length; i++) {
+    const entry = dated[i];
+    const index = periodIndex(entry.period);
+    if (i > 0 && index >= periodIndex(dated[i - 1].period)) descending = false;
+    const seen = firstLineOf.get(index);
+    if (seen !== undefined) {
+      problems.push(dataMessages.duplicatePeriod({ ...column, line: entry.line }, entry.label, seen));
+      continue;
+    }
+    firstLineOf.set(index, entry.line);
+    if (latest !== undefined && index < periodIndex(latest.period)) {
+      problems.push(dataMessages.unsorted({ ...column, line: entry.line }, entry.label, latest));
+    } else {
+      latest = entry;
+    }
+  }
+  if (descending) {
+    const at = { ...column, line: dated[1].line };
+    return [dataMessages.descending(at, dated[0].label, dated[dated.length - 1].label)];
+  }
+  return problems;
+}
+
+function gapProblems(dated: readonly DatedLine[], frequency: Frequency, column: InputLocation): InputProblem[] {
+  const byIndex = new Map<number, DatedLine>();
+  for (const entry of dated) if (!byIndex.has(periodIndex(entry.period))) byIndex.set(periodIndex(entry.period), entry);
+  const indices = [...byIndex.keys()].sort((a, b) => a - b);
+  const problems: InputProblem[] = [];
+  for (let i = 1; i < indices.length; i++) {
+    if (indices[i] - indices[i - 1] === 1) continue;
+    const missing: string[] = [];
+    for (let index = indices[i - 1] + 1; index < indices[i]; index++) missing.push(formatPeriod(periodFromIndex(frequency, index)));
+    const next = byIndex.get(indices[i]);
+    if (next !== undefined) problems.push(dataMessages.gap({ ...column, line: next.line }, missing, next.label));
+  }
+  return problems;
+}
+
+/**
+ * Frequency (mixed, or not the one given), duplicates, order and gaps. Order and gaps are
+ * judged only among labels of the series' frequency, so one stray label yields one problem.
+ * `column` locates the period column (file, field, column number); each problem adds its line.
+ */
+export function checkPeriods(dated: readonly DatedLine[], column: InputLocation, given?: Frequency): PeriodCheck {
+  const frequency = given ?? dated[0]?.period.frequency;
+  if (frequency === undefined) return { frequency, problems: [] };
+  const regular = dated.filter((entry) => entry.period.frequency === frequency);
+  return {
+    frequency,
+    problems: [
+      ...frequencyProblems(dated, frequency, given !== undefined, column),
+      ...orderProblems(regular, column),
+      ...gapProblems(regular, frequency, column),
+    ],
+  };
+}

@@ -1,0 +1,88 @@
+// CSV text to a checked Series. Every problem the file has is collected in one pass and
+// thrown as one InputError; only problems that leave no row readable (no header, an unknown
+// column) stop the pass early.
+
+import { createHash } from 'node:crypto';
+import { dataMessages, InputError, type InputLocation, type InputProblem } from '../errors.js';
+import { checkPeriods, type DatedLine } from './checkPeriods.js';
+import { checkSeries } from './checkSeries.js';
+import { limitProblems } from './limitProblems.js';
+import { formatPeriod, parsePeriod } from './period.js';
+import { parseValue } from './parseValue.js';
+import { readCsvTable, type CsvRow } from './readCsvTable.js';
+import { selectColumns, type ColumnChoice } from './selectColumns.js';
+import type { Series, SeriesOptions } from './series.js';
+
+interface Observation extends DatedLine {
+  value: number | undefined;
+}
+
+function cellProblem(text: string, at: InputLocation): { value?: number; problem?: InputProblem } {
+  const parsed = parseValue(text);
+  switch (parsed.kind) {
+    case 'number':
+      return { value: parsed.value };
+    case 'empty':
+      return { problem: dataMessages.emptyValue(at) };
+    case 'missing-marker':
+      return { problem: dataMessages.missingMarker(at, text) };
+    case 'non-finite':
+      return { problem: dataMessages.nonFinite(at, text) };
+    case 'invalid':
+      return { problem: dataMessages.badValue(at, text) };
+  }
+}
+
+function readRow(row: CsvRow, width: number, choice: ColumnChoice, file: string, problems: InputProblem[]): Observation | undefined {
+  const { line, cells } = row;
+  if (cells.length !== width) problems.push(dataMessages.rowWidth({ file, line }, cells.length, width));
+  const label = cells[choice.periodPosition] ?? '';
+  const periodAt = { file, line, column: choice.periodPosition + 1, field: choice.periodColumn };
+  const period = label === '' ? null : parsePeriod(label);
+  if (label === '') problems.push(dataMessages.emptyPeriod(periodAt));
+  else if (period === null) problems.push(dataMessages.badPeriod(periodAt, label));
+  const valueAt = { file, line, column: choice.valuePosition + 1, field: choice.column };
+  const { value, problem } = cellProblem(cells[choice.valuePosition] ?? '', valueAt);
+  if (problem !== undefined) problems.push(problem);
+  return period === null ? undefined : { line, label, period, value };
+}
+
+/**
+ * The work of `readSeriesCsv` on text already read; `file` names the source in messages and in
+ * the result, and `sha256` is taken over the text encoded as UTF-8.
+ */
+export function parseSeriesCsv(text: string, file: string, options: SeriesOptions = {}): Series {
+  const { header, rows } = readCsvTable(text, file);
+  const choice = selectColumns(header, file, options);
+  if (rows.length === 0) throw new InputError(dataMessages.noData({ file, line: header.line }));
+
+  const problems: InputProblem[] = [];
+  const observations: Observation[] = [];
+  for (const row of rows) {
+    const observation = readRow(row, header.cells.length, choice, file, problems);
+    if (observation !== undefined) observations.push(observation);
+  }
+  const periodColumn = { file, column: choice.periodPosition + 1, field: choice.periodColumn };
+  const periods = checkPeriods(observations, periodColumn, options.frequency);
+  problems.push(...periods.problems);
+
+  const valued = observations.filter((entry) => entry.value !== undefined);
+  const values = Float64Array.from(valued, (entry) => entry.value ?? NaN);
+  const lines = valued.map((entry) => entry.line);
+  problems.push(...checkSeries({ file, column: choice.column, values, lines }, options));
+
+  if (problems.length > 0 || periods.frequency === undefined) throw new InputError(limitProblems(problems));
+  const labels = observations.map((entry) => formatPeriod(entry.period));
+  return {
+    file,
+    column: choice.column,
+    periodColumn: choice.periodColumn,
+    frequency: periods.frequency,
+    periods: labels,
+    values,
+    first: labels[0],
+    last: labels[labels.length - 1],
+    n: values.length,
+    sha256: createHash('sha256').update(text, 'utf8').digest('hex'),
+  };
+}

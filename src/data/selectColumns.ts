@@ -1,0 +1,54 @@
+// Finds the period column and the value column in the header.
+
+import { dataMessages, InputError, type InputLocation, type InputProblem } from '../errors.js';
+import type { CsvRow } from './readCsvTable.js';
+import { closestName } from './closestName.js';
+import { parsePeriod } from './period.js';
+import { parseValue } from './parseValue.js';
+
+export interface ColumnChoice {
+  periodColumn: string;
+  column: string;
+  /** 0-based positions of the two columns in each row. */
+  periodPosition: number;
+  valuePosition: number;
+}
+
+function findColumn(header: readonly string[], name: string, at: InputLocation, problems: InputProblem[]): number {
+  const positions = header.flatMap((cell, position) => (cell === name ? [position] : []));
+  if (positions.length === 0) {
+    const named = header.filter((cell) => cell !== '');
+    problems.push(dataMessages.unknownColumn(at, name, named, closestName(name, named)));
+  } else if (positions.length > 1) {
+    problems.push(dataMessages.duplicateColumn(at, name, positions.length));
+  }
+  return positions[0] ?? -1;
+}
+
+/**
+ * Default choice: the first column holds the periods and the first other column the values.
+ * A first line that parses as data means the header is missing; that and every column
+ * problem throw, since no row can be read without both columns.
+ */
+export function selectColumns(headerRow: CsvRow, file: string, wanted: { column?: string; periodColumn?: string }): ColumnChoice {
+  const header = headerRow.cells;
+  const at: InputLocation = { file, line: headerRow.line };
+  const dataCell = header.find((cell) => parsePeriod(cell) !== null || parseValue(cell).kind === 'number');
+  if (dataCell !== undefined) throw new InputError(dataMessages.headerLooksLikeData(at, dataCell));
+  if (header.length === 1 && wanted.column === undefined) throw new InputError(dataMessages.oneColumn(at, header[0]));
+
+  const problems: InputProblem[] = [];
+  const periodPosition = wanted.periodColumn === undefined ? 0 : findColumn(header, wanted.periodColumn, at, problems);
+  const valuePosition =
+    wanted.column === undefined
+      ? header.findIndex((_, position) => position !== periodPosition)
+      : findColumn(header, wanted.column, at, problems);
+  if (problems.length > 0) throw new InputError(problems);
+
+  if (periodPosition === valuePosition) throw new InputError(dataMessages.sameColumn(at, header[periodPosition]));
+  for (const position of [periodPosition, valuePosition]) {
+    if (header[position] === '') problems.push(dataMessages.unnamedColumn(at, position + 1));
+  }
+  if (problems.length > 0) throw new InputError(problems);
+  return { periodColumn: header[periodPosition], column: header[valuePosition], periodPosition, valuePosition };
+}
