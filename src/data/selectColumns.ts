@@ -27,14 +27,15 @@ function findColumn(header: readonly string[], name: string, at: InputLocation, 
 
 /**
  * Default choice: the first column holds the periods and the first other column the values.
- * A first line that parses as data means the header is missing; that and every column
+ * A first line that looks like data means the header is missing; that and every column
  * problem throw, since no row can be read without both columns.
  */
 export function selectColumns(headerRow: CsvRow, file: string, wanted: { column?: string; periodColumn?: string }): ColumnChoice {
   const header = headerRow.cells;
   const at: InputLocation = { file, line: headerRow.line };
-  const dataCell = header.find((cell) => parsePeriod(cell) !== null || parseValue(cell).kind === 'number');
-  if (dataCell !== undefined) throw new InputError(dataMessages.headerLooksLikeData(at, dataCell));
+  // Only the first cell is judged: a value column may be named like a year ("2019").
+  const first = header[0];
+  if (parsePeriod(first) !== null || parseValue(first).kind === 'number') throw new InputError(dataMessages.headerLooksLikeData(at, first));
   if (header.length === 1 && wanted.column === undefined) throw new InputError(dataMessages.oneColumn(at, header[0]));
 
   const problems: InputProblem[] = [];

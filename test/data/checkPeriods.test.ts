@@ -72,17 +72,4 @@ describe('period problems in a file', () => {
     expect(found[0].message).toBe("period '2001' is annual, but the frequency is set to quarterly; 2 lines disagree: 2, 3");
     expect(found[0].hint).toBe('set the frequency to annual, or write every period in the quarterly form');
   });
-
-  it('collects every kind of period problem in one pass', () => {
-    const text = 'period,value\n2001-01,1.0\n2001-02,1.1\n2001-02,1.2\n2001-05,1.3\n2001-04,1.4\n2001-09,1.5\n2001-Q4,1.6\n,1.7\n2002-01-01,1.8\n';
-    expect(codesAndLines(problems(text))).toEqual([
-      'csv.duplicate-period@4',
-      'csv.unsorted@6',
-      'csv.gap@6',
-      'csv.gap@7',
-      'csv.mixed-frequency@8',
-      'csv.empty-period@9',
-      'csv.bad-period@10',
-    ]);
-  });
 });

@@ -63,6 +63,11 @@ describe('parseSeriesCsv header and columns', () => {
     expect(found[0].message).toContain("'1875'");
   });
 
+  it('refuses a first line that opens with a number, but accepts a column named like a year', () => {
+    expect(problems('580.38,1875\n581.86,1876\n')[0]).toMatchObject({ code: 'csv.no-header', line: 1, message: "the first line holds '580.38', which is data, not a column name" });
+    expect(parse('period,2019\n2001,1\n2002,2\n').column).toBe('2019');
+  });
+
   it('refuses a header with no data below it', () => {
     expect(problems('period,value\n\n')[0]).toMatchObject({ code: 'csv.no-data', line: 1 });
   });
