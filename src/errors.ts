@@ -267,3 +267,46 @@ export const dataMessages = {
 function disagreeing(lines: readonly number[]): string {
   return lines.length > 1 ? `; ${lines.length} lines disagree: ${abbreviateList(lines.map(String))}` : '';
 }
+
+// ---------------------------------------------------------------------------
+// Command line: messages about arguments and options (src/cli/).
+// ---------------------------------------------------------------------------
+
+export const cliMessages = {
+  unknownCommand(name: string, suggestion: string | undefined): InputProblem {
+    const hint = suggestion !== undefined ? `did you mean '${suggestion}'? See trendbrief --help` : 'see trendbrief --help for the commands';
+    return problem('cli.unknown-command', `unknown command '${name}'`, hint);
+  },
+  noCommand(): InputProblem {
+    return problem('cli.no-command', 'no command given', 'run trendbrief --help to see the commands');
+  },
+  badOptions(detail: string): InputProblem {
+    return problem('cli.bad-option', detail, 'see trendbrief fit --help for the options');
+  },
+  missingFile(command: string): InputProblem {
+    return problem('cli.missing-file', `${command} needs a CSV file`, `give one, e.g. trendbrief ${command} series.csv`);
+  },
+  extraArguments(extra: readonly string[]): InputProblem {
+    return problem('cli.extra-arguments', `unexpected argument${extra.length > 1 ? 's' : ''} ${extra.join(' ')}`, 'give one CSV file');
+  },
+  notAnInteger(option: string, value: string, min: number, max: number): InputProblem {
+    return problem('cli.bad-value', `'${value}' is not a whole number from ${min} to ${max}`, `give --${option} a whole number from ${min} to ${max}`, {
+      field: `--${option}`,
+    });
+  },
+  badChoice(option: string, value: string, choices: readonly string[]): InputProblem {
+    return problem('cli.bad-value', `'${value}' is not one of ${choices.join(', ')}`, `give --${option} one of ${choices.join(', ')}`, {
+      field: `--${option}`,
+    });
+  },
+  badTransform(value: string): InputProblem {
+    return problem('cli.bad-value', `'${value}' is not a transform`, 'use none, log, or box-cox:LAMBDA with LAMBDA a number such as 0.5', {
+      field: '--transform',
+    });
+  },
+  badLevels(value: string): InputProblem {
+    return problem('cli.bad-value', `'${value}' is not a list of interval levels`, 'give percentages between 50 and 99.9 separated by commas, e.g. 80,95', {
+      field: '--levels',
+    });
+  },
+};

@@ -81,7 +81,15 @@ export function fitRegressionArma(
     throw new Error(`fitRegressionArma: no start gave a finite likelihood for ARMA(${p},${q})`);
   }
   const fit = summarise(likelihood, best.x, best.converged, evaluations);
-  return { ...fit, beta: fit.beta.map((b, i) => b + ols.coefficients[i]) };
+  // Back from the OLS residuals to y: β adds the OLS coefficients, and by linearity the
+  // filtered state of y is that of the residuals plus X's states weighted by them.
+  const yState = fit.finalState[0].slice();
+  ols.coefficients.forEach((b, c) => fit.finalState[c + 1].forEach((v, i) => (yState[i] += b * v)));
+  return {
+    ...fit,
+    beta: fit.beta.map((b, i) => b + ols.coefficients[i]),
+    finalState: [yState, ...fit.finalState.slice(1)],
+  };
 }
 
 function summarise(likelihood: ProfileLikelihood, x: Float64Array, converged: boolean, evaluations: number): RegressionArmaFit {
@@ -139,13 +147,14 @@ function countObserved(y: Float64Array): number {
   return count;
 }
 
-interface OlsPart {
+export interface OlsPart {
   coefficients: Float64Array;
   /** y − X b (NaN where y is missing). */
   residuals: Float64Array;
 }
 
-function olsFit(y: Float64Array, regressors: readonly Float64Array[]): OlsPart {
+/** OLS of y on the regressors, skipping missing y. */
+export function olsFit(y: Float64Array, regressors: readonly Float64Array[]): OlsPart {
   const k = regressors.length;
   const observed: number[] = [];
   for (let t = 0; t < y.length; t++) if (!Number.isNaN(y[t])) observed.push(t);

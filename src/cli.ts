@@ -1,0 +1,66 @@
+// The command line as a function: cli(argv, io) → exit code, so it is tested without
+// spawning processes. Exit codes: 0 success, 1 internal failure, 2 bad input or usage.
+import { closestName } from './data/closestName.js';
+import { cliMessages, formatProblem, InputError } from './errors.js';
+import { runFit, FIT_HELP } from './cli/fitCommand.js';
+import { toolVersion } from './analysis/toolVersion.js';
+
+export interface CliIo {
+  stdout(text: string): void;
+  stderr(text: string): void;
+}
+
+const COMMANDS = ['fit'] as const;
+
+export const EXIT = { ok: 0, internal: 1, input: 2, mismatch: 3 } as const;
+
+const MAIN_HELP = `trendbrief: compare deterministic and stochastic trend extrapolation for forecast memos
+
+Usage:
+  trendbrief fit FILE.csv [options]   fit both trend models to one series and forecast
+  trendbrief --help                   this text
+  trendbrief --version                the tool's version
+
+Run 'trendbrief fit --help' for the fit options.
+`;
+
+export async function cli(argv: readonly string[], io: CliIo): Promise<number> {
+  try {
+    const [command, ...rest] = argv;
+    if (command === undefined) {
+      io.stderr(`${formatProblem(cliMessages.noCommand())}\n`);
+      return EXIT.input;
+    }
+    if (command === '--help' || command === '-h' || command === 'help') {
+      io.stdout(MAIN_HELP);
+      return EXIT.ok;
+    }
+    if (command === '--version' || command === '-v') {
+      io.stdout(`${toolVersion().version}\n`);
+      return EXIT.ok;
+    }
+    if (command === 'fit') {
+      if (rest.includes('--help') || rest.includes('-h')) {
+        io.stdout(FIT_HELP);
+        return EXIT.ok;
+      }
+      return await runFit(rest, io);
+    }
+    throw new InputError(cliMessages.unknownCommand(command, closestName(command, COMMANDS)));
+  } catch (error) {
+    if (error instanceof InputError) {
+      for (const problem of error.problems) io.stderr(`${formatProblem(problem)}\n`);
+      return EXIT.input;
+    }
+    io.stderr(`trendbrief: internal error: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}\n`);
+    return EXIT.internal;
+  }
+}
+
+/** Entry point for bin/trendbrief.js. */
+export function runCli(argv: readonly string[]): Promise<number> {
+  return cli(argv, {
+    stdout: (text) => process.stdout.write(text),
+    stderr: (text) => process.stderr.write(text),
+  });
+}

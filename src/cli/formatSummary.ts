@@ -1,0 +1,90 @@
+// The readable terminal summary of an AnalysisRecord: both models side by side, then the
+// forecast table. Plain text, fixed-width columns.
+import type { AnalysisRecord, ModelRecord } from '../analysis/record.js';
+
+const MODEL_TITLES = { deterministic: 'Deterministic trend', stochastic: 'Stochastic trend' } as const;
+
+export function formatSummary(record: AnalysisRecord): string {
+  const { series } = record;
+  const lines: string[] = [];
+  const transform = series.transform.kind === 'box-cox' ? `Box-Cox ${series.transform.lambda}` : series.transform.kind;
+  lines.push(`${series.title}: ${series.frequency} ${series.first} to ${series.last}, n = ${series.n}, transform ${transform}`);
+  lines.push('');
+  lines.push(...modelTable(record.models.deterministic, record.models.stochastic));
+  lines.push('');
+  lines.push('AICc ranks orders within a model only; the two models describe different data.');
+  lines.push('');
+  lines.push(...forecastTable(record));
+  return `${lines.join('\n')}\n`;
+}
+
+function modelTable(det: ModelRecord, sto: ModelRecord): string[] {
+  const rows: [string, string, string][] = [['', MODEL_TITLES.deterministic, MODEL_TITLES.stochastic]];
+  rows.push(['order (p, q)', `(${det.p}, ${det.q})`, `(${sto.p}, ${sto.q})`]);
+  for (const name of ['intercept', 'slope', 'drift']) {
+    rows.push([name, coefficient(det, name), coefficient(sto, name)]);
+  }
+  const arOrder = Math.max(det.p, sto.p);
+  for (let i = 0; i < arOrder; i++) rows.push([`ar${i + 1}`, lagged(det, 'ar', i), lagged(sto, 'ar', i)]);
+  const maOrder = Math.max(det.q, sto.q);
+  for (let j = 0; j < maOrder; j++) rows.push([`ma${j + 1}`, lagged(det, 'ma', j), lagged(sto, 'ma', j)]);
+  rows.push(['sigma2', num(det.sigma2), num(sto.sigma2)]);
+  rows.push(['loglik', num(det.loglik, 7), num(sto.loglik, 7)]);
+  rows.push(['AICc', num(det.aicc, 7), num(sto.aicc, 7)]);
+  rows.push(['observations', String(det.nobs), String(sto.nobs)]);
+  rows.push(['converged', det.converged ? 'yes' : 'NO', sto.converged ? 'yes' : 'NO']);
+  return alignRows(rows.filter(([, a, b]) => a !== '' || b !== ''));
+}
+
+function forecastTable(record: AnalysisRecord): string[] {
+  const levels = record.settings.levels.map(String);
+  const header = ['period', 'h'];
+  for (const kind of ['deterministic', 'stochastic'] as const) {
+    const short = kind === 'deterministic' ? 'det.' : 'stoch.';
+    header.push(`${short} point`, ...levels.map((level) => `${short} ${level}%`));
+  }
+  const rows: string[][] = [header];
+  record.forecasts.deterministic.forEach((det, index) => {
+    const sto = record.forecasts.stochastic[index];
+    const row = [det.period, String(det.h)];
+    for (const item of [det, sto]) {
+      row.push(num(item.point, 5), ...levels.map((level) => `${num(item.intervals[level][0], 5)} to ${num(item.intervals[level][1], 5)}`));
+    }
+    rows.push(row);
+  });
+  const scale = record.settings.coefficient_uncertainty ? 'with' : 'without';
+  return [`Forecasts (intervals ${scale} coefficient uncertainty; point = ${record.settings.point}):`, ...alignRows(rows)];
+}
+
+function coefficient(model: ModelRecord, name: string): string {
+  const value = model.coefficients[name];
+  if (typeof value !== 'number') return '';
+  const se = model.stderr[name];
+  return `${num(value)} ± ${typeof se === 'number' ? num(se, 3) : 'n/a'}`;
+}
+
+function lagged(model: ModelRecord, part: 'ar' | 'ma', index: number): string {
+  const values = model.coefficients[part];
+  const errors = model.stderr[part];
+  if (!Array.isArray(values) || index >= values.length) return '';
+  const se = Array.isArray(errors) ? errors[index] : null;
+  return `${num(values[index])} ± ${typeof se === 'number' ? num(se, 3) : 'n/a'}`;
+}
+
+function num(value: number | null, digits = 4): string {
+  if (value === null || !Number.isFinite(value)) return 'n/a';
+  const abs = Math.abs(value);
+  if (abs !== 0 && (abs >= 1e7 || abs < 1e-4)) return value.toExponential(digits - 1);
+  return Number(value.toPrecision(digits)).toString();
+}
+
+function alignRows(rows: readonly (readonly string[])[]): string[] {
+  const widths: number[] = [];
+  for (const row of rows) row.forEach((cell, i) => (widths[i] = Math.max(widths[i] ?? 0, cell.length)));
+  return rows.map((row) =>
+    row
+      .map((cell, i) => (i === 0 ? cell.padEnd(widths[i]) : cell.padStart(widths[i])))
+      .join('  ')
+      .trimEnd(),
+  );
+}

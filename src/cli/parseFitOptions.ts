@@ -1,0 +1,110 @@
+// `trendbrief fit` arguments → validated analysis settings, every problem collected.
+import { parseArgs } from 'node:util';
+import { cliMessages, InputError, type InputProblem } from '../errors.js';
+import { FREQUENCIES, type Frequency } from '../data/period.js';
+import type { TransformSpec } from '../data/series.js';
+
+export interface FitRequest {
+  file: string;
+  column?: string;
+  periodColumn?: string;
+  frequency?: Frequency;
+  transform: TransformSpec;
+  horizon?: number;
+  maxP: number;
+  maxQ: number;
+  levels: number[];
+  coefficientUncertainty: boolean;
+  point: 'median' | 'mean';
+  json: boolean;
+  help: boolean;
+}
+
+export const MAX_HORIZON = 1000;
+export const MAX_ORDER = 8;
+
+export function parseFitOptions(args: readonly string[]): FitRequest {
+  let parsed;
+  try {
+    parsed = parseArgs({
+      args: [...args],
+      allowPositionals: true,
+      strict: true,
+      options: {
+        column: { type: 'string' },
+        'period-column': { type: 'string' },
+        frequency: { type: 'string' },
+        transform: { type: 'string' },
+        horizon: { type: 'string' },
+        'max-p': { type: 'string' },
+        'max-q': { type: 'string' },
+        levels: { type: 'string' },
+        'no-coef-uncertainty': { type: 'boolean' },
+        point: { type: 'string' },
+        json: { type: 'boolean' },
+        help: { type: 'boolean', short: 'h' },
+      },
+    });
+  } catch (error) {
+    throw new InputError(cliMessages.badOptions(error instanceof Error ? error.message : String(error)));
+  }
+  const { values, positionals } = parsed;
+  const problems: InputProblem[] = [];
+  const help = values.help === true;
+  if (!help && positionals.length === 0) problems.push(cliMessages.missingFile('fit'));
+  if (positionals.length > 1) problems.push(cliMessages.extraArguments(positionals.slice(1)));
+  const integer = (option: string, value: string | undefined, min: number, max: number): number | undefined => {
+    if (value === undefined) return undefined;
+    const number = /^\d+$/.test(value.trim()) ? Number(value) : Number.NaN;
+    if (!Number.isInteger(number) || number < min || number > max) {
+      problems.push(cliMessages.notAnInteger(option, value, min, max));
+      return undefined;
+    }
+    return number;
+  };
+  const choice = <T extends string>(option: string, value: string | undefined, choices: readonly T[]): T | undefined => {
+    if (value === undefined) return undefined;
+    const found = choices.find((c) => c === value);
+    if (found === undefined) problems.push(cliMessages.badChoice(option, value, choices));
+    return found;
+  };
+  const request: FitRequest = {
+    file: positionals[0] ?? '',
+    column: values.column,
+    periodColumn: values['period-column'],
+    frequency: choice('frequency', values.frequency, FREQUENCIES),
+    transform: parseTransform(values.transform, problems),
+    horizon: integer('horizon', values.horizon, 1, MAX_HORIZON),
+    maxP: integer('max-p', values['max-p'], 0, MAX_ORDER) ?? 3,
+    maxQ: integer('max-q', values['max-q'], 0, MAX_ORDER) ?? 3,
+    levels: parseLevels(values.levels, problems),
+    coefficientUncertainty: values['no-coef-uncertainty'] !== true,
+    point: choice('point', values.point, ['median', 'mean'] as const) ?? 'median',
+    json: values.json === true,
+    help,
+  };
+  if (problems.length > 0 && !help) throw new InputError(problems);
+  return request;
+}
+
+function parseTransform(value: string | undefined, problems: InputProblem[]): TransformSpec {
+  if (value === undefined || value === 'none') return { kind: 'none' };
+  if (value === 'log') return { kind: 'log' };
+  const match = /^box-cox:(-?\d+(\.\d+)?)$/.exec(value);
+  if (match !== null) {
+    const lambda = Number(match[1]);
+    if (Math.abs(lambda) <= 2) return { kind: 'box-cox', lambda };
+  }
+  problems.push(cliMessages.badTransform(value));
+  return { kind: 'none' };
+}
+
+function parseLevels(value: string | undefined, problems: InputProblem[]): number[] {
+  if (value === undefined) return [80, 95];
+  const levels = value.split(',').map((part) => (/^\s*\d+(\.\d+)?\s*$/.test(part) ? Number(part) : Number.NaN));
+  if (levels.length === 0 || levels.some((level) => !(level >= 50 && level <= 99.9))) {
+    problems.push(cliMessages.badLevels(value));
+    return [80, 95];
+  }
+  return [...new Set(levels)].sort((a, b) => a - b);
+}

@@ -1,0 +1,116 @@
+// The two trend models, both regression with ARMA errors on the shared engine:
+//   deterministic: w_t = b₀ + b₁t + η_t on the (transformed) levels, t = 1 at the first
+//                  observation (trend-stationary);
+//   stochastic:    w_t − w_{t−1} = c + η_t on the first differences (difference-stationary,
+//                  ARIMA(p,1,q) with drift c).
+// η ~ stationary, invertible ARMA(p,q) in both. Only the design differs.
+import { fitRegressionArma, olsFit, type RegressionArmaFit } from './fitRegressionArma.js';
+import { forecastRegressionArma, type ForecastMoments } from '../statespace/forecast.js';
+import { createProfileLikelihood } from './profileLikelihood.js';
+import { searchOrders, type Candidate } from './orderSearch.js';
+import { armaStandardErrors } from './standardErrors.js';
+
+export type TrendModelKind = 'deterministic' | 'stochastic';
+
+export const TREND_MODELS: readonly TrendModelKind[] = ['deterministic', 'stochastic'];
+
+export interface TrendDesign {
+  response: Float64Array;
+  regressors: Float64Array[];
+  /** Names of the regression coefficients, in order. */
+  coefficientNames: string[];
+  /** Regressor rows for h = 1..horizon. */
+  futureRows(horizon: number): number[][];
+  /** For the stochastic model: forecasts are integrated from this last level. */
+  integrateFrom?: number;
+}
+
+/** The response and regressors of a model for the model-scale series `w`. */
+export function trendDesign(kind: TrendModelKind, w: Float64Array): TrendDesign {
+  const n = w.length;
+  if (kind === 'deterministic') {
+    return {
+      response: w,
+      regressors: [new Float64Array(n).fill(1), Float64Array.from({ length: n }, (_, i) => i + 1)],
+      coefficientNames: ['intercept', 'slope'],
+      futureRows: (horizon) => Array.from({ length: horizon }, (_, h) => [1, n + h + 1]),
+    };
+  }
+  const differences = Float64Array.from({ length: n - 1 }, (_, i) => w[i + 1] - w[i]);
+  return {
+    response: differences,
+    regressors: [new Float64Array(n - 1).fill(1)],
+    coefficientNames: ['drift'],
+    futureRows: (horizon) => Array.from({ length: horizon }, () => [1]),
+    integrateFrom: w[n - 1],
+  };
+}
+
+/** Fewest observations (of w) either model needs for an order (p, q), so that AICc exists. */
+export function minimumObservations(kind: TrendModelKind, p: number, q: number): number {
+  const k = p + q + (kind === 'deterministic' ? 2 : 1) + 1;
+  // AICc needs m > k + 1; the stochastic model loses one observation to differencing.
+  return k + 2 + (kind === 'stochastic' ? 1 : 0);
+}
+
+export interface TrendModelFit {
+  kind: TrendModelKind;
+  design: TrendDesign;
+  fit: RegressionArmaFit;
+  aicc: number;
+  candidates: Candidate[];
+  coefficients: Record<string, number>;
+  /** Standard errors for the regression coefficients (GLS) and AR/MA (observed information). */
+  stderr: { regression: Record<string, number>; ar: number[]; ma: number[] };
+}
+
+/** Order search for one model, then standard errors for the chosen order. */
+export function fitTrendModel(kind: TrendModelKind, w: Float64Array, maxP: number, maxQ: number): TrendModelFit {
+  const design = trendDesign(kind, w);
+  const search = searchOrders(design.response, design.regressors, maxP, maxQ);
+  return describeFit(kind, design, search.best, search.bestAicc, search.candidates);
+}
+
+/** A model at a fixed order (no search), e.g. for a backtest that keeps orders fixed. */
+export function fitTrendModelAtOrder(kind: TrendModelKind, w: Float64Array, p: number, q: number): TrendModelFit {
+  const design = trendDesign(kind, w);
+  const fit = fitRegressionArma(design.response, design.regressors, p, q);
+  const k = p + q + design.regressors.length + 1;
+  const m = fit.nobs;
+  const aicc = m - k - 1 > 0 ? -2 * fit.loglik + 2 * k + (2 * k * (k + 1)) / (m - k - 1) : Number.POSITIVE_INFINITY;
+  return describeFit(kind, design, fit, aicc, [{ p, q, loglik: fit.loglik, aicc, converged: fit.converged }]);
+}
+
+function describeFit(
+  kind: TrendModelKind,
+  design: TrendDesign,
+  fit: RegressionArmaFit,
+  aicc: number,
+  candidates: Candidate[],
+): TrendModelFit {
+  const coefficients: Record<string, number> = {};
+  const regression: Record<string, number> = {};
+  const k = design.coefficientNames.length;
+  design.coefficientNames.forEach((name, i) => {
+    coefficients[name] = fit.beta[i];
+    regression[name] = Math.sqrt(fit.covBeta[i * k + i]);
+  });
+  const ols = olsFit(design.response, design.regressors);
+  const likelihood = createProfileLikelihood(ols.residuals, design.regressors, fit.p, fit.q);
+  const armaSe = armaStandardErrors(likelihood, fit.ar, fit.ma);
+  return {
+    kind,
+    design,
+    fit,
+    aicc,
+    candidates,
+    coefficients,
+    stderr: { regression, ar: Array.from(armaSe.subarray(0, fit.p)), ma: Array.from(armaSe.subarray(fit.p)) },
+  };
+}
+
+/** Model-scale forecast moments for h = 1..horizon. */
+export function forecastTrendModel(model: TrendModelFit, horizon: number): ForecastMoments {
+  const integrate = model.design.integrateFrom === undefined ? undefined : { lastLevel: model.design.integrateFrom };
+  return forecastRegressionArma(model.fit, model.design.futureRows(horizon), integrate);
+}
