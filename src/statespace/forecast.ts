@@ -4,9 +4,10 @@
 // g_h = x_{n+h} − (Z T^{h−1} A_{n+1})' carries the regressors through the same filter, so the
 // dependence of the predicted noise on β̂ is counted (Harvey 1989, §3.4.3).
 // With `integrate`, the model is for first differences and levels are forecast: the mean
-// cumulates the difference forecasts and the variance comes from the state augmented with
-// the running sum u_{t+1} = u_t + η_{t+1}, which equals the integrated ψ-weights once the
-// filter is in its steady state (Box, Jenkins & Reinsel 2008, §5.2).
+// cumulates the difference forecasts and the process variance is σ² Σ_{j<h} (Σ_{i≤j} ψ_i)²
+// from the integrated ψ-weights (Box, Jenkins & Reinsel 2008, §5.1.1). That is the
+// steady-state value; it ignores the small extra uncertainty of the state at the origin,
+// which matters only when an MA root sits near the unit circle.
 
 export interface ForecastInput {
   ar: ArrayLike<number>;
@@ -52,28 +53,14 @@ export function forecastRegressionArma(
   const regressorStates = input.finalState.slice(1).map((s) => s.slice());
   for (let c = 0; c < k; c++) for (let i = 0; i < r; i++) noise[i] -= input.beta[c] * regressorStates[c][i];
 
-  const dim = integrate ? r + 1 : r;
-  const transition = new Float64Array(dim * dim);
+  const transition = new Float64Array(r * r);
   for (let i = 0; i < r; i++) {
-    transition[i * dim] = phi[i];
-    if (i + 1 < r) transition[i * dim + i + 1] = 1;
+    transition[i * r] = phi[i];
+    if (i + 1 < r) transition[i * r + i + 1] = 1;
   }
-  const shock = new Float64Array(dim);
-  shock.set(rvec);
-  let cov: Float64Array = new Float64Array(dim * dim);
-  for (let i = 0; i < r; i++) for (let j = 0; j < r; j++) cov[i * dim + j] = input.finalCovariance[i * r + j];
-  if (integrate) {
-    // u_{t+1} = u_t + Z T α_t + ε_{t+1}; at h = 1, u_{n+1} = η_{n+1} = Z α_{n+1}.
-    for (let j = 0; j < dim; j++) transition[r * dim + j] = j < r ? transition[j] : 0;
-    transition[r * dim + r] = 1;
-    shock[r] = 1;
-    for (let i = 0; i < r; i++) {
-      cov[i * dim + r] = input.finalCovariance[i * r];
-      cov[r * dim + i] = input.finalCovariance[i * r];
-    }
-    cov[r * dim + r] = input.finalCovariance[0];
-  }
-  const read = integrate ? r * dim + r : 0;
+  let cov: Float64Array = input.finalCovariance.slice();
+  const integratedPsi = integrate ? cumulativeSums(psiWeights(input.ar, input.ma, horizon)) : undefined;
+  let integratedVariance = 0;
 
   const mean = new Float64Array(horizon);
   const seProcess = new Float64Array(horizon);
@@ -90,16 +77,36 @@ export function forecastRegressionArma(
     }
     level = integrate ? level + step : step;
     mean[h] = level;
-    const processVariance = input.sigma2 * cov[read];
+    let processVariance = input.sigma2 * cov[0];
+    if (integratedPsi !== undefined) {
+      integratedVariance += integratedPsi[h] * integratedPsi[h];
+      processVariance = input.sigma2 * integratedVariance;
+    }
     let coefficientVariance = 0;
     for (let a = 0; a < k; a++) for (let b = 0; b < k; b++) coefficientVariance += g[a] * input.covBeta[a * k + b] * g[b];
     seProcess[h] = Math.sqrt(processVariance);
     seTotal[h] = Math.sqrt(processVariance + coefficientVariance);
     advance(noise, phi, r);
     for (const state of regressorStates) advance(state, phi, r);
-    cov = propagate(cov, transition, shock, dim);
+    if (integratedPsi === undefined) cov = propagate(cov, transition, rvec, r);
   }
   return { mean, seProcess, seTotal };
+}
+
+/** ψ-weights of the MA(∞) form: ψ₀ = 1, ψ_j = θ_j + Σ_{i=1}^{min(j,p)} φ_i ψ_{j−i}. */
+export function psiWeights(ar: ArrayLike<number>, ma: ArrayLike<number>, count: number): Float64Array {
+  const psi = new Float64Array(count);
+  for (let j = 0; j < count; j++) {
+    let value = j === 0 ? 1 : j <= ma.length ? ma[j - 1] : 0;
+    for (let i = 1; i <= Math.min(j, ar.length); i++) value += ar[i - 1] * psi[j - i];
+    psi[j] = value;
+  }
+  return psi;
+}
+
+function cumulativeSums(values: Float64Array): Float64Array {
+  let sum = 0;
+  return values.map((v) => (sum += v));
 }
 
 /** s ← T s for the companion-form T. */
