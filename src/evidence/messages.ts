@@ -17,24 +17,40 @@ export function formatPValue({ p_value, p_bound }: StatedPValue): string {
   return `p = ${p_value.toFixed(3)}`;
 }
 
-/** One sentence explaining a trend verdict, with both p-values and the level used. */
+/** A short plain-language explanation of a trend verdict, with both p-values and the level used. */
 export function trendVerdictSummary(
   verdict: TrendVerdictKind,
   kpss: StatedPValue,
   adf: StatedPValue,
   significance: number,
 ): string {
-  const stable = `the check that starts from a steady trend line (${formatPValue(kpss)})`;
-  const lasting = `the check that starts from shocks that never fade (${formatPValue(adf)})`;
-  const level = `judged at the ${Number((significance * 100).toPrecision(6))}% level`;
+  const kpssP = formatPValue(kpss);
+  const adfP = formatPValue(adf);
+  const level = `${Number((significance * 100).toPrecision(6))}% level`;
   switch (verdict) {
     case 'deterministic':
-      return `The series moves like a steady trend line with passing swings around it: ${stable} found nothing against that picture, while ${lasting} was rejected, ${level}.`;
+      return (
+        'The series behaves like a steady trend line with passing swings around it. ' +
+        `One check, which assumes such a line, found nothing against it (${kpssP}); the other, ` +
+        `which assumes shocks never fade, was able to rule that out (${adfP}). Both judged at the ${level}.`
+      );
     case 'stochastic':
-      return `The series moves like a trend that keeps every shock, so surprises shift its future path for good: ${stable} was rejected, while ${lasting} found nothing against that picture, ${level}.`;
+      return (
+        'The series behaves like a trend that keeps every shock, so each surprise moves its future ' +
+        `path for good. One check ruled out a steady trend line (${kpssP}); the other, which assumes ` +
+        `shocks never fade, found nothing against that (${adfP}). Both judged at the ${level}.`
+      );
     case 'conflicting':
-      return `The two checks disagree: ${stable} was rejected and so was ${lasting}, ${level}; these checks alone do not settle which kind of trend fits.`;
+      return (
+        `The two checks disagree. One ruled out a steady trend line (${kpssP}) and the other ruled out ` +
+        `shocks that never fade (${adfP}), both at the ${level}, so these checks alone do not settle ` +
+        'which kind of trend fits.'
+      );
     case 'inconclusive':
-      return `Neither check found clear evidence: ${stable} and ${lasting} were both left standing, ${level}; these checks alone cannot tell the two kinds of trend apart for this series.`;
+      return (
+        `Neither check could rule anything out: a steady trend line (${kpssP}) and shocks that never ` +
+        `fade (${adfP}) both remain possible at the ${level}, so these checks alone cannot tell the ` +
+        'two kinds of trend apart for this series.'
+      );
   }
 }

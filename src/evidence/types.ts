@@ -87,6 +87,6 @@ export interface TrendVerdict {
   significance: number;
   kpss_rejects: boolean;
   adf_rejects: boolean;
-  /** One plain-language sentence with the numbers behind the verdict. */
+  /** A short plain-language explanation with the numbers behind the verdict. */
   summary: string;
 }
