@@ -29,6 +29,7 @@ export function adfTest(y: ArrayLike<number>, options: AdfOptions = {}): AdfResu
   const ceiling = Math.floor(n / 2) - deterministic - 1;
   if (ceiling < 0) throw new Error(`adfTest needs at least ${2 * (deterministic + 1)} observations`);
 
+  const differences = series.subarray(1).map((value, t) => value - series[t]);
   let lags: number;
   let lagRule: AdfLagRule;
   if (options.lags !== undefined) {
@@ -36,11 +37,11 @@ export function adfTest(y: ArrayLike<number>, options: AdfOptions = {}): AdfResu
     lagRule = 'fixed';
   } else {
     const maxLags = checkedLagCount(options.maxLags ?? Math.min(schwertLags(n), ceiling), ceiling, 'maxLags');
-    lags = aicLagOrder(series, maxLags, regression);
+    lags = aicLagOrder(series, differences, maxLags, regression);
     lagRule = 'aic';
   }
 
-  const fit = adfRegression(series, lags, lags, regression);
+  const fit = adfRegression(series, differences, lags, lags, regression);
   const stat = fit.coefficients[0] / fit.standardErrors[0];
   return {
     stat,
@@ -60,11 +61,16 @@ function checkedLagCount(value: number, ceiling: number, name: string): number {
 }
 
 /** Order in 0..maxLags with the smallest AIC, all fitted on the rows that maxLags leaves. */
-function aicLagOrder(series: Float64Array, maxLags: number, regression: AdfResult['regression']): number {
+function aicLagOrder(
+  series: Float64Array,
+  differences: Float64Array,
+  maxLags: number,
+  regression: AdfResult['regression'],
+): number {
   let best = 0;
   let bestAic = Infinity;
   for (let k = 0; k <= maxLags; k++) {
-    const fit = adfRegression(series, k, maxLags, regression);
+    const fit = adfRegression(series, differences, k, maxLags, regression);
     const regressors = k + (regression === 'constant' ? 2 : 3);
     // Akaike (1974) for a Gaussian regression, dropping terms common to every candidate.
     const aic = fit.nobs * Math.log(fit.ssr / fit.nobs) + 2 * regressors;
@@ -82,11 +88,11 @@ function aicLagOrder(series: Float64Array, maxLags: number, regression: AdfResul
  */
 function adfRegression(
   series: Float64Array,
+  differences: Float64Array,
   k: number,
   firstRow: number,
   regression: AdfResult['regression'],
 ): OlsFit {
-  const differences = series.subarray(1).map((value, t) => value - series[t]);
   const rows = differences.length - firstRow;
   const response = differences.slice(firstRow);
   const level = series.slice(firstRow, firstRow + rows);

@@ -10,7 +10,8 @@ import type { AcfResult } from './types.js';
 export function residualAcf(residuals: ArrayLike<number>, options: { lags?: number } = {}): AcfResult {
   const series = finiteSeries(residuals, 'residualAcf');
   const n = series.length;
-  return { ...autocorrelations(series, options.lags ?? defaultAcfLags(n), 'residualAcf'), bound: 1.96 / Math.sqrt(n) };
+  const lags = options.lags ?? defaultAcfLags(n);
+  return { ...autocorrelations(series, lags, 'residualAcf'), bound: 1.96 / Math.sqrt(n) };
 }
 
 /** Lags 1..lags and r_k for them; shared with the Ljung-Box statistic. */
