@@ -1,0 +1,24 @@
+// `npm run bench`: runs every benchmark, prints a table and writes out/bench/results.json.
+// Figures are wall-clock medians on the machine at hand; tests never assert on time.
+import { mkdirSync, writeFileSync } from 'node:fs';
+import { cpus } from 'node:os';
+import { engineBench } from './engineBench.js';
+import type { BenchRow } from './timing.js';
+
+const suites: [string, () => BenchRow[] | Promise<BenchRow[]>][] = [['engine', engineBench]];
+
+const results: Record<string, BenchRow[]> = {};
+for (const [name, suite] of suites) {
+  const rows = await suite();
+  results[name] = rows;
+  console.log(`\n${name}`);
+  const width = Math.max(...rows.map((row) => row.name.length));
+  for (const row of rows) {
+    const verdict = row.target === undefined ? '' : row.ms <= row.target ? `  target ${row.target} ms: met` : `  target ${row.target} ms: MISSED`;
+    const extra = row.extra === undefined ? '' : `  ${Object.entries(row.extra).map(([k, v]) => `${k} ${v.toFixed(1)}`).join(', ')}`;
+    console.log(`  ${row.name.padEnd(width)}  ${row.ms.toFixed(3).padStart(10)} ms${verdict}${extra}`);
+  }
+}
+mkdirSync('out/bench', { recursive: true });
+writeFileSync('out/bench/results.json', `${JSON.stringify({ node: process.version, cpus: cpus().length, results }, null, 2)}\n`);
+console.log('\nwritten: out/bench/results.json');
