@@ -11,6 +11,7 @@ export interface CliIo {
 }
 
 const COMMANDS = ['fit'] as const;
+const GLOBAL_OPTIONS = ['--help', '--version'] as const;
 
 export const EXIT = { ok: 0, internal: 1, input: 2, mismatch: 3 } as const;
 
@@ -46,6 +47,7 @@ export async function cli(argv: readonly string[], io: CliIo): Promise<number> {
       }
       return await runFit(rest, io);
     }
+    if (command.startsWith('-')) throw new InputError(cliMessages.unknownOption(command, closestName(command, GLOBAL_OPTIONS), ''));
     throw new InputError(cliMessages.unknownCommand(command, closestName(command, COMMANDS)));
   } catch (error) {
     if (error instanceof InputError) {

@@ -272,6 +272,10 @@ function disagreeing(lines: readonly number[]): string {
 // Command line: messages about arguments and options (src/cli/).
 // ---------------------------------------------------------------------------
 
+function helpCommand(command: string): string {
+  return command === '' ? 'trendbrief --help' : `trendbrief ${command} --help`;
+}
+
 export const cliMessages = {
   unknownCommand(name: string, suggestion: string | undefined): InputProblem {
     const hint = suggestion !== undefined ? `did you mean '${suggestion}'? See trendbrief --help` : 'see trendbrief --help for the commands';
@@ -280,8 +284,20 @@ export const cliMessages = {
   noCommand(): InputProblem {
     return problem('cli.no-command', 'no command given', 'run trendbrief --help to see the commands');
   },
-  badOptions(detail: string): InputProblem {
-    return problem('cli.bad-option', detail, 'see trendbrief fit --help for the options');
+  /** `command` names the command whose options were given; '' for the options before any command. */
+  unknownOption(written: string, suggestion: string | undefined, command: string): InputProblem {
+    const hint = suggestion !== undefined ? `did you mean ${suggestion}? See ${helpCommand(command)}` : `see ${helpCommand(command)} for the options`;
+    return problem('cli.unknown-option', 'unknown option', hint, { field: written });
+  },
+  missingValue(option: string, command: string): InputProblem {
+    return problem('cli.missing-value', 'needs a value', `write the value after the option, e.g. ${option} VALUE, or see ${helpCommand(command)}`, {
+      field: option,
+    });
+  },
+  flagWithValue(option: string, command: string): InputProblem {
+    return problem('cli.flag-with-value', 'is a switch and takes no value', `write ${option} alone, or see ${helpCommand(command)}`, {
+      field: option,
+    });
   },
   missingFile(command: string): InputProblem {
     return problem('cli.missing-file', `${command} needs a CSV file`, `give one, e.g. trendbrief ${command} series.csv`);

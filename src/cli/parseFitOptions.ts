@@ -1,6 +1,6 @@
 // `trendbrief fit` arguments → validated analysis settings, every problem collected.
-import { parseArgs } from 'node:util';
 import { cliMessages, InputError, type InputProblem } from '../errors.js';
+import { splitOptions, type OptionSpec } from './splitOptions.js';
 import { FREQUENCIES, type Frequency } from '../data/period.js';
 import type { TransformSpec } from '../data/series.js';
 
@@ -23,34 +23,28 @@ export interface FitRequest {
 export const MAX_HORIZON = 1000;
 export const MAX_ORDER = 8;
 
+const FIT_OPTIONS: Readonly<Record<string, OptionSpec>> = {
+  column: { type: 'string' },
+  'period-column': { type: 'string' },
+  frequency: { type: 'string' },
+  transform: { type: 'string' },
+  horizon: { type: 'string' },
+  'max-p': { type: 'string' },
+  'max-q': { type: 'string' },
+  levels: { type: 'string' },
+  'no-coef-uncertainty': { type: 'boolean' },
+  point: { type: 'string' },
+  json: { type: 'boolean' },
+  help: { type: 'boolean', short: 'h' },
+};
+
 export function parseFitOptions(args: readonly string[]): FitRequest {
-  let parsed;
-  try {
-    parsed = parseArgs({
-      args: [...args],
-      allowPositionals: true,
-      strict: true,
-      options: {
-        column: { type: 'string' },
-        'period-column': { type: 'string' },
-        frequency: { type: 'string' },
-        transform: { type: 'string' },
-        horizon: { type: 'string' },
-        'max-p': { type: 'string' },
-        'max-q': { type: 'string' },
-        levels: { type: 'string' },
-        'no-coef-uncertainty': { type: 'boolean' },
-        point: { type: 'string' },
-        json: { type: 'boolean' },
-        help: { type: 'boolean', short: 'h' },
-      },
-    });
-  } catch (error) {
-    throw new InputError(cliMessages.badOptions(error instanceof Error ? error.message : String(error)));
-  }
-  const { values, positionals } = parsed;
-  const problems: InputProblem[] = [];
-  const help = values.help === true;
+  const { values: given, positionals, problems } = splitOptions(args, FIT_OPTIONS, 'fit');
+  const text = (name: string): string | undefined => {
+    const value = given.get(name);
+    return typeof value === 'string' ? value : undefined;
+  };
+  const help = given.get('help') === true;
   if (!help && positionals.length === 0) problems.push(cliMessages.missingFile('fit'));
   if (positionals.length > 1) problems.push(cliMessages.extraArguments(positionals.slice(1)));
   const integer = (option: string, value: string | undefined, min: number, max: number): number | undefined => {
@@ -70,17 +64,17 @@ export function parseFitOptions(args: readonly string[]): FitRequest {
   };
   const request: FitRequest = {
     file: positionals[0] ?? '',
-    column: values.column,
-    periodColumn: values['period-column'],
-    frequency: choice('frequency', values.frequency, FREQUENCIES),
-    transform: parseTransform(values.transform, problems),
-    horizon: integer('horizon', values.horizon, 1, MAX_HORIZON),
-    maxP: integer('max-p', values['max-p'], 0, MAX_ORDER) ?? 3,
-    maxQ: integer('max-q', values['max-q'], 0, MAX_ORDER) ?? 3,
-    levels: parseLevels(values.levels, problems),
-    coefficientUncertainty: values['no-coef-uncertainty'] !== true,
-    point: choice('point', values.point, ['median', 'mean'] as const) ?? 'median',
-    json: values.json === true,
+    column: text('column'),
+    periodColumn: text('period-column'),
+    frequency: choice('frequency', text('frequency'), FREQUENCIES),
+    transform: parseTransform(text('transform'), problems),
+    horizon: integer('horizon', text('horizon'), 1, MAX_HORIZON),
+    maxP: integer('max-p', text('max-p'), 0, MAX_ORDER) ?? 3,
+    maxQ: integer('max-q', text('max-q'), 0, MAX_ORDER) ?? 3,
+    levels: parseLevels(text('levels'), problems),
+    coefficientUncertainty: given.get('no-coef-uncertainty') !== true,
+    point: choice('point', text('point'), ['median', 'mean'] as const) ?? 'median',
+    json: given.get('json') === true,
     help,
   };
   if (problems.length > 0 && !help) throw new InputError(problems);
