@@ -23,6 +23,9 @@ export interface MinimizeResult {
 
 const ARMIJO = 1e-4;
 const STALL_GRADIENT = 1e-4;
+/** Iterations over which the decrease is measured, and the relative decrease that counts as none. */
+const STALL_WINDOW = 5;
+const STALL_DECREASE = 1e-10;
 
 export function minimizeBfgs(objective: Objective, start: ArrayLike<number>, options: MinimizeOptions = {}): MinimizeResult {
   const gtol = options.gradientTolerance ?? 1e-6;
@@ -55,6 +58,7 @@ export function minimizeBfgs(objective: Objective, start: ArrayLike<number>, opt
   let iterations = 0;
   let freshHessian = true;
   let stalled = false;
+  const history = new Float64Array(STALL_WINDOW).fill(Number.POSITIVE_INFINITY);
 
   while (gnorm > gtol && iterations < maxIterations) {
     iterations++;
@@ -100,7 +104,7 @@ export function minimizeBfgs(objective: Objective, start: ArrayLike<number>, opt
       yv[i] = nextGrad[i] - grad[i];
     }
     const sy = dot(s, yv);
-    const improvement = fx - ftrial;
+    history[iterations % STALL_WINDOW] = ftrial;
     x.set(trial);
     grad.set(nextGrad);
     fx = ftrial;
@@ -114,7 +118,9 @@ export function minimizeBfgs(objective: Objective, start: ArrayLike<number>, opt
       updateInverseHessian(hinv, s, yv, hy, sy, k);
       freshHessian = false;
     }
-    if (improvement <= 1e-14 * (1 + Math.abs(fx))) {
+    // Stop on a ridge: over the last few iterations the objective has stopped moving.
+    const older = history[(iterations + 1) % STALL_WINDOW];
+    if (iterations >= STALL_WINDOW && older - fx <= STALL_DECREASE * (1 + Math.abs(fx))) {
       stalled = true;
       break;
     }

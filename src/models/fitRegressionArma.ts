@@ -94,7 +94,7 @@ export function fitRegressionArma(
 
 function summarise(likelihood: ProfileLikelihood, x: Float64Array, converged: boolean, evaluations: number): RegressionArmaFit {
   const { ar, ma } = likelihood.coefficientsOf(x);
-  const loglik = likelihood.atCoefficients(ar, ma);
+  const loglik = likelihood.atCoefficients(ar, ma, true);
   const ws = likelihood.workspace;
   const k = ws.ncol - 1;
   const n = ws.n;
@@ -106,7 +106,7 @@ function summarise(likelihood: ProfileLikelihood, x: Float64Array, converged: bo
   for (let t = 0; t < n; t++) {
     let v = ws.innovations[t];
     for (let c = 0; c < k; c++) v -= beta[c] * ws.innovations[(c + 1) * n + t];
-    residuals[t] = v;
+    residuals[t] = Number.isNaN(ws.variances[t]) ? Number.NaN : v;
   }
   const finalState: Float64Array[] = [];
   for (let c = 0; c <= k; c++) finalState.push(ws.state.slice(c * ws.r, (c + 1) * ws.r));

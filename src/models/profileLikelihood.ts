@@ -11,7 +11,7 @@ export interface ProfileLikelihood {
   /** The filtered columns: y first, then the regressors. */
   readonly columns: readonly Float64Array[];
   /** Log-likelihood at AR/MA coefficients given directly; NaN outside the stationary region. */
-  atCoefficients(ar: ArrayLike<number>, ma: ArrayLike<number>): number;
+  atCoefficients(ar: ArrayLike<number>, ma: ArrayLike<number>, keepCovariance?: boolean): number;
   /** Log-likelihood at unconstrained parameters (first p map to AR, next q to MA). */
   atUnconstrained(x: ArrayLike<number>): number;
   /** Writes the AR and MA coefficients for unconstrained `x`. */
@@ -25,14 +25,14 @@ export function createProfileLikelihood(
   q: number,
 ): ProfileLikelihood {
   const columns = [y, ...regressors];
-  const workspace = createWorkspace(stateDimension(p, q), columns.length, y.length);
+  const workspace = createWorkspace(stateDimension(p, q), columns);
   const ar = new Float64Array(p);
   const ma = new Float64Array(q);
   const work = new Float64Array(Math.max(p, q, 1));
 
-  const atCoefficients = (arCoef: ArrayLike<number>, maCoef: ArrayLike<number>): number => {
+  const atCoefficients = (arCoef: ArrayLike<number>, maCoef: ArrayLike<number>, keepCovariance = false): number => {
     if (!setArma(workspace, arCoef, p, maCoef, q)) return Number.NaN;
-    if (!runFilter(workspace, columns)) return Number.NaN;
+    if (!runFilter(workspace, columns, keepCovariance)) return Number.NaN;
     return profileLoglik(workspace);
   };
   const fill = (x: ArrayLike<number>): void => {

@@ -36,7 +36,7 @@ export interface FilterWorkspace {
   readonly variances: Float64Array;
   /** 1 / F_t, or 0 where y is missing. */
   readonly weights: Float64Array;
-  /** Innovations of every column, column c at [c·n, (c+1)·n). */
+  /** Innovations of every column, column c at [c·n, (c+1)·n); 0 where y is missing. */
   readonly innovations: Float64Array;
   /** Predicted state means a_{n+1|n}, column c at [c·r, (c+1)·r). */
   readonly state: Float64Array;
@@ -47,12 +47,17 @@ export interface FilterWorkspace {
   readonly gramFactor: Float64Array;
   /** β after `profileLoglik`. */
   readonly gramRhs: Float64Array;
+  /** True when y has no missing values (set by `createWorkspace`). */
+  readonly complete: boolean;
   sumLogF: number;
   /** Observations that entered the likelihood (non-missing y). */
   nobs: number;
 }
 
-export function createWorkspace(r: number, ncol: number, n: number): FilterWorkspace {
+/** A workspace for filtering `columns` (y first) with state dimension r. */
+export function createWorkspace(r: number, columns: readonly Float64Array[]): FilterWorkspace {
+  const ncol = columns.length;
+  const n = columns[0].length;
   const k = ncol - 1;
   const stride = Math.max(r, SCALAR_STATE);
   return {
@@ -63,7 +68,7 @@ export function createWorkspace(r: number, ncol: number, n: number): FilterWorks
     phi: new Float64Array(stride),
     rvec: new Float64Array(stride),
     pmat: new Float64Array(r * r),
-    mmat: new Float64Array(r * r),
+    mmat: new Float64Array(Math.max(r * r, 3 * r)),
     gains: new Float64Array((n + 1) * stride),
     variances: new Float64Array(n),
     weights: new Float64Array(n),
@@ -74,6 +79,7 @@ export function createWorkspace(r: number, ncol: number, n: number): FilterWorks
     gram: new Float64Array(Math.max(1, k * k)),
     gramFactor: new Float64Array(Math.max(1, k * k)),
     gramRhs: new Float64Array(Math.max(1, k)),
+    complete: !hasMissing(columns[0]),
     sumLogF: 0,
     nobs: 0,
   };
@@ -96,15 +102,19 @@ export function setArma(ws: FilterWorkspace, ar: ArrayLike<number>, p: number, m
 /**
  * Runs the filter over `columns` (y first, then regressors; each of length n) from the
  * covariance installed by `setArma`. Returns false if an innovation variance is not positive.
+ * With `keepCovariance`, P is carried along so that `ws.pmat` ends as P_{n+1|n} (for
+ * forecasting); otherwise, on a complete series, the cheaper Chandrasekhar form is used.
  */
-export function runFilter(ws: FilterWorkspace, columns: readonly Float64Array[]): boolean {
-  const steadyFrom = runCovariance(ws, columns[0]);
+export function runFilter(ws: FilterWorkspace, columns: readonly Float64Array[], keepCovariance = false): boolean {
+  const fast = !keepCovariance && ws.complete;
+  const steadyFrom = fast ? runChandrasekhar(ws) : runCovariance(ws, columns[0]);
   if (steadyFrom < 0) return false;
-  for (let c = 0; c < ws.ncol; c++) {
-    if (ws.r <= SCALAR_STATE) filterColumnScalar(ws, columns[c], c, steadyFrom);
-    else filterColumnGeneric(ws, columns[c], c, steadyFrom);
+  if (ws.r <= SCALAR_STATE && ws.ncol <= 3) {
+    for (let c = 0; c < ws.ncol; c++) filterColumnScalar(ws, columns[c], c, steadyFrom);
+  } else {
+    for (let c = 0; c < ws.ncol; c++) filterColumnGeneric(ws, columns[c], c, steadyFrom);
+    accumulateCross(ws);
   }
-  accumulateCross(ws);
   return true;
 }
 
@@ -175,18 +185,103 @@ function runCovariance(ws: FilterWorkspace, y: Float64Array): number {
   return t;
 }
 
-/** a_{t+1} = T a_t + K_t v_t for one column, with the state in four locals. */
+/**
+ * The Chandrasekhar recursions for a time-invariant model started from the stationary P:
+ * P_{t+1} − P_t = m_t w_t w_t' stays of rank one, so each step costs O(r), not O(r²)
+ * (Morf, Sidhu & Kailath 1974; Herbst 2015, J. Econ. Dyn. Control 55):
+ *   F_{t+1} = F_t + m (Zw)²,  K_{t+1} = K_t + m (Zw) T w,
+ *   w_{t+1} = T w − K_{t+1} (Zw) / F_{t+1},  m_{t+1} = m + m² (Zw)² / F_t,
+ * with K_t = T P_t Z', w_1 = K_1, m_1 = −1/F_1. Same outputs as `runCovariance`, except
+ * that `ws.pmat` is left at the initial covariance.
+ */
+function runChandrasekhar(ws: FilterWorkspace): number {
+  const { r, stride, n, phi, pmat, gains, variances, weights, mmat } = ws;
+  // mmat's first rows hold K (row 0), w (row 1) and T w (row 2) as scratch.
+  const k = mmat;
+  const w = mmat.subarray(r);
+  const tw = mmat.subarray(2 * r);
+  let f = pmat[0];
+  for (let i = 0; i < r; i++) {
+    k[i] = phi[i] * pmat[0] + (i + 1 < r ? pmat[(i + 1) * r] : 0);
+    w[i] = k[i];
+  }
+  let m = -1 / f;
+  let logF = 0;
+  let product = 1;
+  let t = 0;
+  let steady = false;
+  for (; t < n && !steady; t++) {
+    if (!(f > 0)) return -1;
+    const invF = 1 / f;
+    variances[t] = f;
+    weights[t] = invF;
+    product *= f;
+    if (product > 1e250) {
+      logF += Math.log(product);
+      product = 1;
+    }
+    const row = t * stride;
+    for (let i = 0; i < r; i++) gains[row + i] = k[i] * invF;
+    for (let i = r; i < stride; i++) gains[row + i] = 0;
+    const zw = w[0];
+    const nextF = f + m * zw * zw;
+    const w0 = w[0];
+    let change = 0;
+    for (let i = 0; i < r; i++) {
+      tw[i] = phi[i] * w0 + (i + 1 < r ? w[i + 1] : 0);
+      k[i] += m * zw * tw[i];
+      change = Math.max(change, Math.abs(m * w[i] * w[i]));
+    }
+    for (let i = 0; i < r; i++) w[i] = tw[i] - (k[i] * zw) / nextF;
+    m += (m * m * zw * zw) / f;
+    f = nextF;
+    steady = change < STEADY_TOLERANCE;
+  }
+  if (t < n) {
+    const invF = 1 / f;
+    const row = t * stride;
+    for (let i = 0; i < stride; i++) gains[row + i] = i < r ? k[i] * invF : 0;
+    for (let s = t; s < n; s++) {
+      variances[s] = f;
+      weights[s] = invF;
+    }
+    logF += (n - t) * Math.log(f);
+  }
+  ws.sumLogF = logF + Math.log(product);
+  ws.nobs = n;
+  return t;
+}
+
+function hasMissing(y: Float64Array): boolean {
+  for (let t = 0; t < y.length; t++) if (Number.isNaN(y[t])) return true;
+  return false;
+}
+
+/**
+ * a_{t+1} = T a_t + K_t v_t for one column, with the state in four locals. While it runs,
+ * it also accumulates the weighted cross-products of this column with itself and with the
+ * (already filtered) columns 0 and 1, which is every pair when there are at most three.
+ */
 function filterColumnScalar(ws: FilterWorkspace, y: Float64Array, c: number, steadyFrom: number): void {
-  const { n, stride, phi, gains, r } = ws;
+  const { n, ncol, stride, phi, gains, r, weights, cross } = ws;
   const out = ws.innovations;
   const offset = c * n;
+  const first = c >= 1 ? 0 : offset;
+  const second = c >= 2 ? n : offset;
   const f0 = phi[0], f1 = phi[1], f2 = phi[2], f3 = phi[3];
   let a0 = 0, a1 = 0, a2 = 0, a3 = 0;
-  for (let t = 0; t < steadyFrom; t++) {
+  let own = 0, withFirst = 0, withSecond = 0;
+  for (let t = 0; t < n; t++) {
     const yt = y[t];
-    const v = Number.isNaN(yt) ? 0 : yt - a0;
-    out[offset + t] = Number.isNaN(yt) ? Number.NaN : v;
-    const row = t * stride;
+    const w = weights[t];
+    // A missing y has weight 0; its innovation is stored as 0 so it drops out of every sum.
+    const v = w === 0 ? 0 : yt - a0;
+    out[offset + t] = v;
+    const wv = w * v;
+    own += wv * v;
+    withFirst += wv * out[first + t];
+    withSecond += wv * out[second + t];
+    const row = (t < steadyFrom ? t : steadyFrom) * stride;
     const n0 = f0 * a0 + a1 + gains[row] * v;
     const n1 = f1 * a0 + a2 + gains[row + 1] * v;
     const n2 = f2 * a0 + a3 + gains[row + 2] * v;
@@ -195,21 +290,9 @@ function filterColumnScalar(ws: FilterWorkspace, y: Float64Array, c: number, ste
     a1 = n1;
     a2 = n2;
   }
-  if (steadyFrom < n) {
-    const row = steadyFrom * stride;
-    const k0 = gains[row], k1 = gains[row + 1], k2 = gains[row + 2], k3 = gains[row + 3];
-    for (let t = steadyFrom; t < n; t++) {
-      const v = y[t] - a0;
-      out[offset + t] = v;
-      const n0 = f0 * a0 + a1 + k0 * v;
-      const n1 = f1 * a0 + a2 + k1 * v;
-      const n2 = f2 * a0 + a3 + k2 * v;
-      a3 = f3 * a0 + k3 * v;
-      a0 = n0;
-      a1 = n1;
-      a2 = n2;
-    }
-  }
+  cross[c * ncol + c] = own;
+  if (c >= 1) cross[c] = withFirst;
+  if (c >= 2) cross[ncol + c] = withSecond;
   const state = ws.state;
   const base = c * r;
   state[base] = a0;
@@ -226,10 +309,8 @@ function filterColumnGeneric(ws: FilterWorkspace, y: Float64Array, c: number, st
   const base = c * r;
   for (let i = 0; i < r; i++) state[base + i] = 0;
   for (let t = 0; t < n; t++) {
-    const yt = y[t];
-    const missing = Number.isNaN(yt);
-    const v = missing ? 0 : yt - state[base];
-    out[offset + t] = missing ? Number.NaN : v;
+    const v = ws.weights[t] === 0 ? 0 : y[t] - state[base];
+    out[offset + t] = v;
     const row = Math.min(t, steadyFrom) * stride;
     const a0 = state[base];
     for (let i = 0; i < r; i++) state[base + i] = phi[i] * a0 + (i + 1 < r ? state[base + i + 1] : 0) + gains[row + i] * v;
@@ -244,10 +325,7 @@ function accumulateCross(ws: FilterWorkspace): void {
     for (let d = c; d < ncol; d++) {
       const od = d * n;
       let sum = 0;
-      for (let t = 0; t < n; t++) {
-        const w = weights[t];
-        if (w !== 0) sum += w * innovations[oc + t] * innovations[od + t];
-      }
+      for (let t = 0; t < n; t++) sum += weights[t] * innovations[oc + t] * innovations[od + t];
       cross[c * ncol + d] = sum;
     }
   }
