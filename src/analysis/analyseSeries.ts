@@ -5,6 +5,7 @@ import type { Series } from '../data/series.js';
 import { normalInv } from '../linalg/distributions.js';
 import { biasAdjustedMean, inverseTransform, transformValue, type TransformSpec } from '../models/transform.js';
 import { fitTrendModel, forecastTrendModel, minimumObservations, type TrendModelFit, type TrendModelKind } from '../models/trendModels.js';
+import { collectEvidence, type EvidenceOptions } from '../evidence/collectEvidence.js';
 import { describeEquation } from './describeEquation.js';
 import { jsonNumber, RECORD_SCHEMA, type AnalysisRecord, type ForecastRow, type ModelRecord } from './record.js';
 import { toolVersion } from './toolVersion.js';
@@ -22,6 +23,9 @@ export interface AnalysisOptions {
   coefficientUncertainty?: boolean;
   /** Point forecast: back-transformed median (default) or bias-adjusted mean. */
   point?: 'median' | 'mean';
+  /** Significance level of the evidence tests (default 0.05). */
+  significance?: number;
+  kpssLagRule?: EvidenceOptions['kpssLagRule'];
 }
 
 export const DEFAULT_LEVELS = [80, 95];
@@ -47,13 +51,21 @@ export function analyseSeries(series: Series, options: AnalysisOptions = {}): An
   const point = options.point ?? 'median';
   const w = series.values.map((y) => transformValue(transform, y));
 
+  const fitted = {
+    deterministic: fitTrendModel('deterministic', w, maxP, maxQ),
+    stochastic: fitTrendModel('stochastic', w, maxP, maxQ),
+  };
   const models = {} as AnalysisRecord['models'];
   const forecasts = {} as AnalysisRecord['forecasts'];
   for (const kind of ['deterministic', 'stochastic'] as const) {
-    const model = fitTrendModel(kind, w, maxP, maxQ);
-    models[kind] = modelRecord(kind, model);
-    forecasts[kind] = forecastRows(model, horizon, series.last, levels, transform, coefficientUncertainty, point);
+    models[kind] = modelRecord(kind, fitted[kind]);
+    forecasts[kind] = forecastRows(fitted[kind], horizon, series.last, levels, transform, coefficientUncertainty, point);
   }
+  const evidence = collectEvidence(
+    w,
+    { deterministic: fitted.deterministic.fit, stochastic: fitted.stochastic.fit },
+    { significance: options.significance, kpssLagRule: options.kpssLagRule },
+  );
   return {
     schema: RECORD_SCHEMA,
     tool: toolVersion(),
@@ -67,9 +79,18 @@ export function analyseSeries(series: Series, options: AnalysisOptions = {}): An
       transform: transform.kind === 'box-cox' ? { kind: 'box-cox', lambda: transform.lambda } : { kind: transform.kind },
       source: { file: series.file, sha256: series.sha256, column: series.column },
     },
-    settings: { horizon, levels, max_p: maxP, max_q: maxQ, coefficient_uncertainty: coefficientUncertainty, point },
+    settings: {
+      horizon,
+      levels,
+      max_p: maxP,
+      max_q: maxQ,
+      coefficient_uncertainty: coefficientUncertainty,
+      point,
+      significance: evidence.reading.level,
+    },
     models,
     forecasts,
+    evidence,
   };
 }
 

@@ -3,6 +3,7 @@
 // Keys are a contract: add freely, rename none. Numbers that do not exist (a standard
 // error at a singular Hessian, say) are null, never NaN.
 import type { Frequency } from '../data/period.js';
+import type { EvidenceRecord } from '../evidence/collectEvidence.js';
 
 export const RECORD_SCHEMA = 'trendbrief.analysis/1';
 
@@ -60,9 +61,11 @@ export interface AnalysisRecord {
     max_q: number;
     coefficient_uncertainty: boolean;
     point: 'median' | 'mean';
+    significance: number;
   };
   models: { deterministic: ModelRecord; stochastic: ModelRecord };
   forecasts: { deterministic: ForecastRow[]; stochastic: ForecastRow[] };
+  evidence: EvidenceRecord;
 }
 
 /** A number for JSON: non-finite values become null. */

@@ -1,6 +1,7 @@
 // The readable terminal summary of an AnalysisRecord: both models side by side, then the
 // forecast table. Plain text, fixed-width columns.
 import type { AnalysisRecord, ModelRecord } from '../analysis/record.js';
+import { formatEvidence } from './formatEvidence.js';
 
 const MODEL_TITLES = { deterministic: 'Deterministic trend', stochastic: 'Stochastic trend' } as const;
 
@@ -13,6 +14,8 @@ export function formatSummary(record: AnalysisRecord): string {
   lines.push(...modelTable(record.models.deterministic, record.models.stochastic));
   lines.push('');
   lines.push('AICc ranks orders within a model only; the two models describe different data.');
+  lines.push('');
+  lines.push(...formatEvidence(record));
   lines.push('');
   lines.push(...forecastTable(record));
   return `${lines.join('\n')}\n`;

@@ -1,0 +1,86 @@
+// The `evidence` part of an AnalysisRecord: unit-root tests on the model-scale levels, their
+// combined reading, and residual checks of both fitted models.
+import { adfTest } from './adfTest.js';
+import { kpssTest } from './kpssTest.js';
+import { residualChecks, type ResidualChecks } from './residualChecks.js';
+import { trendVerdict } from './trendVerdict.js';
+import type { AdfResult, KpssLagRule, KpssResult, TrendVerdictKind } from './types.js';
+
+export interface EvidenceOptions {
+  /** Significance level of every test and of the reading, 0.01 to 0.10 (default 0.05). */
+  significance?: number;
+  /** KPSS lag truncation: data-dependent (default) or ceil(12(n/100)^{1/4}). */
+  kpssLagRule?: KpssLagRule;
+}
+
+export interface EvidenceRecord {
+  kpss: { level: KpssResult | null; trend: KpssResult | null };
+  adf: { constant: AdfResult | null; trend: AdfResult | null };
+  reading: { verdict: TrendVerdictKind | 'unavailable'; level: number; text: string; kpss_rejects: boolean | null; adf_rejects: boolean | null };
+  residuals: { deterministic: ResidualChecks; stochastic: ResidualChecks };
+  /** Tests that could not be computed on this series, with the reason. */
+  unavailable: { test: string; reason: string }[];
+}
+
+export interface FittedResiduals {
+  residuals: ArrayLike<number>;
+  p: number;
+  q: number;
+}
+
+export function collectEvidence(
+  w: Float64Array,
+  fits: { deterministic: FittedResiduals; stochastic: FittedResiduals },
+  options: EvidenceOptions = {},
+): EvidenceRecord {
+  const significance = options.significance ?? 0.05;
+  const lagRule = options.kpssLagRule ?? 'auto';
+  const unavailable: EvidenceRecord['unavailable'] = [];
+  const attempt = <T>(test: string, run: () => T): T | null => {
+    try {
+      return run();
+    } catch (error) {
+      unavailable.push({ test, reason: error instanceof Error ? error.message : String(error) });
+      return null;
+    }
+  };
+  const levels = Array.from(w).filter((v) => Number.isFinite(v));
+  const kpss = {
+    level: attempt('kpss.level', () => kpssTest(levels, { regression: 'level', lagRule })),
+    trend: attempt('kpss.trend', () => kpssTest(levels, { regression: 'trend', lagRule })),
+  };
+  const adf = {
+    constant: attempt('adf.constant', () => adfTest(levels, { regression: 'constant' })),
+    trend: attempt('adf.trend', () => adfTest(levels, { regression: 'trend' })),
+  };
+  const reading: EvidenceRecord['reading'] =
+    kpss.trend !== null && adf.trend !== null
+      ? toReading(trendVerdict(kpss.trend, adf.trend, significance))
+      : {
+          verdict: 'unavailable',
+          level: significance,
+          text: 'The unit-root checks could not be computed on this series, so they give no evidence either way.',
+          kpss_rejects: null,
+          adf_rejects: null,
+        };
+  return {
+    kpss,
+    adf,
+    reading,
+    residuals: {
+      deterministic: residualChecks(fits.deterministic.residuals, fits.deterministic.p, fits.deterministic.q, significance),
+      stochastic: residualChecks(fits.stochastic.residuals, fits.stochastic.p, fits.stochastic.q, significance),
+    },
+    unavailable,
+  };
+}
+
+function toReading(verdict: ReturnType<typeof trendVerdict>): EvidenceRecord['reading'] {
+  return {
+    verdict: verdict.verdict,
+    level: verdict.significance,
+    text: verdict.summary,
+    kpss_rejects: verdict.kpss_rejects,
+    adf_rejects: verdict.adf_rejects,
+  };
+}
