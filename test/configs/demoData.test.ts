@@ -1,0 +1,79 @@
+// The demo data: the seeded script reproduces the committed files byte for byte, every file
+// passes `fit`, and each series shows the character configs/data/README.md promises.
+import { mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { afterAll, describe, expect, it } from 'vitest';
+import { DEMO_SERIES, writeDemoData } from '../../configs/generateDemoData.js';
+import type { AnalysisRecord } from '../../src/analysis/record.js';
+import { fitRecord } from '../support/runCli.js';
+
+const DATA = fileURLToPath(new URL('../../configs/data/', import.meta.url));
+const OUT = mkdtempSync(join(tmpdir(), 'trendbrief-demo-'));
+afterAll(() => rmSync(OUT, { recursive: true, force: true }));
+
+/** The estimate lies within 3 standard errors of the value the script drew the series with (common practice). */
+function expectNear(record: AnalysisRecord, kind: 'deterministic' | 'stochastic', name: string, generating: number): void {
+  const { coefficients, stderr } = record.models[kind];
+  const estimate = coefficients[name];
+  const se = stderr[name];
+  if (typeof estimate !== 'number' || typeof se !== 'number') throw new Error(`${kind} model has no ${name} with a standard error`);
+  expect(Math.abs(estimate - generating), `${name} ${estimate} ± ${se} vs ${generating}`).toBeLessThanOrEqual(3 * se);
+}
+
+describe('demo data', () => {
+  it('regenerates the committed files byte for byte', () => {
+    const written = writeDemoData(OUT);
+    const committed = readdirSync(DATA).filter((file) => file.endsWith('.csv'));
+    expect([...written].sort()).toEqual(committed.sort());
+    for (const file of written) expect(readFileSync(join(OUT, file)).equals(readFileSync(join(DATA, file))), file).toBe(true);
+  });
+
+  it('has the four series of the scenario with their spans', () => {
+    // Frequencies, spans and lengths: configs/data/README.md.
+    expect(DEMO_SERIES.map((series) => [series.name, series.first, series.n])).toEqual([
+      ['metered-connections', '1955', 70],
+      ['treatment-cost-index', '2002-Q1', 92],
+      ['desalination-output', '2005', 20],
+      ['daily-demand', '2015-01', 120],
+    ]);
+  });
+
+  it('metered-connections: steady growth of about 3% a year, a straight line on the log scale', async () => {
+    const record = await fitRecord('configs/data/metered-connections.csv', ['--transform', 'log', '--horizon', '15']);
+    expect(record.series).toMatchObject({ frequency: 'annual', first: '1955', last: '2024', n: 70 });
+    // Drawn as 8200·exp(0.031·t + u_t), u AR(1) with φ = 0.55 (configs/generateDemoData.ts).
+    expectNear(record, 'deterministic', 'slope', 0.031);
+    expectNear(record, 'deterministic', 'intercept', Math.log(8200));
+    expect([record.models.deterministic.p, record.models.deterministic.q]).toEqual([1, 0]);
+    expect(record.forecasts.deterministic.map((row) => row.period).slice(-1)).toEqual(['2039']);
+  });
+
+  it('treatment-cost-index: a random walk with drift', async () => {
+    const record = await fitRecord('configs/data/treatment-cost-index.csv');
+    expect(record.series).toMatchObject({ frequency: 'quarterly', first: '2002-Q1', last: '2024-Q4', n: 92 });
+    // Drawn with drift 0.35 and AR(1) steps (configs/generateDemoData.ts).
+    expectNear(record, 'stochastic', 'drift', 0.35);
+    expect([record.models.stochastic.p, record.models.stochastic.q]).toEqual([1, 0]);
+  });
+
+  it('desalination-output: twenty annual values with a trend', async () => {
+    const record = await fitRecord('configs/data/desalination-output.csv');
+    expect(record.series).toMatchObject({ frequency: 'annual', first: '2005', last: '2024', n: 20 });
+    // Drawn as 1450 + 38·t + u_t (configs/generateDemoData.ts).
+    expectNear(record, 'deterministic', 'slope', 38);
+  });
+
+  it('daily-demand: a trend-stationary monthly series with AR(1) deviations', async () => {
+    const record = await fitRecord('configs/data/daily-demand.csv');
+    expect(record.series).toMatchObject({ frequency: 'monthly', first: '2015-01', last: '2024-12', n: 120 });
+    // Drawn as 212 + 0.09·t + u_t, u AR(1) with φ = 0.7 (configs/generateDemoData.ts).
+    expectNear(record, 'deterministic', 'slope', 0.09);
+    expect([record.models.deterministic.p, record.models.deterministic.q]).toEqual([1, 0]);
+    const ar = record.models.deterministic.coefficients.ar;
+    const arSe = record.models.deterministic.stderr.ar;
+    if (!Array.isArray(ar) || !Array.isArray(arSe) || typeof arSe[0] !== 'number') throw new Error('no AR(1) estimate');
+    expect(Math.abs(ar[0] - 0.7)).toBeLessThanOrEqual(3 * arSe[0]);
+  });
+});
