@@ -11,6 +11,7 @@ import { fitRecord, runCli } from '../support/runCli.js';
 const ROOT = fileURLToPath(new URL('../../', import.meta.url));
 const LAKE_HURON = 'test/fixtures/lake-huron.csv';
 const US_REAL_GDP = 'test/fixtures/us-real-gdp.csv';
+const VERSION = (JSON.parse(readFileSync(`${ROOT}package.json`, 'utf8')) as { version: string }).version;
 
 /** Standard normal quantiles z = Φ⁻¹(0.5 + level/200): scipy 1.10.1 `scipy.stats.norm.ppf`. */
 const Z: Record<string, number> = {
@@ -63,9 +64,8 @@ describe('help and version', () => {
   });
 
   it('prints the version from package.json with --version', async () => {
-    const pkg = JSON.parse(readFileSync(`${ROOT}package.json`, 'utf8')) as { version: string };
     const run = await runCli(['--version']);
-    expect([run.code, run.stdout, run.stderr]).toEqual([0, `${pkg.version}\n`, '']);
+    expect([run.code, run.stdout, run.stderr]).toEqual([0, `${VERSION}\n`, '']);
   });
 
   it('lists every fit option with fit --help', async () => {
@@ -79,9 +79,8 @@ describe('help and version', () => {
 
   it('runs as a program from the build (bin/trendbrief.js --version)', () => {
     execFileSync('npm', ['run', 'build'], { cwd: ROOT, stdio: 'pipe' });
-    const pkg = JSON.parse(readFileSync(`${ROOT}package.json`, 'utf8')) as { version: string };
     const output = execFileSync(process.execPath, ['bin/trendbrief.js', '--version'], { cwd: ROOT, encoding: 'utf8' });
-    expect(output).toBe(`${pkg.version}\n`);
+    expect(output).toBe(`${VERSION}\n`);
   });
 });
 
@@ -165,8 +164,8 @@ describe('fit lake-huron.csv with interval options', () => {
     }
   });
 
-  it('gives the asked levels with --levels 50,90', async () => {
-    const record = await fitRecord(LAKE_HURON, ['--levels', '50,90', '--horizon', '4']);
+  it('gives the asked levels with --levels=50,90 (a value after = or after a space alike)', async () => {
+    const record = await fitRecord(LAKE_HURON, ['--levels=50,90', '--horizon', '4']);
     expect(record.settings.levels).toEqual([50, 90]);
     for (const [kind] of KINDS) {
       const rows = record.forecasts[kind];

@@ -71,6 +71,11 @@ describe('bad commands and options', () => {
     await expectProblems(['fit', LAKE_HURON, '--horizon'], ['--horizon: ']);
   });
 
+  it('refuses a value given to a switch', async () => {
+    const [line] = await expectProblems(['fit', LAKE_HURON, '--json=yes'], ['--json: ']);
+    expect(line).toBe('--json: is a switch and takes no value; write --json alone, or see trendbrief fit --help');
+  });
+
   // The horizon range 1 to 1000 is the fit command's documented limit (fit --help).
   it.each(['0', '-3', 'abc', '5000', '2.5'])('refuses --horizon %s', async (value) => {
     const [line] = await expectProblems(['fit', LAKE_HURON, '--horizon', value], ['--horizon: ']);
