@@ -94,6 +94,7 @@ describe('fit lake-huron.csv --json', () => {
   it('describes the series and its source', () => {
     expect(record.schema).toBe('trendbrief.analysis/1');
     // n and the first and last years: R 4.2.2 datasets::LakeHuron (test/fixtures/README.md).
+    // id and title default to the value column, named 'value' in the file's header.
     expect(record.series).toMatchObject({ id: 'value', title: 'value', frequency: 'annual', first: '1875', last: '1972', n: 98 });
     expect(record.series.transform).toEqual({ kind: 'none' });
     // sha256sum (GNU coreutils 9.1) of test/fixtures/lake-huron.csv.
