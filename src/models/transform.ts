@@ -32,8 +32,10 @@ export function inverseTransform(spec: TransformSpec, w: number): number {
   if (lambda === undefined) return w;
   if (lambda === 0) return Math.exp(w);
   const base = lambda * w + 1;
-  // Outside the image of the transform the inverse is undefined; the limit is 0.
-  return base > 0 ? Math.pow(base, 1 / lambda) : 0;
+  // Outside the image of the transform the inverse is undefined; its limit there is 0 for
+  // λ > 0 and +∞ for λ < 0 (an interval end that runs off the transform's range).
+  if (base > 0) return Math.pow(base, 1 / lambda);
+  return lambda > 0 ? 0 : Number.POSITIVE_INFINITY;
 }
 
 /**

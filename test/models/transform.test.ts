@@ -63,6 +63,12 @@ describe('forward and inverse transforms', () => {
     expect(inverseTransform(boxCox(1), -40)).toBe(0);
     expectRelative(inverseTransform(boxCox(0.5), -1.999), 2.5e-7, 1e-9);
   });
+
+  it('returns +∞ for the inverse above the image of a negative λ', () => {
+    // For λ < 0 the image of (0, ∞) is w < 1/|λ|, and y → ∞ as w → 1/|λ| (Box & Cox 1964).
+    expect(inverseTransform(boxCox(-0.5), 2.01)).toBe(Number.POSITIVE_INFINITY);
+    expectRelative(inverseTransform(boxCox(-0.5), 1.9999), 4.0e8, 1e-3);
+  });
 });
 
 describe('back-transformed forecasts', () => {
