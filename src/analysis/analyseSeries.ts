@@ -7,6 +7,7 @@ import { biasAdjustedMean, inverseTransform, transformValue, type TransformSpec 
 import { fitTrendModel, forecastTrendModel, minimumObservations, type TrendModelFit, type TrendModelKind } from '../models/trendModels.js';
 import { collectEvidence, type EvidenceOptions } from '../evidence/collectEvidence.js';
 import { describeEquation } from './describeEquation.js';
+import { smallestMaRootModulus, smallestRootModulus } from '../models/rootModulus.js';
 import { jsonNumber, RECORD_SCHEMA, type AnalysisRecord, type ForecastRow, type ModelRecord } from './record.js';
 import { toolVersion } from './toolVersion.js';
 
@@ -113,6 +114,10 @@ function modelRecord(kind: TrendModelKind, model: TrendModelFit): ModelRecord {
     stderr,
     candidates: model.candidates.map((c) => ({ p: c.p, q: c.q, loglik: jsonNumber(c.loglik), aicc: jsonNumber(c.aicc), converged: c.converged })),
     equation: describeEquation(kind, model),
+    roots: {
+      ar_min_modulus: jsonNumber(smallestRootModulus(fit.ar) ?? Number.NaN),
+      ma_min_modulus: jsonNumber(smallestMaRootModulus(fit.ma) ?? Number.NaN),
+    },
   };
 }
 

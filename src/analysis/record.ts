@@ -31,6 +31,11 @@ export interface ModelRecord {
   candidates: CandidateRecord[];
   /** The model in one line of algebra, with its estimates. */
   equation: string;
+  /**
+   * Smallest modulus of the AR and MA polynomial roots (null without such a part). Near 1:
+   * the fit sits at the edge of stationarity or invertibility.
+   */
+  roots: { ar_min_modulus: JsonNumber; ma_min_modulus: JsonNumber };
 }
 
 export interface ForecastRow {

@@ -7,6 +7,7 @@ import { fitTrendModelAtOrder, forecastTrendModel } from '../../src/models/trend
 import { createProfileLikelihood } from '../../src/models/profileLikelihood.js';
 import { toStateSpace } from '../../src/statespace/armaStateSpace.js';
 import { constrainAr, constrainMa, unconstrainAr, unconstrainMa, isStationary } from '../../src/models/constraints.js';
+import { smallestMaRootModulus, smallestRootModulus } from '../../src/models/rootModulus.js';
 import { readSeriesValues } from '../evidence/referenceFixtures.js';
 import { seededNormals } from '../evidence/seededNormals.js';
 import { expectRelative } from '../evidence/expectRelative.js';
@@ -189,5 +190,16 @@ describe('partial-autocorrelation map (Jones 1980; Monahan 1984)', () => {
     expect(isStationary([1.2])).toBe(false);
     expect(isStationary([0.5, 0.6])).toBe(false);
     expect(isStationary([0.5, 0.3])).toBe(true);
+  });
+});
+
+describe('root moduli (common practice: roots of 1 − φz are 1/φ)', () => {
+  it('finds the smallest root modulus of AR and MA polynomials', () => {
+    expectRelative(smallestRootModulus([0.5]) ?? 0, 2, 1e-12);
+    // 1 − 0.5z − 0.06z² = (1 − 0.6z)(1 + 0.1z): roots 1/0.6 and −10.
+    expectRelative(smallestRootModulus([0.5, 0.06]) ?? 0, 1 / 0.6, 1e-10);
+    // 1 + 0.25z²: roots ±2i.
+    expectRelative(smallestMaRootModulus([0, 0.25]) ?? 0, 2, 1e-10);
+    expect(smallestRootModulus([])).toBeNull();
   });
 });
