@@ -2,21 +2,11 @@
 // and the grid against n. Series are simulated from a seeded trend + ARMA(1,1) process.
 import { fitRegressionArma } from '../../src/models/fitRegressionArma.js';
 import { fitTrendModel, trendDesign } from '../../src/models/trendModels.js';
-import { seededNormals } from '../evidence/seededNormals.js';
+import { simulateTrendArma } from '../support/simulateTrendArma.js';
 import { median, timeRuns, type BenchRow } from './timing.js';
 
 function simulate(n: number, seed: number): Float64Array {
-  const draw = seededNormals(seed);
-  const y = new Float64Array(n);
-  let eta = 0;
-  let previous = 0;
-  for (let t = -100; t < n; t++) {
-    const shock = draw();
-    eta = 0.6 * eta + shock + 0.3 * previous;
-    previous = shock;
-    if (t >= 0) y[t] = 50 + 0.3 * (t + 1) + eta;
-  }
-  return y;
+  return simulateTrendArma({ n, seed, phi: 0.6, theta: 0.3, intercept: 50, slope: 0.3 });
 }
 
 export function engineBench(): BenchRow[] {

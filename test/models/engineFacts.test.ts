@@ -10,22 +10,8 @@ import { constrainAr, constrainMa, unconstrainAr, unconstrainMa, isStationary } 
 import { smallestMaRootModulus, smallestRootModulus } from '../../src/models/rootModulus.js';
 import { readSeriesValues } from '../evidence/referenceFixtures.js';
 import { seededNormals } from '../evidence/seededNormals.js';
+import { simulateTrendArma as simulate } from '../support/simulateTrendArma.js';
 import { expectRelative } from '../evidence/expectRelative.js';
-
-/** y_t = b0 + b1 t + η_t with η ARMA(1,1), seeded. */
-function simulateTrendArma(n: number, seed: number, phi: number, theta: number, b0 = 5, b1 = 0.2): Float64Array {
-  const draw = seededNormals(seed);
-  const y = new Float64Array(n);
-  let eta = 0;
-  let previousShock = 0;
-  for (let t = -200; t < n; t++) {
-    const shock = draw();
-    eta = phi * eta + shock + theta * previousShock;
-    previousShock = shock;
-    if (t >= 0) y[t] = b0 + b1 * (t + 1) + eta;
-  }
-  return y;
-}
 
 describe('Brockwell & Davis (2016), Example 6.6.2, Table 6.3: Lake Huron, trend + AR(2)', () => {
   it('reproduces the published GLS estimates', () => {
@@ -73,7 +59,7 @@ describe('random walk with drift, p = q = 0 (textbook algebra, e.g. Hamilton 199
 });
 
 describe('deterministic trend with AR(1) errors (textbook algebra)', () => {
-  const y = simulateTrendArma(150, 5, 0.7, 0);
+  const y = simulate({ n: 150, seed: 5, phi: 0.7, theta: 0 });
   const model = fitTrendModelAtOrder('deterministic', y, 1, 0);
   const phi = model.fit.ar[0];
 
@@ -101,7 +87,7 @@ describe('deterministic trend with AR(1) errors (textbook algebra)', () => {
 describe('the filter against a direct Gaussian likelihood (common practice)', () => {
   it('equals the log-density of N(Xβ, σ²Γ) with Γ from truncated ψ-weights', () => {
     const n = 40;
-    const y = simulateTrendArma(n, 17, 0.5, 0.4);
+    const y = simulate({ n, seed: 17, phi: 0.5, theta: 0.4 });
     const ar = [0.5];
     const ma = [0.4];
     const x = [new Float64Array(n).fill(1), Float64Array.from({ length: n }, (_, i) => i + 1)];
@@ -145,7 +131,7 @@ describe('the filter against a direct Gaussian likelihood (common practice)', ()
 });
 
 describe('simulated ARMA series (seeded)', () => {
-  const y = simulateTrendArma(2000, 3, 0.6, 0.3);
+  const y = simulate({ n: 2000, seed: 3, phi: 0.6, theta: 0.3 });
   const x = [new Float64Array(2000).fill(1), Float64Array.from({ length: 2000 }, (_, i) => i + 1)];
   const fit = fitRegressionArma(y, x, 1, 1);
 
