@@ -1,0 +1,28 @@
+// A caveat is a warning the memo derives from the record's numbers by a small named rule.
+import type { MemoRecord } from '../recordParts.js';
+
+export type CaveatSeverity = 'high' | 'medium' | 'low';
+
+export const SEVERITY_ORDER: readonly CaveatSeverity[] = ['high', 'medium', 'low'];
+
+export interface Caveat {
+  /** The rule that produced it. */
+  id: string;
+  severity: CaveatSeverity;
+  /** Plain-language text with the numbers that triggered it. */
+  text: string;
+  /** The numbers the rule used, for review and tests. */
+  numbers: Record<string, number | string>;
+}
+
+export interface CaveatContext {
+  record: MemoRecord;
+  units?: string;
+}
+
+export interface CaveatRule {
+  id: string;
+  /** When the rule fires, in one line, for the rule table. */
+  fires: string;
+  evaluate(context: CaveatContext): Caveat | null;
+}

@@ -1,0 +1,54 @@
+// Every sentence a caveat rule can produce. The rules pass in numbers already formatted.
+import type { ModelKind } from '../recordParts.js';
+import { MODEL_IN_TEXT } from '../wording.js';
+
+export const caveatWording = {
+  horizonLong: (a: { horizon: string; history: string; share: string }) =>
+    `The forecast runs ${a.horizon} ahead from a history of ${a.history}: the horizon is ${a.share} of the history's length. ` +
+    'Over a horizon that long both models extend patterns the data have shown only a few times, so read the later periods as a range of plausible paths rather than an estimate.',
+
+  narrowLineIntervals: (a: { period: string; narrower: string; deterministic: string; stochastic: string; ratio: string }) =>
+    `At ${a.period} the deterministic-trend model's 95% interval is ${a.narrower} narrower than the stochastic-trend model's ` +
+    `(${a.deterministic} wide against ${a.stochastic}; ratio ${a.ratio}). ` +
+    'That narrower range holds only if the trend line stays where the history puts it for the whole horizon. If the trend can shift, the wider range is the more honest one.',
+
+  unitRootEvidence: (a: { kpss: string; adf: string; level: string; recommended: ModelKind | null }) =>
+    `The unit-root checks point to a trend that wanders: the check that assumes a steady line rejected it (${a.kpss}), ` +
+    `while the check that assumes lasting shocks could not rule them out (${a.adf}), both at the ${a.level} level. ` +
+    (a.recommended === 'deterministic'
+      ? 'This weighs against the deterministic-trend model that this memo recommends; see the reasons given for that choice.'
+      : 'This weighs against the deterministic-trend model.'),
+
+  backtestNotRun: () =>
+    'No backtest was run for this series, so neither model has been checked on forecasts made from past data. The accuracy of both is untested.',
+
+  backtestThin: (a: { origins: number; minimum: number }) =>
+    `The backtest rests on only ${a.origins} forecast origin${a.origins === 1 ? '' : 's'} (fewer than ${a.minimum}), ` +
+    'so its accuracy figures and comparison tests are rough guides, not firm evidence for either model.',
+
+  residualPattern: (a: { models: { model: ModelKind; p: string; lags: number }[] }) =>
+    a.models
+      .map(({ model, p, lags }) => `The ${MODEL_IN_TEXT[model]}'s one-step forecast errors still show a pattern over ${lags} lags (Ljung-Box ${p}).`)
+      .join(' ') +
+    ' A model that leaves a pattern behind has not captured all the structure in the series, so its intervals may be too narrow or too wide.',
+
+  backTransformed: (a: { scale: string; model: ModelKind; period: string; above: string; below: string; point: 'median' | 'mean' }) =>
+    `Both models were fitted on the ${a.scale} scale and their forecasts turned back into the original units. ` +
+    `The intervals are therefore lopsided: at ${a.period} the ${MODEL_IN_TEXT[a.model]}'s 95% interval reaches ${a.above} above the point forecast but only ${a.below} below it. ` +
+    (a.point === 'median'
+      ? 'The point forecast is the median of the forecast distribution (an even chance of the outcome falling above or below it), not its average.'
+      : 'The point forecast is the average of the forecast distribution, adjusted for the change of scale, so it sits above the distribution\u2019s middle.'),
+
+  trendBreak: (a: { breaks: { model: ModelKind; period: string; stat: string; critical: string }[] }) =>
+    a.breaks
+      .map(({ model, period, stat, critical }) =>
+        model === 'deterministic'
+          ? `The break test finds a shift in the level or slope of the trend line from ${period} (statistic ${stat} against a 5% critical value of ${critical}).`
+          : `The break test finds a shift in the drift, the average change per period, from ${period} (statistic ${stat} against a 5% critical value of ${critical}).`,
+      )
+      .join(' ') + ' A forecast that assumes one trend over the whole history may then mislead; the recent trend may be the better guide.',
+
+  fixedLineExtrapolation: (a: { first: string; last: string; end: string; horizon: string }) =>
+    `The deterministic-trend model assumes that the trend line fitted to ${a.first}\u2013${a.last} carries on unchanged to ${a.end}, ${a.horizon} beyond the data. ` +
+    'Nothing in the data can confirm that. If the forces behind the series change, outcomes can fall outside its intervals, which are narrow precisely because they take the line as given.',
+} as const;

@@ -1,0 +1,37 @@
+// Fires when the break test rejects "no break" at 5% for either model. High when the broken
+// model is the recommended one. Silent when the stability checks were not run (the stability
+// section says so).
+import { addPeriods } from '../../data/period.js';
+import { formatSignificant } from '../format/formatNumber.js';
+import type { ModelKind } from '../recordParts.js';
+import type { Caveat, CaveatRule } from './caveat.js';
+import { caveatWording } from './caveatWording.js';
+
+const ID = 'trend-break';
+
+export const trendBreak: CaveatRule = {
+  id: ID,
+  fires: 'break test rejects at 5% for either model',
+  evaluate({ record }): Caveat | null {
+    const tests = record.evidence.stability?.break_test;
+    if (tests === undefined) return null;
+    const broken = (['deterministic', 'stochastic'] as const).filter((model) => tests[model].reject['5']);
+    if (broken.length === 0) return null;
+    const recommended: ModelKind | undefined = record.recommendation?.model;
+    const breaks = broken.map((model) => ({
+      model,
+      period: addPeriods(record.series.first, tests[model].break_index),
+      stat: formatSignificant(tests[model].stat, 3),
+      critical: formatSignificant(tests[model].critical['5'], 3),
+    }));
+    const numbers: Record<string, number | string> = {};
+    for (const b of breaks) numbers[`${b.model}_from`] = b.period;
+    for (const model of broken) numbers[`${model}_stat`] = tests[model].stat ?? 'n/a';
+    return {
+      id: ID,
+      severity: broken.some((model) => model === recommended) ? 'high' : 'medium',
+      text: caveatWording.trendBreak({ breaks }),
+      numbers,
+    };
+  },
+};

@@ -1,0 +1,79 @@
+// What the memo is rendered from: memo details, paper size, one entry per series (its
+// AnalysisRecord plus what the analyst wrote about it) and the reproducibility facts.
+// Plain data, independent of the config code: whoever runs the analysis fills it in.
+import type { MemoRecord } from './recordParts.js';
+
+export type Paper = 'A4' | 'Letter';
+
+export type SignOffDecision = 'approved' | 'approved-with-changes' | 'rejected';
+
+export interface Reviewer {
+  name: string;
+  role: string;
+}
+
+export interface SignOff {
+  /** A reviewer's name as listed in `memo.reviewers`. */
+  reviewer: string;
+  /** ISO date, YYYY-MM-DD. */
+  date: string;
+  decision: SignOffDecision;
+  comment?: string;
+}
+
+export interface MemoDetails {
+  id: string;
+  title: string;
+  client: string;
+  prepared_by: string;
+  reference: string;
+  /** The date the memo speaks for, as the analyst writes it. */
+  as_of: string;
+  author: string;
+  reviewers: Reviewer[];
+  sign_off: SignOff[];
+}
+
+export interface Assumption {
+  choice: string;
+  value: string;
+  basis: string;
+  set_by: 'config' | 'default';
+}
+
+export interface HistoryPoint {
+  period: string;
+  /** null for a missing observation. */
+  value: number | null;
+}
+
+export interface MemoSeries {
+  record: MemoRecord;
+  /** Observed values oldest first; the record does not carry them. Without it the history chart is left out with a note. */
+  history?: HistoryPoint[];
+  /** Unit of the values, e.g. "ML/day"; shown after numbers. */
+  units?: string;
+  notes?: string;
+  assumptions: Assumption[];
+}
+
+export interface FileDigest {
+  file: string;
+  sha256: string;
+}
+
+export interface Reproducibility {
+  tool: string;
+  version: string;
+  command: string;
+  run_date: string;
+  config: FileDigest;
+  data: FileDigest[];
+}
+
+export interface MemoInput {
+  memo: MemoDetails;
+  paper: Paper;
+  series: MemoSeries[];
+  reproducibility: Reproducibility;
+}

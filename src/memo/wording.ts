@@ -1,0 +1,172 @@
+// The memo's fixed wording: headings, labels, model names, status and the standing cautions.
+// Sentences built from numbers live in evidenceWording.ts and caveats/caveatWording.ts, so
+// a reviewer can read every word the memo can say in these three modules.
+import type { Frequency } from '../data/period.js';
+import type { SignOffDecision } from './memoInput.js';
+import type { BacktestMethod, ModelKind } from './recordParts.js';
+
+export const MODEL_NAME: Record<ModelKind, string> = {
+  deterministic: 'Deterministic trend',
+  stochastic: 'Stochastic trend',
+};
+
+/** Lower-case model names for use inside sentences. */
+export const MODEL_IN_TEXT: Record<BacktestMethod, string> = {
+  deterministic: 'deterministic-trend model',
+  stochastic: 'stochastic-trend model',
+  naive: 'no-change benchmark',
+};
+
+export const METHOD_NAME: Record<BacktestMethod, string> = {
+  deterministic: 'Deterministic',
+  stochastic: 'Stochastic',
+  naive: 'No change',
+};
+
+/** What each model assumes, in one plain sentence. */
+export const MODEL_GLOSS: Record<ModelKind, string> = {
+  deterministic: 'a fixed trend line that holds for the whole horizon, with passing swings around it',
+  stochastic: 'a trend that can wander: each shock shifts the future path, so uncertainty grows with the horizon',
+};
+
+const PERIOD_WORDS: Record<Frequency, [string, string]> = {
+  annual: ['year', 'years'],
+  quarterly: ['quarter', 'quarters'],
+  monthly: ['month', 'months'],
+};
+
+/** "1 year", "12 quarters". */
+export function countPeriods(count: number, frequency: Frequency): string {
+  const [one, many] = PERIOD_WORDS[frequency];
+  return `${count} ${count === 1 ? one : many}`;
+}
+
+export const FREQUENCY_NAME: Record<Frequency, string> = {
+  annual: 'Annual',
+  quarterly: 'Quarterly',
+  monthly: 'Monthly',
+};
+
+export const TRANSFORM_NAME = {
+  none: 'none (original units)',
+  log: 'natural log',
+  'box-cox': 'Box-Cox',
+} as const;
+
+export const DECISION_NAME: Record<SignOffDecision, string> = {
+  approved: 'Approved',
+  'approved-with-changes': 'Approved with changes',
+  rejected: 'Rejected',
+};
+
+export const STATUS = {
+  draft: 'Draft',
+  signedOff: 'Signed off',
+  noReviewers: 'No reviewers are listed, so the memo cannot be signed off.',
+  awaiting: (names: string[]) => `Awaiting sign-off from ${listInWords(names)}.`,
+  rejectedBy: (names: string[]) => `Not approved by ${listInWords(names)}.`,
+  complete: 'Every listed reviewer has signed off.',
+} as const;
+
+export const HEADINGS = {
+  summary: 'Summary for the client',
+  history: 'History',
+  forecast: 'Forecast',
+  forecastTable: 'Forecasts by period',
+  widthRatio: 'How much narrower the deterministic intervals are',
+  backtest: 'Backtest accuracy',
+  evidence: 'What the data say about the trend',
+  models: 'The two models',
+  residualAcf: 'Leftover pattern in the forecast errors',
+  stability: 'Trend stability',
+  caveats: 'Caveats',
+  assumptions: 'Assumptions register',
+  cautions: 'Important cautions',
+  signOff: 'Review and sign-off',
+  reproducibility: 'Appendix: reproducing this memo',
+} as const;
+
+export const LABELS = {
+  client: 'Client',
+  preparedBy: 'Prepared by',
+  reference: 'Reference',
+  asOf: 'As of',
+  author: 'Author',
+  reviewers: 'Reviewers',
+  status: 'Status',
+  memoId: 'Memo',
+  recommended: 'Recommended',
+  point: 'Point',
+  interval80: '80% interval',
+  interval95: '95% interval',
+  ratio: 'Width ratio',
+  units: 'Units',
+  span: 'History',
+  transform: 'Modelling scale',
+  notes: 'Notes',
+  severity: { high: 'Important', medium: 'Caution', low: 'Note' },
+  choice: 'Choice',
+  value: 'Value',
+  basis: 'Basis',
+  setBy: 'Set by',
+  setByValue: { config: 'Analyst (configuration)', default: 'Tool default' },
+  name: 'Name',
+  role: 'Role',
+  date: 'Date',
+  decision: 'Decision',
+  comment: 'Comment',
+  signature: 'Signature',
+  notSigned: 'Not yet signed',
+  tool: 'Tool',
+  command: 'Command',
+  runDate: 'Run date',
+  config: 'Configuration file',
+  data: 'Data files',
+  recordSource: 'Series source',
+  sha256: 'SHA-256',
+  file: 'File',
+  column: 'Column',
+  horizon: 'h',
+  period: 'Period',
+  estimate: 'Estimate',
+  stderr: 'Std. error',
+  tRatio: 'Estimate / s.e.',
+  coefficient: 'Coefficient',
+  test: 'Check',
+  statistic: 'Statistic',
+  pValue: 'p-value',
+  critical5: '5% critical value',
+  outcome: 'Outcome',
+  lags: 'Lags',
+  observations: 'Obs.',
+} as const;
+
+/** The standing cautions every memo carries, in this order. */
+export const CAUTIONS = [
+  'A forecast is an estimate, not a guarantee. Actual outcomes can and do fall outside the ranges shown.',
+  'Prediction intervals assume the fitted model holds over the whole horizon. They do not cover changes in policy, technology, markets or measurement that the history does not contain.',
+  'The deterministic-trend model in particular assumes the trend line continues unchanged; the further ahead it is extended, the harder that is to defend.',
+  'Decisions that rest on these figures, including financial, capacity and regulatory decisions, remain with qualified professionals and the rules that apply to them.',
+] as const;
+
+export const SUMMARY_INTRO =
+  'For each series: the model we recommend, the forecast at the end of the horizon under both models with 80% and 95% prediction intervals, and the caveat that matters most. The sections that follow give the evidence behind each choice.';
+
+export const NOT_RUN = {
+  backtest: 'The backtest was not run for this series, so there is no out-of-sample check of either model.',
+  stability: 'The trend-stability checks were not run for this series.',
+  recommendation: 'No recommendation was recorded for this series; both models are shown side by side.',
+  history: 'The observed values were not supplied with this memo, so the history chart is left out.',
+} as const;
+
+export const SIGN_OFF_NOTE =
+  'A reviewer signs to confirm that the assumptions register above documents the choices behind this memo and that the evidence supports the recommendation.';
+
+export const AICC_NOTE =
+  'Each model\u2019s ARMA orders were chosen by AICc among its own candidates. AICc values of the two models are not compared with each other: one describes the levels, the other their changes.';
+
+/** "A", "A and B", "A, B and C". */
+export function listInWords(items: readonly string[]): string {
+  if (items.length <= 1) return items.join('');
+  return `${items.slice(0, -1).join(', ')} and ${items[items.length - 1]}`;
+}

@@ -1,0 +1,193 @@
+// Each caveat rule fires on a constructed case and stays silent on its opposite. Thresholds
+// and severities are our spec (src/memo/caveats/, one rule per file); the base records are
+// the open fixtures analysed by analyseSeries (test/memo/sampleInput.ts).
+import { describe, expect, it } from 'vitest';
+import { backTransformed } from '../../src/memo/caveats/backTransformed.js';
+import { backtestThin } from '../../src/memo/caveats/backtestThin.js';
+import { CAVEAT_RULES, collectCaveats } from '../../src/memo/caveats/caveatRules.js';
+import { fixedLineExtrapolation } from '../../src/memo/caveats/fixedLineExtrapolation.js';
+import { horizonLong } from '../../src/memo/caveats/horizonLong.js';
+import { narrowLineIntervals } from '../../src/memo/caveats/narrowLineIntervals.js';
+import { residualPattern } from '../../src/memo/caveats/residualPattern.js';
+import { trendBreak } from '../../src/memo/caveats/trendBreak.js';
+import { unitRootEvidence } from '../../src/memo/caveats/unitRootEvidence.js';
+import type { MemoRecord } from '../../src/memo/recordParts.js';
+import { handMadeBacktest, handMadeRecommendation, handMadeStability } from './handMadeParts.js';
+import { bareRecord, fullRecord } from './sampleInput.js';
+
+/** Sets the last forecast's 95% intervals of both models around their points. */
+function withEndWidths(record: MemoRecord, deterministic: number, stochastic: number): MemoRecord {
+  const copy = structuredClone(record);
+  for (const [model, width] of [['deterministic', deterministic], ['stochastic', stochastic]] as const) {
+    const last = copy.forecasts[model][copy.forecasts[model].length - 1];
+    last.intervals['95'] = [last.point - width / 2, last.point + width / 2];
+  }
+  return copy;
+}
+
+describe('horizon-long', () => {
+  it('fires above a quarter of the history and is high above half', () => {
+    const record = bareRecord('lakeHuron'); // n = 98
+    record.settings.horizon = 30;
+    const caveat = horizonLong.evaluate({ record });
+    expect(caveat?.severity).toBe('medium');
+    expect(caveat?.numbers.share).toBeCloseTo(30 / 98, 12);
+    expect(caveat?.text).toContain('30 years ahead from a history of 98 observations');
+    expect(caveat?.text).toContain('31% of the history');
+    record.settings.horizon = 50;
+    expect(horizonLong.evaluate({ record })?.severity).toBe('high');
+  });
+  it('is silent at a quarter or less', () => {
+    const record = bareRecord('lakeHuron');
+    expect(record.settings.horizon).toBe(10);
+    expect(horizonLong.evaluate({ record })).toBeNull();
+    record.settings.horizon = 24; // 24/98 < 0.25
+    expect(horizonLong.evaluate({ record })).toBeNull();
+  });
+});
+
+describe('narrow-line-intervals', () => {
+  it('fires when the deterministic 95% interval is under three quarters of the stochastic width', () => {
+    const record = withEndWidths(bareRecord('lakeHuron'), 3, 10);
+    const caveat = narrowLineIntervals.evaluate({ record, units: 'ft' });
+    expect(caveat?.severity).toBe('high');
+    expect(caveat?.numbers.ratio).toBeCloseTo(0.3, 12);
+    expect(caveat?.text).toContain('At 1982');
+    expect(caveat?.text).toContain('70% narrower');
+    expect(caveat?.text).toContain('3.00 ft wide against 10.00 ft');
+    expect(narrowLineIntervals.evaluate({ record: withEndWidths(record, 6, 10) })?.severity).toBe('medium');
+  });
+  it('is silent when the widths are close, as in the Lake Huron fit itself', () => {
+    expect(narrowLineIntervals.evaluate({ record: bareRecord('lakeHuron') })).toBeNull(); // ratio 0.987 from analyseSeries
+    expect(narrowLineIntervals.evaluate({ record: withEndWidths(bareRecord('lakeHuron'), 7.5, 10) })).toBeNull();
+  });
+});
+
+describe('unit-root-evidence', () => {
+  it("fires on the 'stochastic' reading of US real GDP, high when the deterministic model is recommended", () => {
+    const record = bareRecord('gdp');
+    expect(record.evidence.reading.verdict).toBe('stochastic');
+    expect(unitRootEvidence.evaluate({ record })?.severity).toBe('high');
+    record.recommendation = handMadeRecommendation('stochastic');
+    const caveat = unitRootEvidence.evaluate({ record });
+    expect(caveat?.severity).toBe('medium');
+    expect(caveat?.numbers.adf_p).toBe(record.evidence.adf.trend?.p_value);
+    expect(caveat?.text).toMatch(/KPSS p (below|=) 0\.0\d+/);
+    expect(caveat?.text).toContain('5% level');
+  });
+  it("is silent on Lake Huron's 'conflicting' reading", () => {
+    const record = bareRecord('lakeHuron');
+    expect(record.evidence.reading.verdict).toBe('conflicting');
+    expect(unitRootEvidence.evaluate({ record })).toBeNull();
+  });
+});
+
+describe('backtest-thin', () => {
+  it('fires, high, when no backtest was run', () => {
+    const caveat = backtestThin.evaluate({ record: bareRecord('nile') });
+    expect(caveat?.severity).toBe('high');
+    expect(caveat?.text).toContain('No backtest was run');
+  });
+  it('fires, medium, on fewer than ten origins', () => {
+    const record = bareRecord('nile');
+    record.backtest = handMadeBacktest(record, 6);
+    const caveat = backtestThin.evaluate({ record });
+    expect(caveat?.severity).toBe('medium');
+    expect(caveat?.text).toContain('only 6 forecast origins (fewer than 10)');
+  });
+  it('is silent on ten origins or more', () => {
+    const record = bareRecord('nile');
+    record.backtest = handMadeBacktest(record, 10);
+    expect(backtestThin.evaluate({ record })).toBeNull();
+  });
+});
+
+describe('residual-pattern', () => {
+  it('fires when Ljung-Box is flagged, high for the recommended model', () => {
+    const record = bareRecord('lakeHuron');
+    const checks = record.evidence.residuals.stochastic;
+    const ljung = checks.findings.find((f) => f.check === 'ljung_box');
+    if (ljung === undefined || checks.ljung_box === null) throw new Error('Lake Huron record lacks a Ljung-Box check');
+    ljung.flagged = true;
+    checks.ljung_box.p_value = 0.012;
+    expect(residualPattern.evaluate({ record })?.severity).toBe('medium');
+    record.recommendation = handMadeRecommendation('stochastic');
+    const caveat = residualPattern.evaluate({ record });
+    expect(caveat?.severity).toBe('high');
+    expect(caveat?.text).toContain("stochastic-trend model's one-step forecast errors still show a pattern over 10 lags (Ljung-Box p = 0.012)");
+    expect(caveat?.text).not.toContain('deterministic-trend model');
+  });
+  it('is silent when neither model is flagged (Lake Huron fit, p = 0.877 and 0.789)', () => {
+    expect(residualPattern.evaluate({ record: bareRecord('lakeHuron') })).toBeNull();
+  });
+});
+
+describe('back-transformed', () => {
+  it('fires on the log-scale GDP record with the interval lopsided upwards', () => {
+    const record = bareRecord('gdp');
+    const caveat = backTransformed.evaluate({ record, units: 'bn USD' });
+    const last = record.forecasts.stochastic[11];
+    const [lo, hi] = last.intervals['95'];
+    expect(caveat?.severity).toBe('low');
+    expect(caveat?.numbers.above).toBeCloseTo(hi - last.point, 9);
+    expect(caveat?.numbers.below).toBeCloseTo(last.point - lo, 9);
+    expect(Number(caveat?.numbers.above)).toBeGreaterThan(Number(caveat?.numbers.below));
+    expect(caveat?.text).toContain('natural log scale');
+    expect(caveat?.text).toContain('2012-Q3');
+    expect(caveat?.text).toContain('median');
+  });
+  it('is silent without a transform', () => {
+    expect(backTransformed.evaluate({ record: bareRecord('nile') })).toBeNull();
+  });
+});
+
+describe('trend-break', () => {
+  it('fires when the deterministic break test rejects at 5%, naming the period of the break', () => {
+    const record = bareRecord('nile');
+    record.evidence.stability = handMadeStability(record, { deterministic: true, stochastic: false });
+    const caveat = trendBreak.evaluate({ record });
+    expect(caveat?.severity).toBe('medium');
+    // break_index 60 is the 61st observation, 1871 + 60 = 1931 (our spec: 0-based position).
+    expect(caveat?.numbers.deterministic_from).toBe('1931');
+    expect(caveat?.text).toContain('level or slope of the trend line from 1931 (statistic 16.1 against a 5% critical value of 11.9)');
+    record.recommendation = handMadeRecommendation('deterministic');
+    expect(trendBreak.evaluate({ record })?.severity).toBe('high');
+  });
+  it('is silent when neither test rejects at 5%, and when stability was not run', () => {
+    const record = bareRecord('nile');
+    expect(trendBreak.evaluate({ record })).toBeNull();
+    record.evidence.stability = handMadeStability(record, { deterministic: false, stochastic: false });
+    expect(trendBreak.evaluate({ record })).toBeNull();
+  });
+});
+
+describe('fixed-line-extrapolation', () => {
+  it('fires on every record, whatever the numbers, high when the deterministic model is recommended', () => {
+    const plain = bareRecord('lakeHuron');
+    const caveat = fixedLineExtrapolation.evaluate({ record: plain });
+    expect(caveat?.severity).toBe('medium');
+    expect(caveat?.text).toContain('fitted to 1875\u20131972 carries on unchanged to 1982, 10 years beyond the data');
+    const recommended = fullRecord('lakeHuron');
+    expect(recommended.recommendation?.model).toBe('deterministic');
+    expect(fixedLineExtrapolation.evaluate({ record: recommended })?.severity).toBe('high');
+    const short = bareRecord('gdp');
+    short.settings.horizon = 1;
+    expect(fixedLineExtrapolation.evaluate({ record: short })?.text).toContain('1 quarter beyond the data');
+  });
+});
+
+describe('collectCaveats', () => {
+  it('orders by severity, ties in rule-table order, and always includes the standing caution', () => {
+    const record = bareRecord('gdp');
+    record.recommendation = handMadeRecommendation('stochastic');
+    const ids = collectCaveats({ record }).map((c) => c.id);
+    // gdp: backtest missing (high); unit-root reading 'stochastic' (medium, stochastic recommended);
+    // the standing caution (medium, after unit-root in the table); log scale (low). Ljung-Box,
+    // horizon share 12/203 and width ratio 0.93 stay silent.
+    expect(ids).toEqual(['backtest-thin', 'unit-root-evidence', 'fixed-line-extrapolation', 'back-transformed']);
+  });
+  it('has one rule per id', () => {
+    expect(new Set(CAVEAT_RULES.map((r) => r.id)).size).toBe(CAVEAT_RULES.length);
+    expect(CAVEAT_RULES).toHaveLength(8);
+  });
+});

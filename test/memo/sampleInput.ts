@@ -1,0 +1,98 @@
+// A realistic MemoInput for the memo tests: three open datasets from test/fixtures/ analysed
+// by analyseSeries (provenance in test/fixtures/README.md), each with hand-made backtest,
+// stability and recommendation parts, for an invented consultancy and client.
+import { analyseSeries, type AnalysisOptions } from '../../src/analysis/analyseSeries.js';
+import { readSeriesCsv } from '../../src/data/readSeriesCsv.js';
+import type { MemoInput, MemoSeries } from '../../src/memo/memoInput.js';
+import type { MemoRecord } from '../../src/memo/recordParts.js';
+import { handMadeBacktest, handMadeRecommendation, handMadeStability } from './handMadeParts.js';
+
+interface FixtureSpec {
+  file: string;
+  options: AnalysisOptions;
+  units: string;
+}
+
+const FIXTURES = {
+  lakeHuron: { file: 'test/fixtures/lake-huron.csv', options: { id: 'lake-huron', title: 'Lake Huron mean level' }, units: 'ft' },
+  nile: { file: 'test/fixtures/nile.csv', options: { id: 'nile', title: 'Nile flow at Aswan' }, units: '10⁸ m³' },
+  gdp: {
+    file: 'test/fixtures/us-real-gdp.csv',
+    options: { id: 'us-real-gdp', title: 'US real GDP', transform: { kind: 'log' }, horizon: 12 },
+    units: 'bn USD (2005)',
+  },
+} satisfies Record<string, FixtureSpec>;
+
+export type FixtureName = keyof typeof FIXTURES;
+
+const analysed = new Map<FixtureName, { record: MemoRecord; history: MemoSeries['history'] }>();
+
+/** The fixture's AnalysisRecord, analysed once per test file. */
+function analysedFixture(name: FixtureName): { record: MemoRecord; history: MemoSeries['history'] } {
+  const cached = analysed.get(name);
+  if (cached !== undefined) return structuredClone(cached);
+  const spec: FixtureSpec = FIXTURES[name];
+  const series = readSeriesCsv(spec.file);
+  const record = analyseSeries(series, spec.options);
+  const history = series.periods.map((period, i) => ({ period, value: series.values[i] }));
+  analysed.set(name, { record, history });
+  return structuredClone({ record, history });
+}
+
+/** A bare record of the fixture, without the backtest, stability and recommendation parts. */
+export function bareRecord(name: FixtureName): MemoRecord {
+  return analysedFixture(name).record;
+}
+
+/** The fixture's record with all three later parts attached. */
+export function fullRecord(name: FixtureName): MemoRecord {
+  const record = bareRecord(name);
+  record.backtest = handMadeBacktest(record);
+  record.evidence.stability = handMadeStability(record, { deterministic: name === 'nile', stochastic: false });
+  record.recommendation = handMadeRecommendation(name === 'lakeHuron' ? 'deterministic' : 'stochastic');
+  return record;
+}
+
+export function sampleSeries(name: FixtureName): MemoSeries {
+  const { history } = analysedFixture(name);
+  return {
+    record: fullRecord(name),
+    history,
+    units: FIXTURES[name].units,
+    notes: name === 'nile' ? 'Flow volumes as published; the 1902 dam is part of the history.' : undefined,
+    assumptions: [
+      { choice: 'Forecast horizon', value: String(analysedFixture(name).record.settings.horizon), basis: 'Planning cycle agreed with the client', set_by: name === 'gdp' ? 'config' : 'default' },
+      { choice: 'Interval levels', value: '80%, 95%', basis: 'Tool default', set_by: 'default' },
+      { choice: 'Transform', value: name === 'gdp' ? 'natural log' : 'none', basis: name === 'gdp' ? 'Growth is roughly proportional to the level' : 'Tool default', set_by: name === 'gdp' ? 'config' : 'default' },
+    ],
+  };
+}
+
+export function sampleInput(names: readonly FixtureName[] = ['lakeHuron', 'nile', 'gdp']): MemoInput {
+  return {
+    memo: {
+      id: 'TM-2026-014',
+      title: 'Long-range outlook for basin inflows and demand drivers',
+      client: 'Vessamor Basin Water Cooperative',
+      prepared_by: 'Tallowmere Planning Analytics',
+      reference: 'VBWC/PLAN/2026/07',
+      as_of: '2026-11-30',
+      author: 'Ines Marrow',
+      reviewers: [
+        { name: 'Oskar Pellin', role: 'Engagement reviewer' },
+        { name: 'Ruth Anselm', role: 'Quality reviewer' },
+      ],
+      sign_off: [{ reviewer: 'Oskar Pellin', date: '2026-12-01', decision: 'approved-with-changes', comment: 'Widen the discussion of the Nile break.' }],
+    },
+    paper: 'A4',
+    series: names.map(sampleSeries),
+    reproducibility: {
+      tool: 'trendbrief',
+      version: '0.1.0',
+      command: 'trendbrief run configs/basin-outlook.yaml',
+      run_date: '2026-11-30',
+      config: { file: 'configs/basin-outlook.yaml', sha256: '3f1c9a0e5b7d2468ace13579bdf02468ace13579bdf02468ace13579bdf0246a' },
+      data: names.map((name) => ({ file: FIXTURES[name].file, sha256: analysedFixture(name).record.series.source.sha256 })),
+    },
+  };
+}
