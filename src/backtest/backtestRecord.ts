@@ -1,0 +1,125 @@
+// The backtest block of the AnalysisRecord: rolling-origin forecasts of both trend models and
+// the no-change yardstick, their scores per horizon and the comparison tests. Plain JSON;
+// numbers that do not exist are null. Keys are a contract: add freely, rename none.
+import type { TrendModelKind } from '../models/trendModels.js';
+
+export type BacktestNumber = number | null;
+
+export const REFIT_POLICIES = ['reselect', 'reestimate', 'fixed'] as const;
+export type RefitPolicy = (typeof REFIT_POLICIES)[number];
+
+export const WINDOW_KINDS = ['expanding', 'sliding'] as const;
+export type WindowKind = (typeof WINDOW_KINDS)[number];
+
+/** The two trend models and the no-change forecast. */
+export type ForecastMethod = TrendModelKind | 'naive';
+export const FORECAST_METHODS: readonly ForecastMethod[] = ['deterministic', 'stochastic', 'naive'];
+
+export type ComparisonLoss = 'squared_error' | 'interval_score_95';
+
+/** Values keyed by interval level in percent, e.g. {"80": …, "95": …}. */
+export type LevelTable = Record<string, BacktestNumber>;
+
+export interface ArmaOrder {
+  p: number;
+  q: number;
+}
+
+export interface BacktestSettings {
+  /** Origins scored. */
+  origins: number;
+  /** Origins asked for (the default is 20). */
+  requested_origins: number;
+  horizon: number;
+  window: WindowKind;
+  step: number;
+  refit: RefitPolicy;
+  min_training_length: number;
+  levels: number[];
+  transform: { kind: 'none' | 'log' | 'box-cox'; lambda?: number };
+  coefficient_uncertainty: boolean;
+  point: 'median' | 'mean';
+  max_p: number;
+  max_q: number;
+  /** Orders from the full sample under `reestimate` and `fixed`; null under `reselect`. */
+  orders: Record<TrendModelKind, ArmaOrder> | null;
+  significance: number;
+}
+
+export interface OriginModel {
+  p: number;
+  q: number;
+  /** Null under `fixed`, where nothing is estimated at the origin. */
+  loglik: BacktestNumber;
+  converged: boolean;
+}
+
+export interface OriginRecord {
+  /** Observations up to and including the origin (the training length of an expanding window). */
+  origin: number;
+  /** Period label of the last training observation; null for a bare array of values. */
+  period: string | null;
+  /** Observations in the training window (smaller than `origin` for a sliding window). */
+  training_length: number;
+  /** In-sample mean absolute one-step no-change error of the window: the MASE scale. */
+  mase_scale: BacktestNumber;
+  models: Record<TrendModelKind, OriginModel>;
+}
+
+export interface HorizonScores {
+  h: number;
+  /** Origins scored at this horizon. */
+  n: number;
+  mae: BacktestNumber;
+  rmse: BacktestNumber;
+  /** Mean absolute percentage error, in percent; null unless every actual is positive. */
+  mape: BacktestNumber;
+  mase: BacktestNumber;
+  coverage: LevelTable;
+  width: LevelTable;
+  interval_score: LevelTable;
+  /** On the model (transformed) scale. */
+  crps: BacktestNumber;
+}
+
+export interface ComparisonRow {
+  h: number;
+  loss: ComparisonLoss;
+  n: number;
+  /** Mean loss of the deterministic minus the stochastic trend. */
+  mean_difference: BacktestNumber;
+  statistic: BacktestNumber;
+  p_value: BacktestNumber;
+  /** The model with the lower mean loss (whatever the p-value); null on a tie. */
+  better: TrendModelKind | null;
+  available: boolean;
+  reason: string | null;
+}
+
+export interface BacktestForecast {
+  origin: number;
+  origin_period: string | null;
+  model: ForecastMethod;
+  h: number;
+  /** Period label of the forecast target; null for a bare array of values. */
+  period: string | null;
+  actual: number;
+  point: number;
+  intervals: Record<string, [number, number]>;
+  /** The Gaussian predictive on the model scale the scores use. */
+  model_scale: { mean: number; se: number };
+}
+
+export interface BacktestRecord {
+  settings: BacktestSettings;
+  notes: string[];
+  origins: OriginRecord[];
+  per_horizon: Record<ForecastMethod, HorizonScores[]>;
+  comparison: ComparisonRow[];
+  forecasts: BacktestForecast[];
+}
+
+/** A number for JSON: non-finite values become null. */
+export function finiteOrNull(value: number): BacktestNumber {
+  return Number.isFinite(value) ? value : null;
+}
