@@ -1,0 +1,55 @@
+// Titles, panel names and text descriptions of the charts. Descriptions say in words what the
+// chart shows, with its key numbers, for readers who cannot see it.
+import type { ModelKind } from './recordParts.js';
+import { MODEL_NAME } from './wording.js';
+
+export const chartWording = {
+  history: {
+    title: (series: string) => `${series}: observed history`,
+    subtitle: (first: string, last: string, n: number) => `${first} to ${last}, ${n} observations`,
+    description: (a: { series: string; first: string; last: string; n: number; low: string; high: string }) =>
+      `Line chart of ${a.series} from ${a.first} to ${a.last} (${a.n} observations), ranging from ${a.low} to ${a.high}.`,
+  },
+  forecast: {
+    title: (series: string, end: string) => `${series}: forecasts to ${end}`,
+    subtitle: 'Solid line: observed. Dashed line: point forecast. Shading: 80% (darker) and 95% prediction intervals.',
+    panel: (model: ModelKind) => MODEL_NAME[model],
+    description: (a: { series: string; recent: number; end: string; models: { model: ModelKind; point: string; low: string; high: string }[] }) =>
+      `Two panels on one vertical scale, one per model. Each shows the last ${a.recent} observations of ${a.series}, then the model's point forecast to ${a.end} with its 80% and 95% prediction intervals. ` +
+      a.models.map((m) => `At ${a.end} the ${MODEL_NAME[m.model].toLowerCase()} model gives ${m.point} (95% interval ${m.low} to ${m.high}).`).join(' '),
+  },
+  widthRatio: {
+    title: (series: string) => `${series}: deterministic \u00f7 stochastic 95% interval width`,
+    subtitle: 'Below 1: the deterministic interval is narrower. The line marks equal widths.',
+    description: (a: { first: string; last: string; horizon: number }) =>
+      `Bar chart of the ratio of the deterministic to the stochastic 95% interval width at each of ${a.horizon} horizons, from ${a.first} at the first step to ${a.last} at the last.`,
+  },
+  backtest: {
+    title: (series: string) => `${series}: backtest accuracy by horizon`,
+    subtitle: (origins: number) => `Forecasts made from ${origins} past origins and compared with what happened.`,
+    errorPanel: 'Root mean squared error',
+    coveragePanel: 'Outcomes inside the 95% interval',
+    targetLabel: '95% target',
+    description: (a: { origins: number; horizon: number; endErrors: string; endCoverage: string }) =>
+      `Two panels by forecast horizon 1 to ${a.horizon}, from ${a.origins} backtest origins. Left: root mean squared error of the deterministic, stochastic and no-change forecasts; at the last horizon ${a.endErrors}. ` +
+      `Right: share of outcomes inside each model's 95% interval, against the 95% target; at the last horizon ${a.endCoverage}.`,
+  },
+  residualAcf: {
+    title: (series: string) => `${series}: autocorrelation of one-step forecast errors`,
+    subtitle: 'Dashed lines: \u00b11.96/\u221an. Bars beyond them suggest a pattern the model has missed.',
+    panel: (model: ModelKind) => MODEL_NAME[model],
+    description: (a: { lags: number; outside: { model: ModelKind; lags: number[] }[] }) =>
+      `Two panels of error autocorrelations at lags 1 to ${a.lags} with the \u00b11.96/\u221an bounds. ` +
+      a.outside
+        .map((o) => `${MODEL_NAME[o.model]}: ${o.lags.length === 0 ? 'every lag inside the bounds' : `outside at lag${o.lags.length === 1 ? '' : 's'} ${o.lags.join(', ')}`}.`)
+        .join(' '),
+  },
+  stability: {
+    title: (series: string) => `${series}: trend estimated on growing stretches of history`,
+    subtitle: 'Line: estimate from the first observation to each date. Shading: \u00b12 standard errors. Dashed line: full-history estimate.',
+    panel: { deterministic: 'Slope of the trend line, per period', stochastic: 'Drift, average change per period' } as Record<ModelKind, string>,
+    description: (a: { first: string; last: string; windows: number; slope: string; drift: string }) =>
+      `Two panels of estimates on ${a.windows} expanding windows ending from ${a.first} to ${a.last}, each with a band of two standard errors. ` +
+      `Full-history slope ${a.slope}; full-history drift ${a.drift}.`,
+  },
+} as const;

@@ -1,0 +1,83 @@
+// Backtest accuracy by horizon: root mean squared error of the two models and the no-change
+// benchmark, and the share of outcomes inside each model's 95% interval against the target.
+import type { TopLevelSpec } from 'vega-lite';
+import { chartWording } from '../chartWording.js';
+import { formatNumber, formatPercent, withUnits } from '../format/formatNumber.js';
+import type { BacktestMethod, BacktestPart } from '../recordParts.js';
+import { METHOD_NAME } from '../wording.js';
+import { CHART_CONFIG, PANEL_WIDTH } from './chartConfig.js';
+import type { LayerPart, PanelSpec } from './chartTypes.js';
+import { INK, MODEL_COLOUR, MODEL_DASH, MODEL_SHAPE } from './palette.js';
+
+const METHODS: readonly BacktestMethod[] = ['deterministic', 'stochastic', 'naive'];
+
+export interface BacktestChartRow {
+  method: string;
+  h: number;
+  rmse: number | null;
+  coverage95: number | null;
+}
+
+export function backtestRows(backtest: BacktestPart): BacktestChartRow[] {
+  return METHODS.flatMap((method) =>
+    backtest.per_horizon[method].map((row) => ({ method: METHOD_NAME[method], h: row.h, rmse: row.rmse, coverage95: row.coverage?.['95'] ?? null })),
+  );
+}
+
+// One colour and dash scale over all three methods, shared by both panels (one legend).
+function styleScales() {
+  const methods = METHODS;
+  const domain = methods.map((m) => METHOD_NAME[m]);
+  return {
+    color: { field: 'method', type: 'nominal' as const, title: null, legend: { symbolType: 'stroke', symbolSize: 320, symbolStrokeWidth: 2 }, scale: { domain, range: methods.map((m) => MODEL_COLOUR[m]) } },
+    strokeDash: { field: 'method', type: 'nominal' as const, title: null, scale: { domain, range: methods.map((m) => MODEL_DASH[m]) } },
+  };
+}
+
+function linePanel(title: string, field: 'rmse' | 'coverage95', rows: BacktestChartRow[], methods: readonly BacktestMethod[], yTitle: string | null, extra: LayerPart[]): PanelSpec {
+  const { color, strokeDash } = styleScales();
+  const x = { field: 'h', type: 'quantitative' as const, title: 'horizon (steps ahead)', axis: { tickMinStep: 1, format: 'd' } };
+  const y = { field, type: 'quantitative' as const, title: yTitle, ...(field === 'coverage95' ? { axis: { format: '.0%' }, scale: { domain: [0, 1] } } : {}) };
+  const shown = rows.filter((r) => r[field] !== null && methods.some((m) => METHOD_NAME[m] === r.method));
+  return {
+    title: { text: title, fontSize: 11 },
+    width: PANEL_WIDTH,
+    height: 180,
+    layer: [
+      ...extra,
+      { data: { values: shown }, mark: { type: 'line', strokeWidth: 1.6 }, encoding: { x, y, color, strokeDash } },
+      // Markers per method with a fixed shape, so a greyscale print still tells the lines apart.
+      ...methods.map(
+        (method): LayerPart => ({
+          data: { values: shown.filter((r) => r.method === METHOD_NAME[method]) },
+          mark: { type: 'point', filled: true, size: 26, shape: MODEL_SHAPE[method], color: MODEL_COLOUR[method], opacity: 1 },
+          encoding: { x, y },
+        }),
+      ),
+    ],
+  };
+}
+
+export function backtestChart({ series, units, decimals, backtest }: { series: string; units?: string; decimals: number; backtest: BacktestPart }): TopLevelSpec {
+  const rows = backtestRows(backtest);
+  const origins = backtest.origins.length;
+  const endErrors = METHODS.map((m) => `${METHOD_NAME[m].toLowerCase()} ${withUnits(formatNumber(backtest.per_horizon[m].at(-1)?.rmse, decimals), units)}`).join(', ');
+  const endCoverage = (['deterministic', 'stochastic'] as const)
+    .map((m) => `${METHOD_NAME[m].toLowerCase()} ${formatPercent(backtest.per_horizon[m].at(-1)?.coverage?.['95'])}`)
+    .join(', ');
+  const target: LayerPart = {
+    data: { values: [{ coverage95: 0.95 }] },
+    mark: { type: 'rule', color: INK, strokeDash: [4, 2], strokeWidth: 1 },
+    encoding: { y: { field: 'coverage95', type: 'quantitative' } },
+  };
+  return {
+    title: { text: chartWording.backtest.title(series), subtitle: chartWording.backtest.subtitle(origins) },
+    description: chartWording.backtest.description({ origins, horizon: backtest.settings.horizon, endErrors, endCoverage }),
+    config: CHART_CONFIG,
+    spacing: 24,
+    hconcat: [
+      linePanel(chartWording.backtest.errorPanel, 'rmse', rows, METHODS, units ?? null, []),
+      linePanel(chartWording.backtest.coveragePanel, 'coverage95', rows, ['deterministic', 'stochastic'], null, [target]),
+    ],
+  };
+}

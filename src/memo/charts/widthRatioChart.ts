@@ -1,0 +1,61 @@
+// The 95% interval width of the deterministic model divided by that of the stochastic model,
+// at every horizon, against a line at 1 (equal widths).
+import type { TopLevelSpec } from 'vega-lite';
+import { chartWording } from '../chartWording.js';
+import { formatNumber } from '../format/formatNumber.js';
+import type { MemoRecord } from '../recordParts.js';
+import { CHART_CONFIG, FULL_WIDTH } from './chartConfig.js';
+import { INK, MODEL_COLOUR } from './palette.js';
+
+export interface WidthRatioRow {
+  h: number;
+  period: string;
+  ratio: number;
+}
+
+/** Deterministic ÷ stochastic 95% width per horizon, for the rows both models have. */
+export function widthRatios(record: Pick<MemoRecord, 'forecasts'>): WidthRatioRow[] {
+  return record.forecasts.deterministic.flatMap((row, i) => {
+    const other = record.forecasts.stochastic[i];
+    if (other === undefined) return [];
+    const [lo, hi] = row.intervals['95'];
+    const [otherLo, otherHi] = other.intervals['95'];
+    return [{ h: row.h, period: row.period, ratio: (hi - lo) / (otherHi - otherLo) }];
+  });
+}
+
+export function widthRatioChart({ series, record }: { series: string; record: MemoRecord }): TopLevelSpec {
+  const rows = widthRatios(record).map((r) => ({ ...r, label: formatNumber(r.ratio, 2) }));
+  const top = Math.max(1.1, ...rows.map((r) => r.ratio * 1.12));
+  return {
+    title: { text: chartWording.widthRatio.title(series), subtitle: chartWording.widthRatio.subtitle },
+    description: chartWording.widthRatio.description({
+      horizon: rows.length,
+      first: rows[0]?.label ?? '',
+      last: rows.at(-1)?.label ?? '',
+    }),
+    config: CHART_CONFIG,
+    width: FULL_WIDTH,
+    height: 140,
+    layer: [
+      {
+        data: { values: rows },
+        mark: { type: 'bar', color: MODEL_COLOUR.deterministic, opacity: 0.85, width: { band: 0.62 } },
+        encoding: {
+          x: { field: 'period', type: 'ordinal', sort: null, title: null, axis: { labelAngle: 0, labelOverlap: true } },
+          y: { field: 'ratio', type: 'quantitative', title: 'ratio', scale: { domain: [0, top] } },
+        },
+      },
+      {
+        data: { values: rows },
+        mark: { type: 'text', baseline: 'top', dy: 4, fontSize: 9, color: '#ffffff' },
+        encoding: {
+          x: { field: 'period', type: 'ordinal', sort: null },
+          y: { field: 'ratio', type: 'quantitative' },
+          text: { field: 'label', type: 'nominal' },
+        },
+      },
+      { data: { values: [{ ratio: 1 }] }, mark: { type: 'rule', color: INK, strokeDash: [4, 2], strokeWidth: 1 }, encoding: { y: { field: 'ratio', type: 'quantitative' } } },
+    ],
+  };
+}
