@@ -90,3 +90,72 @@ export interface TrendVerdict {
   /** A short plain-language explanation with the numbers behind the verdict. */
   summary: string;
 }
+
+/** Critical values of a sup-Wald break statistic by test size in percent. */
+export interface SupWaldCritical {
+  '10': number;
+  '5': number;
+  '1': number;
+}
+
+/** Whether a sup-Wald break test rejects "no break" at each size in percent. */
+export interface SupWaldRejects {
+  '10': boolean;
+  '5': boolean;
+  '1': boolean;
+}
+
+/** Where the p-value lies relative to the 1%, 5% and 10% critical values. */
+export type SupWaldPBound = 'p < 0.01' | '0.01 < p < 0.05' | '0.05 < p < 0.10' | 'p > 0.10';
+
+/** A test for one break at an unknown date in the trend line (deterministic) or the drift (stochastic). */
+export interface BreakTestResult {
+  method: string;
+  source: string;
+  /** The largest Wald statistic over the candidate dates. */
+  stat: number;
+  /** Coefficients allowed to change at the break: 2 (level and slope) or 1 (drift). */
+  restrictions: number;
+  /** Fraction of the sample cut from each end of the range of candidate dates. */
+  trimming: number;
+  /** 0-based position in the series of the first observation after the break that maximises the statistic. */
+  break_index: number;
+  critical: SupWaldCritical;
+  reject: SupWaldRejects;
+  p_bound: SupWaldPBound;
+  /** A short plain-language sentence on whether the line (or drift) looks stable. */
+  summary: string;
+}
+
+/** The deterministic slope estimated on the first `end` observations. */
+export interface SlopeWindow {
+  end: number;
+  slope: number;
+  se: number;
+}
+
+/** The stochastic drift estimated on the first `end` observations. */
+export interface DriftWindow {
+  end: number;
+  drift: number;
+  se: number;
+}
+
+/** Estimates on expanding windows w[0..end), ARMA orders fixed at the full-sample orders. */
+export interface StabilityWindows {
+  deterministic: SlopeWindow[];
+  stochastic: DriftWindow[];
+  /** Observations in the first window. */
+  min_window: number;
+  /** Observations added from one window to the next (the last step may be shorter). */
+  step: number;
+}
+
+/** Trend stability: expanding-window estimates and a test for a break at an unknown date. */
+export interface StabilityRecord {
+  windows: StabilityWindows;
+  break_test: {
+    deterministic: BreakTestResult;
+    stochastic: BreakTestResult;
+  };
+}
