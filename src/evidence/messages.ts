@@ -1,7 +1,7 @@
 // All wording this stage shows to readers of a memo, kept in one place so it can be reviewed
 // and reworded without touching the statistics. Written for a client reviewer: no test jargon
 // beyond naming the p-values.
-import type { TrendVerdictKind } from './types.js';
+import type { SupWaldPBound, TrendVerdictKind } from './types.js';
 
 /** A test's p-value as the memo states it, honouring the edges of a lookup table. */
 export interface StatedPValue {
@@ -53,4 +53,30 @@ export function trendVerdictSummary(
         'two kinds of trend apart for this series.'
       );
   }
+}
+
+const BOUND_WORDS: Record<SupWaldPBound, string> = {
+  'p < 0.01': 'p below 0.01',
+  '0.01 < p < 0.05': 'p between 0.01 and 0.05',
+  '0.05 < p < 0.10': 'p between 0.05 and 0.10',
+  'p > 0.10': 'p above 0.10',
+};
+
+/**
+ * One sentence on whether the trend line (deterministic) or the drift (stochastic) looks
+ * stable, judged at 5%, with weak signs at 10% mentioned. `when` names the first observation
+ * after the most likely break date (a period label, or "observation 73").
+ */
+export function breakTestSummary(kind: 'deterministic' | 'stochastic', bound: SupWaldPBound, when: string): string {
+  const p = BOUND_WORDS[bound];
+  const weak = bound === '0.05 < p < 0.10';
+  const stable = bound === 'p > 0.10';
+  if (kind === 'deterministic') {
+    if (stable) return `The trend line looks stable: no shift in its level or slope stands out at any date away from the ends of the history (${p}).`;
+    if (weak) return `The trend line looks broadly stable, with weak signs of a shift in its level or slope from ${when} (${p}).`;
+    return `The trend line does not look stable: its level or slope appears to shift from ${when} (${p}), so one straight line through the whole history may mislead.`;
+  }
+  if (stable) return `The drift looks stable: the average change per period shows no clear shift at any date away from the ends of the history (${p}).`;
+  if (weak) return `The drift looks broadly stable, with weak signs of a shift in the average change per period from ${when} (${p}).`;
+  return `The drift does not look stable: the average change per period appears to shift from ${when} (${p}), so the recent pace may differ from the long-run average.`;
 }
