@@ -326,3 +326,67 @@ export const cliMessages = {
     });
   },
 };
+
+// ---------------------------------------------------------------------------
+// Backtest: messages about backtest settings and the series it is run on (src/backtest/).
+// ---------------------------------------------------------------------------
+
+function backtestField(name: string): InputLocation {
+  return { field: `backtest.${name}` };
+}
+
+export const backtestMessages = {
+  notWhole(name: string, value: number, min: number): InputProblem {
+    return problem('backtest.bad-value', `${value} is not a whole number of at least ${min}`, `give ${name} a whole number from ${min} up`, backtestField(name));
+  },
+  badChoice(name: string, value: string, choices: readonly string[]): InputProblem {
+    return problem('backtest.bad-value', `'${value}' is not one of ${choices.join(', ')}`, `give ${name} one of ${choices.join(', ')}`, backtestField(name));
+  },
+  badLevel(value: number): InputProblem {
+    return problem('backtest.bad-value', `${value} is not an interval level`, 'give levels in percent, above 0 and below 100, e.g. 80 and 95', backtestField('levels'));
+  },
+  badSignificance(value: number): InputProblem {
+    return problem('backtest.bad-value', `${value} is not a significance level`, 'give a probability above 0 and below 1, e.g. 0.05', backtestField('significance'));
+  },
+  badLambda(): InputProblem {
+    return problem('backtest.bad-value', 'the Box-Cox transform has no finite lambda', 'give lambda as a number such as 0.5', backtestField('transform'));
+  },
+  ordersWithReselect(): InputProblem {
+    return problem(
+      'backtest.orders-unused',
+      'orders are given, but the reselect policy chooses the orders at every origin',
+      'drop the orders, or choose the reestimate or fixed policy',
+      backtestField('orders'),
+    );
+  },
+  trainingTooShort(value: number, needed: number): InputProblem {
+    return problem(
+      'backtest.training-too-short',
+      `a minimum training length of ${value} leaves too few observations for the largest model`,
+      `give at least ${needed}, or lower the largest AR and MA orders`,
+      backtestField('minTrainingLength'),
+    );
+  },
+  badObservation(position: number, value: number): InputProblem {
+    return problem('backtest.bad-observation', `observation ${position} is ${value}, not a finite number`, 'supply a complete series of finite values', backtestField('values'));
+  },
+  notTransformable(position: number, value: number, transform: string): InputProblem {
+    return problem(
+      'backtest.bad-observation',
+      `observation ${position} is ${value}, which the ${transform} transform cannot take`,
+      'choose no transform, or a series whose values are all above zero',
+      backtestField('values'),
+    );
+  },
+  periodsMismatch(periods: number, values: number): InputProblem {
+    return problem('backtest.periods-mismatch', `${periods} period labels for ${values} observations`, 'give one period label per observation', backtestField('periods'));
+  },
+  seriesTooShort(n: number, horizon: number, minimumTraining: number): InputProblem {
+    return problem(
+      'backtest.too-short',
+      `has ${plural(n, 'observation')}; a backtest at horizon ${horizon} needs at least ${minimumTraining + horizon} (${minimumTraining} to train on, ${horizon} to score)`,
+      'supply a longer series, shorten the backtest horizon, or lower the largest AR and MA orders',
+      backtestField('values'),
+    );
+  },
+};

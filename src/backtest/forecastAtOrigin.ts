@@ -1,0 +1,89 @@
+// One model at one backtest origin: refit on the training window by the refit policy and
+// forecast B steps on the model scale. A pure function of its task, so it runs unchanged
+// inline or on a worker thread (the pool calls this module's `forecastAtOrigin` export),
+// and the results do not depend on which thread ran it.
+import { createProfileLikelihood } from '../models/profileLikelihood.js';
+import { fitTrendModel, fitTrendModelAtOrder, forecastTrendModel, trendDesign, type TrendModelKind } from '../models/trendModels.js';
+import { forecastRegressionArma, type ForecastMoments } from '../statespace/forecast.js';
+import type { ArmaOrder, RefitPolicy } from './backtestRecord.js';
+
+/** Full-sample parameters held fixed under the `fixed` policy, in the window's time index. */
+export interface FixedParameters {
+  ar: number[];
+  ma: number[];
+  beta: number[];
+  /** Var(β̂), k×k row-major. */
+  covBeta: number[];
+  sigma2: number;
+}
+
+export interface OriginTask {
+  kind: TrendModelKind;
+  /** Model-scale training window. */
+  w: Float64Array;
+  horizon: number;
+  refit: RefitPolicy;
+  maxP: number;
+  maxQ: number;
+  /** The order under `reestimate` and `fixed`. */
+  order?: ArmaOrder;
+  /** The parameters under `fixed`. */
+  parameters?: FixedParameters;
+}
+
+export interface OriginForecast {
+  p: number;
+  q: number;
+  /** Null under `fixed`: nothing is estimated. */
+  loglik: number | null;
+  converged: boolean;
+  mean: number[];
+  seProcess: number[];
+  seTotal: number[];
+}
+
+export function forecastAtOrigin(task: OriginTask): OriginForecast {
+  if (task.refit === 'fixed') return forecastWithFixedParameters(task);
+  const model =
+    task.refit === 'reselect'
+      ? fitTrendModel(task.kind, task.w, task.maxP, task.maxQ)
+      : fitTrendModelAtOrder(task.kind, task.w, requireOrder(task).p, requireOrder(task).q);
+  return originForecast(model.fit, forecastTrendModel(model, task.horizon));
+}
+
+/**
+ * Filters the window at the fixed ARMA parameters to get the state at the origin, then
+ * forecasts with the fixed β, Var(β̂) and σ² (Harvey 1989, §3.5): only the data up to the
+ * origin move the forecast.
+ */
+function forecastWithFixedParameters(task: OriginTask): OriginForecast {
+  const { p, q } = requireOrder(task);
+  const parameters = task.parameters;
+  if (parameters === undefined) throw new Error('forecastAtOrigin: the fixed policy needs the full-sample parameters');
+  const design = trendDesign(task.kind, task.w);
+  const likelihood = createProfileLikelihood(design.response, design.regressors, p, q);
+  const loglik = likelihood.atCoefficients(parameters.ar, parameters.ma, true);
+  if (Number.isNaN(loglik)) throw new Error('forecastAtOrigin: the fixed ARMA parameters are not stationary and invertible');
+  const { state, pmat, r, ncol } = likelihood.workspace;
+  const finalState = Array.from({ length: ncol }, (_, c) => state.slice(c * r, (c + 1) * r));
+  const integrate = design.integrateFrom === undefined ? undefined : { lastLevel: design.integrateFrom };
+  const moments = forecastRegressionArma({ ...parameters, finalState, finalCovariance: pmat.slice() }, design.futureRows(task.horizon), integrate);
+  return originForecast({ p, q, loglik: null, converged: true }, moments);
+}
+
+function originForecast(fit: Pick<OriginForecast, 'p' | 'q' | 'loglik' | 'converged'>, moments: ForecastMoments): OriginForecast {
+  return {
+    p: fit.p,
+    q: fit.q,
+    loglik: fit.loglik,
+    converged: fit.converged,
+    mean: Array.from(moments.mean),
+    seProcess: Array.from(moments.seProcess),
+    seTotal: Array.from(moments.seTotal),
+  };
+}
+
+function requireOrder(task: OriginTask): ArmaOrder {
+  if (task.order === undefined) throw new Error(`forecastAtOrigin: the ${task.refit} policy needs an order`);
+  return task.order;
+}

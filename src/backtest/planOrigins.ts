@@ -1,0 +1,57 @@
+// Rolling forecast origins (Tashman 2000): the last K training lengths for which all B
+// horizons can be scored, T = n − B − (K − 1)·step, …, n − B, none shorter than the minimum
+// training length. An expanding window trains on observations 1..T; a sliding window keeps
+// the first origin's length and drops the oldest observations as the origin moves.
+import type { WindowKind } from './backtestRecord.js';
+
+/** Origins used when the caller does not say (fewer when the series is too short). */
+export const DEFAULT_ORIGINS = 20;
+/** Floor of the default minimum training length. */
+export const MINIMUM_TRAINING_FLOOR = 20;
+/** The default minimum training length is this many times the largest model's parameters. */
+export const OBSERVATIONS_PER_PARAMETER = 3;
+
+export interface PlannedOrigin {
+  /** Observations up to and including the origin. */
+  end: number;
+  /** Index of the first training observation (0 for an expanding window). */
+  start: number;
+}
+
+export interface OriginPlan {
+  origins: PlannedOrigin[];
+  requested: number;
+  /** Origins the series allows at this horizon, step and minimum training length. */
+  available: number;
+}
+
+export interface OriginPlanOptions {
+  horizon: number;
+  /** Origins asked for; default DEFAULT_ORIGINS. */
+  origins?: number;
+  step: number;
+  window: WindowKind;
+  minTrainingLength: number;
+}
+
+/** The default minimum training length: max(20, 3 × the largest model's parameter count). */
+export function defaultMinimumTraining(largestParameterCount: number): number {
+  return Math.max(MINIMUM_TRAINING_FLOOR, OBSERVATIONS_PER_PARAMETER * largestParameterCount);
+}
+
+/** Origins available for a series of n observations (0 when none can be scored). */
+export function availableOrigins(n: number, options: Omit<OriginPlanOptions, 'origins' | 'window'>): number {
+  const spare = n - options.horizon - options.minTrainingLength;
+  return spare < 0 ? 0 : Math.floor(spare / options.step) + 1;
+}
+
+export function planOrigins(n: number, options: OriginPlanOptions): OriginPlan {
+  const requested = options.origins ?? DEFAULT_ORIGINS;
+  const available = availableOrigins(n, options);
+  const count = Math.min(requested, available);
+  const last = n - options.horizon;
+  const ends = Array.from({ length: count }, (_, i) => last - (count - 1 - i) * options.step);
+  const windowLength = ends.length > 0 ? ends[0] : 0;
+  const origins = ends.map((end) => ({ end, start: options.window === 'sliding' ? end - windowLength : 0 }));
+  return { origins, requested, available };
+}

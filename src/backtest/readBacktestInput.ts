@@ -1,0 +1,41 @@
+// The series a backtest runs on: a Series from the data stage (period labels kept for the
+// record) or a bare array of values. Every observation must be finite and, after the
+// transform, still finite; all problems are reported together.
+import { backtestMessages, InputError, type InputProblem } from '../errors.js';
+import { describeTransform, transformValue, type TransformSpec } from '../models/transform.js';
+
+export interface BacktestSeries {
+  values: ArrayLike<number>;
+  /** One period label per observation. */
+  periods?: readonly string[];
+}
+
+export type BacktestInput = BacktestSeries | ArrayLike<number>;
+
+export interface BacktestData {
+  /** The data's scale. */
+  y: Float64Array;
+  /** The model (transformed) scale. */
+  w: Float64Array;
+  periods: readonly string[] | null;
+}
+
+export function readBacktestInput(input: BacktestInput, transform: TransformSpec): BacktestData {
+  const series: BacktestSeries = isBareValues(input) ? { values: input } : input;
+  const y = Float64Array.from(series.values);
+  const w = y.map((value) => transformValue(transform, value));
+  const problems: InputProblem[] = [];
+  y.forEach((value, i) => {
+    if (!Number.isFinite(value)) problems.push(backtestMessages.badObservation(i + 1, value));
+    else if (!Number.isFinite(w[i])) problems.push(backtestMessages.notTransformable(i + 1, value, describeTransform(transform)));
+  });
+  const periods = series.periods ?? null;
+  if (periods !== null && periods.length !== y.length) problems.push(backtestMessages.periodsMismatch(periods.length, y.length));
+  if (problems.length > 0) throw new InputError(problems);
+  return { y, w, periods };
+}
+
+/** A typed array or an array of numbers, as opposed to a series object. */
+function isBareValues(input: BacktestInput): input is ArrayLike<number> {
+  return ArrayBuffer.isView(input) || Array.isArray(input);
+}
