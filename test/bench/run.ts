@@ -2,10 +2,11 @@
 // Figures are wall-clock medians on the machine at hand; tests never assert on time.
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { cpus } from 'node:os';
+import { backtestBench } from './backtestBench.js';
 import { engineBench } from './engineBench.js';
 import type { BenchRow } from './timing.js';
 
-const suites: [string, () => BenchRow[] | Promise<BenchRow[]>][] = [['engine', engineBench]];
+const suites: [string, () => BenchRow[] | Promise<BenchRow[]>][] = [['engine', engineBench], ['backtest', backtestBench]];
 
 const results: Record<string, BenchRow[]> = {};
 for (const [name, suite] of suites) {
