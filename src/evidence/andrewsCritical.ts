@@ -3,11 +3,8 @@
 // Andrews (1993), "Tests for parameter instability and structural change with unknown change
 // point", Econometrica 61(4), Table 1, in the corrected values of Andrews (2003), Econometrica
 // 71(1). Typed in from memory; the tests check them against a simulation of the limit
-// sup ‖B(π) − πB(1)‖² / (π(1 − π)).
+// sup ‖B(π) − πB(1)‖² / (π(1 − π)). The trimming is breakDates' TRIMMING_PERCENT.
 import type { SupWaldCritical } from './types.js';
-
-/** The trimming these values are for: candidate break dates in [0.15, 0.85] of the sample. */
-export const ANDREWS_TRIMMING = 0.15;
 
 export const ANDREWS_SOURCE = 'Andrews (1993), Econometrica 61(4), Table 1 (corrected values, Andrews 2003)';
 
