@@ -28,10 +28,11 @@ export async function runBacktest(input: BacktestInput, options: BacktestOptions
   if (n - horizon < floor) throw new InputError(backtestMessages.seriesTooShort(n, horizon, floor));
 
   const full = refit === 'reselect' ? undefined : fullSampleModels(data.w, refit, maxP, maxQ, settings.orders);
-  const largest = (kind: TrendModelKind): ArmaOrder => full?.orders[kind] ?? { p: maxP, q: maxQ };
+  // The largest order each model is fitted at: the fixed one, or the top of the search grid.
+  const largestOrder = (kind: TrendModelKind): ArmaOrder => full?.orders[kind] ?? { p: maxP, q: maxQ };
   // Parameters: p + q, the regression coefficients (2 or 1) and σ².
-  const parameterCount = Math.max(...TREND_MODELS.map((kind) => largest(kind).p + largest(kind).q + (kind === 'deterministic' ? 3 : 2)));
-  const needed = Math.max(...TREND_MODELS.map((kind) => minimumObservations(kind, largest(kind).p, largest(kind).q)));
+  const parameterCount = Math.max(...TREND_MODELS.map((kind) => largestOrder(kind).p + largestOrder(kind).q + (kind === 'deterministic' ? 3 : 2)));
+  const needed = Math.max(...TREND_MODELS.map((kind) => minimumObservations(kind, largestOrder(kind).p, largestOrder(kind).q)));
   const minTrainingLength = settings.minTrainingLength ?? defaultMinimumTraining(parameterCount);
   if (minTrainingLength < needed) throw new InputError(backtestMessages.trainingTooShort(minTrainingLength, needed));
   const plan = planOrigins(n, { horizon, origins: settings.origins, step: settings.step, window: settings.window, minTrainingLength });

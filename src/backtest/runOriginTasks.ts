@@ -7,7 +7,8 @@ import { forecastAtOrigin, type OriginForecast, type OriginTask } from './foreca
 
 export async function runOriginTasks(tasks: readonly OriginTask[], threads: number): Promise<OriginForecast[]> {
   if (threads <= 1 || tasks.length <= 1) return tasks.map(forecastAtOrigin);
-  const pool = new Tinypool({ filename: workerModule(), name: 'forecastAtOrigin', minThreads: threads, maxThreads: threads });
+  const size = Math.min(threads, tasks.length);
+  const pool = new Tinypool({ filename: workerModule(), name: 'forecastAtOrigin', minThreads: size, maxThreads: size });
   try {
     return await Promise.all(tasks.map((task): Promise<OriginForecast> => pool.run(task)));
   } finally {
