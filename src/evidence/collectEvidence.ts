@@ -1,10 +1,11 @@
 // The `evidence` part of an AnalysisRecord: unit-root tests on the model-scale levels, their
-// combined reading, and residual checks of both fitted models.
+// combined reading, residual checks of both fitted models, and the stability of the trend.
 import { adfTest } from './adfTest.js';
 import { kpssTest } from './kpssTest.js';
 import { residualChecks, type ResidualChecks } from './residualChecks.js';
+import { trendStability } from './trendStability.js';
 import { trendVerdict } from './trendVerdict.js';
-import type { AdfResult, KpssLagRule, KpssResult, TrendVerdictKind } from './types.js';
+import type { AdfResult, KpssLagRule, KpssResult, StabilityRecord, TrendVerdictKind } from './types.js';
 
 export interface EvidenceOptions {
   /** Significance level of every test and of the reading, 0.01 to 0.10 (default 0.05). */
@@ -18,6 +19,8 @@ export interface EvidenceRecord {
   adf: { constant: AdfResult | null; trend: AdfResult | null };
   reading: { verdict: TrendVerdictKind | 'unavailable'; level: number; text: string; kpss_rejects: boolean | null; adf_rejects: boolean | null };
   residuals: { deterministic: ResidualChecks; stochastic: ResidualChecks };
+  /** Expanding-window slope and drift, and the break tests; null when they could not run. */
+  stability: StabilityRecord | null;
   /** Tests that could not be computed on this series, with the reason. */
   unavailable: { test: string; reason: string }[];
 }
@@ -71,6 +74,12 @@ export function collectEvidence(
       deterministic: residualChecks(fits.deterministic.residuals, fits.deterministic.p, fits.deterministic.q, significance),
       stochastic: residualChecks(fits.stochastic.residuals, fits.stochastic.p, fits.stochastic.q, significance),
     },
+    stability: attempt('stability', () =>
+      trendStability(w, {
+        deterministic: { p: fits.deterministic.p, q: fits.deterministic.q },
+        stochastic: { p: fits.stochastic.p, q: fits.stochastic.q },
+      }),
+    ),
     unavailable,
   };
 }
