@@ -3,6 +3,8 @@
 import { closestName } from './data/closestName.js';
 import { cliMessages, formatProblem, InputError } from './errors.js';
 import { runFit, FIT_HELP } from './cli/fitCommand.js';
+import { runCheck } from './cli/checkCommand.js';
+import { runInit } from './cli/initCommand.js';
 import { toolVersion } from './analysis/toolVersion.js';
 
 export interface CliIo {
@@ -10,7 +12,7 @@ export interface CliIo {
   stderr(text: string): void;
 }
 
-const COMMANDS = ['fit'] as const;
+const COMMANDS = ['fit', 'check', 'init'] as const;
 const GLOBAL_OPTIONS = ['--help', '--version'] as const;
 
 export const EXIT = { ok: 0, internal: 1, input: 2, mismatch: 3 } as const;
@@ -19,6 +21,8 @@ const MAIN_HELP = `trendbrief: compare deterministic and stochastic trend extrap
 
 Usage:
   trendbrief fit FILE.csv [options]   fit both trend models to one series and forecast
+  trendbrief check CONFIG.yaml...     check configs and their series files without fitting
+  trendbrief init [DIR]               write a starter config and an example series
   trendbrief --help                   this text
   trendbrief --version                the tool's version
 
@@ -47,6 +51,8 @@ export async function cli(argv: readonly string[], io: CliIo): Promise<number> {
       }
       return await runFit(rest, io);
     }
+    if (command === 'check') return await runCheck(rest, io);
+    if (command === 'init') return await runInit(rest, io);
     if (command.startsWith('-')) throw new InputError(cliMessages.unknownOption(command, closestName(command, GLOBAL_OPTIONS), ''));
     throw new InputError(cliMessages.unknownCommand(command, closestName(command, COMMANDS)));
   } catch (error) {

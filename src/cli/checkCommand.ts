@@ -1,0 +1,92 @@
+// `trendbrief check CONFIG...`: validates each config and reads every series file it names with
+// the checks the run would make (enough observations for the order limits, values the transform
+// accepts), without fitting. Every config is checked even when an earlier one fails.
+import { isAbsolute, relative } from 'node:path';
+import { requiredObservations } from '../analysis/analyseSeries.js';
+import { loadConfig } from '../config/loadConfig.js';
+import type { RunPlan, SeriesPlan } from '../config/runPlan.js';
+import { readSeriesCsv } from '../data/readSeriesCsv.js';
+import type { Series } from '../data/series.js';
+import { configCommandMessages, formatProblem, InputError, type InputProblem } from '../errors.js';
+import { splitOptions } from './splitOptions.js';
+
+export const CHECK_HELP = `Usage: trendbrief check CONFIG.yaml...
+
+Checks each config and every series file it names, as a run would, without fitting any model.
+Prints one line per config that passes and every problem of those that do not.
+Exit code 0 when all pass, 2 otherwise.
+
+Options:
+  -h, --help                this text
+`;
+
+interface Io {
+  stdout(text: string): void;
+  stderr(text: string): void;
+}
+
+/** A path under the working folder is shown relative to it, as the user would type it. */
+function shownPath(file: string): string {
+  const shown = relative(process.cwd(), file);
+  return shown === '' || shown.startsWith('..') || isAbsolute(shown) ? file : shown;
+}
+
+function readPlannedSeries(series: SeriesPlan): Series {
+  const { settings } = series;
+  return readSeriesCsv(shownPath(series.file), {
+    column: series.column,
+    periodColumn: series.periodColumn,
+    frequency: series.frequency,
+    minObservations: requiredObservations(settings.maxP.value, settings.maxQ.value),
+    transform: settings.transform.value,
+  });
+}
+
+function describeSeries(id: string, series: Series): string {
+  return `${id} ${series.first} to ${series.last} (${series.n} ${series.frequency})`;
+}
+
+/** The OK line, or every problem of the config and its series files. */
+function checkOne(file: string): { ok: string } | { problems: readonly InputProblem[] } {
+  let plan: RunPlan;
+  try {
+    plan = loadConfig(file);
+  } catch (error) {
+    if (error instanceof InputError) return { problems: error.problems };
+    throw error;
+  }
+  const problems: InputProblem[] = [];
+  const described: string[] = [];
+  for (const series of plan.series) {
+    try {
+      described.push(describeSeries(series.id, readPlannedSeries(series)));
+    } catch (error) {
+      if (!(error instanceof InputError)) throw error;
+      problems.push(...error.problems);
+    }
+  }
+  if (problems.length > 0) return { problems };
+  const count = plan.series.length === 1 ? '1 series' : `${plan.series.length} series`;
+  return { ok: `${file}: ok, memo ${plan.memo.id}, ${count}: ${described.join('; ')}` };
+}
+
+export async function runCheck(args: readonly string[], io: Io): Promise<number> {
+  const { values, positionals, problems } = splitOptions(args, { help: { type: 'boolean', short: 'h' } }, 'check');
+  if (values.get('help') === true) {
+    io.stdout(CHECK_HELP);
+    return 0;
+  }
+  if (positionals.length === 0) problems.push(configCommandMessages.noConfigs());
+  if (problems.length > 0) throw new InputError(problems);
+  let failed = false;
+  for (const file of positionals) {
+    const result = checkOne(file);
+    if ('ok' in result) {
+      io.stdout(`${result.ok}\n`);
+      continue;
+    }
+    failed = true;
+    for (const problem of result.problems) io.stderr(`${formatProblem(problem)}\n`);
+  }
+  return failed ? 2 : 0;
+}

@@ -1,0 +1,76 @@
+// The files `trendbrief init` writes: a commented starter config, the config's JSON Schema beside
+// it (so the editor hint on the first line works without knowing where trendbrief is installed),
+// and an invented example series the config points at.
+import { exampleSeriesCsv } from './exampleSeries.js';
+import { configSchemaText } from './toJsonSchema.js';
+
+export const STARTER_CONFIG = 'memo.yaml';
+export const STARTER_SCHEMA = 'config.schema.json';
+export const STARTER_SERIES = 'data/annual-boardings.csv';
+
+const CONFIG_TEXT = `# yaml-language-server: $schema=./${STARTER_SCHEMA}
+# A starter trendbrief config; check it with:  trendbrief check ${STARTER_CONFIG}
+# Editors that read the line above complete and check every key as you type;
+# ${STARTER_SCHEMA} describes each key, its range and its default.
+# The organisation and its figures are invented.
+
+memo:
+  id: ferry-boardings-outlook        # lowercase, digits and hyphens; names the output folder
+  title: Ferry boardings outlook
+  client: Fenwick Vale Ferry Trust
+  prepared_by: Forecasting desk
+  reference: FV-2026-01
+  as_of: 2025                        # a period: 2025, 2025-Q4 or 2025-12
+  author: A. Analyst
+  reviewers:
+    - name: R. Reviewer
+      role: engagement lead
+  # Reviewers record their decisions under sign_off, each naming a listed reviewer:
+  #   sign_off:
+  #     - reviewer: R. Reviewer
+  #       date: 2026-01-15
+  #       decision: approved         # approved, approved-with-changes or rejected
+  #       comment: Intervals discussed with the client.
+
+# Settings for every series; a series may override any of them. Keys left out take their
+# built-in default, and the memo's assumptions register says which is which.
+#   horizon (10 annual, 12 quarterly, 24 monthly), transform (none | log | {box_cox: 0.5}),
+#   levels ([80, 95]), coefficient_uncertainty (true), point (median | mean),
+#   max_p and max_q (3), significance (0.05), missing (error | allow),
+#   backtest: {origins (10), horizon, refit (reselect | reestimate | fixed),
+#              window (expanding | sliding), min_train}
+#   recommendation: {rule, significance (0.05), model (deterministic | stochastic),
+#                    justification (required when model is given)}
+defaults:
+  horizon: 10
+  transform: log
+
+series:
+  - id: annual-boardings
+    title: Annual boardings
+    units: thousand boardings
+    file: ${STARTER_SERIES}           # relative to this file
+    period_column: year
+    column: boardings
+    frequency: annual
+    notes: Invented figures for a fictional ferry service.
+
+output:
+  folder: out                        # relative to this file; the memo goes to out/<memo id>/
+  formats: [html, pdf, json, csv]
+  paper: A4
+`;
+
+export interface StarterFile {
+  /** Relative to the folder init writes into, with forward slashes. */
+  path: string;
+  content: string;
+}
+
+export function starterFiles(): StarterFile[] {
+  return [
+    { path: STARTER_CONFIG, content: CONFIG_TEXT },
+    { path: STARTER_SCHEMA, content: configSchemaText() },
+    { path: STARTER_SERIES, content: exampleSeriesCsv() },
+  ];
+}
