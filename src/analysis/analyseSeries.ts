@@ -65,7 +65,7 @@ export function analyseSeries(series: Series, options: AnalysisOptions = {}): An
   const evidence = collectEvidence(
     w,
     { deterministic: fitted.deterministic.fit, stochastic: fitted.stochastic.fit },
-    { significance: options.significance, kpssLagRule: options.kpssLagRule },
+    { significance: options.significance, kpssLagRule: options.kpssLagRule, periodOf: (index) => series.periods[index] ?? addPeriods(series.first, index) },
   );
   return {
     schema: RECORD_SCHEMA,

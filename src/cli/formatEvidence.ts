@@ -1,5 +1,6 @@
 // The evidence block of the terminal summary: unit-root tests, their reading, residual checks.
 import type { AnalysisRecord } from '../analysis/record.js';
+import { addPeriods } from '../data/period.js';
 import { formatPValue } from '../evidence/messages.js';
 import type { AdfResult, KpssResult } from '../evidence/types.js';
 
@@ -22,7 +23,28 @@ export function formatEvidence(record: AnalysisRecord): string[] {
     const flags = checks.findings.filter((f) => f.flagged).map((f) => f.check);
     lines.push(`  ${kind.padEnd(13)} ${ljung}; ${jb}; ${flags.length === 0 ? 'no flags' : `FLAGGED: ${flags.join(', ')}`}`);
   }
+  lines.push('');
+  lines.push('Trend stability:');
+  const stability = evidence.stability;
+  if (stability === null) {
+    lines.push('  not available');
+  } else {
+    for (const kind of ['deterministic', 'stochastic'] as const) {
+      const test = stability.break_test[kind];
+      const at = addPeriods(record.series.first, test.break_index);
+      lines.push(`  ${kind.padEnd(13)} sup-Wald ${test.stat.toFixed(2)} (${test.restrictions} restriction${test.restrictions > 1 ? 's' : ''}), ${test.p_bound}, most likely break from ${at}`);
+    }
+    const slope = stability.windows.deterministic;
+    const drift = stability.windows.stochastic;
+    lines.push(`  expanding windows (${slope.length}): slope ${range(slope.map((w) => w.slope))}, drift ${range(drift.map((w) => w.drift))}`);
+  }
   return lines;
+}
+
+function range(values: number[]): string {
+  const finite = values.filter(Number.isFinite);
+  if (finite.length === 0) return 'n/a';
+  return `${Math.min(...finite).toPrecision(3)} to ${Math.max(...finite).toPrecision(3)}`;
 }
 
 function kpss(result: KpssResult | null): string {

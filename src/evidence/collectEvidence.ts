@@ -3,6 +3,7 @@
 import { adfTest } from './adfTest.js';
 import { kpssTest } from './kpssTest.js';
 import { residualChecks, type ResidualChecks } from './residualChecks.js';
+import { breakTestSummary } from './messages.js';
 import { trendStability } from './trendStability.js';
 import { trendVerdict } from './trendVerdict.js';
 import type { AdfResult, KpssLagRule, KpssResult, StabilityRecord, TrendVerdictKind } from './types.js';
@@ -12,6 +13,8 @@ export interface EvidenceOptions {
   significance?: number;
   /** KPSS lag truncation: data-dependent (default) or ceil(12(n/100)^{1/4}). */
   kpssLagRule?: KpssLagRule;
+  /** Period label of observation `index` (0-based), so break dates read as periods. */
+  periodOf?: (index: number) => string;
 }
 
 export interface EvidenceRecord {
@@ -74,12 +77,19 @@ export function collectEvidence(
       deterministic: residualChecks(fits.deterministic.residuals, fits.deterministic.p, fits.deterministic.q, significance),
       stochastic: residualChecks(fits.stochastic.residuals, fits.stochastic.p, fits.stochastic.q, significance),
     },
-    stability: attempt('stability', () =>
-      trendStability(w, {
+    stability: attempt('stability', () => {
+      const stability = trendStability(w, {
         deterministic: { p: fits.deterministic.p, q: fits.deterministic.q },
         stochastic: { p: fits.stochastic.p, q: fits.stochastic.q },
-      }),
-    ),
+      });
+      const periodOf = options.periodOf;
+      if (periodOf === undefined) return stability;
+      for (const kind of ['deterministic', 'stochastic'] as const) {
+        const test = stability.break_test[kind];
+        test.summary = breakTestSummary(kind, test.p_bound, periodOf(test.break_index));
+      }
+      return stability;
+    }),
     unavailable,
   };
 }
