@@ -55,8 +55,8 @@ export interface OriginModel {
 }
 
 export interface OriginRecord {
-  /** Observations up to and including the origin (the training length of an expanding window). */
-  origin: number;
+  /** Observations up to and including the origin: the training length of an expanding window. */
+  length: number;
   /** Period label of the last training observation; null for a bare array of values. */
   period: string | null;
   /** Observations in the training window (smaller than `origin` for a sliding window). */

@@ -47,7 +47,7 @@ export function collectForecasts(
       moments[kind] = { mean: result.mean, se: settings.coefficientUncertainty ? result.seTotal : result.seProcess };
     });
     moments.naive = naiveForecast(data.w.subarray(start, end), horizon);
-    origins.push({ origin: end, period: label(end - 1), training_length: end - start, mase_scale: finiteOrNull(maseScale), models });
+    origins.push({ length: end, period: label(end - 1), training_length: end - start, mase_scale: finiteOrNull(maseScale), models });
     for (const method of FORECAST_METHODS) {
       for (let h = 1; h <= horizon; h++) {
         const target = end + h - 1;

@@ -10,7 +10,7 @@ export function formatBacktest(record: BacktestRecord): string[] {
   const { settings, origins } = record;
   const first = origins[0];
   const last = origins[origins.length - 1];
-  const span = first.period === null || last.period === null ? `observations ${first.origin} to ${last.origin}` : `${first.period} to ${last.period}`;
+  const span = first.period === null || last.period === null ? `observations ${first.length} to ${last.length}` : `${first.period} to ${last.period}`;
   const lines = [
     `Backtest: ${settings.origins} origins (${span}), horizons 1 to ${settings.horizon}, ${settings.window} window, step ${settings.step}`,
     `  ${describeRefit(settings.refit)}; training windows of at least ${settings.min_training_length} observations`,

@@ -44,7 +44,7 @@ describe('Lake Huron backtest with orders fixed (statsmodels 0.13.5 reference)',
   });
 
   it('scores the same origins and actuals', () => {
-    expect(record.origins.map((o) => o.origin)).toEqual(Array.from({ length: 20 }, (_, i) => 74 + i));
+    expect(record.origins.map((o) => o.length)).toEqual(Array.from({ length: 20 }, (_, i) => 74 + i));
     for (const row of reference.rows) {
       const ours = record.forecasts.find((f) => f.origin === row.origin_length && f.model === 'deterministic' && f.h === row.h);
       expect(ours?.actual).toBe(row.actual);
@@ -69,7 +69,7 @@ describe('Lake Huron backtest with orders fixed (statsmodels 0.13.5 reference)',
       for (const kind of KINDS) {
         const redone = restart.rows.find((r) => r.origin_length === row.origin_length && r.model === kind);
         const expected = redone === undefined ? { mean: row[kind].mean, loglik: row[kind].loglik } : { mean: redone.mean[row.h - 1], loglik: redone.loglik };
-        const origin = record.origins.find((o) => o.origin === row.origin_length);
+        const origin = record.origins.find((o) => o.length === row.origin_length);
         const ours = record.forecasts.find((f) => f.origin === row.origin_length && f.model === kind && f.h === row.h);
         const loglik = origin?.models[kind].loglik ?? Number.NaN;
         expect(Math.abs(loglik - expected.loglik)).toBeLessThan(1e-3);
@@ -82,7 +82,7 @@ describe('Lake Huron backtest with orders fixed (statsmodels 0.13.5 reference)',
 
   it('reaches at least the restarted optimum where the default reference fit stopped short', () => {
     for (const row of restart.rows) {
-      const ours = record.origins.find((o) => o.origin === row.origin_length)?.models[row.model].loglik ?? Number.NaN;
+      const ours = record.origins.find((o) => o.length === row.origin_length)?.models[row.model].loglik ?? Number.NaN;
       expect(row.loglik).toBeGreaterThan(row.loglik_default);
       expect(ours).toBeGreaterThan(row.loglik - 1e-5);
     }

@@ -25,7 +25,7 @@ describe('runBacktest', () => {
     const inline = await runBacktest(series, { ...options, threads: 1 });
     const pooled = await runBacktest(series, { ...options, threads: 2 });
     expect(pooled).toStrictEqual(inline);
-    expect(inline.origins.map((o) => [o.origin, o.period])).toEqual([
+    expect(inline.origins.map((o) => [o.length, o.period])).toEqual([
       [54, '1924'],
       [55, '1925'],
       [56, '1926'],
@@ -39,7 +39,7 @@ describe('runBacktest', () => {
     const changed = values.map((v, i) => (i >= 45 ? v * 1.5 + 200 : v));
     const before = await runBacktest(values, options);
     const after = await runBacktest(changed, options);
-    expect(before.origins[0].origin).toBe(45);
+    expect(before.origins[0].length).toBe(45);
     expect(after.origins[0]).toStrictEqual(before.origins[0]);
     expect(forecastsAt(after, 45)).toStrictEqual(forecastsAt(before, 45));
     // The next origin trains on a changed value, so its forecasts must move.
@@ -51,7 +51,7 @@ describe('runBacktest', () => {
     // minimum is max(20, 21) = 21, and n = 30, B = 3 leaves 30 − 3 − 21 + 1 = 7 origins.
     const record = await runBacktest(firstValues(30), { maxP: 2, maxQ: 2, horizon: 3, threads: 1 });
     expect(record.settings).toMatchObject({ origins: 7, requested_origins: 20, min_training_length: 21, orders: null });
-    expect(record.origins.map((o) => o.origin)).toEqual([21, 22, 23, 24, 25, 26, 27]);
+    expect(record.origins.map((o) => o.length)).toEqual([21, 22, 23, 24, 25, 26, 27]);
     expect(record.notes).toEqual([backtestNotes.originsCut(20, 7, 21)]);
     expect(record.per_horizon.naive.map((row) => row.n)).toEqual([7, 7, 7]);
   });
