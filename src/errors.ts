@@ -403,7 +403,7 @@ function wrongTypeHint(expected: ExpectedValue, found: FoundValue): string {
   if ((expected.kind === 'text' || expected.kind === 'choice') && (found.kind === 'number' || found.kind === 'boolean')) {
     return `put the value in quotes if it is meant as text, or write ${describeExpected(expected)}`;
   }
-  if (found.kind === 'empty') return `write ${describeExpected(expected)} after the colon, or remove the key`;
+  if (found.kind === 'empty') return `give it ${describeExpected(expected)}, or remove it`;
   return `write ${describeExpected(expected)}`;
 }
 

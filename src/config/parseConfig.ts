@@ -22,10 +22,13 @@ function byPosition(a: InputProblem, b: InputProblem): number {
  */
 export function parseConfig(text: string, file: string, baseDir: string): RunPlan {
   const tree = readYamlTree(text, file);
-  if (tree.root === undefined) throw new InputError(tree.problems.length > 0 ? tree.problems : [configMessages.empty(file)]);
+  const { root } = tree;
+  if (root === undefined || (root.kind === 'scalar' && root.value === null)) {
+    throw new InputError(tree.problems.length > 0 ? tree.problems : [configMessages.empty(file)]);
+  }
   const v: Validation = { file, problems: [...tree.problems], positions: new Map() };
   // The validator guarantees this shape: valid keys present, failed ones absent.
-  const loose = validateNode(CONFIG_SPEC, tree.root, '', v) as Loose<ConfigDocument> | undefined;
+  const loose = validateNode(CONFIG_SPEC, root, '', v) as Loose<ConfigDocument> | undefined;
   if (loose !== undefined) checkConfigRules(loose, v);
   if (v.problems.length > 0 || loose === undefined) throw new InputError(limitProblems([...v.problems].sort(byPosition)));
   return buildRunPlan(loose as ConfigDocument, {

@@ -45,7 +45,7 @@ describe('wrong types', () => {
   });
 
   it('reports a key without a value at the key', () => {
-    expect(onlyProblem(seriesWith('title:')).text).toBe('memo.yaml:7:5: series[0].title: has no value; write text after the colon, or remove the key');
+    expect(onlyProblem(seriesWith('title:')).text).toBe('memo.yaml:7:5: series[0].title: has no value; give it text, or remove it');
   });
 
   it('refuses a list where a mapping belongs, and true where text belongs', () => {

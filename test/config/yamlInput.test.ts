@@ -39,8 +39,13 @@ describe('YAML syntax', () => {
     expect(onlyProblem([...BASE, '    file: data/other.csv']).text).toBe('memo.yaml:7:5: series[0].file: key already given on line 6; keep one of the two');
   });
 
+  it('refuses a key that is not a plain name', () => {
+    expect(onlyProblem([...BASE, '? [a, b]', ': 1'])).toMatchObject({ where: '7:3 undefined', code: 'config.key-type' });
+  });
+
   it('refuses a document that is not a mapping, and an empty one', () => {
     expect(onlyProblem(['- memo']).text).toMatch(/^memo\.yaml:1:1: expected a mapping of keys such as \{memo: /);
+    expect(problemsOf(() => parseConfig('~\n', 'memo.yaml', '/')).map((p) => p.code)).toEqual(['config.empty']);
     expect(problemsOf(() => parseConfig('# only a comment\n', 'memo.yaml', '/')).map(formatProblem)).toEqual([
       'memo.yaml: holds no settings; write the memo and series sections; trendbrief init writes a starter config',
     ]);
