@@ -5,10 +5,10 @@
 
 export { RECOMMENDATION_RULES } from './builtInSettings.js';
 export { CONFIG_SPEC, OUTPUT_FORMATS, type ConfigDocument } from './configSpec.js';
-export { listSettings } from './listSettings.js';
 export { loadConfig, MAX_CONFIG_FILE_BYTES } from './loadConfig.js';
 export { parseConfig } from './parseConfig.js';
 export { MAX_ALIAS_COUNT } from './readYamlTree.js';
+export { listSettings } from './runPlan.js';
 export type {
   BacktestRefit,
   BacktestWindow,

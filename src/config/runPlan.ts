@@ -65,6 +65,12 @@ export interface SeriesSettings {
   missing: Setting<'error' | 'allow'>;
 }
 
+/** A series' settings as one flat list in config order, for the memo's assumptions register. */
+export function listSettings(settings: SeriesSettings): Setting<unknown>[] {
+  const { backtest, recommendation, missing, ...modelling } = settings;
+  return [...Object.values(modelling), ...Object.values(backtest), ...Object.values(recommendation), missing];
+}
+
 export interface SeriesPlan {
   id: string;
   /** The configured title, or the id. */

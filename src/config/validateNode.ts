@@ -47,7 +47,7 @@ export function validateNode(spec: KeySpec, node: YamlNode, field: string, v: Va
 }
 
 /** The spec's expectation in the terms messages use. */
-export function expectedOf(spec: KeySpec): ExpectedValue {
+function expectedOf(spec: KeySpec): ExpectedValue {
   switch (spec.kind) {
     case 'text':
       return { kind: 'text' };

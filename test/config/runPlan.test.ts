@@ -2,8 +2,8 @@
 // paths resolved against the config's folder, and the options handed to the analysis.
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { listSettings } from '../../src/config/listSettings.js';
 import { loadConfig } from '../../src/config/loadConfig.js';
+import { listSettings } from '../../src/config/runPlan.js';
 import { toAnalysisOptions } from '../../src/config/toAnalysisOptions.js';
 import { BASE, BASE_DIR, planOf } from './configText.js';
 
