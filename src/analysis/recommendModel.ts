@@ -11,9 +11,10 @@
 // Alternative rule, "lowest-interval-score": the model with the lower mean 95% interval score
 // over the upper-half horizons (the stochastic trend on a tie or without a backtest).
 // A config may instead fix the model with a written justification.
+import { RECOMMENDATION_RULES } from '../config/builtInSettings.js';
 import type { TrendModelKind } from '../models/trendModels.js';
 
-export const RECOMMENDATION_RULES = ['prefer-stochastic', 'lowest-interval-score'] as const;
+export { RECOMMENDATION_RULES };
 export type RecommendationRule = (typeof RECOMMENDATION_RULES)[number];
 
 export interface RecommendationRecord {

@@ -5,7 +5,7 @@
 // that knows the data chooses them, and the plan records them as undefined.
 
 /** Names of the rules that can pick the recommended model; the first is the default. */
-export const RECOMMENDATION_RULES = ['accuracy-then-evidence'] as const;
+export const RECOMMENDATION_RULES = ['prefer-stochastic', 'lowest-interval-score'] as const;
 
 export const BUILT_IN_SETTINGS = {
   transform: 'none',
@@ -15,7 +15,7 @@ export const BUILT_IN_SETTINGS = {
   max_p: 3,
   max_q: 3,
   significance: 0.05,
-  backtest: { origins: 10, refit: 'reselect', window: 'expanding' },
+  backtest: { origins: 20, refit: 'reselect', window: 'expanding' },
   recommendation: { rule: RECOMMENDATION_RULES[0], significance: 0.05 },
   missing: 'error',
 } as const;

@@ -22,7 +22,7 @@ const transform = shapes(
 const backtest = object(
   'Rolling-origin evaluation of both models.',
   {
-    origins: whole('Number of forecast origins, the latest ones in the series.', 1, 200, { default: BUILT_IN.backtest.origins }),
+    origins: whole('Number of forecast origins, the latest ones in the series; fewer when the series is too short for them.', 1, 200, { default: BUILT_IN.backtest.origins }),
     horizon: whole('Steps forecast from each origin.', 1, 100, { defaultText: 'the forecast horizon, at most 100' }),
     refit: choice(
       'At each origin: search the orders again (reselect), re-estimate the orders chosen on the full series (reestimate), or keep the full-series fit (fixed).',
@@ -43,7 +43,7 @@ const recommendation = object(
   'How the memo picks the model it recommends.',
   {
     rule: choice(
-      "The rule that picks the model. 'accuracy-then-evidence': the model with clearly better backtest accuracy, otherwise the one the unit-root evidence favours.",
+      "The rule that picks the model. 'prefer-stochastic': the stochastic trend unless the deterministic one has better backtest interval scores at the longer horizons, a significant comparison test, and no unit-root evidence against it. 'lowest-interval-score': the model with the lower average 95% interval score at the longer horizons.",
       RECOMMENDATION_RULES,
       { default: BUILT_IN.recommendation.rule },
     ),

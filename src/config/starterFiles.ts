@@ -37,7 +37,7 @@ memo:
 #   horizon (10 annual, 12 quarterly, 24 monthly), transform (none | log | {box_cox: 0.5}),
 #   levels ([80, 95]), coefficient_uncertainty (true), point (median | mean),
 #   max_p and max_q (3), significance (0.05), missing (error | allow),
-#   backtest: {origins (10), horizon, refit (reselect | reestimate | fixed),
+#   backtest: {origins (20), horizon, refit (reselect | reestimate | fixed),
 #              window (expanding | sliding), min_train}
 #   recommendation: {rule, significance (0.05), model (deterministic | stochastic),
 #                    justification (required when model is given)}
