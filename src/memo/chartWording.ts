@@ -12,7 +12,7 @@ export const chartWording = {
   },
   forecast: {
     title: (series: string, end: string) => `${series}: forecasts to ${end}`,
-    subtitle: 'Solid line: observed. Dashed line: point forecast. Shading: 80% (darker) and 95% prediction intervals.',
+    subtitle: ['Solid line: observed. Dashed line: point forecast.', 'Shading: 80% (darker) and 95% prediction intervals.'],
     panel: (model: ModelKind) => MODEL_NAME[model],
     description: (a: { series: string; recent: number; end: string; models: { model: ModelKind; point: string; low: string; high: string }[] }) =>
       `Two panels on one vertical scale, one per model. Each shows the last ${a.recent} observations of ${a.series}, then the model's point forecast to ${a.end} with its 80% and 95% prediction intervals. ` +
@@ -46,7 +46,7 @@ export const chartWording = {
   },
   stability: {
     title: (series: string) => `${series}: trend estimated on growing stretches of history`,
-    subtitle: 'Line: estimate from the first observation to each date. Shading: \u00b12 standard errors. Dashed line: full-history estimate.',
+    subtitle: ['Line: estimate from the first observation to each date; shading: \u00b12 standard errors.', 'Dashed line: the estimate from the full history.'],
     panel: { deterministic: 'Slope of the trend line, per period', stochastic: 'Drift, average change per period' } as Record<ModelKind, string>,
     description: (a: { first: string; last: string; windows: number; slope: string; drift: string }) =>
       `Two panels of estimates on ${a.windows} expanding windows ending from ${a.first} to ${a.last}, each with a band of two standard errors. ` +

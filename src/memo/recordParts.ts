@@ -1,7 +1,9 @@
 // The parts of an AnalysisRecord that the memo reads but that other stages add: the
 // rolling-origin backtest, trend stability and the recommendation. Shapes follow the record
-// contract; each is optional here so a record without it still renders, with a "not run" note.
+// contract, with every number allowed to be null as it may be in the JSON; each part may be
+// missing so a record without it still renders, with a "not run" note.
 import type { AnalysisRecord, JsonNumber } from '../analysis/record.js';
+import type { EvidenceRecord } from '../evidence/collectEvidence.js';
 
 /** Values keyed by interval level in percent, e.g. { "80": 0.81, "95": 0.94 }. */
 export type ByLevel = Record<string, JsonNumber>;
@@ -98,9 +100,9 @@ export interface RecommendationPart {
   reasons: string[];
 }
 
-/** An AnalysisRecord as the memo reads it: the later parts may be missing. */
+/** An AnalysisRecord as the memo reads it: the later parts may be missing (stability is null when it could not be computed). */
 export type MemoRecord = Omit<AnalysisRecord, 'evidence'> & {
-  evidence: AnalysisRecord['evidence'] & { stability?: StabilityPart };
+  evidence: Omit<EvidenceRecord, 'stability'> & { stability?: StabilityPart | null };
   backtest?: BacktestPart;
   recommendation?: RecommendationPart;
 };

@@ -53,6 +53,11 @@ export const TRANSFORM_NAME = {
   'box-cox': 'Box-Cox',
 } as const;
 
+/** The modelling scale in words: "natural log", "Box-Cox (λ = 0.5)". */
+export function scaleName(transform: { kind: keyof typeof TRANSFORM_NAME; lambda?: number }): string {
+  return transform.kind === 'box-cox' ? `Box-Cox (\u03bb = ${transform.lambda ?? 'n/a'})` : TRANSFORM_NAME[transform.kind];
+}
+
 export const DECISION_NAME: Record<SignOffDecision, string> = {
   approved: 'Approved',
   'approved-with-changes': 'Approved with changes',
@@ -72,7 +77,6 @@ export const HEADINGS = {
   summary: 'Summary for the client',
   history: 'History',
   forecast: 'Forecast',
-  forecastTable: 'Forecasts by period',
   widthRatio: 'How much narrower the deterministic intervals are',
   backtest: 'Backtest accuracy',
   evidence: 'What the data say about the trend',
@@ -121,7 +125,7 @@ export const LABELS = {
   command: 'Command',
   runDate: 'Run date',
   config: 'Configuration file',
-  data: 'Data files',
+  dataFile: 'Data file',
   recordSource: 'Series source',
   sha256: 'SHA-256',
   file: 'File',
@@ -140,6 +144,27 @@ export const LABELS = {
   lags: 'Lags',
   observations: 'Obs.',
 } as const;
+
+/** Short fixed text the templates place: table captions, column heads, small labels. */
+export const TEMPLATE_TEXT = {
+  memoKind: 'Forecast memo',
+  recommendedMarker: 'recommended',
+  assumes: 'It assumes',
+  lossNames: { squared_error: 'Squared error', interval_score_95: '95% interval score' },
+  noAssumptions: 'No assumptions were recorded for this series.',
+  forecastCaption: (units: string) => (units === '' ? 'Forecasts by period' : `Forecasts by period (${units})`),
+  pointCaption: (units: string) => (units === '' ? 'Point accuracy by horizon' : `Point accuracy by horizon (RMSE in ${units})`),
+  intervalCaption: (units: string) =>
+    units === '' ? 'Interval accuracy by horizon' : `Interval accuracy by horizon (width, score and CRPS in ${units})`,
+  comparisonCaption: 'Comparison tests by horizon',
+  pointColumns: ['RMSE', 'MAPE', 'MASE'],
+  intervalColumns: ['80% cover', '95% cover', '95% width', '95% score', 'CRPS'],
+  accuracyNote:
+    'RMSE: root mean squared error. MAPE: mean absolute percentage error. MASE: mean absolute error divided by the one-step error of the no-change forecast. ' +
+    'Cover: share of outcomes inside the interval. Score: interval score, the width plus a penalty for outcomes outside it (lower is better). CRPS: continuous ranked probability score (lower is better).',
+} as const;
+
+export const PAGE_FOOTER = { page: 'Page', of: 'of' } as const;
 
 /** The standing cautions every memo carries, in this order. */
 export const CAUTIONS = [

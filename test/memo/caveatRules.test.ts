@@ -12,7 +12,8 @@ import { residualPattern } from '../../src/memo/caveats/residualPattern.js';
 import { trendBreak } from '../../src/memo/caveats/trendBreak.js';
 import { unitRootEvidence } from '../../src/memo/caveats/unitRootEvidence.js';
 import type { MemoRecord } from '../../src/memo/recordParts.js';
-import { handMadeBacktest, handMadeRecommendation, handMadeStability } from './handMadeParts.js';
+import { formatSignificant } from '../../src/memo/format/formatNumber.js';
+import { handMadeBacktest, handMadeRecommendation } from './handMadeParts.js';
 import { bareRecord, fullRecord } from './sampleInput.js';
 
 /** Sets the last forecast's 95% intervals of both models around their points. */
@@ -64,13 +65,15 @@ describe('narrow-line-intervals', () => {
 });
 
 describe('unit-root-evidence', () => {
-  it("fires on the 'stochastic' reading of US real GDP, high when the deterministic model is recommended", () => {
+  it("fires on the 'stochastic' reading of US real GDP: high against a deterministic recommendation, low for a stochastic one", () => {
     const record = bareRecord('gdp');
     expect(record.evidence.reading.verdict).toBe('stochastic');
+    expect(unitRootEvidence.evaluate({ record })?.severity).toBe('medium');
+    record.recommendation = handMadeRecommendation('deterministic');
     expect(unitRootEvidence.evaluate({ record })?.severity).toBe('high');
     record.recommendation = handMadeRecommendation('stochastic');
     const caveat = unitRootEvidence.evaluate({ record });
-    expect(caveat?.severity).toBe('medium');
+    expect(caveat?.severity).toBe('low');
     expect(caveat?.numbers.adf_p).toBe(record.evidence.adf.trend?.p_value);
     expect(caveat?.text).toMatch(/KPSS p (below|=) 0\.0\d+/);
     expect(caveat?.text).toContain('5% level');
@@ -142,27 +145,38 @@ describe('back-transformed', () => {
 });
 
 describe('trend-break', () => {
-  it('fires when the deterministic break test rejects at 5%, naming the period of the break', () => {
+  it('fires on the Nile, whose deterministic break test rejects at 5% from 1899', () => {
     const record = bareRecord('nile');
-    record.evidence.stability = handMadeStability(record, { deterministic: true, stochastic: false });
+    const test = record.evidence.stability?.break_test.deterministic;
+    if (test === undefined) throw new Error('the Nile record lacks its break test');
+    expect(test.reject['5']).toBe(true); // analyseSeries on nile.csv (test/evidence/nileBreak.test.ts checks the date)
     const caveat = trendBreak.evaluate({ record });
     expect(caveat?.severity).toBe('medium');
-    // break_index 60 is the 61st observation, 1871 + 60 = 1931 (our spec: 0-based position).
-    expect(caveat?.numbers.deterministic_from).toBe('1931');
-    expect(caveat?.text).toContain('level or slope of the trend line from 1931 (statistic 16.1 against a 5% critical value of 11.9)');
+    // break_index 28 is the 29th observation, 1871 + 28 = 1899 (record contract: 0-based position).
+    expect(test.break_index).toBe(28);
+    expect(caveat?.numbers.deterministic_from).toBe('1899');
+    expect(caveat?.text).toContain(
+      `level or slope of the trend line from 1899 (statistic ${formatSignificant(test.stat, 3)} against a 5% critical value of ${formatSignificant(test.critical['5'], 3)})`,
+    );
+    expect(caveat?.text).not.toContain('drift');
     record.recommendation = handMadeRecommendation('deterministic');
     expect(trendBreak.evaluate({ record })?.severity).toBe('high');
+    record.recommendation = handMadeRecommendation('stochastic');
+    expect(trendBreak.evaluate({ record })?.severity).toBe('low');
   });
-  it('is silent when neither test rejects at 5%, and when stability was not run', () => {
-    const record = bareRecord('nile');
+  it('is silent on Lake Huron, where neither test rejects, and when stability could not be computed', () => {
+    const record = bareRecord('lakeHuron');
+    expect(record.evidence.stability?.break_test.deterministic.reject['5']).toBe(false);
+    expect(record.evidence.stability?.break_test.stochastic.reject['5']).toBe(false);
     expect(trendBreak.evaluate({ record })).toBeNull();
-    record.evidence.stability = handMadeStability(record, { deterministic: false, stochastic: false });
-    expect(trendBreak.evaluate({ record })).toBeNull();
+    const nile = bareRecord('nile');
+    nile.evidence.stability = null;
+    expect(trendBreak.evaluate({ record: nile })).toBeNull();
   });
 });
 
 describe('fixed-line-extrapolation', () => {
-  it('fires on every record, whatever the numbers, high when the deterministic model is recommended', () => {
+  it('fires on every record, whatever the numbers: high for a deterministic recommendation, low for a stochastic one', () => {
     const plain = bareRecord('lakeHuron');
     const caveat = fixedLineExtrapolation.evaluate({ record: plain });
     expect(caveat?.severity).toBe('medium');
@@ -170,6 +184,7 @@ describe('fixed-line-extrapolation', () => {
     const recommended = fullRecord('lakeHuron');
     expect(recommended.recommendation?.model).toBe('deterministic');
     expect(fixedLineExtrapolation.evaluate({ record: recommended })?.severity).toBe('high');
+    expect(fixedLineExtrapolation.evaluate({ record: fullRecord('nile') })?.severity).toBe('low');
     const short = bareRecord('gdp');
     short.settings.horizon = 1;
     expect(fixedLineExtrapolation.evaluate({ record: short })?.text).toContain('1 quarter beyond the data');
@@ -181,10 +196,11 @@ describe('collectCaveats', () => {
     const record = bareRecord('gdp');
     record.recommendation = handMadeRecommendation('stochastic');
     const ids = collectCaveats({ record }).map((c) => c.id);
-    // gdp: backtest missing (high); unit-root reading 'stochastic' (medium, stochastic recommended);
-    // the standing caution (medium, after unit-root in the table); log scale (low). Ljung-Box,
-    // horizon share 12/203 and width ratio 0.93 stay silent.
-    expect(ids).toEqual(['backtest-thin', 'unit-root-evidence', 'fixed-line-extrapolation', 'back-transformed']);
+    // gdp with the stochastic model recommended: backtest missing (high); then, all low and in
+    // table order, the break in the deterministic line, the 'stochastic' unit-root reading, the
+    // standing caution and the log scale. Ljung-Box, horizon share 12/203 and width ratio 0.93
+    // stay silent.
+    expect(ids).toEqual(['backtest-thin', 'trend-break', 'unit-root-evidence', 'fixed-line-extrapolation', 'back-transformed']);
   });
   it('has one rule per id', () => {
     expect(new Set(CAVEAT_RULES.map((r) => r.id)).size).toBe(CAVEAT_RULES.length);

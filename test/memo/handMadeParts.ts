@@ -1,16 +1,14 @@
-// Hand-made backtest, stability and recommendation parts for test records, shaped like the
-// record contract. Their numbers are invented but scaled from the record they are attached to
+// Hand-made backtest and recommendation parts for test records, shaped like the record
+// contract. Their numbers are invented but scaled from the record they are attached to
 // (our spec: plausible magnitudes, not computed statistics), so the memo has realistic input.
 import { addPeriods } from '../../src/data/period.js';
 import type {
   BacktestComparison,
   BacktestHorizonRow,
   BacktestPart,
-  BreakTestPart,
   MemoRecord,
   ModelKind,
   RecommendationPart,
-  StabilityPart,
 } from '../../src/memo/recordParts.js';
 
 /** z for a 95% interval, 1.959964 (scipy 1.10.1 norm.ppf(0.975)). */
@@ -64,51 +62,6 @@ export function handMadeBacktest(record: MemoRecord, origins = 14): BacktestPart
     },
     comparison,
     notes: ['Horizons 9 and 10 have too few forecast errors for a comparison test.'],
-  };
-}
-
-function breakTest(kind: ModelKind, breakIndex: number, rejects: boolean): BreakTestPart {
-  const critical = kind === 'deterministic' ? { '10': 10.2, '5': 11.9, '1': 15.6 } : { '10': 7.1, '5': 8.7, '1': 12.2 };
-  const stat = rejects ? critical['5'] * 1.35 : critical['10'] * 0.6;
-  return {
-    method: `sup-Wald for a break in the ${kind === 'deterministic' ? 'level and slope' : 'drift'}, 15% trimming`,
-    source: 'hand-made for tests',
-    stat,
-    restrictions: kind === 'deterministic' ? 2 : 1,
-    trimming: 0.15,
-    break_index: breakIndex,
-    critical,
-    reject: { '10': stat > critical['10'], '5': stat > critical['5'], '1': stat > critical['1'] },
-    p_bound: rejects ? '0.01 < p < 0.05' : 'p > 0.10',
-  };
-}
-
-export function handMadeStability(record: MemoRecord, breaks: { deterministic: boolean; stochastic: boolean }): StabilityPart {
-  const n = record.series.n;
-  const minWindow = Math.max(12, Math.round(n * 0.3));
-  const step = Math.max(1, Math.round(n / 20));
-  const ends: number[] = [];
-  for (let end = minWindow; end < n; end += step) ends.push(end);
-  ends.push(n);
-  const slope = record.models.deterministic.coefficients.slope;
-  const drift = record.models.stochastic.coefficients.drift;
-  const slopeSe = record.models.deterministic.stderr.slope;
-  const driftSe = record.models.stochastic.stderr.drift;
-  if (typeof slope !== 'number' || typeof drift !== 'number' || typeof slopeSe !== 'number' || typeof driftSe !== 'number') {
-    throw new Error('handMadeStability needs a record with slope and drift estimates');
-  }
-  const wobble = (end: number) => Math.sin(end / 7) * (n / end);
-  return {
-    windows: {
-      deterministic: ends.map((end) => ({ end, slope: slope + slopeSe * wobble(end), se: slopeSe * Math.pow(n / end, 1.5) })),
-      stochastic: ends.map((end) => ({ end, drift: drift + driftSe * 0.8 * wobble(end), se: driftSe * Math.sqrt(n / end) })),
-      min_window: minWindow,
-      step,
-    },
-    break_test: {
-      deterministic: breakTest('deterministic', Math.round(n * 0.6), breaks.deterministic),
-      stochastic: breakTest('stochastic', Math.round(n * 0.45), breaks.stochastic),
-    },
   };
 }
 

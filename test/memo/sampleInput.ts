@@ -1,11 +1,12 @@
 // A realistic MemoInput for the memo tests: three open datasets from test/fixtures/ analysed
-// by analyseSeries (provenance in test/fixtures/README.md), each with hand-made backtest,
-// stability and recommendation parts, for an invented consultancy and client.
+// by analyseSeries (provenance in test/fixtures/README.md), evidence and trend stability
+// included, each with hand-made backtest and recommendation parts, for an invented
+// consultancy and client.
 import { analyseSeries, type AnalysisOptions } from '../../src/analysis/analyseSeries.js';
 import { readSeriesCsv } from '../../src/data/readSeriesCsv.js';
 import type { MemoInput, MemoSeries } from '../../src/memo/memoInput.js';
 import type { MemoRecord } from '../../src/memo/recordParts.js';
-import { handMadeBacktest, handMadeRecommendation, handMadeStability } from './handMadeParts.js';
+import { handMadeBacktest, handMadeRecommendation } from './handMadeParts.js';
 
 interface FixtureSpec {
   file: string;
@@ -39,16 +40,15 @@ function analysedFixture(name: FixtureName): { record: MemoRecord; history: Memo
   return structuredClone({ record, history });
 }
 
-/** A bare record of the fixture, without the backtest, stability and recommendation parts. */
+/** The fixture's record as analyseSeries writes it, without the backtest and recommendation parts. */
 export function bareRecord(name: FixtureName): MemoRecord {
   return analysedFixture(name).record;
 }
 
-/** The fixture's record with all three later parts attached. */
+/** The fixture's record with the backtest and recommendation attached. */
 export function fullRecord(name: FixtureName): MemoRecord {
   const record = bareRecord(name);
   record.backtest = handMadeBacktest(record);
-  record.evidence.stability = handMadeStability(record, { deterministic: name === 'nile', stochastic: false });
   record.recommendation = handMadeRecommendation(name === 'lakeHuron' ? 'deterministic' : 'stochastic');
   return record;
 }
@@ -59,7 +59,7 @@ export function sampleSeries(name: FixtureName): MemoSeries {
     record: fullRecord(name),
     history,
     units: FIXTURES[name].units,
-    notes: name === 'nile' ? 'Flow volumes as published; the 1902 dam is part of the history.' : undefined,
+    notes: name === 'nile' ? 'Flow volumes as published; the first Aswan dam (completed 1902) is part of the history.' : undefined,
     assumptions: [
       { choice: 'Forecast horizon', value: String(analysedFixture(name).record.settings.horizon), basis: 'Planning cycle agreed with the client', set_by: name === 'gdp' ? 'config' : 'default' },
       { choice: 'Interval levels', value: '80%, 95%', basis: 'Tool default', set_by: 'default' },

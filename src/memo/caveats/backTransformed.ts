@@ -3,7 +3,7 @@
 // nothing is wrong, but a reader should not expect a symmetric range.
 import { formatNumber, withUnits } from '../format/formatNumber.js';
 import { seriesDecimals } from '../format/seriesDecimals.js';
-import { TRANSFORM_NAME } from '../wording.js';
+import { scaleName } from '../wording.js';
 import type { Caveat, CaveatRule } from './caveat.js';
 import { caveatWording } from './caveatWording.js';
 
@@ -22,12 +22,11 @@ export const backTransformed: CaveatRule = {
     const above = interval[1] - last.point;
     const below = last.point - interval[0];
     const decimals = seriesDecimals(record);
-    const scale = transform.kind === 'box-cox' ? `Box-Cox (\u03bb = ${transform.lambda ?? 'n/a'})` : TRANSFORM_NAME[transform.kind];
     return {
       id: ID,
       severity: 'low',
       text: caveatWording.backTransformed({
-        scale,
+        scale: scaleName(transform),
         model,
         period: last.period,
         above: withUnits(formatNumber(above, decimals), units),

@@ -1,11 +1,18 @@
 // Always fires: extending a fitted line to the end of the horizon is an assumption the data
 // cannot check, so every memo says so in plain words whatever the numbers. High when the
-// deterministic model is recommended (the memo leans on the assumption), medium otherwise.
+// deterministic model is recommended (the memo leans on the assumption), medium when nothing
+// is recommended, low when the stochastic model is (its forecasts do not rest on the line).
 import { countPeriods } from '../wording.js';
-import type { Caveat, CaveatRule } from './caveat.js';
+import type { ModelKind } from '../recordParts.js';
+import type { Caveat, CaveatRule, CaveatSeverity } from './caveat.js';
 import { caveatWording } from './caveatWording.js';
 
 const ID = 'fixed-line-extrapolation';
+
+function severityFor(recommended: ModelKind | undefined): CaveatSeverity {
+  if (recommended === 'deterministic') return 'high';
+  return recommended === undefined ? 'medium' : 'low';
+}
 
 export const fixedLineExtrapolation: CaveatRule = {
   id: ID,
@@ -16,7 +23,7 @@ export const fixedLineExtrapolation: CaveatRule = {
     const horizon = record.settings.horizon;
     return {
       id: ID,
-      severity: record.recommendation?.model === 'deterministic' ? 'high' : 'medium',
+      severity: severityFor(record.recommendation?.model),
       text: caveatWording.fixedLineExtrapolation({ first, last, end, horizon: countPeriods(horizon, frequency) }),
       numbers: { first, last, end, horizon },
     };

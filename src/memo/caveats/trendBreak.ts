@@ -1,6 +1,6 @@
 // Fires when the break test rejects "no break" at 5% for either model. High when the broken
-// model is the recommended one. Silent when the stability checks were not run (the stability
-// section says so).
+// model is the recommended one, medium when nothing is recommended, low when only the other
+// model is broken. Silent when the stability checks were not run (the stability section says so).
 import { addPeriods } from '../../data/period.js';
 import { formatSignificant } from '../format/formatNumber.js';
 import type { ModelKind } from '../recordParts.js';
@@ -29,7 +29,7 @@ export const trendBreak: CaveatRule = {
     for (const model of broken) numbers[`${model}_stat`] = tests[model].stat ?? 'n/a';
     return {
       id: ID,
-      severity: broken.some((model) => model === recommended) ? 'high' : 'medium',
+      severity: recommended === undefined ? 'medium' : broken.includes(recommended) ? 'high' : 'low',
       text: caveatWording.trendBreak({ breaks }),
       numbers,
     };

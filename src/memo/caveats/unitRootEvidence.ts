@@ -1,6 +1,7 @@
 // Fires when the unit-root reading is 'stochastic': the tests reject a steady line and cannot
-// reject lasting shocks. High when the memo nonetheless recommends the deterministic model
-// (or recommends nothing), medium when it recommends the stochastic one.
+// reject lasting shocks. High when the memo nonetheless recommends the deterministic model,
+// medium when it recommends nothing, low when it recommends the stochastic one (the evidence
+// then supports the choice; the note stays for the reviewer).
 import { formatPValue } from '../../evidence/messages.js';
 import { formatPercent } from '../format/formatNumber.js';
 import type { Caveat, CaveatRule } from './caveat.js';
@@ -17,7 +18,7 @@ export const unitRootEvidence: CaveatRule = {
     const recommended = record.recommendation?.model ?? null;
     return {
       id: ID,
-      severity: recommended === 'stochastic' ? 'medium' : 'high',
+      severity: recommended === 'deterministic' ? 'high' : recommended === null ? 'medium' : 'low',
       text: caveatWording.unitRootEvidence({
         kpss: `KPSS ${formatPValue(kpss.trend)}`,
         adf: `ADF ${formatPValue(adf.trend)}`,

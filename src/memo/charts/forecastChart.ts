@@ -80,7 +80,7 @@ export function forecastChart({ series, units, decimals, record, history }: Fore
   const end = record.forecasts.deterministic.at(-1)?.period ?? record.series.last;
   const format = (v: number) => withUnits(formatNumber(v, decimals), units);
   return {
-    title: { text: chartWording.forecast.title(series, end), subtitle: chartWording.forecast.subtitle },
+    title: { text: chartWording.forecast.title(series, end), subtitle: [...chartWording.forecast.subtitle] },
     description: chartWording.forecast.description({
       series,
       recent: recent.length,

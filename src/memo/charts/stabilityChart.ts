@@ -58,7 +58,7 @@ export function stabilityChart({ series, record, stability }: { series: string; 
   const drift = record.models.stochastic.coefficients.drift;
   const full = { deterministic: typeof slope === 'number' ? slope : undefined, stochastic: typeof drift === 'number' ? drift : undefined };
   return {
-    title: { text: chartWording.stability.title(series), subtitle: chartWording.stability.subtitle },
+    title: { text: chartWording.stability.title(series), subtitle: [...chartWording.stability.subtitle] },
     description: chartWording.stability.description({
       windows: rows.deterministic.length,
       first: rows.deterministic[0]?.period ?? '',

@@ -41,6 +41,12 @@ export function formatPercent(fraction: JsonNumber | undefined, decimals = 0): s
   return `${formatNumber(fraction * 100, decimals)}%`;
 }
 
+/** A number already in percent (such as MAPE): formatPercentPoints(3.214) = "3.2%". */
+export function formatPercentPoints(value: JsonNumber | undefined, decimals = 1): string {
+  if (value === null || value === undefined || !Number.isFinite(value)) return MISSING;
+  return `${formatNumber(value, decimals)}%`;
+}
+
 const SUPERSCRIPT: Record<string, string> = {
   '-': '\u207b', '0': '\u2070', '1': '\u00b9', '2': '\u00b2', '3': '\u00b3', '4': '\u2074',
   '5': '\u2075', '6': '\u2076', '7': '\u2077', '8': '\u2078', '9': '\u2079',

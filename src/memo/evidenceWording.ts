@@ -1,0 +1,75 @@
+// Sentences the memo builds from the record's numbers outside the caveats: the unit-root
+// table, the backtest, the comparison tests, the break tests and the recommendation. The
+// numbers arrive formatted; these functions only choose the words.
+import type { Frequency } from '../data/period.js';
+import type { ModelKind } from './recordParts.js';
+import { countPeriods, MODEL_IN_TEXT, MODEL_NAME } from './wording.js';
+
+export const UNIT_ROOT_ROWS = {
+  kpssLevel: { name: 'KPSS: steady level', holds: 'no evidence against a steady level', rejects: 'rules out a steady level' },
+  kpssTrend: { name: 'KPSS: steady trend line', holds: 'no evidence against a steady trend line', rejects: 'rules out a steady trend line' },
+  adfConstant: { name: 'ADF: lasting shocks, around a level', holds: 'cannot rule out lasting shocks', rejects: 'rules out lasting shocks' },
+  adfTrend: { name: 'ADF: lasting shocks, around a trend line', holds: 'cannot rule out lasting shocks', rejects: 'rules out lasting shocks' },
+} as const;
+
+export const evidenceWording = {
+  unitRootIntro: (level: string) =>
+    `Two kinds of check read the series from opposite starting points. KPSS starts from a steady line and looks for evidence against it; ADF starts from shocks that never fade (a unit root) and looks for evidence against those. Outcomes are judged at the ${level} level.`,
+  unavailable: (test: string, reason: string) => `${test} could not be computed: ${reason}`,
+  residualsIntro:
+    'A well-specified model leaves one-step forecast errors with no pattern, no memory and a roughly bell-shaped spread. These checks test each model\u2019s errors for that.',
+
+  backtestSettings: (a: {
+    origins: number;
+    firstLength: number;
+    firstPeriod: string;
+    lastLength: number;
+    lastPeriod: string;
+    horizon: number;
+    frequency: Frequency;
+    refit: boolean | number | string;
+    window: number | string | null;
+  }) =>
+    `Each model was fitted to the history up to a past date (an origin) and its forecasts compared with what then happened. ` +
+    `There were ${a.origins} origins, from ${a.firstPeriod} (${a.firstLength} observations) to ${a.lastPeriod} (${a.lastLength} observations), each forecast up to ${countPeriods(a.horizon, a.frequency)} ahead. ` +
+    `${refitWords(a.refit)} ${windowWords(a.window)} The no-change benchmark forecasts the last observed value at every horizon; a MASE below 1 beats its one-step error.`,
+  comparisonIntro:
+    'At each horizon a test of equal accuracy compares the two models\u2019 backtest losses: squared error for the point forecasts and the 95% interval score for the intervals. A small p-value means the difference is unlikely to be chance.',
+  comparisonOutcome: (better: ModelKind | null, available: boolean, reason: string | undefined) =>
+    !available ? `not tested: ${reason ?? 'no reason recorded'}` : better === null ? 'no clear difference' : `${MODEL_NAME[better].toLowerCase()} more accurate`,
+
+  breakTest: (a: { model: ModelKind; rejects5: boolean; rejects10: boolean; period: string; stat: string; critical5: string; pBound: string }) => {
+    const what = a.model === 'deterministic' ? 'the level or slope of the trend line' : 'the drift (the average change per period)';
+    if (a.rejects5) return `${MODEL_NAME[a.model]}: a break is likely. ${capitalise(what)} appears to shift from ${a.period} (statistic ${a.stat} against a 5% critical value of ${a.critical5}; ${a.pBound}).`;
+    if (a.rejects10) return `${MODEL_NAME[a.model]}: broadly stable, with weak signs of a shift in ${what} from ${a.period} (statistic ${a.stat} against a 5% critical value of ${a.critical5}; ${a.pBound}).`;
+    return `${MODEL_NAME[a.model]}: no break stands out. The largest shift in ${what}, from ${a.period}, gives a statistic of ${a.stat}, below the 5% critical value of ${a.critical5} (${a.pBound}).`;
+  },
+  breakMethod: (method: string, source: string, trimming: string) => `Method: ${method}; candidate dates exclude ${trimming} of the sample at each end. Critical values: ${source}.`,
+  stabilitySettings: (a: { minWindow: number; step: number; windows: number }) =>
+    `Both trends were re-estimated on ${a.windows} growing stretches of history, the first of ${a.minWindow} observations and each then longer by ${a.step}, with the ARMA orders held at their full-history choice.`,
+
+  recommendation: (model: ModelKind) => `We recommend the ${MODEL_IN_TEXT[model]}.`,
+  ruleApplied: (rule: string) => `Rule applied: ${rule}`,
+  fixedByConfig: 'The model was fixed by the analyst in the configuration rather than chosen by the rule.',
+  convergence: (converged: boolean) => (converged ? 'converged' : 'did not converge: treat its estimates with caution'),
+  fitFacts: (a: { p: number; q: number; nobs: number; loglik: string; aicc: string; sigma2: string; converged: string }) =>
+    `ARMA(${a.p}, ${a.q}) errors; ${a.nobs} observations in the likelihood; log-likelihood ${a.loglik}; AICc ${a.aicc}; innovation variance ${a.sigma2}; the fit ${a.converged}.`,
+  scaleNote: (scale: string | null) => (scale === null ? 'Estimates are in the original units of the series.' : `Estimates are on the ${scale} scale of the series.`),
+} as const;
+
+function refitWords(refit: boolean | number | string): string {
+  if (refit === true) return 'Both models were refitted at every origin.';
+  if (refit === false) return 'The models were fitted once and not refitted at later origins.';
+  if (typeof refit === 'number') return `The models were refitted every ${refit} origins.`;
+  return `Refitting: ${refit}.`;
+}
+
+function windowWords(window: number | string | null): string {
+  if (window === null || window === 'expanding') return 'Each fit used all the history up to its origin.';
+  if (typeof window === 'number') return `Each fit used the latest ${window} observations up to its origin.`;
+  return `Fitting window: ${window}.`;
+}
+
+function capitalise(text: string): string {
+  return text.charAt(0).toUpperCase() + text.slice(1);
+}

@@ -1,0 +1,103 @@
+// HTML → PDF with headless Chromium through puppeteer-core (never a downloaded browser).
+// The page is loaded with setContent and every request is aborted, so nothing is fetched
+// from anywhere; Chromium's own background traffic is switched off by flags.
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import puppeteer, { type Browser } from 'puppeteer-core';
+import type { Paper } from '../memoInput.js';
+import { footerTemplate } from './footerTemplate.js';
+import { PAGE_MARGIN, PAPER_SIZES } from './paperSize.js';
+
+export const DEFAULT_CHROMIUM = '/usr/bin/chromium';
+
+export interface PdfPrinterOptions {
+  /** Path to a Chromium binary; default TRENDBRIEF_CHROMIUM, else /usr/bin/chromium. */
+  executablePath?: string;
+}
+
+export interface PrintOptions {
+  paper: Paper;
+  /** Text at the left of every page's footer, e.g. the memo reference. */
+  footer?: string;
+}
+
+export interface PdfPrinter {
+  print(html: string, options: PrintOptions | Paper): Promise<Buffer>;
+  close(): Promise<void>;
+}
+
+const FLAGS = [
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+  '--disable-extensions',
+  '--disable-default-apps',
+  '--no-first-run',
+  '--no-default-browser-check',
+  '--host-resolver-rules=MAP * ~NOTFOUND',
+];
+
+export function chromiumPath(options: PdfPrinterOptions = {}): string {
+  return options.executablePath ?? process.env.TRENDBRIEF_CHROMIUM ?? DEFAULT_CHROMIUM;
+}
+
+/** Prints one memo on an open browser: a fresh page, all requests blocked, page numbers in the footer. */
+export async function printOnBrowser(browser: Browser, html: string, options: PrintOptions | Paper): Promise<Buffer> {
+  const { paper, footer } = typeof options === 'string' ? { paper: options, footer: undefined } : options;
+  const page = await browser.newPage();
+  try {
+    await page.setJavaScriptEnabled(false);
+    await page.setRequestInterception(true);
+    page.on('request', (request) => {
+      void request.abort('blockedbyclient');
+    });
+    await page.setContent(html, { waitUntil: 'load' });
+    const pdf = await page.pdf({
+      format: PAPER_SIZES[paper].format,
+      printBackground: true,
+      displayHeaderFooter: true,
+      headerTemplate: '<span></span>',
+      footerTemplate: footerTemplate(footer ?? ''),
+      margin: { ...PAGE_MARGIN },
+    });
+    return Buffer.from(pdf);
+  } finally {
+    await page.close();
+  }
+}
+
+/** One browser for many PDFs; close it when done (it also removes its temporary profile). */
+export async function openPdfPrinter(options: PdfPrinterOptions = {}): Promise<PdfPrinter> {
+  const profile = mkdtempSync(join(tmpdir(), 'trendbrief-chromium-'));
+  let browser: Browser;
+  try {
+    browser = await puppeteer.launch({ executablePath: chromiumPath(options), headless: true, args: FLAGS, userDataDir: profile });
+  } catch (error) {
+    rmSync(profile, { recursive: true, force: true });
+    throw new Error(`could not start Chromium at ${chromiumPath(options)} to print the PDF: ${error instanceof Error ? error.message : String(error)}`);
+  }
+  return {
+    print: (html, printOptions) => printOnBrowser(browser, html, printOptions),
+    async close() {
+      try {
+        await browser.close();
+      } finally {
+        rmSync(profile, { recursive: true, force: true });
+      }
+    },
+  };
+}
+
+/** One PDF; opens and closes its own browser unless one is given. */
+export async function printMemoPdf(html: string, options: PrintOptions & { browser?: Browser } & PdfPrinterOptions): Promise<Buffer> {
+  if (options.browser !== undefined) return printOnBrowser(options.browser, html, options);
+  const printer = await openPdfPrinter(options);
+  try {
+    return await printer.print(html, options);
+  } finally {
+    await printer.close();
+  }
+}

@@ -1,0 +1,101 @@
+// The backtest section: what was done in words, point and interval accuracy by horizon, and
+// the comparison tests. Null when the backtest was not run (the template shows the note).
+import type { Frequency } from '../../data/period.js';
+import { evidenceWording } from '../evidenceWording.js';
+import { formatNumber, formatP, formatPercent, formatPercentPoints, formatSignificant, MISSING } from '../format/formatNumber.js';
+import type { BacktestComparison, BacktestHorizonRow, BacktestMethod, BacktestPart } from '../recordParts.js';
+import { noLinks } from '../format/noLinks.js';
+
+export interface PointAccuracyCells {
+  rmse: string;
+  mape: string;
+  mase: string;
+}
+
+export interface IntervalAccuracyCells {
+  coverage80: string;
+  coverage95: string;
+  width95: string;
+  score95: string;
+  crps: string;
+}
+
+export interface ComparisonCells {
+  statistic: string;
+  p: string;
+  outcome: string;
+  decided: boolean;
+}
+
+const LOSSES: readonly BacktestComparison['loss'][] = ['squared_error', 'interval_score_95'];
+
+function comparisonCells(c: BacktestComparison | undefined): ComparisonCells {
+  if (c === undefined) return { statistic: MISSING, p: MISSING, outcome: MISSING, decided: false };
+  return {
+    statistic: formatSignificant(c.statistic, 3),
+    p: formatP(c.p_value),
+    outcome: noLinks(evidenceWording.comparisonOutcome(c.better, c.available, c.reason)),
+    decided: c.available && c.better !== null,
+  };
+}
+
+export interface BacktestView {
+  settings: string;
+  point: { h: number; n: number; methods: PointAccuracyCells[] }[];
+  interval: { h: number; methods: IntervalAccuracyCells[] }[];
+  comparisonIntro: string;
+  comparison: { h: number; tests: ComparisonCells[] }[];
+  notes: string[];
+}
+
+const POINT_METHODS: readonly BacktestMethod[] = ['deterministic', 'stochastic', 'naive'];
+const INTERVAL_METHODS: readonly BacktestMethod[] = ['deterministic', 'stochastic'];
+
+function rowAt(backtest: BacktestPart, method: BacktestMethod, h: number): BacktestHorizonRow | undefined {
+  return backtest.per_horizon[method].find((r) => r.h === h);
+}
+
+export function backtestView(backtest: BacktestPart, frequency: Frequency, decimals: number): BacktestView {
+  const first = backtest.origins[0];
+  const last = backtest.origins.at(-1);
+  const horizons = backtest.per_horizon.deterministic.map((r) => r.h);
+  return {
+    settings: evidenceWording.backtestSettings({
+      origins: backtest.origins.length,
+      firstLength: first?.length ?? 0,
+      firstPeriod: first?.period ?? '',
+      lastLength: last?.length ?? 0,
+      lastPeriod: last?.period ?? '',
+      horizon: backtest.settings.horizon,
+      frequency,
+      refit: backtest.settings.refit,
+      window: backtest.settings.window,
+    }),
+    point: horizons.map((h) => ({
+      h,
+      n: rowAt(backtest, 'deterministic', h)?.n ?? 0,
+      methods: POINT_METHODS.map((m) => {
+        const row = rowAt(backtest, m, h);
+        return { rmse: formatNumber(row?.rmse, decimals), mape: formatPercentPoints(row?.mape), mase: formatNumber(row?.mase, 2) };
+      }),
+    })),
+    interval: horizons.map((h) => ({
+      h,
+      methods: INTERVAL_METHODS.map((m) => {
+        const row = rowAt(backtest, m, h);
+        return {
+          coverage80: formatPercent(row?.coverage?.['80']),
+          coverage95: formatPercent(row?.coverage?.['95']),
+          width95: formatNumber(row?.width?.['95'], decimals),
+          score95: formatNumber(row?.interval_score?.['95'], decimals),
+          crps: formatNumber(row?.crps, decimals),
+        };
+      }),
+    })),
+    comparisonIntro: evidenceWording.comparisonIntro,
+    comparison: [...new Set(backtest.comparison.map((c) => c.h))]
+      .sort((a, b) => a - b)
+      .map((h) => ({ h, tests: LOSSES.map((loss) => comparisonCells(backtest.comparison.find((c) => c.h === h && c.loss === loss))) })),
+    notes: backtest.notes.map(noLinks),
+  };
+}

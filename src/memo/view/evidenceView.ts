@@ -1,0 +1,73 @@
+// The evidence section: the unit-root checks as a table with plain outcomes, the combined
+// reading as the evidence stage wrote it, and each model's residual findings.
+import { formatPValue } from '../../evidence/messages.js';
+import type { AdfResult, KpssResult } from '../../evidence/types.js';
+import { evidenceWording, UNIT_ROOT_ROWS } from '../evidenceWording.js';
+import { formatPercent, formatSignificant } from '../format/formatNumber.js';
+import { noLinks } from '../format/noLinks.js';
+import type { MemoRecord, ModelKind } from '../recordParts.js';
+import { MODEL_NAME } from '../wording.js';
+
+export interface UnitRootRow {
+  name: string;
+  statistic: string;
+  lags: string;
+  p: string;
+  critical5: string;
+  outcome: string;
+  rejects: boolean;
+}
+
+export interface EvidenceView {
+  intro: string;
+  reading: string;
+  verdict: string;
+  tests: UnitRootRow[];
+  residualsIntro: string;
+  residuals: { model: string; findings: { text: string; flagged: boolean }[] }[];
+  unavailable: string[];
+}
+
+type RowWords = (typeof UNIT_ROOT_ROWS)[keyof typeof UNIT_ROOT_ROWS];
+
+function kpssRejects(result: KpssResult, level: number): boolean {
+  if (result.p_bound === 'below') return true;
+  if (result.p_bound === 'above') return false;
+  return result.p_value < level;
+}
+
+function row(words: RowWords, result: KpssResult | AdfResult | null, rejects: boolean): UnitRootRow | [] {
+  if (result === null) return [];
+  return {
+    name: words.name,
+    statistic: formatSignificant(result.stat, 4),
+    lags: String(result.lags),
+    p: formatPValue(result),
+    critical5: formatSignificant(result.critical['5'], 4),
+    outcome: rejects ? words.rejects : words.holds,
+    rejects,
+  };
+}
+
+export function evidenceView(record: MemoRecord): EvidenceView {
+  const { kpss, adf, reading, residuals, unavailable } = record.evidence;
+  const level = reading.level;
+  const models: readonly ModelKind[] = ['deterministic', 'stochastic'];
+  return {
+    intro: evidenceWording.unitRootIntro(formatPercent(level)),
+    reading: noLinks(reading.text),
+    verdict: reading.verdict,
+    tests: [
+      row(UNIT_ROOT_ROWS.kpssLevel, kpss.level, kpss.level !== null && kpssRejects(kpss.level, level)),
+      row(UNIT_ROOT_ROWS.kpssTrend, kpss.trend, kpss.trend !== null && kpssRejects(kpss.trend, level)),
+      row(UNIT_ROOT_ROWS.adfConstant, adf.constant, adf.constant !== null && adf.constant.p_value < level),
+      row(UNIT_ROOT_ROWS.adfTrend, adf.trend, adf.trend !== null && adf.trend.p_value < level),
+    ].flat(),
+    residualsIntro: evidenceWording.residualsIntro,
+    residuals: models.map((model) => ({
+      model: MODEL_NAME[model],
+      findings: residuals[model].findings.map((f) => ({ text: noLinks(f.text), flagged: f.flagged })),
+    })),
+    unavailable: unavailable.map((u) => noLinks(evidenceWording.unavailable(u.test, u.reason))),
+  };
+}

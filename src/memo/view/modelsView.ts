@@ -1,0 +1,77 @@
+// Both fitted models: the equation the analysis wrote, a coefficient table with standard
+// errors, and the facts of the fit.
+import { evidenceWording } from '../evidenceWording.js';
+import { formatSignificant } from '../format/formatNumber.js';
+import type { MemoRecord, ModelKind } from '../recordParts.js';
+import { MODEL_GLOSS, MODEL_NAME, scaleName } from '../wording.js';
+
+export interface CoefficientRow {
+  name: string;
+  estimate: string;
+  stderr: string;
+  ratio: string;
+}
+
+export interface ModelView {
+  kind: ModelKind;
+  name: string;
+  gloss: string;
+  equation: string;
+  coefficients: CoefficientRow[];
+  facts: string;
+}
+
+const REGRESSION_NAMES: Record<string, string> = {
+  intercept: 'Intercept (level at t = 0)',
+  slope: 'Slope per period',
+  drift: 'Drift per period',
+};
+
+function coefficientRow(name: string, estimate: number | undefined, stderr: number | null | undefined): CoefficientRow {
+  const ratio = estimate !== undefined && typeof stderr === 'number' && stderr > 0 ? estimate / stderr : null;
+  return { name, estimate: formatSignificant(estimate), stderr: formatSignificant(stderr), ratio: formatSignificant(ratio, 3) };
+}
+
+function asList(value: number | number[] | undefined): number[] {
+  return Array.isArray(value) ? value : [];
+}
+
+function asErrors(value: number | null | (number | null)[] | undefined): (number | null)[] {
+  return Array.isArray(value) ? value : [];
+}
+
+export function modelView(record: MemoRecord, kind: ModelKind): ModelView {
+  const model = record.models[kind];
+  const names = kind === 'deterministic' ? ['intercept', 'slope'] : ['drift'];
+  const regression = names.map((key) => {
+    const estimate = model.coefficients[key];
+    const stderr = model.stderr[key];
+    return coefficientRow(REGRESSION_NAMES[key], typeof estimate === 'number' ? estimate : undefined, Array.isArray(stderr) ? null : stderr);
+  });
+  const arSe = asErrors(model.stderr.ar);
+  const maSe = asErrors(model.stderr.ma);
+  const ar = asList(model.coefficients.ar).map((v, i) => coefficientRow(`AR ${i + 1} (\u03c6${i + 1})`, v, arSe[i]));
+  const ma = asList(model.coefficients.ma).map((v, i) => coefficientRow(`MA ${i + 1} (\u03b8${i + 1})`, v, maSe[i]));
+  return {
+    kind,
+    name: MODEL_NAME[kind],
+    gloss: MODEL_GLOSS[kind],
+    equation: model.equation,
+    coefficients: [...regression, ...ar, ...ma],
+    facts: evidenceWording.fitFacts({
+      p: model.p,
+      q: model.q,
+      nobs: model.nobs,
+      loglik: formatSignificant(model.loglik, 6),
+      aicc: formatSignificant(model.aicc, 6),
+      sigma2: formatSignificant(model.sigma2, 4),
+      converged: evidenceWording.convergence(model.converged),
+    }),
+  };
+}
+
+/** "Estimates are on the natural log scale of the series", or in its original units. */
+export function scaleNote(record: MemoRecord): string {
+  const { transform } = record.series;
+  return evidenceWording.scaleNote(transform.kind === 'none' ? null : scaleName(transform));
+}

@@ -1,0 +1,105 @@
+// Everything the memo shows for one series, formatted and with its charts rendered.
+import type { Caveat } from '../caveats/caveat.js';
+import { collectCaveats } from '../caveats/caveatRules.js';
+import { backtestChart } from '../charts/backtestChart.js';
+import { forecastChart } from '../charts/forecastChart.js';
+import { historyChart } from '../charts/historyChart.js';
+import { residualAcfChart } from '../charts/residualAcfChart.js';
+import { stabilityChart } from '../charts/stabilityChart.js';
+import { widthRatioChart } from '../charts/widthRatioChart.js';
+import { evidenceWording } from '../evidenceWording.js';
+import { noLinks } from '../format/noLinks.js';
+import { seriesDecimals } from '../format/seriesDecimals.js';
+import type { MemoSeries } from '../memoInput.js';
+import { AICC_NOTE, FREQUENCY_NAME, LABELS, MODEL_GLOSS, NOT_RUN, scaleName, TEMPLATE_TEXT } from '../wording.js';
+import { backtestView, type BacktestView } from './backtestView.js';
+import { evidenceView, type EvidenceView } from './evidenceView.js';
+import { figureView, type FigureView } from './figureView.js';
+import { forecastTableView, type ForecastTableRow } from './forecastTableView.js';
+import { modelView, scaleNote, type ModelView } from './modelsView.js';
+import { stabilityView, type StabilityView } from './stabilityView.js';
+import { summaryCard, type SummaryCard } from './summaryView.js';
+
+export interface SeriesView {
+  anchor: string;
+  title: string;
+  units: string;
+  notes: string;
+  span: string;
+  scale: string;
+  recommendation: { model: string; gloss: string; rule: string; fixedByConfig: string; justification: string; reasons: string[] } | null;
+  notRun: typeof NOT_RUN;
+  captions: { forecast: string; point: string; interval: string };
+  figures: {
+    history: FigureView | null;
+    forecast: FigureView;
+    widthRatio: FigureView;
+    backtest: FigureView | null;
+    residualAcf: FigureView;
+    stability: FigureView | null;
+  };
+  forecastTable: ForecastTableRow[];
+  backtest: BacktestView | null;
+  evidence: EvidenceView;
+  models: ModelView[];
+  modelScale: string;
+  aiccNote: string;
+  stability: StabilityView | null;
+  caveats: { id: string; severity: Caveat['severity']; label: string; text: string }[];
+  summary: SummaryCard;
+}
+
+export async function seriesView(entry: MemoSeries, index: number): Promise<SeriesView> {
+  const { record } = entry;
+  const anchor = `series-${index + 1}`;
+  const title = noLinks(record.series.title);
+  const units = entry.units === undefined ? undefined : noLinks(entry.units);
+  const decimals = seriesDecimals(record);
+  const chartInput = { series: title, units, decimals, record };
+  const caveats = collectCaveats({ record, units });
+  const { backtest, recommendation } = record;
+  const stability = record.evidence.stability ?? undefined;
+  const history = entry.history;
+  return {
+    anchor,
+    title,
+    units: units ?? '',
+    notes: noLinks(entry.notes ?? ''),
+    span: `${FREQUENCY_NAME[record.series.frequency]}, ${record.series.first} to ${record.series.last}, ${record.series.n} observations`,
+    scale: scaleName(record.series.transform),
+    recommendation:
+      recommendation === undefined
+        ? null
+        : {
+            model: evidenceWording.recommendation(recommendation.model),
+            gloss: MODEL_GLOSS[recommendation.model],
+            rule: noLinks(evidenceWording.ruleApplied(recommendation.rule)),
+            fixedByConfig: recommendation.fixed_by_config ? evidenceWording.fixedByConfig : '',
+            justification: noLinks(recommendation.justification ?? ''),
+            reasons: recommendation.reasons.map(noLinks),
+          },
+    notRun: NOT_RUN,
+    captions: {
+      forecast: TEMPLATE_TEXT.forecastCaption(units ?? ''),
+      point: TEMPLATE_TEXT.pointCaption(units ?? ''),
+      interval: TEMPLATE_TEXT.intervalCaption(units ?? ''),
+    },
+    figures: {
+      history: history === undefined || history.length === 0 ? null : await figureView(`${anchor}-history`, historyChart({ ...chartInput, history })),
+      forecast: await figureView(`${anchor}-forecast`, forecastChart({ ...chartInput, history })),
+      widthRatio: await figureView(`${anchor}-ratio`, widthRatioChart(chartInput)),
+      backtest: backtest === undefined ? null : await figureView(`${anchor}-backtest`, backtestChart({ ...chartInput, backtest })),
+      residualAcf: await figureView(`${anchor}-acf`, residualAcfChart(chartInput)),
+      stability: stability === undefined ? null : await figureView(`${anchor}-stability`, stabilityChart({ ...chartInput, stability })),
+    },
+    forecastTable: forecastTableView(record, decimals),
+    backtest: backtest === undefined ? null : backtestView(backtest, record.series.frequency, decimals),
+    evidence: evidenceView(record),
+    models: [modelView(record, 'deterministic'), modelView(record, 'stochastic')],
+    modelScale: scaleNote(record),
+    aiccNote: AICC_NOTE,
+    stability: stability === undefined ? null : stabilityView(stability, record.series.first),
+    caveats: caveats.map((c) => ({ id: c.id, severity: c.severity, label: LABELS.severity[c.severity], text: noLinks(c.text) })),
+    summary: summaryCard({ anchor, title, units, record, decimals, caveats }),
+  };
+}

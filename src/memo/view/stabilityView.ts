@@ -1,0 +1,41 @@
+// The trend-stability section in words: how the windows were set up and what each break test
+// found, with the period the break would start from.
+import { addPeriods } from '../../data/period.js';
+import { evidenceWording } from '../evidenceWording.js';
+import { formatPercent, formatSignificant } from '../format/formatNumber.js';
+import { noLinks } from '../format/noLinks.js';
+import type { ModelKind, StabilityPart } from '../recordParts.js';
+
+export interface StabilityView {
+  settings: string;
+  breaks: { text: string; rejects: boolean }[];
+  method: string[];
+}
+
+const MODELS: readonly ModelKind[] = ['deterministic', 'stochastic'];
+
+export function stabilityView(stability: StabilityPart, first: string): StabilityView {
+  const { windows, break_test } = stability;
+  return {
+    settings: evidenceWording.stabilitySettings({ minWindow: windows.min_window, step: windows.step, windows: windows.deterministic.length }),
+    breaks: MODELS.map((model) => {
+      const test = break_test[model];
+      return {
+        rejects: test.reject['5'],
+        text: evidenceWording.breakTest({
+          model,
+          rejects5: test.reject['5'],
+          rejects10: test.reject['10'],
+          period: addPeriods(first, test.break_index),
+          stat: formatSignificant(test.stat, 3),
+          critical5: formatSignificant(test.critical['5'], 3),
+          pBound: test.p_bound,
+        }),
+      };
+    }),
+    method: MODELS.map((model) => {
+      const test = break_test[model];
+      return noLinks(evidenceWording.breakMethod(test.method, test.source, formatPercent(test.trimming)));
+    }),
+  };
+}

@@ -1,0 +1,40 @@
+// One card per series for the client's summary page: the recommended model, the forecast at
+// the end of the horizon under both models with both intervals, and the top caveat.
+import type { Caveat } from '../caveats/caveat.js';
+import type { MemoRecord, ModelKind } from '../recordParts.js';
+import { LABELS, MODEL_GLOSS, MODEL_NAME, NOT_RUN } from '../wording.js';
+import { forecastCells, type ForecastCells } from './forecastTableView.js';
+
+export interface SummaryCard {
+  anchor: string;
+  title: string;
+  units: string;
+  recommended: string | null;
+  gloss: string;
+  noRecommendation: string;
+  endPeriod: string;
+  models: (ForecastCells & { name: string; recommended: boolean })[];
+  caveat: { label: string; severity: Caveat['severity']; text: string } | null;
+}
+
+export function summaryCard(a: { anchor: string; title: string; units?: string; record: MemoRecord; decimals: number; caveats: Caveat[] }): SummaryCard {
+  const { record } = a;
+  const model: ModelKind | undefined = record.recommendation?.model;
+  const last = record.forecasts.deterministic.length - 1;
+  const top = a.caveats[0];
+  return {
+    anchor: a.anchor,
+    title: a.title,
+    units: a.units ?? '',
+    recommended: model === undefined ? null : MODEL_NAME[model],
+    gloss: model === undefined ? '' : MODEL_GLOSS[model],
+    noRecommendation: NOT_RUN.recommendation,
+    endPeriod: record.forecasts.deterministic[last]?.period ?? record.series.last,
+    models: (['deterministic', 'stochastic'] as const).map((kind) => ({
+      name: MODEL_NAME[kind],
+      recommended: kind === model,
+      ...forecastCells(record, kind, last, a.decimals),
+    })),
+    caveat: top === undefined ? null : { label: LABELS.severity[top.severity], severity: top.severity, text: top.text },
+  };
+}
