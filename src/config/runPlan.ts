@@ -48,7 +48,7 @@ export interface SeriesSettings {
   significance: Setting<number>;
   backtest: {
     origins: Setting<number>;
-    /** Undefined: the forecast horizon, at most 100. */
+    /** Undefined: the backtest stage's default, 5. */
     horizon: Setting<number | undefined>;
     refit: Setting<BacktestRefit>;
     window: Setting<BacktestWindow>;

@@ -23,7 +23,7 @@ const backtest = object(
   'Rolling-origin evaluation of both models.',
   {
     origins: whole('Number of forecast origins, the latest ones in the series; fewer when the series is too short for them.', 1, 200, { default: BUILT_IN.backtest.origins }),
-    horizon: whole('Steps forecast from each origin.', 1, 100, { defaultText: 'the forecast horizon, at most 100' }),
+    horizon: whole('Steps forecast from each origin.', 1, 100, { defaultText: '5' }),
     refit: choice(
       'At each origin: search the orders again (reselect), re-estimate the orders chosen on the full series (reestimate), or keep the full-series fit (fixed).',
       ['reselect', 'reestimate', 'fixed'],
