@@ -3,7 +3,9 @@
 // Keys are a contract: add freely, rename none. Numbers that do not exist (a standard
 // error at a singular Hessian, say) are null, never NaN.
 import type { Frequency } from '../data/period.js';
+import type { BacktestRecord } from '../backtest/backtestRecord.js';
 import type { EvidenceRecord } from '../evidence/collectEvidence.js';
+import type { RecommendationRecord } from './recommendModel.js';
 
 export const RECORD_SCHEMA = 'trendbrief.analysis/1';
 
@@ -71,6 +73,11 @@ export interface AnalysisRecord {
   models: { deterministic: ModelRecord; stochastic: ModelRecord };
   forecasts: { deterministic: ForecastRow[]; stochastic: ForecastRow[] };
   evidence: EvidenceRecord;
+  /** Rolling-origin backtest (see completeAnalysis); null when the series is too short for one. */
+  backtest?: BacktestRecord | null;
+  /** Why there is no backtest, when `backtest` is null. */
+  backtest_unavailable?: string;
+  recommendation?: RecommendationRecord;
 }
 
 /** A number for JSON: non-finite values become null. */

@@ -1,8 +1,9 @@
 // `trendbrief fit FILE.csv`: read, analyse, print the record (--json) or a summary.
 import { readSeriesCsv } from '../data/readSeriesCsv.js';
 import { analyseSeries, requiredObservations } from '../analysis/analyseSeries.js';
+import { completeAnalysis } from '../analysis/completeAnalysis.js';
 import { formatSummary } from './formatSummary.js';
-import { parseFitOptions, MAX_HORIZON, MAX_ORDER } from './parseFitOptions.js';
+import { parseFitOptions, MAX_BACKTEST_HORIZON, MAX_BACKTEST_ORIGINS, MAX_HORIZON, MAX_ORDER } from './parseFitOptions.js';
 
 export const FIT_HELP = `Usage: trendbrief fit FILE.csv [options]
 
@@ -20,6 +21,13 @@ Options:
   --levels L1,L2            interval levels in percent (default: 80,95)
   --no-coef-uncertainty     intervals from the ARMA process alone, without coefficient uncertainty
   --point median|mean       back-transformed median (default) or bias-adjusted mean
+  --backtest                re-run the whole method at past origins and score both models,
+                            then apply the recommendation rule
+  --origins K               backtest origins, 1 to ${MAX_BACKTEST_ORIGINS} (default: as many as fit, up to 20)
+  --backtest-horizon B      horizons scored in the backtest, 1 to ${MAX_BACKTEST_HORIZON} (default: 5)
+  --refit P                 at each origin: reselect the orders (default), reestimate at the
+                            full-sample orders, or keep the full-sample fit (fixed)
+                            (--origins, --backtest-horizon and --refit imply --backtest)
   --json                    print the full analysis record as JSON
   -h, --help                this text
 `;
@@ -33,7 +41,7 @@ export async function runFit(args: readonly string[], io: { stdout(text: string)
     minObservations: requiredObservations(request.maxP, request.maxQ),
     transform: request.transform,
   });
-  const record = analyseSeries(series, {
+  const options = {
     horizon: request.horizon,
     levels: request.levels,
     maxP: request.maxP,
@@ -41,7 +49,8 @@ export async function runFit(args: readonly string[], io: { stdout(text: string)
     transform: request.transform,
     coefficientUncertainty: request.coefficientUncertainty,
     point: request.point,
-  });
+  };
+  const record = request.backtest === undefined ? analyseSeries(series, options) : await completeAnalysis(series, { ...options, backtest: request.backtest });
   io.stdout(request.json ? `${JSON.stringify(record, null, 2)}\n` : formatSummary(record));
   return 0;
 }

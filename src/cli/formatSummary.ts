@@ -2,6 +2,7 @@
 // forecast table. Plain text, fixed-width columns.
 import type { AnalysisRecord, ModelRecord } from '../analysis/record.js';
 import { formatEvidence } from './formatEvidence.js';
+import { formatBacktest } from '../backtest/index.js';
 
 const MODEL_TITLES = { deterministic: 'Deterministic trend', stochastic: 'Stochastic trend' } as const;
 
@@ -18,6 +19,12 @@ export function formatSummary(record: AnalysisRecord): string {
   lines.push(...formatEvidence(record));
   lines.push('');
   lines.push(...forecastTable(record));
+  if (record.backtest !== undefined && record.backtest !== null) lines.push('', ...formatBacktest(record.backtest));
+  if (record.backtest === null) lines.push('', `Backtest not run: ${record.backtest_unavailable ?? 'the series is too short'}`);
+  if (record.recommendation !== undefined) {
+    lines.push('', `Recommended: the ${record.recommendation.model} trend (rule: ${record.recommendation.rule}).`);
+    for (const reason of record.recommendation.reasons) lines.push(`  - ${reason}`);
+  }
   return `${lines.join('\n')}\n`;
 }
 

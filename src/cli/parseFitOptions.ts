@@ -3,6 +3,8 @@ import { cliMessages, InputError, type InputProblem } from '../errors.js';
 import { splitOptions, type OptionSpec } from './splitOptions.js';
 import { FREQUENCIES, type Frequency } from '../data/period.js';
 import type { TransformSpec } from '../data/series.js';
+import { REFIT_POLICIES, type RefitPolicy } from '../backtest/index.js';
+import { MAX_HORIZON, MAX_ORDER } from '../config/settingsSpec.js';
 
 export interface FitRequest {
   file: string;
@@ -18,10 +20,13 @@ export interface FitRequest {
   point: 'median' | 'mean';
   json: boolean;
   help: boolean;
+  /** Backtest settings; undefined without --backtest (or one of its options, which imply it). */
+  backtest?: { origins?: number; horizon?: number; refit: RefitPolicy };
 }
 
-export const MAX_HORIZON = 1000;
-export const MAX_ORDER = 8;
+export { MAX_HORIZON, MAX_ORDER };
+export const MAX_BACKTEST_ORIGINS = 200;
+export const MAX_BACKTEST_HORIZON = 100;
 
 const FIT_OPTIONS: Readonly<Record<string, OptionSpec>> = {
   column: { type: 'string' },
@@ -35,6 +40,10 @@ const FIT_OPTIONS: Readonly<Record<string, OptionSpec>> = {
   'no-coef-uncertainty': { type: 'boolean' },
   point: { type: 'string' },
   json: { type: 'boolean' },
+  backtest: { type: 'boolean' },
+  origins: { type: 'string' },
+  'backtest-horizon': { type: 'string' },
+  refit: { type: 'string' },
   help: { type: 'boolean', short: 'h' },
 };
 
@@ -77,6 +86,12 @@ export function parseFitOptions(args: readonly string[]): FitRequest {
     json: given.get('json') === true,
     help,
   };
+  const origins = integer('origins', text('origins'), 1, MAX_BACKTEST_ORIGINS);
+  const backtestHorizon = integer('backtest-horizon', text('backtest-horizon'), 1, MAX_BACKTEST_HORIZON);
+  const refit = choice('refit', text('refit'), REFIT_POLICIES);
+  if (given.get('backtest') === true || origins !== undefined || backtestHorizon !== undefined || refit !== undefined) {
+    request.backtest = { origins, horizon: backtestHorizon, refit: refit ?? 'reselect' };
+  }
   if (problems.length > 0 && !help) throw new InputError(problems);
   return request;
 }
