@@ -1,0 +1,184 @@
+// Chart specs tested as data: each compiles with vega-lite without a warning, carries a title
+// and a description, carries exactly the record's numbers, and leaves its input untouched.
+// Expected values come from the records analyseSeries writes for the fixtures (sampleInput.ts)
+// and, for layout rules, from our spec (src/memo/charts/).
+import { describe, expect, it } from 'vitest';
+import type { TopLevelSpec } from 'vega-lite';
+import { addPeriods } from '../../src/data/period.js';
+import { backtestChart, backtestRows } from '../../src/memo/charts/backtestChart.js';
+import { forecastChart, recentLength } from '../../src/memo/charts/forecastChart.js';
+import { historyChart } from '../../src/memo/charts/historyChart.js';
+import { periodPosition } from '../../src/memo/charts/periodPosition.js';
+import { compileChart, renderChartSvg } from '../../src/memo/charts/renderChart.js';
+import { residualAcfChart } from '../../src/memo/charts/residualAcfChart.js';
+import { stabilityChart } from '../../src/memo/charts/stabilityChart.js';
+import { widthRatioChart } from '../../src/memo/charts/widthRatioChart.js';
+import type { MemoSeries } from '../../src/memo/memoInput.js';
+import type { StabilityPart } from '../../src/memo/recordParts.js';
+import { sampleSeries } from './sampleInput.js';
+
+function stabilityOf(entry: MemoSeries): StabilityPart {
+  const stability = entry.record.evidence.stability;
+  if (stability === undefined || stability === null) throw new Error('the sample record has no stability part');
+  return stability;
+}
+
+function allCharts(entry: MemoSeries): Record<string, TopLevelSpec> {
+  const { record, history, units } = entry;
+  const input = { series: record.series.title, units, decimals: 2, record };
+  if (history === undefined || record.backtest === undefined) throw new Error('the sample series lacks history or backtest');
+  return {
+    history: historyChart({ ...input, history }),
+    forecast: forecastChart({ ...input, history }),
+    widthRatio: widthRatioChart(input),
+    backtest: backtestChart({ ...input, backtest: record.backtest }),
+    residualAcf: residualAcfChart(input),
+    stability: stabilityChart({ ...input, stability: stabilityOf(entry) }),
+  };
+}
+
+/** The `values` of a panel's layer. */
+function layerValues(spec: TopLevelSpec, panel: number, layer: number): Record<string, unknown>[] {
+  const json = JSON.parse(JSON.stringify(spec)) as { hconcat: { layer: { data: { values: Record<string, unknown>[] } }[] }[] };
+  return json.hconcat[panel].layer[layer].data.values;
+}
+
+describe('every chart', () => {
+  for (const name of ['lakeHuron', 'gdp'] as const) {
+    it(`compiles without warnings and has a title and a description (${name})`, () => {
+      const entry = sampleSeries(name);
+      const before = structuredClone(entry);
+      for (const [chart, spec] of Object.entries(allCharts(entry))) {
+        const { warnings, spec: vega } = compileChart(spec);
+        expect(warnings, chart).toEqual([]);
+        expect(vega.marks?.length ?? 0, chart).toBeGreaterThan(0);
+        const title = typeof spec.title === 'object' && spec.title !== null && 'text' in spec.title ? spec.title.text : spec.title;
+        expect(String(title), chart).toContain(entry.record.series.title);
+        expect(spec.description?.length ?? 0, chart).toBeGreaterThan(40);
+      }
+      expect(entry).toEqual(before);
+    });
+  }
+});
+
+describe('chart data match the record', () => {
+  const entry = sampleSeries('lakeHuron');
+  const { record } = entry;
+  const charts = allCharts(entry);
+
+  it('forecast panels carry the record forecasts, after an h = 0 anchor at the last observation', () => {
+    for (const [panel, model] of [[0, 'deterministic'], [1, 'stochastic']] as const) {
+      const rows = layerValues(charts.forecast, panel, 0);
+      expect(rows[0]).toMatchObject({ h: 0, period: '1972', point: entry.history?.at(-1)?.value });
+      expect(rows.slice(1)).toEqual(
+        record.forecasts[model].map((f) => ({
+          t: Number(f.period),
+          period: f.period,
+          h: f.h,
+          point: f.point,
+          lo80: f.intervals['80'][0],
+          hi80: f.intervals['80'][1],
+          lo95: f.intervals['95'][0],
+          hi95: f.intervals['95'][1],
+        })),
+      );
+    }
+  });
+
+  it('forecast panels show the last max(24, 4h) observations: 40 for h = 10', () => {
+    expect(recentLength(10, 98)).toBe(40);
+    expect(recentLength(3, 98)).toBe(24);
+    expect(recentLength(10, 30)).toBe(30);
+    const recent = layerValues(charts.forecast, 0, 2);
+    expect(recent.map((r) => r.period)).toEqual(entry.history?.slice(-40).map((p) => p.period));
+  });
+
+  it('the history chart carries every observation', () => {
+    const json = JSON.parse(JSON.stringify(charts.history)) as { data: { values: { period: string; value: number }[] } };
+    expect(json.data.values.map((v) => v.value)).toEqual(entry.history?.map((p) => p.value));
+    expect(json.data.values).toHaveLength(98);
+  });
+
+  it('the width ratio is the deterministic over the stochastic 95% width at each horizon', () => {
+    const json = JSON.parse(JSON.stringify(charts.widthRatio)) as { layer: { data: { values: { h: number; ratio: number }[] } }[] };
+    const expected = record.forecasts.deterministic.map((d, i) => {
+      const s = record.forecasts.stochastic[i];
+      return (d.intervals['95'][1] - d.intervals['95'][0]) / (s.intervals['95'][1] - s.intervals['95'][0]);
+    });
+    expect(json.layer[0].data.values.map((v) => v.ratio)).toEqual(expected);
+  });
+
+  it('backtest rows are the record per-horizon RMSE and 95% coverage of each method', () => {
+    const backtest = record.backtest;
+    if (backtest === undefined) throw new Error('no backtest');
+    const rows = backtestRows(backtest);
+    expect(rows.filter((r) => r.method === 'Stochastic').map((r) => r.rmse)).toEqual(backtest.per_horizon.stochastic.map((r) => r.rmse));
+    expect(rows.filter((r) => r.method === 'No change').map((r) => r.coverage95)).toEqual(backtest.per_horizon.naive.map(() => null));
+    expect(layerValues(charts.backtest, 1, 1).every((r) => r.method !== 'No change')).toBe(true);
+  });
+
+  it('residual ACF bars are the record autocorrelations, bounds at ±1.96/√n', () => {
+    const acf = record.evidence.residuals.stochastic.acf;
+    expect(layerValues(charts.residualAcf, 1, 0)).toEqual(acf.lag.map((lag, i) => ({ lag, acf: acf.acf[i] })));
+    expect(layerValues(charts.residualAcf, 1, 2)).toEqual([{ acf: acf.bound }, { acf: -acf.bound }]);
+  });
+
+  it('stability windows are placed at the period of their last observation, band ±2 se', () => {
+    const windows = stabilityOf(entry).windows.deterministic;
+    const rows = layerValues(charts.stability, 0, 1);
+    expect(rows).toHaveLength(windows.length);
+    // end = observations used, so the window ends at first + end − 1 (record contract).
+    expect(rows[0]).toEqual({
+      end: windows[0].end,
+      period: addPeriods('1875', windows[0].end - 1),
+      t: 1875 + windows[0].end - 1,
+      estimate: windows[0].slope,
+      low: windows[0].slope - 2 * windows[0].se,
+      high: windows[0].slope + 2 * windows[0].se,
+    });
+    expect(layerValues(charts.stability, 0, 2)).toEqual([{ estimate: record.models.deterministic.coefficients.slope }]);
+  });
+});
+
+describe('periodPosition', () => {
+  it('places quarters and months within their year (our spec)', () => {
+    expect(periodPosition('1972')).toBe(1972);
+    expect(periodPosition('2003-Q3')).toBe(2003.5);
+    expect(periodPosition('2003-04')).toBe(2003.25);
+    expect(() => periodPosition('2003/04')).toThrow(/period label/);
+  });
+});
+
+describe('renderChartSvg', () => {
+  it('inlines without namespace URLs, with prefixed ids, one label, and the title escaped', async () => {
+    const entry = sampleSeries('nile');
+    entry.record.series.title = '<img src=x onerror=alert(1)>';
+    const { record, units } = entry;
+    const svg = await renderChartSvg(forecastChart({ series: record.series.title, units, decimals: 0, record, history: entry.history }), 'fc');
+    expect(svg.startsWith('<svg role="img" aria-label="')).toBe(true);
+    expect(svg).not.toMatch(/https?:|xmlns/);
+    expect(svg).not.toContain('<img');
+    expect(svg).toContain('&lt;img src=x onerror=alert(1)&gt;: forecasts to 1980</text>');
+  });
+  it('renumbers element ids from the prefix, references included', async () => {
+    // A clipped mark makes vega emit a clipPath with an id from its process-wide counter.
+    const clipped: TopLevelSpec = {
+      title: 'Clipped',
+      description: 'A clipped line.',
+      data: { values: [{ x: 1, y: 1 }, { x: 2, y: 3 }] },
+      mark: { type: 'line', clip: true },
+      encoding: { x: { field: 'x', type: 'quantitative', scale: { domain: [1, 1.5] } }, y: { field: 'y', type: 'quantitative' } },
+    };
+    const svg = await renderChartSvg(clipped, 'fc');
+    const ids = Array.from(svg.matchAll(/ id="([^"]+)"/g), (m) => m[1]);
+    expect(ids).toEqual(['fc-1']);
+    expect(svg).toContain('clip-path="url(#fc-1)"');
+  });
+  it('gives the same SVG for the same chart whatever was rendered before', async () => {
+    const entry = sampleSeries('lakeHuron');
+    const spec = residualAcfChart({ series: 'Lake', record: entry.record });
+    const first = await renderChartSvg(spec, 'acf');
+    await renderChartSvg(spec, 'other');
+    expect(await renderChartSvg(spec, 'acf')).toBe(first);
+  });
+});

@@ -1,0 +1,165 @@
+// The HTML memo: every section for every series, self-contained (no script, no web address),
+// user text escaped in text and in chart SVG, "not run" notes for missing parts, templates
+// overridable file by file. Expected structure and wording are our spec (templates/,
+// src/memo/wording.ts); numbers come from the fixture records (sampleInput.ts).
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import Handlebars from 'handlebars';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { assertSelfContained, renderMemoHtml } from '../../src/memo/renderMemoHtml.js';
+import type { MemoInput } from '../../src/memo/memoInput.js';
+import { bareRecord, sampleInput } from './sampleInput.js';
+
+const HOSTILE = '<img src=x onerror=alert(1)>';
+
+/** The HTML of one series section, from its opening tag to the next section. */
+function sectionOf(html: string, anchor: string): string {
+  const start = html.indexOf(`<section class="series" id="${anchor}"`);
+  if (start < 0) throw new Error(`no section ${anchor}`);
+  const end = html.indexOf('<section', start + 10);
+  return html.slice(start, end < 0 ? undefined : end);
+}
+
+describe('the full memo', () => {
+  let input: MemoInput;
+  let html: string;
+  beforeAll(async () => {
+    input = sampleInput();
+    html = await renderMemoHtml(input);
+  });
+
+  it('holds no script and no web address', () => {
+    expect(html).not.toMatch(/<script/i);
+    expect(html).not.toContain('http://');
+    expect(html).not.toContain('https://');
+    expect(html).not.toMatch(/<link|@import|src="/i);
+  });
+
+  it('has a header with the memo details and the draft status', () => {
+    expect(html).toContain('<h1 class="memo-title">Long-range outlook for basin inflows and demand drivers</h1>');
+    expect(html).toContain('Vessamor Basin Water Cooperative');
+    expect(html).toContain('Status: Draft');
+    expect(html).toContain('Awaiting sign-off from Ruth Anselm.');
+    expect(html).toContain('@page { size: A4; margin: 17mm 17mm 19mm 17mm; }');
+  });
+
+  it('summarises every series with the end-of-horizon forecast of both models', () => {
+    const summary = html.slice(html.indexOf('<section class="summary"'), html.indexOf('<section class="series"'));
+    expect(summary.match(/<article class="summary-card">/g)).toHaveLength(3);
+    const lake = input.series[0].record;
+    // 577.83 and 575.36 – 580.31: the Lake Huron deterministic forecast for 1982 to two decimals.
+    expect(lake.forecasts.deterministic[9].point.toFixed(2)).toBe('577.83');
+    expect(summary).toContain('<td class="num">577.83</td><td class="num">576.21\u2009\u2013\u2009579.45</td><td class="num">575.36\u2009\u2013\u2009580.31</td>');
+    expect(summary).toContain('<span class="tag">Recommended</span> <strong>Deterministic trend</strong>');
+    expect(summary.match(/class="summary-caveat severity-/g)).toHaveLength(3);
+    expect(summary).toContain('A forecast is an estimate, not a guarantee.');
+    expect(summary).toContain('Prediction intervals assume the fitted model holds over the whole horizon.');
+    expect(summary).toContain('remain with qualified professionals and the rules that apply to them.');
+  });
+
+  it('has every section for each series', () => {
+    input.series.forEach((entry, i) => {
+      const anchor = `series-${i + 1}`;
+      const section = sectionOf(html, anchor);
+      for (const figure of ['history', 'forecast', 'ratio', 'backtest', 'acf', 'stability']) {
+        expect(section, `${anchor} ${figure}`).toMatch(new RegExp(`<figure class="chart" id="${anchor}-${figure}">\\s*<svg role="img"`));
+      }
+      expect(section.match(/<figcaption>/g)).toHaveLength(6);
+      expect(section).toContain('<table class="numbers forecast-table">');
+      expect(section.match(/<tbody>[\s\S]*?<\/tbody>/)?.[0].match(/<tr>/g)).toHaveLength(entry.record.settings.horizon);
+      expect(section).toContain('<table class="numbers backtest-point">');
+      expect(section).toContain('<table class="numbers backtest-interval">');
+      expect(section).toContain('<table class="numbers comparison">');
+      expect(section).toContain('<table class="numbers unit-root">');
+      expect(section.match(/<p class="equation"><code>/g)).toHaveLength(2);
+      expect(section.match(/<table class="numbers coefficients">/g)).toHaveLength(2);
+      expect(section).toContain('data-caveat="fixed-line-extrapolation"');
+      expect(section).toMatch(/<li class="(is-flagged)?">(Deterministic trend: |Stochastic trend: )/);
+      expect(section).not.toContain('class="not-run"');
+    });
+  });
+
+  it('writes both model equations and their standard errors', () => {
+    const section = sectionOf(html, 'series-1');
+    // Handlebars' own escaping, which the template applies to every {{ }} value.
+    const equation = Handlebars.Utils.escapeExpression(input.series[0].record.models.stochastic.equation);
+    expect(equation).toContain('(1 - B) w_t &#x3D; ');
+    expect(section).toContain(equation);
+    // Lake Huron slope −0.02111 (s.e. 0.008838), analyseSeries on lake-huron.csv.
+    expect(section).toContain('<th scope="row">Slope per period</th><td class="num">\u22120.02111</td><td class="num">0.008838</td>');
+  });
+
+  it('has the assumptions register, the sign-off block with blank lines, and the appendix', () => {
+    expect(html).toContain('<th scope="row">Transform</th><td>natural log</td><td>Growth is roughly proportional to the level</td><td>Analyst (configuration)</td>');
+    expect(html).toContain('<dd>Approved with changes</dd>');
+    expect(html.match(/<dd class="line"><\/dd>/g)).toHaveLength(3);
+    expect(html).toContain('<code>trendbrief run configs/basin-outlook.yaml</code>');
+    expect(html).toContain(input.series[1].record.series.source.sha256);
+  });
+
+  it('is the same, byte for byte, when rendered again', async () => {
+    expect(await renderMemoHtml(input)).toBe(html);
+  });
+});
+
+describe('escaping and link-free text', () => {
+  it('escapes a hostile series title in the text and in the chart SVG', async () => {
+    const input = sampleInput(['lakeHuron']);
+    input.series[0].record.series.title = HOSTILE;
+    input.memo.title = `${HOSTILE} memo`;
+    input.series[0].notes = 'See https://example.org/notes and http://example.org for details.';
+    const html = await renderMemoHtml(input);
+    expect(html).not.toContain('<img');
+    expect(html).toContain('<h2 id="series-1-heading" class="series-title">&lt;img src&#x3D;x onerror&#x3D;alert(1)&gt;</h2>');
+    expect(html).toContain('&lt;img src=x onerror=alert(1)&gt;: forecasts to 1982</text>');
+    expect(html).not.toMatch(/https?:\/\//);
+    expect(html).toContain('See https:\u2060//example.org/notes');
+  });
+
+  it('rejects templates that would load anything', () => {
+    expect(() => assertSelfContained('<style>@import url(x.css);</style>')).toThrow(/not be self-contained/);
+    expect(() => assertSelfContained('<p>ok</p><script>1</script>')).toThrow(/<script/);
+    expect(() => assertSelfContained('<p>plain</p>')).not.toThrow();
+  });
+});
+
+describe('a record without the later parts', () => {
+  it('says the backtest, stability and recommendation were not run, and leaves out the history chart without data', async () => {
+    const input = sampleInput(['nile']);
+    const record = bareRecord('nile');
+    record.evidence.stability = null;
+    input.series[0] = { record, assumptions: [] };
+    const html = await renderMemoHtml(input);
+    const section = sectionOf(html, 'series-1');
+    expect(section).toContain('The backtest was not run for this series');
+    expect(section).toContain('The trend-stability checks were not run for this series.');
+    expect(section).toContain('No recommendation was recorded for this series');
+    expect(section).toContain('The observed values were not supplied with this memo');
+    expect(section).toContain('data-caveat="backtest-thin"');
+    expect(section.match(/<figure class="chart"/g)).toHaveLength(3);
+    expect(html).toContain('No assumptions were recorded for this series.');
+  });
+});
+
+describe('templates', () => {
+  it('takes files from a consultancy directory and the rest from the built-in set', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'trendbrief-templates-'));
+    writeFileSync(join(dir, 'memo.css'), 'body { font-family: serif; } /* house style */');
+    const input = sampleInput(['lakeHuron']);
+    input.paper = 'Letter';
+    const html = await renderMemoHtml(input, { templatesDir: dir });
+    expect(html).toContain('/* house style */');
+    expect(html).not.toContain('--spruce');
+    expect(html).toContain('@page { size: letter;');
+    expect(html).toContain('<h2 id="summary-heading">Summary for the client</h2>');
+  });
+  it('signs the memo off when every reviewer approved', async () => {
+    const input = sampleInput(['lakeHuron']);
+    input.memo.sign_off.push({ reviewer: 'Ruth Anselm', date: '2026-12-02', decision: 'approved' });
+    const html = await renderMemoHtml(input);
+    expect(html).toContain('<body class="is-signed-off">');
+    expect(html).toContain('Status: Signed off');
+    expect(html).not.toContain('<dd class="line">');
+  });
+});
