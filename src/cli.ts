@@ -5,6 +5,7 @@ import { cliMessages, formatProblem, InputError } from './errors.js';
 import { runFit, FIT_HELP } from './cli/fitCommand.js';
 import { runCheck } from './cli/checkCommand.js';
 import { runInit } from './cli/initCommand.js';
+import { runRun } from './cli/runCommand.js';
 import { toolVersion } from './analysis/toolVersion.js';
 
 export interface CliIo {
@@ -12,7 +13,7 @@ export interface CliIo {
   stderr(text: string): void;
 }
 
-const COMMANDS = ['fit', 'check', 'init'] as const;
+const COMMANDS = ['run', 'check', 'fit', 'init'] as const;
 const GLOBAL_OPTIONS = ['--help', '--version'] as const;
 
 export const EXIT = { ok: 0, internal: 1, input: 2, mismatch: 3 } as const;
@@ -20,13 +21,14 @@ export const EXIT = { ok: 0, internal: 1, input: 2, mismatch: 3 } as const;
 const MAIN_HELP = `trendbrief: compare deterministic and stochastic trend extrapolation for forecast memos
 
 Usage:
+  trendbrief run CONFIG.yaml...       write the forecast memo of each config
   trendbrief fit FILE.csv [options]   fit both trend models to one series and forecast
   trendbrief check CONFIG.yaml...     check configs and their series files without fitting
   trendbrief init [DIR]               write a starter config and an example series
   trendbrief --help                   this text
   trendbrief --version                the tool's version
 
-Run 'trendbrief fit --help' for the fit options.
+Run 'trendbrief COMMAND --help' for a command's options.
 `;
 
 export async function cli(argv: readonly string[], io: CliIo): Promise<number> {
@@ -51,6 +53,7 @@ export async function cli(argv: readonly string[], io: CliIo): Promise<number> {
       }
       return await runFit(rest, io);
     }
+    if (command === 'run') return await runRun(rest, io);
     if (command === 'check') return await runCheck(rest, io);
     if (command === 'init') return await runInit(rest, io);
     if (command.startsWith('-')) throw new InputError(cliMessages.unknownOption(command, closestName(command, GLOBAL_OPTIONS), ''));

@@ -1,12 +1,10 @@
 // `trendbrief check CONFIG...`: validates each config and reads every series file it names with
 // the checks the run would make (enough observations for the order limits, values the transform
 // accepts), without fitting. Every config is checked even when an earlier one fails.
-import { isAbsolute, relative } from 'node:path';
-import { requiredObservations } from '../analysis/analyseSeries.js';
 import { loadConfig } from '../config/loadConfig.js';
-import type { RunPlan, SeriesPlan } from '../config/runPlan.js';
-import { readSeriesCsv } from '../data/readSeriesCsv.js';
+import type { RunPlan } from '../config/runPlan.js';
 import type { Series } from '../data/series.js';
+import { readPlannedSeries } from '../run/readPlannedSeries.js';
 import { configCommandMessages, formatProblem, InputError, type InputProblem } from '../errors.js';
 import { splitOptions } from './splitOptions.js';
 
@@ -23,23 +21,6 @@ Options:
 interface Io {
   stdout(text: string): void;
   stderr(text: string): void;
-}
-
-/** A path under the working folder is shown relative to it, as the user would type it. */
-function shownPath(file: string): string {
-  const shown = relative(process.cwd(), file);
-  return shown === '' || shown.startsWith('..') || isAbsolute(shown) ? file : shown;
-}
-
-function readPlannedSeries(series: SeriesPlan): Series {
-  const { settings } = series;
-  return readSeriesCsv(shownPath(series.file), {
-    column: series.column,
-    periodColumn: series.periodColumn,
-    frequency: series.frequency,
-    minObservations: requiredObservations(settings.maxP.value, settings.maxQ.value),
-    transform: settings.transform.value,
-  });
 }
 
 function describeSeries(id: string, series: Series): string {
