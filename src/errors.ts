@@ -628,3 +628,18 @@ export const backtestMessages = {
     );
   },
 };
+
+// ---------------------------------------------------------------------------
+// Run: messages about running memos (src/run/, src/cli/runCommand.ts).
+// ---------------------------------------------------------------------------
+
+export const runMessages = {
+  noConfigs(): InputProblem {
+    return problem('cli.missing-config', 'run needs at least one config file', 'give one or more, e.g. trendbrief run configs/demo.yaml');
+  },
+  badSourceDateEpoch(value: string): InputProblem {
+    return problem('env.source-date-epoch', `SOURCE_DATE_EPOCH '${value}' is not a whole number of seconds`, 'set it to seconds since 1970-01-01 UTC, or unset it', {
+      field: 'SOURCE_DATE_EPOCH',
+    });
+  },
+};
