@@ -1,6 +1,7 @@
 // Sentences the memo builds from the record's numbers outside the caveats: the unit-root
 // table, the backtest, the comparison tests, the break tests and the recommendation. The
 // numbers arrive formatted; these functions only choose the words.
+import type { RefitPolicy, WindowKind } from '../backtest/backtestRecord.js';
 import type { Frequency } from '../data/period.js';
 import type { ModelKind } from './recordParts.js';
 import { countPeriods, MODEL_IN_TEXT, MODEL_NAME } from './wording.js';
@@ -27,16 +28,20 @@ export const evidenceWording = {
     lastPeriod: string;
     horizon: number;
     frequency: Frequency;
-    refit: boolean | number | string;
-    window: number | string | null;
+    refit: RefitPolicy;
+    window: WindowKind;
+    step: number;
+    minTraining: number;
   }) =>
     `Each model was fitted to the history up to a past date (an origin) and its forecasts compared with what then happened. ` +
-    `There were ${a.origins} origins, from ${a.firstPeriod} (${a.firstLength} observations) to ${a.lastPeriod} (${a.lastLength} observations), each forecast up to ${countPeriods(a.horizon, a.frequency)} ahead. ` +
-    `${refitWords(a.refit)} ${windowWords(a.window)} The no-change benchmark forecasts the last observed value at every horizon; a MASE below 1 beats its one-step error.`,
+    `There were ${a.origins} origins, ${countPeriods(a.step, a.frequency)} apart, from ${a.firstPeriod} (${a.firstLength} observations) to ${a.lastPeriod} (${a.lastLength} observations), each forecast up to ${countPeriods(a.horizon, a.frequency)} ahead. ` +
+    `${REFIT_WORDS[a.refit]} ${a.window === 'expanding' ? 'Each fit used all the history up to its origin.' : `Each fit used a sliding window of at least ${a.minTraining} observations.`} ` +
+    'The no-change benchmark forecasts the last observed value at every horizon; a MASE below 1 beats the in-sample one-step error of that benchmark.',
+  backtestUnavailable: (reason: string) => `Why: ${reason}`,
   comparisonIntro:
-    'At each horizon a test of equal accuracy compares the two models\u2019 backtest losses: squared error for the point forecasts and the 95% interval score for the intervals. A small p-value means the difference is unlikely to be chance.',
-  comparisonOutcome: (better: ModelKind | null, available: boolean, reason: string | undefined) =>
-    !available ? `not tested: ${reason ?? 'no reason recorded'}` : better === null ? 'no clear difference' : `${MODEL_NAME[better].toLowerCase()} more accurate`,
+    'At each horizon a Diebold-Mariano test of equal accuracy compares the two models\u2019 backtest losses: squared error for the point forecasts and the 95% interval score for the intervals. The outcome names the model with the lower average loss; a small p-value means the difference is unlikely to be chance.',
+  comparisonOutcome: (better: ModelKind | null, available: boolean, reason: string | null) =>
+    !available ? `not tested: ${reason ?? 'no reason recorded'}` : better === null ? 'equal average loss' : `${MODEL_NAME[better].toLowerCase()} lower`,
 
   breakTest: (a: { model: ModelKind; rejects5: boolean; rejects10: boolean; period: string; stat: string; critical5: string; pBound: string }) => {
     const what = a.model === 'deterministic' ? 'the level or slope of the trend line' : 'the drift (the average change per period)';
@@ -57,18 +62,11 @@ export const evidenceWording = {
   scaleNote: (scale: string | null) => (scale === null ? 'Estimates are in the original units of the series.' : `Estimates are on the ${scale} scale of the series.`),
 } as const;
 
-function refitWords(refit: boolean | number | string): string {
-  if (refit === true) return 'Both models were refitted at every origin.';
-  if (refit === false) return 'The models were fitted once and not refitted at later origins.';
-  if (typeof refit === 'number') return `The models were refitted every ${refit} origins.`;
-  return `Refitting: ${refit}.`;
-}
-
-function windowWords(window: number | string | null): string {
-  if (window === null || window === 'expanding') return 'Each fit used all the history up to its origin.';
-  if (typeof window === 'number') return `Each fit used the latest ${window} observations up to its origin.`;
-  return `Fitting window: ${window}.`;
-}
+const REFIT_WORDS: Record<RefitPolicy, string> = {
+  reselect: 'At every origin both models were refitted, their ARMA orders chosen afresh by AICc.',
+  reestimate: 'At every origin the coefficients were re-estimated, with the ARMA orders held at the full-history choice.',
+  fixed: 'The full-history fits were used at every origin without re-estimation, so the scores are optimistic.',
+};
 
 function capitalise(text: string): string {
   return text.charAt(0).toUpperCase() + text.slice(1);

@@ -154,8 +154,10 @@ export const TEMPLATE_TEXT = {
   noAssumptions: 'No assumptions were recorded for this series.',
   forecastCaption: (units: string) => (units === '' ? 'Forecasts by period' : `Forecasts by period (${units})`),
   pointCaption: (units: string) => (units === '' ? 'Point accuracy by horizon' : `Point accuracy by horizon (RMSE in ${units})`),
-  intervalCaption: (units: string) =>
-    units === '' ? 'Interval accuracy by horizon' : `Interval accuracy by horizon (width, score and CRPS in ${units})`,
+  intervalCaption: (units: string, transformed: boolean) =>
+    units === ''
+      ? `Interval accuracy by horizon${transformed ? ' (CRPS on the modelling scale)' : ''}`
+      : `Interval accuracy by horizon (width and score in ${units}; CRPS ${transformed ? 'on the modelling scale' : `in ${units}`})`,
   comparisonCaption: 'Comparison tests by horizon',
   pointColumns: ['RMSE', 'MAPE', 'MASE'],
   intervalColumns: ['80% cover', '95% cover', '95% width', '95% score', 'CRPS'],

@@ -26,12 +26,13 @@ function stabilityOf(entry: MemoSeries): StabilityPart {
 function allCharts(entry: MemoSeries): Record<string, TopLevelSpec> {
   const { record, history, units } = entry;
   const input = { series: record.series.title, units, decimals: 2, record };
-  if (history === undefined || record.backtest === undefined) throw new Error('the sample series lacks history or backtest');
+  const backtest = record.backtest;
+  if (history === undefined || backtest === undefined || backtest === null) throw new Error('the sample series lacks history or backtest');
   return {
     history: historyChart({ ...input, history }),
     forecast: forecastChart({ ...input, history }),
     widthRatio: widthRatioChart(input),
-    backtest: backtestChart({ ...input, backtest: record.backtest }),
+    backtest: backtestChart({ ...input, backtest }),
     residualAcf: residualAcfChart(input),
     stability: stabilityChart({ ...input, stability: stabilityOf(entry) }),
   };
@@ -110,7 +111,7 @@ describe('chart data match the record', () => {
 
   it('backtest rows are the record per-horizon RMSE and 95% coverage of each method', () => {
     const backtest = record.backtest;
-    if (backtest === undefined) throw new Error('no backtest');
+    if (backtest === undefined || backtest === null) throw new Error('no backtest');
     const rows = backtestRows(backtest);
     expect(rows.filter((r) => r.method === 'Stochastic').map((r) => r.rmse)).toEqual(backtest.per_horizon.stochastic.map((r) => r.rmse));
     expect(rows.filter((r) => r.method === 'No change').map((r) => r.coverage95)).toEqual(backtest.per_horizon.naive.map(() => null));

@@ -1,18 +1,13 @@
-// Hand-made backtest and recommendation parts for test records, shaped like the record
-// contract. Their numbers are invented but scaled from the record they are attached to
-// (our spec: plausible magnitudes, not computed statistics), so the memo has realistic input.
+// Hand-made backtest and recommendation parts for test records, shaped exactly like the
+// record's BacktestRecord and RecommendationRecord. Their numbers are invented but scaled
+// from the record they are attached to (our spec: plausible magnitudes, not computed
+// statistics), so the memo has realistic input without the seconds a real backtest takes.
 import { addPeriods } from '../../src/data/period.js';
-import type {
-  BacktestComparison,
-  BacktestHorizonRow,
-  BacktestPart,
-  MemoRecord,
-  ModelKind,
-  RecommendationPart,
-} from '../../src/memo/recordParts.js';
+import type { BacktestComparison, BacktestHorizonRow, BacktestPart, MemoRecord, ModelKind, RecommendationPart } from '../../src/memo/recordParts.js';
 
 /** z for a 95% interval, 1.959964 (scipy 1.10.1 norm.ppf(0.975)). */
 const Z95 = 1.959963984540054;
+const BACKTEST_HORIZON = 5;
 
 /** One-step forecast standard deviation in the series' units, read off the stochastic interval. */
 function unitScale(record: MemoRecord): number {
@@ -20,59 +15,83 @@ function unitScale(record: MemoRecord): number {
   return (hi - lo) / (2 * Z95);
 }
 
-function horizonRow(h: number, scale: number, level: number, factor: number, coverage95: number | null): BacktestHorizonRow {
+function horizonRow(h: number, n: number, scale: number, level: number, factor: number, coverage95: number | null): BacktestHorizonRow {
   const rmse = scale * Math.sqrt(h) * factor;
+  const intervals = coverage95 !== null;
   return {
     h,
-    n: 14 - Math.max(0, h - 5),
+    n,
     mae: rmse * 0.8,
     rmse,
     mape: (100 * rmse * 0.8) / Math.abs(level),
     mase: (rmse * 0.8) / (scale * 1.3 * 0.8),
-    coverage: coverage95 === null ? undefined : { '80': coverage95 - 0.14, '95': coverage95 },
-    width: coverage95 === null ? undefined : { '80': 2.56 * rmse * 0.95, '95': 3.92 * rmse * 0.95 },
-    interval_score: coverage95 === null ? undefined : { '80': 3.1 * rmse, '95': 4.4 * rmse },
-    crps: coverage95 === null ? undefined : 0.58 * rmse,
+    coverage: intervals ? { '80': coverage95 - 0.14, '95': coverage95 } : { '80': null, '95': null },
+    width: intervals ? { '80': 2.56 * rmse * 0.95, '95': 3.92 * rmse * 0.95 } : { '80': null, '95': null },
+    interval_score: intervals ? { '80': 3.1 * rmse, '95': 4.4 * rmse } : { '80': null, '95': null },
+    crps: intervals ? 0.58 * rmse : null,
   };
 }
 
+function comparisonRow(h: number, loss: BacktestComparison['loss'], origins: number): BacktestComparison {
+  if (h === BACKTEST_HORIZON) {
+    return { h, loss, n: origins, mean_difference: null, statistic: null, p_value: null, better: null, available: false, reason: 'the long-run variance estimate of the loss differences is not positive' };
+  }
+  return { h, loss, n: origins - h + 1, mean_difference: 0.1 * h, statistic: 0.4 + 0.5 * h, p_value: Math.max(0.004, 0.6 - 0.16 * h), better: h > 2 ? 'stochastic' : 'deterministic', available: true, reason: null };
+}
+
 export function handMadeBacktest(record: MemoRecord, origins = 14): BacktestPart {
-  const horizon = record.settings.horizon;
   const scale = unitScale(record);
   const level = record.forecasts.stochastic[0].point;
-  const firstLength = record.series.n - horizon - origins + 1;
-  const hs = Array.from({ length: horizon }, (_, i) => i + 1);
-  const comparison: BacktestComparison[] = hs.flatMap((h) =>
-    (['squared_error', 'interval_score_95'] as const).map((loss) =>
-      h <= horizon - 2
-        ? { h, loss, statistic: 0.4 + 0.21 * h, p_value: Math.max(0.004, 0.6 - 0.09 * h), better: h > 4 ? ('stochastic' as const) : null, available: true }
-        : { h, loss, statistic: null, p_value: null, better: null, available: false, reason: 'fewer than 5 forecast errors at this horizon' },
-    ),
-  );
+  const n = record.series.n;
+  const firstLength = n - BACKTEST_HORIZON - origins + 1;
+  const hs = Array.from({ length: BACKTEST_HORIZON }, (_, i) => i + 1);
+  const model = (kind: ModelKind) => ({ p: record.models[kind].p, q: record.models[kind].q, loglik: record.models[kind].loglik, converged: true });
   return {
-    settings: { origins, horizon, refit: true, window: 'expanding', min_train: firstLength, levels: [80, 95] },
+    settings: {
+      origins,
+      requested_origins: origins,
+      horizon: BACKTEST_HORIZON,
+      window: 'expanding',
+      step: 1,
+      refit: 'reselect',
+      min_training_length: firstLength,
+      levels: [80, 95],
+      transform: record.series.transform,
+      coefficient_uncertainty: true,
+      point: 'median',
+      max_p: 3,
+      max_q: 3,
+      orders: null,
+      significance: 0.05,
+    },
+    notes: ['The last origin is five periods before the end of the history, so every origin is scored at every horizon.'],
     origins: Array.from({ length: origins }, (_, i) => ({
       length: firstLength + i,
       period: addPeriods(record.series.first, firstLength + i - 1),
+      training_length: firstLength + i,
+      mase_scale: scale * 1.3 * 0.8,
+      models: { deterministic: model('deterministic'), stochastic: model('stochastic') },
     })),
     per_horizon: {
-      deterministic: hs.map((h) => horizonRow(h, scale, level, 1.0 + 0.04 * h, 0.93 - 0.025 * h)),
-      stochastic: hs.map((h) => horizonRow(h, scale, level, 0.95 + 0.01 * h, 0.95 - 0.004 * h)),
-      naive: hs.map((h) => horizonRow(h, scale, level, 1.3, null)),
+      deterministic: hs.map((h) => horizonRow(h, origins, scale, level, 1.0 + 0.08 * h, 0.93 - 0.05 * h)),
+      stochastic: hs.map((h) => horizonRow(h, origins, scale, level, 0.95 + 0.02 * h, 0.95 - 0.008 * h)),
+      naive: hs.map((h) => horizonRow(h, origins, scale, level, 1.3, null)),
     },
-    comparison,
-    notes: ['Horizons 9 and 10 have too few forecast errors for a comparison test.'],
+    comparison: hs.flatMap((h) => [comparisonRow(h, 'squared_error', origins), comparisonRow(h, 'interval_score_95', origins)]),
+    forecasts: [],
   };
 }
 
 export function handMadeRecommendation(model: ModelKind): RecommendationPart {
   return {
     model,
-    rule: 'Prefer the model with the lower backtest RMSE at the horizon end unless the unit-root reading contradicts it.',
+    rule: 'prefer-stochastic',
+    rule_text: 'Recommend the stochastic trend unless the deterministic trend scores better on the backtest at the longer horizons and the unit-root evidence allows it.',
     fixed_by_config: false,
+    significance: 0.05,
     reasons:
       model === 'stochastic'
-        ? ['Lower backtest error at horizons 5 and beyond.', 'Its wider intervals cover the backtest outcomes at close to the stated rate.']
-        : ['Lower backtest error at every horizon.', 'The unit-root checks favour a steady trend line.'],
+        ? ['Lower backtest interval scores at horizons 3 to 5.', 'Its wider intervals cover the backtest outcomes at close to the stated rate.']
+        : ['Lower backtest interval scores at every horizon.', 'The unit-root checks favour a steady trend line.'],
   };
 }

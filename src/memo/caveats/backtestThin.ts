@@ -1,4 +1,4 @@
-// Fires when the backtest was not run (high) or used fewer than ten forecast origins
+// Fires when the backtest was not run or could not be (high) or used fewer than ten forecast origins
 // (medium; our threshold: with fewer, a single unusual period moves the averages and the
 // comparison tests have little power).
 import type { Caveat, CaveatRule } from './caveat.js';
@@ -13,8 +13,8 @@ export const backtestThin: CaveatRule = {
   fires: `backtest not run, or fewer than ${MIN_BACKTEST_ORIGINS} origins`,
   evaluate({ record }): Caveat | null {
     const { backtest } = record;
-    if (backtest === undefined) {
-      return { id: ID, severity: 'high', text: caveatWording.backtestNotRun(), numbers: { origins: 0 } };
+    if (backtest === undefined || backtest === null) {
+      return { id: ID, severity: 'high', text: caveatWording.backtestNotRun(record.backtest_unavailable), numbers: { origins: 0 } };
     }
     const origins = backtest.origins.length;
     if (origins >= MIN_BACKTEST_ORIGINS) return null;

@@ -19,8 +19,9 @@ export const caveatWording = {
       ? 'This weighs against the deterministic-trend model that this memo recommends; see the reasons given for that choice.'
       : 'This weighs against the deterministic-trend model.'),
 
-  backtestNotRun: () =>
-    'No backtest was run for this series, so neither model has been checked on forecasts made from past data. The accuracy of both is untested.',
+  backtestNotRun: (reason: string | undefined) =>
+    'No backtest was run for this series, so neither model has been checked on forecasts made from past data. The accuracy of both is untested.' +
+    (reason === undefined ? '' : ` (${reason})`),
 
   backtestThin: (a: { origins: number; minimum: number }) =>
     `The backtest rests on only ${a.origins} forecast origin${a.origins === 1 ? '' : 's'} (fewer than ${a.minimum}), ` +

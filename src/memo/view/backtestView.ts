@@ -29,13 +29,13 @@ export interface ComparisonCells {
 
 const LOSSES: readonly BacktestComparison['loss'][] = ['squared_error', 'interval_score_95'];
 
-function comparisonCells(c: BacktestComparison | undefined): ComparisonCells {
+function comparisonCells(c: BacktestComparison | undefined, significance: number): ComparisonCells {
   if (c === undefined) return { statistic: MISSING, p: MISSING, outcome: MISSING, decided: false };
   return {
     statistic: formatSignificant(c.statistic, 3),
     p: formatP(c.p_value),
     outcome: noLinks(evidenceWording.comparisonOutcome(c.better, c.available, c.reason)),
-    decided: c.available && c.better !== null,
+    decided: c.available && c.better !== null && c.p_value !== null && c.p_value < significance,
   };
 }
 
@@ -63,13 +63,15 @@ export function backtestView(backtest: BacktestPart, frequency: Frequency, decim
     settings: evidenceWording.backtestSettings({
       origins: backtest.origins.length,
       firstLength: first?.length ?? 0,
-      firstPeriod: first?.period ?? '',
+      firstPeriod: first?.period ?? `observation ${first?.length ?? 0}`,
       lastLength: last?.length ?? 0,
-      lastPeriod: last?.period ?? '',
+      lastPeriod: last?.period ?? `observation ${last?.length ?? 0}`,
       horizon: backtest.settings.horizon,
       frequency,
       refit: backtest.settings.refit,
       window: backtest.settings.window,
+      step: backtest.settings.step,
+      minTraining: backtest.settings.min_training_length,
     }),
     point: horizons.map((h) => ({
       h,
@@ -93,9 +95,10 @@ export function backtestView(backtest: BacktestPart, frequency: Frequency, decim
       }),
     })),
     comparisonIntro: evidenceWording.comparisonIntro,
+    // The p-value alone decides significance; the outcome only names the lower mean loss.
     comparison: [...new Set(backtest.comparison.map((c) => c.h))]
       .sort((a, b) => a - b)
-      .map((h) => ({ h, tests: LOSSES.map((loss) => comparisonCells(backtest.comparison.find((c) => c.h === h && c.loss === loss))) })),
+      .map((h) => ({ h, tests: LOSSES.map((loss) => comparisonCells(backtest.comparison.find((c) => c.h === h && c.loss === loss), backtest.settings.significance)) })),
     notes: backtest.notes.map(noLinks),
   };
 }

@@ -29,6 +29,7 @@ export interface SeriesView {
   scale: string;
   recommendation: { model: string; gloss: string; rule: string; fixedByConfig: string; justification: string; reasons: string[] } | null;
   notRun: typeof NOT_RUN;
+  backtestUnavailable: string;
   captions: { forecast: string; point: string; interval: string };
   figures: {
     history: FigureView | null;
@@ -57,7 +58,8 @@ export async function seriesView(entry: MemoSeries, index: number): Promise<Seri
   const decimals = seriesDecimals(record);
   const chartInput = { series: title, units, decimals, record };
   const caveats = collectCaveats({ record, units });
-  const { backtest, recommendation } = record;
+  const backtest = record.backtest ?? undefined;
+  const { recommendation } = record;
   const stability = record.evidence.stability ?? undefined;
   const history = entry.history;
   return {
@@ -73,16 +75,17 @@ export async function seriesView(entry: MemoSeries, index: number): Promise<Seri
         : {
             model: evidenceWording.recommendation(recommendation.model),
             gloss: MODEL_GLOSS[recommendation.model],
-            rule: noLinks(evidenceWording.ruleApplied(recommendation.rule)),
+            rule: noLinks(evidenceWording.ruleApplied(recommendation.rule_text)),
             fixedByConfig: recommendation.fixed_by_config ? evidenceWording.fixedByConfig : '',
             justification: noLinks(recommendation.justification ?? ''),
             reasons: recommendation.reasons.map(noLinks),
           },
     notRun: NOT_RUN,
+    backtestUnavailable: record.backtest_unavailable === undefined ? '' : noLinks(evidenceWording.backtestUnavailable(record.backtest_unavailable)),
     captions: {
       forecast: TEMPLATE_TEXT.forecastCaption(units ?? ''),
       point: TEMPLATE_TEXT.pointCaption(units ?? ''),
-      interval: TEMPLATE_TEXT.intervalCaption(units ?? ''),
+      interval: TEMPLATE_TEXT.intervalCaption(units ?? '', record.series.transform.kind !== 'none'),
     },
     figures: {
       history: history === undefined || history.length === 0 ? null : await figureView(`${anchor}-history`, historyChart({ ...chartInput, history })),
