@@ -1,7 +1,7 @@
 // `trendbrief run CONFIG... [--out DIR] [--formats html,pdf,json,csv] [--quiet]`: one memo per
 // config. A config that fails is reported and the others still run; the exit code says the
 // worst that happened (2 for bad input, 1 for an internal failure).
-import { resolve } from 'node:path';
+import { basename, isAbsolute, resolve } from 'node:path';
 import { OUTPUT_FORMATS, type OutputFormat } from '../config/index.js';
 import { cliMessages, formatProblem, InputError, runMessages, type InputProblem } from '../errors.js';
 import { openPdfPrinter, type PdfPrinter } from '../memo/print/pdfPrinter.js';
@@ -47,7 +47,7 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
   let exitCode = 0;
   try {
     for (const config of positionals) {
-      const command = ['trendbrief run', shownPath(resolve(config)), ...(typeof out === 'string' ? ['--out', out] : []), ...(formats ? ['--formats', formats.join(',')] : [])].join(' ');
+      const command = ['trendbrief run', pathForRecord(config), ...(typeof out === 'string' ? ['--out', out] : []), ...(formats ? ['--formats', formats.join(',')] : [])].join(' ');
       try {
         const result = await runMemo(config, {
           outputFolder: typeof out === 'string' ? resolve(out) : undefined,
@@ -70,6 +70,12 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
     if (printer !== undefined) await (await printer).close();
   }
   return exitCode;
+}
+
+/** The config path as it may appear in an output: relative to the working folder, else its name alone. */
+function pathForRecord(config: string): string {
+  const shown = shownPath(resolve(config));
+  return isAbsolute(shown) ? basename(shown) : shown;
 }
 
 function parseFormats(value: string | true | undefined, problems: InputProblem[]): OutputFormat[] | undefined {

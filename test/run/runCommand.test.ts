@@ -1,0 +1,116 @@
+// `trendbrief run` end to end on small configs in a temporary folder (expected files and
+// behaviour: our spec, DESIGN.md "Output and safety" and the memo issue).
+import { copyFileSync, existsSync, mkdirSync, mkdtempSync, readFileSync, readdirSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join, resolve } from 'node:path';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { sha256 } from '../../src/run/manifest.js';
+import { runCli } from '../support/runCli.js';
+
+const FIXTURES = resolve('test/fixtures');
+
+function config(title: string, extra = ''): string {
+  return `memo:
+  id: lake-outlook
+  title: ${title}
+  client: Invented Shoreline Trust
+  reviewers:
+    - name: A. Reviewer
+      role: lead
+defaults:
+  max_p: 1
+  max_q: 1
+  backtest: {origins: 4, horizon: 2, refit: reestimate}
+series:
+  - id: lake-level
+    title: Lake level
+    units: ft
+    file: data/lake-huron.csv
+    horizon: 5
+${extra}output:
+  folder: out
+  formats: [html, json, csv]
+`;
+}
+
+let root = '';
+const savedEpoch = process.env.SOURCE_DATE_EPOCH;
+
+beforeEach(() => {
+  root = mkdtempSync(join(tmpdir(), 'tb-run-'));
+  mkdirSync(join(root, 'data'));
+  copyFileSync(join(FIXTURES, 'lake-huron.csv'), join(root, 'data/lake-huron.csv'));
+  process.env.SOURCE_DATE_EPOCH = '1767225600';
+});
+
+afterEach(() => {
+  if (savedEpoch === undefined) delete process.env.SOURCE_DATE_EPOCH;
+  else process.env.SOURCE_DATE_EPOCH = savedEpoch;
+});
+
+describe('trendbrief run', () => {
+  it('writes the memo folder with every file the manifest lists, and no machine path', async () => {
+    writeFileSync(join(root, 'memo.yaml'), config('Lake outlook'));
+    const run = await runCli(['run', join(root, 'memo.yaml')]);
+    expect(run.stderr).toBe('');
+    expect(run.code).toBe(0);
+    const folder = join(root, 'out/lake-outlook');
+    expect(readdirSync(folder).sort()).toEqual(['forecasts.csv', 'manifest.json', 'memo.html', 'record.json']);
+    const manifest = JSON.parse(readFileSync(join(folder, 'manifest.json'), 'utf8')) as {
+      run_date: string;
+      inputs: { role: string; path: string; sha256: string }[];
+      outputs: { file: string; sha256: string }[];
+    };
+    // SOURCE_DATE_EPOCH 1767225600 is 2026-01-01T00:00:00Z (common practice: date -u -d @1767225600).
+    expect(manifest.run_date).toBe('2026-01-01');
+    expect(manifest.inputs.map((input) => input.path)).toEqual(['memo.yaml', 'data/lake-huron.csv']);
+    expect(manifest.inputs[1].sha256).toBe(sha256(readFileSync(join(root, 'data/lake-huron.csv'))));
+    for (const output of manifest.outputs) expect(sha256(readFileSync(join(folder, output.file))), output.file).toBe(output.sha256);
+    for (const file of readdirSync(folder)) expect(readFileSync(join(folder, file), 'utf8'), file).not.toContain(root);
+    const record = JSON.parse(readFileSync(join(folder, 'record.json'), 'utf8')) as { records: { series: { id: string; source: { file: string } }; recommendation: { model: string } }[] };
+    expect(record.records[0].series.id).toBe('lake-level');
+    expect(record.records[0].series.source.file).toBe('data/lake-huron.csv');
+    expect(['deterministic', 'stochastic']).toContain(record.records[0].recommendation.model);
+  });
+
+  it('writes the same bytes twice under SOURCE_DATE_EPOCH', async () => {
+    writeFileSync(join(root, 'memo.yaml'), config('Lake outlook'));
+    await runCli(['run', join(root, 'memo.yaml'), '--quiet']);
+    const folder = join(root, 'out/lake-outlook');
+    const first = Object.fromEntries(readdirSync(folder).map((file) => [file, readFileSync(join(folder, file), 'utf8')]));
+    await runCli(['run', join(root, 'memo.yaml'), '--quiet']);
+    for (const [file, content] of Object.entries(first)) expect(readFileSync(join(folder, file), 'utf8'), file).toBe(content);
+  });
+
+  it('leaves an earlier memo untouched when a later run fails on bad data, and exits 2', async () => {
+    writeFileSync(join(root, 'memo.yaml'), config('Lake outlook'));
+    expect((await runCli(['run', join(root, 'memo.yaml'), '--quiet'])).code).toBe(0);
+    const folder = join(root, 'out/lake-outlook');
+    const before = readFileSync(join(folder, 'memo.html'), 'utf8');
+    const lines = readFileSync(join(root, 'data/lake-huron.csv'), 'utf8').split('\n');
+    writeFileSync(join(root, 'data/lake-huron.csv'), [...lines.slice(0, 10), ...lines.slice(11)].join('\n'));
+    const run = await runCli(['run', join(root, 'memo.yaml')]);
+    expect(run.code).toBe(2);
+    expect(run.errorLines[0]).toMatch(/lake-huron\.csv:\d+.*missing/);
+    expect(readFileSync(join(folder, 'memo.html'), 'utf8')).toBe(before);
+    expect(readdirSync(join(root, 'out'))).toEqual(['lake-outlook']);
+  });
+
+  it('reports config mistakes with their line and writes nothing', async () => {
+    writeFileSync(join(root, 'memo.yaml'), config('Lake outlook').replace('horizon: 5', 'horizon: 5\n    horizn: 6'));
+    const run = await runCli(['run', join(root, 'memo.yaml')]);
+    expect(run.code).toBe(2);
+    expect(run.errorLines.join('\n')).toMatch(/memo\.yaml:\d+:\d+: series\[0\]\.horizn: .*horizon/);
+    expect(existsSync(join(root, 'out'))).toBe(false);
+  });
+
+  it('runs the other configs when one fails, and rejects an unknown format', async () => {
+    writeFileSync(join(root, 'memo.yaml'), config('Lake outlook'));
+    const run = await runCli(['run', join(root, 'missing.yaml'), join(root, 'memo.yaml'), '--quiet']);
+    expect(run.code).toBe(2);
+    expect(existsSync(join(root, 'out/lake-outlook/memo.html'))).toBe(true);
+    const formats = await runCli(['run', join(root, 'memo.yaml'), '--formats', 'html,docx']);
+    expect(formats.code).toBe(2);
+    expect(formats.errorLines[0]).toMatch(/--formats: 'docx' is not one of html, pdf, json, csv/);
+  });
+});
