@@ -36,13 +36,15 @@ export interface FilterWorkspace {
   readonly variances: Float64Array;
   /** 1 / F_t, or 0 where y is missing. */
   readonly weights: Float64Array;
-  /** Innovations of every column, column c at [c·n, (c+1)·n); 0 where y is missing. */
+  /** Innovations of every column, column c at [c·n, (c+1)·n); 0 where y is missing. At least three columns long. */
   readonly innovations: Float64Array;
   /** Predicted state means a_{n+1|n}, column c at [c·r, (c+1)·r). */
   readonly state: Float64Array;
   /** Σ v_c v_d / F, ncol×ncol row-major (upper triangle filled). */
   readonly cross: Float64Array;
   readonly lyapunovScratch: Float64Array;
+  /** n zeros, standing in for an absent column in the scalar pass. */
+  readonly zeros: Float64Array;
   readonly gram: Float64Array;
   readonly gramFactor: Float64Array;
   /** β after `profileLoglik`. */
@@ -72,10 +74,11 @@ export function createWorkspace(r: number, columns: readonly Float64Array[]): Fi
     gains: new Float64Array((n + 1) * stride),
     variances: new Float64Array(n),
     weights: new Float64Array(n),
-    innovations: new Float64Array(ncol * n),
+    innovations: new Float64Array(Math.max(ncol, 3) * n),
     state: new Float64Array(r * ncol),
     cross: new Float64Array(ncol * ncol),
     lyapunovScratch: new Float64Array(lyapunovScratchSize(r)),
+    zeros: new Float64Array(n),
     gram: new Float64Array(Math.max(1, k * k)),
     gramFactor: new Float64Array(Math.max(1, k * k)),
     gramRhs: new Float64Array(Math.max(1, k)),
@@ -110,7 +113,7 @@ export function runFilter(ws: FilterWorkspace, columns: readonly Float64Array[],
   const steadyFrom = fast ? runChandrasekhar(ws) : runCovariance(ws, columns[0]);
   if (steadyFrom < 0) return false;
   if (ws.r <= SCALAR_STATE && ws.ncol <= 3) {
-    for (let c = 0; c < ws.ncol; c++) filterColumnScalar(ws, columns[c], c, steadyFrom);
+    filterColumnsScalar(ws, columns, steadyFrom);
   } else {
     for (let c = 0; c < ws.ncol; c++) filterColumnGeneric(ws, columns[c], c, steadyFrom);
     accumulateCross(ws);
@@ -195,16 +198,17 @@ function runCovariance(ws: FilterWorkspace, y: Float64Array): number {
  * that `ws.pmat` is left at the initial covariance.
  */
 function runChandrasekhar(ws: FilterWorkspace): number {
-  const { r, stride, n, phi, pmat, gains, variances, weights, mmat } = ws;
-  // mmat's first rows hold K (row 0), w (row 1) and T w (row 2) as scratch.
-  const k = mmat;
-  const w = mmat.subarray(r);
-  const tw = mmat.subarray(2 * r);
+  const { r, stride, n, phi, pmat, gains, variances, weights } = ws;
+  if (stride !== SCALAR_STATE) return runChandrasekharGeneric(ws);
+  // State dimension ≤ 4: K, w and T w in locals, padded with zeros beyond r (φ_i = 0 for
+  // i ≥ r keeps the padding at zero).
+  const f0 = phi[0], f1 = phi[1], f2 = phi[2], f3 = phi[3];
   let f = pmat[0];
-  for (let i = 0; i < r; i++) {
-    k[i] = phi[i] * pmat[0] + (i + 1 < r ? pmat[(i + 1) * r] : 0);
-    w[i] = k[i];
-  }
+  let k0 = f0 * f + (r > 1 ? pmat[r] : 0);
+  let k1 = f1 * f + (r > 2 ? pmat[2 * r] : 0);
+  let k2 = f2 * f + (r > 3 ? pmat[3 * r] : 0);
+  let k3 = f3 * f;
+  let w0 = k0, w1 = k1, w2 = k2, w3 = k3;
   let m = -1 / f;
   let logF = 0;
   let product = 1;
@@ -220,36 +224,104 @@ function runChandrasekhar(ws: FilterWorkspace): number {
       logF += Math.log(product);
       product = 1;
     }
-    const row = t * stride;
-    for (let i = 0; i < r; i++) gains[row + i] = k[i] * invF;
-    for (let i = r; i < stride; i++) gains[row + i] = 0;
-    const zw = w[0];
+    const row = t * SCALAR_STATE;
+    gains[row] = k0 * invF;
+    gains[row + 1] = k1 * invF;
+    gains[row + 2] = k2 * invF;
+    gains[row + 3] = k3 * invF;
+    const zw = w0;
     const nextF = f + m * zw * zw;
-    const w0 = w[0];
-    let change = 0;
-    for (let i = 0; i < r; i++) {
-      tw[i] = phi[i] * w0 + (i + 1 < r ? w[i + 1] : 0);
-      k[i] += m * zw * tw[i];
-      change = Math.max(change, Math.abs(m * w[i] * w[i]));
-    }
-    for (let i = 0; i < r; i++) w[i] = tw[i] - (k[i] * zw) / nextF;
-    m += (m * m * zw * zw) / f;
+    const tw0 = f0 * w0 + w1;
+    const tw1 = f1 * w0 + w2;
+    const tw2 = f2 * w0 + w3;
+    const tw3 = f3 * w0;
+    const mz = m * zw;
+    k0 += mz * tw0;
+    k1 += mz * tw1;
+    k2 += mz * tw2;
+    k3 += mz * tw3;
+    const change = Math.abs(m) * (w0 * w0 + w1 * w1 + w2 * w2 + w3 * w3);
+    const c = zw / nextF;
+    w0 = tw0 - k0 * c;
+    w1 = tw1 - k1 * c;
+    w2 = tw2 - k2 * c;
+    w3 = tw3 - k3 * c;
+    m += (mz * mz) / f;
     f = nextF;
     steady = change < STEADY_TOLERANCE;
   }
   if (t < n) {
     const invF = 1 / f;
-    const row = t * stride;
-    for (let i = 0; i < stride; i++) gains[row + i] = i < r ? k[i] * invF : 0;
-    for (let s = t; s < n; s++) {
-      variances[s] = f;
-      weights[s] = invF;
-    }
+    const row = t * SCALAR_STATE;
+    gains[row] = k0 * invF;
+    gains[row + 1] = k1 * invF;
+    gains[row + 2] = k2 * invF;
+    gains[row + 3] = k3 * invF;
+    fillSteady(ws, t, f);
     logF += (n - t) * Math.log(f);
   }
   ws.sumLogF = logF + Math.log(product);
   ws.nobs = n;
   return t;
+}
+
+/** The same recursions with K, w and T w in arrays, for state dimensions above four. */
+function runChandrasekharGeneric(ws: FilterWorkspace): number {
+  const { r, stride, n, phi, pmat, gains, variances, weights, mmat } = ws;
+  // mmat (r² ≥ 3r entries for r > 4) holds K, w and T w side by side.
+  const kAt = 0;
+  const wAt = r;
+  const twAt = 2 * r;
+  let f = pmat[0];
+  for (let i = 0; i < r; i++) {
+    mmat[kAt + i] = phi[i] * pmat[0] + (i + 1 < r ? pmat[(i + 1) * r] : 0);
+    mmat[wAt + i] = mmat[kAt + i];
+  }
+  let m = -1 / f;
+  let logF = 0;
+  let t = 0;
+  let steady = false;
+  for (; t < n && !steady; t++) {
+    if (!(f > 0)) return -1;
+    const invF = 1 / f;
+    variances[t] = f;
+    weights[t] = invF;
+    logF += Math.log(f);
+    const row = t * stride;
+    for (let i = 0; i < r; i++) gains[row + i] = mmat[kAt + i] * invF;
+    const zw = mmat[wAt];
+    const nextF = f + m * zw * zw;
+    let change = 0;
+    for (let i = 0; i < r; i++) {
+      const tw = phi[i] * zw + (i + 1 < r ? mmat[wAt + i + 1] : 0);
+      mmat[twAt + i] = tw;
+      mmat[kAt + i] += m * zw * tw;
+      change += mmat[wAt + i] * mmat[wAt + i];
+    }
+    for (let i = 0; i < r; i++) mmat[wAt + i] = mmat[twAt + i] - (mmat[kAt + i] * zw) / nextF;
+    m += (m * m * zw * zw) / f;
+    f = nextF;
+    steady = Math.abs(m) * change < STEADY_TOLERANCE;
+  }
+  if (t < n) {
+    const invF = 1 / f;
+    const row = t * stride;
+    for (let i = 0; i < r; i++) gains[row + i] = mmat[kAt + i] * invF;
+    fillSteady(ws, t, f);
+    logF += (n - t) * Math.log(f);
+  }
+  ws.sumLogF = logF;
+  ws.nobs = n;
+  return t;
+}
+
+/** Innovation variances and weights from time `from` on, once F has settled at `f`. */
+function fillSteady(ws: FilterWorkspace, from: number, f: number): void {
+  const invF = 1 / f;
+  for (let s = from; s < ws.n; s++) {
+    ws.variances[s] = f;
+    ws.weights[s] = invF;
+  }
 }
 
 function hasMissing(y: Float64Array): boolean {
@@ -258,47 +330,79 @@ function hasMissing(y: Float64Array): boolean {
 }
 
 /**
- * a_{t+1} = T a_t + K_t v_t for one column, with the state in four locals. While it runs,
- * it also accumulates the weighted cross-products of this column with itself and with the
- * (already filtered) columns 0 and 1, which is every pair when there are at most three.
+ * a_{t+1} = T a_t + K_t v_t for y and up to two regressor columns at once, each state in
+ * four locals (three independent recursions in one loop run side by side on the CPU), with
+ * the weighted cross-products of every pair accumulated on the way. A model with one
+ * regressor passes a column of zeros as the third, whose results are not used.
  */
-function filterColumnScalar(ws: FilterWorkspace, y: Float64Array, c: number, steadyFrom: number): void {
-  const { n, ncol, stride, phi, gains, r, weights, cross } = ws;
+function filterColumnsScalar(ws: FilterWorkspace, columns: readonly Float64Array[], steadyFrom: number): void {
+  const { n, ncol, phi, gains, r, weights, cross, state } = ws;
   const out = ws.innovations;
-  const offset = c * n;
-  const first = c >= 1 ? 0 : offset;
-  const second = c >= 2 ? n : offset;
+  const y = columns[0];
+  const x1 = ncol > 1 ? columns[1] : ws.zeros;
+  const x2 = ncol > 2 ? columns[2] : ws.zeros;
+  // Absent columns write into the spare rows of `innovations` (it holds at least three).
+  const o1 = n;
+  const o2 = 2 * n;
   const f0 = phi[0], f1 = phi[1], f2 = phi[2], f3 = phi[3];
   let a0 = 0, a1 = 0, a2 = 0, a3 = 0;
-  let own = 0, withFirst = 0, withSecond = 0;
+  let b0 = 0, b1 = 0, b2 = 0, b3 = 0;
+  let c0 = 0, c1 = 0, c2 = 0, c3 = 0;
+  let s00 = 0, s01 = 0, s02 = 0, s11 = 0, s12 = 0, s22 = 0;
   for (let t = 0; t < n; t++) {
-    const yt = y[t];
     const w = weights[t];
-    // A missing y has weight 0; its innovation is stored as 0 so it drops out of every sum.
-    const v = w === 0 ? 0 : yt - a0;
-    out[offset + t] = v;
+    // A missing y has weight 0; its innovations are stored as 0 so they drop out of every sum.
+    const observed = w !== 0;
+    const u = observed ? y[t] - a0 : 0;
+    const v = observed ? x1[t] - b0 : 0;
+    const z = observed ? x2[t] - c0 : 0;
+    out[t] = u;
+    out[o1 + t] = v;
+    out[o2 + t] = z;
+    const wu = w * u;
     const wv = w * v;
-    own += wv * v;
-    withFirst += wv * out[first + t];
-    withSecond += wv * out[second + t];
-    const row = (t < steadyFrom ? t : steadyFrom) * stride;
-    const n0 = f0 * a0 + a1 + gains[row] * v;
-    const n1 = f1 * a0 + a2 + gains[row + 1] * v;
-    const n2 = f2 * a0 + a3 + gains[row + 2] * v;
-    a3 = f3 * a0 + gains[row + 3] * v;
-    a0 = n0;
-    a1 = n1;
-    a2 = n2;
+    s00 += wu * u;
+    s01 += wu * v;
+    s02 += wu * z;
+    s11 += wv * v;
+    s12 += wv * z;
+    s22 += w * z * z;
+    const row = (t < steadyFrom ? t : steadyFrom) * SCALAR_STATE;
+    const g0 = gains[row], g1 = gains[row + 1], g2 = gains[row + 2], g3 = gains[row + 3];
+    const na0 = f0 * a0 + a1 + g0 * u;
+    const na1 = f1 * a0 + a2 + g1 * u;
+    const na2 = f2 * a0 + a3 + g2 * u;
+    a3 = f3 * a0 + g3 * u;
+    a0 = na0;
+    a1 = na1;
+    a2 = na2;
+    const nb0 = f0 * b0 + b1 + g0 * v;
+    const nb1 = f1 * b0 + b2 + g1 * v;
+    const nb2 = f2 * b0 + b3 + g2 * v;
+    b3 = f3 * b0 + g3 * v;
+    b0 = nb0;
+    b1 = nb1;
+    b2 = nb2;
+    const nc0 = f0 * c0 + c1 + g0 * z;
+    const nc1 = f1 * c0 + c2 + g1 * z;
+    const nc2 = f2 * c0 + c3 + g2 * z;
+    c3 = f3 * c0 + g3 * z;
+    c0 = nc0;
+    c1 = nc1;
+    c2 = nc2;
   }
-  cross[c * ncol + c] = own;
-  if (c >= 1) cross[c] = withFirst;
-  if (c >= 2) cross[ncol + c] = withSecond;
-  const state = ws.state;
-  const base = c * r;
-  state[base] = a0;
-  if (r > 1) state[base + 1] = a1;
-  if (r > 2) state[base + 2] = a2;
-  if (r > 3) state[base + 3] = a3;
+  cross[0] = s00;
+  if (ncol > 1) {
+    cross[1] = s01;
+    cross[ncol + 1] = s11;
+  }
+  if (ncol > 2) {
+    cross[2] = s02;
+    cross[ncol + 2] = s12;
+    cross[2 * ncol + 2] = s22;
+  }
+  const finals = [a0, a1, a2, a3, b0, b1, b2, b3, c0, c1, c2, c3];
+  for (let c = 0; c < ncol; c++) for (let i = 0; i < r; i++) state[c * r + i] = finals[c * SCALAR_STATE + i];
 }
 
 /** The same recursion for state dimensions above four. */
