@@ -31,7 +31,7 @@ export function createProfileLikelihood(
   const work = new Float64Array(Math.max(p, q, 1));
 
   const atCoefficients = (arCoef: ArrayLike<number>, maCoef: ArrayLike<number>, keepCovariance = false): number => {
-    if (!setArma(workspace, arCoef, p, maCoef, q)) return Number.NaN;
+    if (!setArma(workspace, arCoef, p, maCoef, q, !keepCovariance && workspace.complete)) return Number.NaN;
     if (!runFilter(workspace, columns, keepCovariance)) return Number.NaN;
     return profileLoglik(workspace);
   };

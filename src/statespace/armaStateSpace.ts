@@ -120,3 +120,81 @@ function packedIndex(i: number, j: number, r: number): number {
 function addTerm(scratch: Float64Array, base: number, r: number, coef: number, k: number, l: number): void {
   if (coef !== 0) scratch[base + packedIndex(Math.min(k, l), Math.max(k, l), r)] -= coef;
 }
+
+/** Scratch size `stationaryFirstColumn` needs. */
+export function firstColumnScratchSize(p: number, r: number): number {
+  return (p + 1) * (p + 2) + 2 * (r + 1);
+}
+
+/**
+ * The first column of the stationary P, P_{i1} = Cov(α_i, η), without solving the whole
+ * Lyapunov equation (all the Chandrasekhar recursions need). With α_{i,t} =
+ * Σ_{k≥i} φ_k η_{t−1−k+i} + Σ_{k≥i} θ_{k−1} ε_{t−k+i} (θ₀ = 1),
+ *   Cov(α_i, η) = Σ_{k=i}^{r} φ_k γ(k−i+1) + Σ_{k=i}^{r} θ_{k−1} ψ_{k−i},
+ * where γ are the ARMA autocovariances for σ² = 1, from the (p+1)-equation system of
+ * Brockwell & Davis (1991), §3.3, eq. (3.3.8), and ψ the MA(∞) weights. Writes P_{i1} into
+ * `out[i·r]`. Returns false when the AR part has a unit root.
+ */
+export function stationaryFirstColumn(
+  phi: Float64Array,
+  rvec: Float64Array,
+  p: number,
+  r: number,
+  out: Float64Array,
+  scratch: Float64Array,
+): boolean {
+  const w = p + 2;
+  const psiAt = (p + 1) * w;
+  const gammaAt = psiAt + r + 1;
+  // ψ_0..ψ_r: ψ_j = θ_j + Σ_{i=1}^{min(j,p)} φ_i ψ_{j−i}; rvec holds (1, θ₁, …) padded to r.
+  for (let j = 0; j <= r; j++) {
+    let value = j < r ? rvec[j] : 0;
+    for (let i = 1; i <= Math.min(j, p); i++) value += phi[i - 1] * scratch[psiAt + j - i];
+    scratch[psiAt + j] = value;
+  }
+  // γ(k) − Σ_j φ_j γ(|k − j|) = Σ_{j≥k} θ_j ψ_{j−k}, k = 0..p, unknowns γ(0..p).
+  for (let k = 0; k <= p; k++) {
+    const base = k * w;
+    for (let c = 0; c < w; c++) scratch[base + c] = 0;
+    scratch[base + k] += 1;
+    for (let j = 1; j <= p; j++) scratch[base + Math.abs(k - j)] -= phi[j - 1];
+    let rhs = 0;
+    for (let j = k; j < r; j++) rhs += rvec[j] * scratch[psiAt + j - k];
+    scratch[base + p + 1] = rhs;
+  }
+  for (let col = 0; col <= p; col++) {
+    let pivot = col;
+    for (let row = col + 1; row <= p; row++) if (Math.abs(scratch[row * w + col]) > Math.abs(scratch[pivot * w + col])) pivot = row;
+    if (Math.abs(scratch[pivot * w + col]) < 1e-12) return false;
+    if (pivot !== col) {
+      for (let c = col; c < w; c++) {
+        const tmp = scratch[col * w + c];
+        scratch[col * w + c] = scratch[pivot * w + c];
+        scratch[pivot * w + c] = tmp;
+      }
+    }
+    for (let row = col + 1; row <= p; row++) {
+      const factor = scratch[row * w + col] / scratch[col * w + col];
+      for (let c = col; c < w; c++) scratch[row * w + c] -= factor * scratch[col * w + c];
+    }
+  }
+  for (let row = p; row >= 0; row--) {
+    let sum = scratch[row * w + p + 1];
+    for (let c = row + 1; c <= p; c++) sum -= scratch[row * w + c] * scratch[gammaAt + c];
+    scratch[gammaAt + row] = sum / scratch[row * w + row];
+  }
+  // γ(k) for p < k ≤ r by the recursion.
+  for (let k = p + 1; k <= r; k++) {
+    let value = 0;
+    for (let j = 1; j <= p; j++) value += phi[j - 1] * scratch[gammaAt + k - j];
+    for (let j = k; j < r; j++) value += rvec[j] * scratch[psiAt + j - k];
+    scratch[gammaAt + k] = value;
+  }
+  // P_{i1} with 1-based i in the formula, 0-based here: k runs over i..r−1 (0-based).
+  for (let i = 0; i < r; i++) {
+    let value = 0;
+    for (let k = i; k < r; k++) value += phi[k] * scratch[gammaAt + k - i + 1] + rvec[k] * scratch[psiAt + k - i];
+    out[i * r] = value;
+  }
+  return true;
+}

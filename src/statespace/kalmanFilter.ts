@@ -9,7 +9,7 @@
 // Everything lives in a workspace allocated once per (r, columns, n), so a likelihood
 // evaluation allocates nothing; the column pass keeps a state of up to four in locals.
 
-import { lyapunovScratchSize, stationaryCovariance } from './armaStateSpace.js';
+import { firstColumnScratchSize, lyapunovScratchSize, stationaryCovariance, stationaryFirstColumn } from './armaStateSpace.js';
 import { choleskyInto, choleskySolveInPlace } from '../linalg/smallSpd.js';
 
 const LOG_2PI = Math.log(2 * Math.PI);
@@ -77,7 +77,7 @@ export function createWorkspace(r: number, columns: readonly Float64Array[]): Fi
     innovations: new Float64Array(Math.max(ncol, 3) * n),
     state: new Float64Array(r * ncol),
     cross: new Float64Array(ncol * ncol),
-    lyapunovScratch: new Float64Array(lyapunovScratchSize(r)),
+    lyapunovScratch: new Float64Array(Math.max(lyapunovScratchSize(r), firstColumnScratchSize(r, r))),
     zeros: new Float64Array(n),
     gram: new Float64Array(Math.max(1, k * k)),
     gramFactor: new Float64Array(Math.max(1, k * k)),
@@ -90,15 +90,25 @@ export function createWorkspace(r: number, columns: readonly Float64Array[]): Fi
 
 /**
  * Installs ARMA coefficients and the stationary initial covariance. Returns false when
- * the AR part has a unit root (no stationary covariance exists).
+ * the AR part has a unit root (no stationary covariance exists). With `firstColumnOnly`,
+ * only P's first column is computed, which is all the Chandrasekhar path of `runFilter`
+ * reads (a complete series, covariance not kept).
  */
-export function setArma(ws: FilterWorkspace, ar: ArrayLike<number>, p: number, ma: ArrayLike<number>, q: number): boolean {
+export function setArma(
+  ws: FilterWorkspace,
+  ar: ArrayLike<number>,
+  p: number,
+  ma: ArrayLike<number>,
+  q: number,
+  firstColumnOnly = false,
+): boolean {
   const { r, phi, rvec } = ws;
   phi.fill(0);
   rvec.fill(0);
   for (let i = 0; i < p; i++) phi[i] = ar[i];
   rvec[0] = 1;
   for (let j = 0; j < q; j++) rvec[j + 1] = ma[j];
+  if (firstColumnOnly) return stationaryFirstColumn(phi, rvec, p, r, ws.pmat, ws.lyapunovScratch);
   return stationaryCovariance(phi, rvec, r, ws.pmat, ws.lyapunovScratch);
 }
 

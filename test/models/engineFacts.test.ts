@@ -5,7 +5,7 @@ import { CholeskyDecomposition, Matrix } from 'ml-matrix';
 import { fitRegressionArma } from '../../src/models/fitRegressionArma.js';
 import { fitTrendModelAtOrder, forecastTrendModel } from '../../src/models/trendModels.js';
 import { createProfileLikelihood } from '../../src/models/profileLikelihood.js';
-import { toStateSpace } from '../../src/statespace/armaStateSpace.js';
+import { firstColumnScratchSize, stationaryFirstColumn, toStateSpace } from '../../src/statespace/armaStateSpace.js';
 import { constrainAr, constrainMa, unconstrainAr, unconstrainMa, isStationary } from '../../src/models/constraints.js';
 import { smallestMaRootModulus, smallestRootModulus } from '../../src/models/rootModulus.js';
 import { readSeriesValues } from '../evidence/referenceFixtures.js';
@@ -187,5 +187,22 @@ describe('root moduli (common practice: roots of 1 − φz are 1/φ)', () => {
     // 1 + 0.25z²: roots ±2i.
     expectRelative(smallestMaRootModulus([0, 0.25]) ?? 0, 2, 1e-10);
     expect(smallestRootModulus([])).toBeNull();
+  });
+});
+
+describe('first column of the stationary covariance (Brockwell & Davis 1991, §3.3)', () => {
+  it('equals the first column of the full Lyapunov solution', () => {
+    const cases: [number[], number[]][] = [
+      [[0.6, -0.2, 0.1], [0.5, 0.3]],
+      [[], [0.4, 0.2, 0.1]],
+      [[0.3, 0.2], [0.5, -0.3, 0.2]],
+      [[0.9], [0.5]],
+    ];
+    for (const [ar, ma] of cases) {
+      const space = toStateSpace(ar, ma);
+      const out = new Float64Array(space.r * space.r);
+      expect(stationaryFirstColumn(space.phi, space.rvec, ar.length, space.r, out, new Float64Array(firstColumnScratchSize(ar.length, space.r)))).toBe(true);
+      for (let i = 0; i < space.r; i++) expectRelative(out[i * space.r], space.p0[i * space.r], 1e-12);
+    }
   });
 });
