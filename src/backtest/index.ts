@@ -1,6 +1,7 @@
 // The backtest stage: the whole method re-run at past origins and scored.
 //   values ──runBacktest──▶ BacktestRecord ──formatBacktest──▶ summary lines
 export { runBacktest } from './runBacktest.js';
+export { openOriginPool, type OriginPool } from './runOriginTasks.js';
 export { formatBacktest } from './formatBacktest.js';
 export { DEFAULT_BACKTEST_HORIZON, type BacktestOptions } from './resolveBacktestOptions.js';
 export type { BacktestInput, BacktestSeries } from './readBacktestInput.js';

@@ -4,6 +4,7 @@
 import { backtestMessages, InputError, type InputProblem } from '../errors.js';
 import type { TransformSpec } from '../models/transform.js';
 import { TREND_MODELS, type TrendModelKind } from '../models/trendModels.js';
+import type { OriginPool } from './runOriginTasks.js';
 import { REFIT_POLICIES, WINDOW_KINDS, type ArmaOrder, type RefitPolicy, type WindowKind } from './backtestRecord.js';
 
 export interface BacktestOptions {
@@ -30,6 +31,8 @@ export interface BacktestOptions {
   significance?: number;
   /** Worker threads (default: min(available cores, origins); 1 runs inline). */
   threads?: number;
+  /** An open pool to run on instead of starting threads for this backtest alone. */
+  pool?: OriginPool;
 }
 
 export interface BacktestSettingsInput {

@@ -51,7 +51,7 @@ export async function runBacktest(input: BacktestInput, options: BacktestOptions
     })),
   );
   const threads = settings.threads ?? Math.min(availableParallelism(), plan.origins.length);
-  const results = await runOriginTasks(tasks, threads);
+  const results = await runOriginTasks(tasks, threads, options.pool);
   const collected = collectForecasts(data, plan.origins, results, settings);
 
   const perHorizon = {} as BacktestRecord['per_horizon'];
