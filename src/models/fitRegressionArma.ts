@@ -7,6 +7,7 @@ import { minimizeBfgs } from './bfgs.js';
 import { unconstrainAr, unconstrainMa } from './constraints.js';
 import { hannanRissanen } from './hannanRissanen.js';
 import { createProfileLikelihood, type ProfileLikelihood } from './profileLikelihood.js';
+import type { WorkspaceOptions } from '../statespace/kalmanFilter.js';
 
 /** BFGS iterations every start gets before the starts are ranked. */
 const HEAT_ITERATIONS = 8;
@@ -38,7 +39,7 @@ export interface RegressionArmaFit {
   evaluations: number;
 }
 
-export interface FitOptions {
+export interface FitOptions extends WorkspaceOptions {
   /** Extra unconstrained starting points of length p + q. */
   starts?: readonly Float64Array[];
 }
@@ -54,7 +55,7 @@ export function fitRegressionArma(
   // correction to the OLS coefficients, and Σv²/F does not lose digits to a large level
   // (a series near 580 would otherwise leave SSR as the difference of two numbers ~1e7).
   const ols = olsFit(y, regressors);
-  const likelihood = createProfileLikelihood(ols.residuals, regressors, p, q);
+  const likelihood = createProfileLikelihood(ols.residuals, regressors, p, q, { accumulateGaps: options.accumulateGaps });
   const nobs = countObserved(y);
   const objective = (x: Float64Array): number => -likelihood.atUnconstrained(x) / nobs;
   const base = [new Float64Array(p + q), ...startFromHannanRissanen(ols.residuals, p, q)];

@@ -5,6 +5,7 @@
 // model exactly, so a larger model never ends below a nested smaller one.
 import { unconstrainAr, unconstrainMa } from './constraints.js';
 import { fitRegressionArma, type RegressionArmaFit } from './fitRegressionArma.js';
+import type { WorkspaceOptions } from '../statespace/kalmanFilter.js';
 
 /** Real roots of the common factor tried by `cancellingStart` from the (p−1, q−1) optimum. */
 const CANCELLING_ROOTS = [0.8, -0.8];
@@ -34,7 +35,13 @@ export function aicc(loglik: number, parameters: number, nobs: number): number {
   return -2 * loglik + 2 * parameters + (2 * parameters * (parameters + 1)) / (nobs - parameters - 1);
 }
 
-export function searchOrders(y: Float64Array, regressors: readonly Float64Array[], maxP: number, maxQ: number): OrderSearchResult {
+export function searchOrders(
+  y: Float64Array,
+  regressors: readonly Float64Array[],
+  maxP: number,
+  maxQ: number,
+  options: WorkspaceOptions = {},
+): OrderSearchResult {
   const fits = new Map<string, RegressionArmaFit>();
   const candidates: Candidate[] = [];
   let best: RegressionArmaFit | undefined;
@@ -57,7 +64,7 @@ export function searchOrders(y: Float64Array, regressors: readonly Float64Array[
         const { modulus, angle } = CANCELLING_PAIR;
         starts.push(...cancellingStart(second, [-2 * modulus * Math.cos(angle), modulus * modulus]));
       }
-      const fit = fitRegressionArma(y, regressors, p, q, { starts });
+      const fit = fitRegressionArma(y, regressors, p, q, { ...options, starts });
       fits.set(key(p, q), fit);
       const value = aicc(fit.loglik, parameters, fit.nobs);
       candidates.push({ p, q, loglik: fit.loglik, aicc: value, converged: fit.converged });

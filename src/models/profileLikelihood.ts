@@ -1,6 +1,6 @@
 // The profile log-likelihood of y = Xβ + η, η ~ ARMA(p,q), as a function of the ARMA
 // parameters alone (β and σ² concentrated out by the filter; see statespace/kalmanFilter).
-import { createWorkspace, profileLoglik, runFilter, setArma, type FilterWorkspace } from '../statespace/kalmanFilter.js';
+import { createWorkspace, profileLoglik, runFilter, setArma, type FilterWorkspace, type WorkspaceOptions } from '../statespace/kalmanFilter.js';
 import { stateDimension } from '../statespace/armaStateSpace.js';
 import { constrainAr, constrainMa } from './constraints.js';
 
@@ -23,9 +23,10 @@ export function createProfileLikelihood(
   regressors: readonly Float64Array[],
   p: number,
   q: number,
+  options: WorkspaceOptions = {},
 ): ProfileLikelihood {
   const columns = [y, ...regressors];
-  const workspace = createWorkspace(stateDimension(p, q), columns);
+  const workspace = createWorkspace(stateDimension(p, q), columns, options);
   const ar = new Float64Array(p);
   const ma = new Float64Array(q);
   const work = new Float64Array(Math.max(p, q, 1));

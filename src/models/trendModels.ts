@@ -23,6 +23,8 @@ export interface TrendDesign {
   futureRows(horizon: number): number[][];
   /** For the stochastic model: forecasts are integrated from this last level. */
   integrateFrom?: number;
+  /** The response is the change since the last observed level, NaN at missing levels (gapFilter.ts). */
+  accumulateGaps: boolean;
 }
 
 /** The response and regressors of a model for the model-scale series `w`. */
@@ -34,15 +36,34 @@ export function trendDesign(kind: TrendModelKind, w: Float64Array): TrendDesign 
       regressors: [new Float64Array(n).fill(1), Float64Array.from({ length: n }, (_, i) => i + 1)],
       coefficientNames: ['intercept', 'slope'],
       futureRows: (horizon) => Array.from({ length: horizon }, (_, h) => [1, n + h + 1]),
+      accumulateGaps: false,
     };
   }
-  const differences = Float64Array.from({ length: n - 1 }, (_, i) => w[i + 1] - w[i]);
+  // Δ_j = w_{j+1} − (the last observed level before it), g_j = the periods it spans; with no
+  // missing levels these are the first differences and a column of ones.
+  const changes = new Float64Array(n - 1);
+  const spans = new Float64Array(n - 1);
+  let last = 0;
+  for (let t = 1; t < n; t++) {
+    if (Number.isNaN(w[t])) {
+      changes[t - 1] = Number.NaN;
+      spans[t - 1] = 1;
+      continue;
+    }
+    changes[t - 1] = w[t] - w[last];
+    spans[t - 1] = t - last;
+    last = t;
+  }
+  if (Number.isNaN(w[0]) || Number.isNaN(w[n - 1])) {
+    throw new RangeError('trendDesign: the first and last observations must be present');
+  }
   return {
-    response: differences,
-    regressors: [new Float64Array(n - 1).fill(1)],
+    response: changes,
+    regressors: [spans],
     coefficientNames: ['drift'],
     futureRows: (horizon) => Array.from({ length: horizon }, () => [1]),
     integrateFrom: w[n - 1],
+    accumulateGaps: true,
   };
 }
 
@@ -67,14 +88,14 @@ export interface TrendModelFit {
 /** Order search for one model, then standard errors for the chosen order. */
 export function fitTrendModel(kind: TrendModelKind, w: Float64Array, maxP: number, maxQ: number): TrendModelFit {
   const design = trendDesign(kind, w);
-  const search = searchOrders(design.response, design.regressors, maxP, maxQ);
+  const search = searchOrders(design.response, design.regressors, maxP, maxQ, { accumulateGaps: design.accumulateGaps });
   return describeFit(kind, design, search.best, search.bestAicc, search.candidates);
 }
 
 /** A model at a fixed order (no search), e.g. for a backtest that keeps orders fixed. */
 export function fitTrendModelAtOrder(kind: TrendModelKind, w: Float64Array, p: number, q: number): TrendModelFit {
   const design = trendDesign(kind, w);
-  const fit = fitRegressionArma(design.response, design.regressors, p, q);
+  const fit = fitRegressionArma(design.response, design.regressors, p, q, { accumulateGaps: design.accumulateGaps });
   const k = p + q + design.regressors.length + 1;
   const m = fit.nobs;
   const aicc = m - k - 1 > 0 ? -2 * fit.loglik + 2 * k + (2 * k * (k + 1)) / (m - k - 1) : Number.POSITIVE_INFINITY;
@@ -96,7 +117,7 @@ function describeFit(
     regression[name] = Math.sqrt(fit.covBeta[i * k + i]);
   });
   const ols = olsFit(design.response, design.regressors);
-  const likelihood = createProfileLikelihood(ols.residuals, design.regressors, fit.p, fit.q);
+  const likelihood = createProfileLikelihood(ols.residuals, design.regressors, fit.p, fit.q, { accumulateGaps: design.accumulateGaps });
   const armaSe = armaStandardErrors(likelihood, fit.ar, fit.ma);
   return {
     kind,

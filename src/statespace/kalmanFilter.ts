@@ -11,6 +11,7 @@
 
 import { firstColumnScratchSize, lyapunovScratchSize, stationaryCovariance, stationaryFirstColumn } from './armaStateSpace.js';
 import { choleskyInto, choleskySolveInPlace } from '../linalg/smallSpd.js';
+import { createGapScratch, runGapFilter, type GapScratch } from './gapFilter.js';
 
 const LOG_2PI = Math.log(2 * Math.PI);
 /** Largest change in P (σ² = 1 scale) below which the filter is taken as converged. */
@@ -51,13 +52,23 @@ export interface FilterWorkspace {
   readonly gramRhs: Float64Array;
   /** True when y has no missing values (set by `createWorkspace`). */
   readonly complete: boolean;
+  /** Present when missing values are gaps in a differenced series (see gapFilter.ts). */
+  readonly gaps: GapScratch | undefined;
   sumLogF: number;
   /** Observations that entered the likelihood (non-missing y). */
   nobs: number;
 }
 
+export interface WorkspaceOptions {
+  /**
+   * NaN in y marks a missing level of a differenced series: accumulate the differences over
+   * the gap (gapFilter.ts) instead of skipping them.
+   */
+  accumulateGaps?: boolean;
+}
+
 /** A workspace for filtering `columns` (y first) with state dimension r. */
-export function createWorkspace(r: number, columns: readonly Float64Array[]): FilterWorkspace {
+export function createWorkspace(r: number, columns: readonly Float64Array[], options: WorkspaceOptions = {}): FilterWorkspace {
   const ncol = columns.length;
   const n = columns[0].length;
   const k = ncol - 1;
@@ -83,6 +94,7 @@ export function createWorkspace(r: number, columns: readonly Float64Array[]): Fi
     gramFactor: new Float64Array(Math.max(1, k * k)),
     gramRhs: new Float64Array(Math.max(1, k)),
     complete: !hasMissing(columns[0]),
+    gaps: options.accumulateGaps === true && hasMissing(columns[0]) ? createGapScratch(r, ncol) : undefined,
     sumLogF: 0,
     nobs: 0,
   };
@@ -119,6 +131,7 @@ export function setArma(
  * forecasting); otherwise, on a complete series, the cheaper Chandrasekhar form is used.
  */
 export function runFilter(ws: FilterWorkspace, columns: readonly Float64Array[], keepCovariance = false): boolean {
+  if (ws.gaps !== undefined) return runGapFilter(ws, ws.gaps, columns);
   const fast = !keepCovariance && ws.complete;
   const steadyFrom = fast ? runChandrasekhar(ws) : runCovariance(ws, columns[0]);
   if (steadyFrom < 0) return false;
