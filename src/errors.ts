@@ -47,7 +47,23 @@ export function formatProblem(problem: InputProblem): string {
   if (place.length > 0) parts.push(place.join(':'));
   if (problem.field !== undefined) parts.push(problem.field);
   parts.push(`${problem.message}; ${problem.hint}`);
-  return parts.join(': ');
+  return visible(parts.join(': '));
+}
+
+/**
+ * Messages echo the user's text (a cell, a key, a file name). Control characters in it would
+ * act on the terminal (escape sequences, a line break that forges another message) and
+ * bidirectional controls would reorder the line, so each is shown as its code point instead.
+ */
+const INVISIBLE = /[\u0000-\u001F\u007F-\u009F\u2028\u2029\u202A-\u202E\u2066-\u2069]/gu;
+
+function visible(line: string): string {
+  return line.replace(INVISIBLE, (character) => `[${codePointName(character.codePointAt(0) ?? 0)}]`);
+}
+
+/** `U+202E`, as the Unicode standard writes a code point. */
+function codePointName(codePoint: number): string {
+  return `U+${codePoint.toString(16).toUpperCase().padStart(4, '0')}`;
 }
 
 /** Builds a problem; the one constructor callers use so wording stays in this module's style. */
@@ -67,13 +83,23 @@ export function abbreviateList(items: readonly string[], keep = 6): string {
 }
 
 const PERIOD_FORMS = 'write periods as 2003 (annual), 2003-Q1 (quarterly) or 2003-01 (monthly)';
-const MISSING_HINT = 'fill in the observed value: the models need an unbroken series';
+const MISSING_HINT = 'fill in the observed value, or allow missing values (missing: allow in the config, --allow-missing for fit)';
+
+/** Longest piece of the user's text quoted in a message, in code points; a 20 MB cell is not echoed whole. */
+const QUOTE_LIMIT = 80;
 
 function quoted(text: string): string {
-  return `'${text}'`;
+  const characters = [...text];
+  if (characters.length <= QUOTE_LIMIT) return `'${text}'`;
+  return `'${characters.slice(0, QUOTE_LIMIT - 3).join('')}...' (${characters.length} characters)`;
 }
 
 const MEBIBYTE = 1024 * 1024;
+
+/** Three significant digits, for sizes far out of range where the exact digits do not matter. */
+function roughly(value: number): string {
+  return String(Number(value.toPrecision(3)));
+}
 
 function plural(count: number, one: string, many = `${one}s`): string {
   return `${count} ${count === 1 ? one : many}`;
@@ -149,6 +175,20 @@ export const dataMessages = {
   },
   unnamedColumn(at: InputLocation, position: number): InputProblem {
     return problem('csv.unnamed-column', `column ${position} has no name in the header`, 'give every column a name in the header line', {
+      ...at,
+      column: position,
+    });
+  },
+  columnNameCharacter(at: InputLocation, position: number, codePoint: number, characterPosition: number): InputProblem {
+    return problem(
+      'csv.bad-column-name',
+      `the name of column ${position} holds the invisible control character ${codePointName(codePoint)} at character ${characterPosition}`,
+      'remove it from the header line: column names are printed in the memo',
+      { ...at, column: position },
+    );
+  },
+  columnNameTooLong(at: InputLocation, position: number, length: number, max: number): InputProblem {
+    return problem('csv.bad-column-name', `the name of column ${position} is ${length} characters long; at most ${max} are allowed`, 'shorten it in the header line', {
       ...at,
       column: position,
     });
@@ -229,7 +269,15 @@ export const dataMessages = {
     return problem('csv.descending', `periods run backwards, from ${first} down to ${last}`, 'sort the lines by period, oldest first', at);
   },
   gap(at: InputLocation, missing: readonly string[], next: string): InputProblem {
-    return problem('csv.gap', `missing ${abbreviateList(missing)} before ${next}`, 'add a line for each missing period: the models need an unbroken series', at);
+    return problem(
+      'csv.gap',
+      `missing ${abbreviateList(missing)} before ${next}`,
+      'add a line for each missing period, or allow gaps (missing: allow in the config, --allow-missing for fit)',
+      at,
+    );
+  },
+  missingEnd(at: InputLocation, which: 'first' | 'last', label: string): InputProblem {
+    return problem('series.missing-end', `the ${which} period, ${label}, has no value`, `start and end the file with observed values (remove the ${which} line)`, at);
   },
   tooFew(at: InputLocation, count: number, minimum: number): InputProblem {
     return problem(
@@ -252,6 +300,21 @@ export const dataMessages = {
       'series.non-positive',
       `value ${value} is not positive, which the ${transform} transform needs`,
       'choose no transform, or a series whose values are all above zero',
+      at,
+    );
+  },
+  /** `scale` names the transform when the models see the values transformed. */
+  tooLargeForModels(at: InputLocation, value: number, limit: number, scale: string | undefined): InputProblem {
+    const where = scale === undefined ? '' : ` after the ${scale} transform`;
+    const hint = scale === undefined ? 'express the series in larger units (thousands or millions, say), or choose the log transform' : 'express the series in other units, or choose a transform with a smaller lambda';
+    return problem('series.out-of-scale', `value ${roughly(value)} is too large for the models, which compute with sizes up to ${limit}${where}`, hint, at);
+  },
+  tooLittleSpread(at: InputLocation, spread: number, limit: number, scale: string | undefined): InputProblem {
+    const where = scale === undefined ? '' : ` after the ${scale} transform`;
+    return problem(
+      'series.out-of-scale',
+      `the values differ by at most ${roughly(spread)}${where}, too little for the models to tell apart (at least ${limit} is needed)`,
+      'express the series in smaller units (multiply it by a power of ten), or check that the right column is chosen',
       at,
     );
   },
@@ -493,7 +556,7 @@ export const configMessages = {
     return problem('config.too-long', `is ${length} characters long; at most ${max} are allowed`, 'shorten it', at);
   },
   controlCharacter(at: InputLocation, codePoint: number, position: number, lineBreaksAllowed: boolean): InputProblem {
-    const code = `U+${codePoint.toString(16).toUpperCase().padStart(4, '0')}`;
+    const code = codePointName(codePoint);
     const kind = codePoint === 0x0a ? 'a line break' : `the invisible control character ${code}`;
     const hint = lineBreaksAllowed ? 'remove it; only visible characters and line breaks are allowed' : 'remove it; write this value on one line with visible characters only';
     return problem('config.control-character', `holds ${kind} at character ${position}`, hint, at);
@@ -633,6 +696,9 @@ export const backtestMessages = {
 // Run: messages about running memos (src/run/, src/cli/runCommand.ts).
 // ---------------------------------------------------------------------------
 
+const OUTPUT_FOLDER_HINT = 'choose a folder, or a path where one can be created';
+const TEMPLATES_HINT = 'correct the path, or remove output.templates to use the built-in templates';
+
 export const runMessages = {
   noConfigs(): InputProblem {
     return problem('cli.missing-config', 'run needs at least one config file', 'give one or more, e.g. trendbrief run configs/demo.yaml');
@@ -642,4 +708,29 @@ export const runMessages = {
       field: 'SOURCE_DATE_EPOCH',
     });
   },
+  /** `at` is where the folder was chosen: the config's output.folder or the --out option; `kind` e.g. 'a regular file'. */
+  outputNotAFolder(at: InputLocation, folder: string, kind: string): InputProblem {
+    return problem('run.output-not-a-folder', `the output folder '${folder}' is ${kind}, not a folder`, OUTPUT_FOLDER_HINT, at);
+  },
+  outputUnderNonFolder(at: InputLocation, folder: string, blocker: string, kind: string): InputProblem {
+    return problem('run.output-not-a-folder', `the output folder '${folder}' lies under '${blocker}', which is ${kind}, not a folder`, OUTPUT_FOLDER_HINT, at);
+  },
+  memoFolderTaken(at: InputLocation, folder: string, kind: string): InputProblem {
+    return problem(
+      'run.memo-folder-taken',
+      `the memo's folder '${folder}' is ${kind}, and a run replaces only a folder`,
+      'move it away, or choose another output folder or memo id',
+      at,
+    );
+  },
+  outputUnwritable(at: InputLocation, folder: string, reason: string): InputProblem {
+    return problem('run.output-unwritable', `the memo cannot be written into '${folder}' (${reason})`, 'check that you may write there and that the disk has room; the earlier memo is kept', at);
+  },
+  templatesMissing(at: InputLocation, folder: string): InputProblem {
+    return problem('run.templates-missing', `the templates folder '${folder}' does not exist`, TEMPLATES_HINT, at);
+  },
+  templatesNotAFolder(at: InputLocation, folder: string, kind: string): InputProblem {
+    return problem('run.templates-missing', `the templates folder '${folder}' is ${kind}, not a folder`, TEMPLATES_HINT, at);
+  },
 };
+

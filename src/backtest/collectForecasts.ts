@@ -56,7 +56,8 @@ export function collectForecasts(
         const onDataScale = backTransformForecast(transform, point, levels, mean, se);
         const actual = data.y[target];
         forecasts.push({ origin: end, origin_period: label(end - 1), model: method, h, period: label(target), actual, ...onDataScale, model_scale: { mean, se } });
-        scored[method][h - 1].push({ actual, ...onDataScale, mean, se, modelActual: data.w[target], maseScale });
+        // A missing actual cannot be scored; every method skips it alike, so pairs stay aligned.
+        if (!Number.isNaN(actual)) scored[method][h - 1].push({ actual, ...onDataScale, mean, se, modelActual: data.w[target], maseScale });
       }
     }
   });

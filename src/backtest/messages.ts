@@ -23,6 +23,9 @@ export const backtestNotes = {
     return `${count} of the ${fits} origin fits stopped before the optimiser converged; their forecasts are scored as they are.`;
   },
   mapeUnavailable: 'MAPE is not given where an actual value is zero or negative.',
+  missingOrigins(count: number): string {
+    return `${count} origin${count === 1 ? ' was' : 's were'} left out because the last value before ${count === 1 ? 'it is' : 'them is'} missing; missing actual values are not scored.`;
+  },
 };
 
 /** One line on how each origin refits the models, for the summary. */

@@ -12,9 +12,16 @@ export interface NaiveMoments {
 /** h = 1..horizon moments of the no-change forecast from the window w. */
 export function naiveForecast(w: ArrayLike<number>, horizon: number): NaiveMoments {
   if (w.length < 2) throw new RangeError('naiveForecast needs at least two observations');
+  // Consecutive observed pairs only: a missing value breaks the one-step changes around it.
   let squares = 0;
-  for (let t = 1; t < w.length; t++) squares += (w[t] - w[t - 1]) ** 2;
-  const sigma = Math.sqrt(squares / (w.length - 1));
+  let pairs = 0;
+  for (let t = 1; t < w.length; t++) {
+    const change = w[t] - w[t - 1];
+    if (Number.isNaN(change)) continue;
+    squares += change * change;
+    pairs++;
+  }
+  const sigma = Math.sqrt(squares / pairs);
   const last = w[w.length - 1];
   return {
     mean: Array.from({ length: horizon }, () => last),
@@ -22,10 +29,16 @@ export function naiveForecast(w: ArrayLike<number>, horizon: number): NaiveMomen
   };
 }
 
-/** (1/(n − 1)) Σ_{t=2}^{n} |y_t − y_{t−1}|: the in-sample one-step no-change MAE. */
+/** Mean of |y_t − y_{t−1}| over consecutive observed pairs: the in-sample one-step no-change MAE. */
 export function inSampleNaiveMae(y: ArrayLike<number>): number {
   if (y.length < 2) throw new RangeError('inSampleNaiveMae needs at least two observations');
   let sum = 0;
-  for (let t = 1; t < y.length; t++) sum += Math.abs(y[t] - y[t - 1]);
-  return sum / (y.length - 1);
+  let pairs = 0;
+  for (let t = 1; t < y.length; t++) {
+    const change = Math.abs(y[t] - y[t - 1]);
+    if (Number.isNaN(change)) continue;
+    sum += change;
+    pairs++;
+  }
+  return sum / pairs;
 }

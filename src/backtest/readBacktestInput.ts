@@ -1,6 +1,6 @@
 // The series a backtest runs on: a Series from the data stage (period labels kept for the
-// record) or a bare array of values. Every observation must be finite and, after the
-// transform, still finite; all problems are reported together.
+// record) or a bare array of values. Every observation must be finite or NaN (missing) and,
+// after the transform, still finite; all problems are reported together.
 import { backtestMessages, InputError, type InputProblem } from '../errors.js';
 import { describeTransform, transformValue, type TransformSpec } from '../models/transform.js';
 
@@ -25,7 +25,9 @@ export function readBacktestInput(input: BacktestInput, transform: TransformSpec
   const y = Float64Array.from(series.values);
   const w = y.map((value) => transformValue(transform, value));
   const problems: InputProblem[] = [];
+  // NaN is a missing observation, which the models handle; anything else must be finite.
   y.forEach((value, i) => {
+    if (Number.isNaN(value)) return;
     if (!Number.isFinite(value)) problems.push(backtestMessages.badObservation(i + 1, value));
     else if (!Number.isFinite(w[i])) problems.push(backtestMessages.notTransformable(i + 1, value, describeTransform(transform)));
   });

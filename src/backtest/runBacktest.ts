@@ -35,7 +35,11 @@ export async function runBacktest(input: BacktestInput, options: BacktestOptions
   const needed = Math.max(...TREND_MODELS.map((kind) => minimumObservations(kind, largestOrder(kind).p, largestOrder(kind).q)));
   const minTrainingLength = settings.minTrainingLength ?? defaultMinimumTraining(parameterCount);
   if (minTrainingLength < needed) throw new InputError(backtestMessages.trainingTooShort(minTrainingLength, needed));
-  const plan = planOrigins(n, { horizon, origins: settings.origins, step: settings.step, window: settings.window, minTrainingLength });
+  const planned = planOrigins(n, { horizon, origins: settings.origins, step: settings.step, window: settings.window, minTrainingLength });
+  // A forecast starts from an observed value: origins whose last training value is missing are left out.
+  const observedOrigins = planned.origins.filter(({ end }) => !Number.isNaN(data.w[end - 1]));
+  const skippedOrigins = planned.origins.length - observedOrigins.length;
+  const plan = { ...planned, origins: observedOrigins };
   if (plan.origins.length === 0) throw new InputError(backtestMessages.seriesTooShort(n, horizon, minTrainingLength));
 
   const tasks: OriginTask[] = plan.origins.flatMap(({ start, end }) =>
@@ -62,9 +66,10 @@ export async function runBacktest(input: BacktestInput, options: BacktestOptions
   const notes: string[] = [];
   if (plan.available < plan.requested) notes.push(backtestNotes.originsCut(plan.requested, plan.origins.length, minTrainingLength));
   if (full !== undefined) notes.push(backtestNotes.lookAhead(refit));
+  if (skippedOrigins > 0) notes.push(backtestNotes.missingOrigins(skippedOrigins));
   const unconverged = results.filter((result) => !result.converged).length;
   if (unconverged > 0) notes.push(backtestNotes.unconverged(unconverged, results.length));
-  if (collected.forecasts.some((row) => !(row.actual > 0))) notes.push(backtestNotes.mapeUnavailable);
+  if (collected.forecasts.some((row) => !Number.isNaN(row.actual) && !(row.actual > 0))) notes.push(backtestNotes.mapeUnavailable);
   return {
     settings: {
       origins: plan.origins.length,

@@ -28,6 +28,8 @@ Options:
   --refit P                 at each origin: reselect the orders (default), reestimate at the
                             full-sample orders, or keep the full-sample fit (fixed)
                             (--origins, --backtest-horizon and --refit imply --backtest)
+  --allow-missing           treat empty cells, missing-value markers and missing periods as gaps
+                            (the filter skips them; first and last values must be present)
   --json                    print the full analysis record as JSON
   -h, --help                this text
 `;
@@ -40,6 +42,7 @@ export async function runFit(args: readonly string[], io: { stdout(text: string)
     frequency: request.frequency,
     minObservations: requiredObservations(request.maxP, request.maxQ),
     transform: request.transform,
+    missing: request.allowMissing ? 'allow' : 'error',
   });
   const options = {
     horizon: request.horizon,

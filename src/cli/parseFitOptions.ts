@@ -20,6 +20,8 @@ export interface FitRequest {
   point: 'median' | 'mean';
   json: boolean;
   help: boolean;
+  /** Missing values and periods become gaps the models handle, instead of errors. */
+  allowMissing: boolean;
   /** Backtest settings; undefined without --backtest (or one of its options, which imply it). */
   backtest?: { origins?: number; horizon?: number; refit: RefitPolicy };
 }
@@ -40,6 +42,7 @@ const FIT_OPTIONS: Readonly<Record<string, OptionSpec>> = {
   'no-coef-uncertainty': { type: 'boolean' },
   point: { type: 'string' },
   json: { type: 'boolean' },
+  'allow-missing': { type: 'boolean' },
   backtest: { type: 'boolean' },
   origins: { type: 'string' },
   'backtest-horizon': { type: 'string' },
@@ -85,6 +88,7 @@ export function parseFitOptions(args: readonly string[]): FitRequest {
     point: choice('point', text('point'), ['median', 'mean'] as const) ?? 'median',
     json: given.get('json') === true,
     help,
+    allowMissing: given.get('allow-missing') === true,
   };
   const origins = integer('origins', text('origins'), 1, MAX_BACKTEST_ORIGINS);
   const backtestHorizon = integer('backtest-horizon', text('backtest-horizon'), 1, MAX_BACKTEST_HORIZON);

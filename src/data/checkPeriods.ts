@@ -74,7 +74,7 @@ function gapProblems(dated: readonly DatedLine[], frequency: Frequency, column: 
  * judged only among labels of the series' frequency, so one stray label yields one problem.
  * `column` locates the period column (file, field, column number); each problem adds its line.
  */
-export function checkPeriods(dated: readonly DatedLine[], column: InputLocation, given?: Frequency): PeriodCheck {
+export function checkPeriods(dated: readonly DatedLine[], column: InputLocation, given?: Frequency, allowGaps = false): PeriodCheck {
   const frequency = given ?? dated[0]?.period.frequency;
   if (frequency === undefined) return { frequency, problems: [] };
   const regular = dated.filter((entry) => entry.period.frequency === frequency);
@@ -83,7 +83,7 @@ export function checkPeriods(dated: readonly DatedLine[], column: InputLocation,
     problems: [
       ...frequencyProblems(dated, frequency, given !== undefined, column),
       ...orderProblems(regular, column),
-      ...gapProblems(regular, frequency, column),
+      ...(allowGaps ? [] : gapProblems(regular, frequency, column)),
     ],
   };
 }

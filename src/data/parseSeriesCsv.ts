@@ -7,7 +7,7 @@ import { dataMessages, InputError, type InputLocation, type InputProblem } from 
 import { checkPeriods, type DatedLine } from './checkPeriods.js';
 import { checkSeries } from './checkSeries.js';
 import { limitProblems } from './limitProblems.js';
-import { formatPeriod, parsePeriod } from './period.js';
+import { formatPeriod, parsePeriod, periodFromIndex, periodIndex, type Frequency } from './period.js';
 import { parseValue } from './parseValue.js';
 import { readCsvTable, type CsvRow } from './readCsvTable.js';
 import { selectColumns, type ColumnChoice } from './selectColumns.js';
@@ -17,15 +17,15 @@ interface Observation extends DatedLine {
   value: number | undefined;
 }
 
-function cellProblem(text: string, at: InputLocation): { value?: number; problem?: InputProblem } {
+function cellProblem(text: string, at: InputLocation, allowMissing: boolean): { value?: number; problem?: InputProblem } {
   const parsed = parseValue(text);
   switch (parsed.kind) {
     case 'number':
       return { value: parsed.value };
     case 'empty':
-      return { problem: dataMessages.emptyValue(at) };
+      return allowMissing ? { value: Number.NaN } : { problem: dataMessages.emptyValue(at) };
     case 'missing-marker':
-      return { problem: dataMessages.missingMarker(at, text) };
+      return allowMissing ? { value: Number.NaN } : { problem: dataMessages.missingMarker(at, text) };
     case 'non-finite':
       return { problem: dataMessages.nonFinite(at, text) };
     case 'invalid':
@@ -33,7 +33,7 @@ function cellProblem(text: string, at: InputLocation): { value?: number; problem
   }
 }
 
-function readRow(row: CsvRow, width: number, choice: ColumnChoice, file: string, problems: InputProblem[]): Observation | undefined {
+function readRow(row: CsvRow, width: number, choice: ColumnChoice, file: string, problems: InputProblem[], allowMissing: boolean): Observation | undefined {
   const { line, cells } = row;
   if (cells.length !== width) problems.push(dataMessages.rowWidth({ file, line }, cells.length, width));
   const label = cells[choice.periodPosition] ?? '';
@@ -42,7 +42,7 @@ function readRow(row: CsvRow, width: number, choice: ColumnChoice, file: string,
   if (label === '') problems.push(dataMessages.emptyPeriod(periodAt));
   else if (period === null) problems.push(dataMessages.badPeriod(periodAt, label));
   const valueAt = { file, line, column: choice.valuePosition + 1, field: choice.column };
-  const { value, problem } = cellProblem(cells[choice.valuePosition] ?? '', valueAt);
+  const { value, problem } = cellProblem(cells[choice.valuePosition] ?? '', valueAt, allowMissing);
   if (problem !== undefined) problems.push(problem);
   return period === null ? undefined : { line, label, period, value };
 }
@@ -56,23 +56,30 @@ export function parseSeriesCsv(text: string, file: string, options: SeriesOption
   const choice = selectColumns(header, file, options);
   if (rows.length === 0) throw new InputError(dataMessages.noData({ file, line: header.line }));
 
+  const allowMissing = options.missing === 'allow';
   const problems: InputProblem[] = [];
   const observations: Observation[] = [];
   for (const row of rows) {
-    const observation = readRow(row, header.cells.length, choice, file, problems);
+    const observation = readRow(row, header.cells.length, choice, file, problems, allowMissing);
     if (observation !== undefined) observations.push(observation);
   }
   const periodColumn = { file, column: choice.periodPosition + 1, field: choice.periodColumn };
-  const periods = checkPeriods(observations, periodColumn, options.frequency);
+  const periods = checkPeriods(observations, periodColumn, options.frequency, allowMissing);
   problems.push(...periods.problems);
 
-  const valued = observations.filter((entry) => entry.value !== undefined);
-  const values = Float64Array.from(valued, (entry) => entry.value ?? NaN);
+  const valued = observations.filter((entry) => entry.value !== undefined && !Number.isNaN(entry.value));
+  const observed = Float64Array.from(valued, (entry) => entry.value ?? NaN);
   const lines = valued.map((entry) => entry.line);
-  problems.push(...checkSeries({ file, column: choice.column, values, lines }, options));
+  problems.push(...checkSeries({ file, column: choice.column, values: observed, lines }, options));
+  const ends = [observations[0], observations[observations.length - 1]];
+  if (allowMissing && ends.every((entry) => entry !== undefined)) {
+    ends.forEach((entry, i) => {
+      if (Number.isNaN(entry.value)) problems.push(dataMessages.missingEnd({ file, line: entry.line, field: choice.column }, i === 0 ? 'first' : 'last', entry.label));
+    });
+  }
 
   if (problems.length > 0 || periods.frequency === undefined) throw new InputError(limitProblems(problems));
-  const labels = observations.map((entry) => formatPeriod(entry.period));
+  const { labels, values } = allowMissing ? fillGaps(observations, periods.frequency) : { labels: observations.map((entry) => formatPeriod(entry.period)), values: observed };
   return {
     file,
     column: choice.column,
@@ -83,6 +90,17 @@ export function parseSeriesCsv(text: string, file: string, options: SeriesOption
     first: labels[0],
     last: labels[labels.length - 1],
     n: values.length,
+    missing: values.filter(Number.isNaN).length,
     sha256: createHash('sha256').update(text, 'utf8').digest('hex'),
   };
+}
+
+/** Every period from the first to the last, NaN where the file has no value (rows already in order). */
+function fillGaps(observations: readonly Observation[], frequency: Frequency): { labels: string[]; values: Float64Array } {
+  const start = periodIndex(observations[0].period);
+  const end = periodIndex(observations[observations.length - 1].period);
+  const values = new Float64Array(end - start + 1).fill(Number.NaN);
+  for (const entry of observations) values[periodIndex(entry.period) - start] = entry.value ?? Number.NaN;
+  const labels = Array.from(values, (_, i) => formatPeriod(periodFromIndex(frequency, start + i)));
+  return { labels, values };
 }

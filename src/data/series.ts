@@ -19,6 +19,11 @@ export interface SeriesOptions {
   /** Fewest observations the caller's use of the series needs. */
   minObservations?: number;
   transform?: TransformSpec;
+  /**
+   * 'allow': empty cells, missing-value markers and missing periods become NaN observations
+   * (the first and last must still be present); 'error' (default): each is a problem.
+   */
+  missing?: 'error' | 'allow';
 }
 
 export interface Series {
@@ -27,12 +32,16 @@ export interface Series {
   column: string;
   periodColumn: string;
   frequency: Frequency;
-  /** Canonical period labels, oldest first, one per observation. */
+  /** Canonical period labels, oldest first, one per observation, with no gaps. */
   periods: string[];
+  /** NaN where an observation is missing (only with `missing: 'allow'`). */
   values: Float64Array;
   first: string;
   last: string;
+  /** Periods from first to last, missing ones included. */
   n: number;
+  /** Periods without a value. */
+  missing: number;
   /** SHA-256 of the file's bytes, lowercase hex. */
   sha256: string;
 }

@@ -3,7 +3,7 @@
 import { adfTest } from './adfTest.js';
 import { kpssTest } from './kpssTest.js';
 import { residualChecks, type ResidualChecks } from './residualChecks.js';
-import { breakTestSummary } from './messages.js';
+import { breakTestSummary, evidenceNotes } from './messages.js';
 import { trendStability } from './trendStability.js';
 import { trendVerdict } from './trendVerdict.js';
 import type { AdfResult, KpssLagRule, KpssResult, StabilityRecord, TrendVerdictKind } from './types.js';
@@ -26,6 +26,8 @@ export interface EvidenceRecord {
   stability: StabilityRecord | null;
   /** Tests that could not be computed on this series, with the reason. */
   unavailable: { test: string; reason: string }[];
+  /** Caveats on how the tests were run, e.g. with missing values. */
+  notes: string[];
 }
 
 export interface FittedResiduals {
@@ -51,6 +53,8 @@ export function collectEvidence(
     }
   };
   const levels = Array.from(w).filter((v) => Number.isFinite(v));
+  const missing = w.length - levels.length;
+  const notes = missing > 0 ? [evidenceNotes.missingInUnitRootTests(missing)] : [];
   const kpss = {
     level: attempt('kpss.level', () => kpssTest(levels, { regression: 'level', lagRule })),
     trend: attempt('kpss.trend', () => kpssTest(levels, { regression: 'trend', lagRule })),
@@ -77,7 +81,7 @@ export function collectEvidence(
       deterministic: residualChecks(fits.deterministic.residuals, fits.deterministic.p, fits.deterministic.q, significance),
       stochastic: residualChecks(fits.stochastic.residuals, fits.stochastic.p, fits.stochastic.q, significance),
     },
-    stability: attempt('stability', () => {
+    stability: missing > 0 ? skipStability(unavailable) : attempt('stability', () => {
       const stability = trendStability(w, {
         deterministic: { p: fits.deterministic.p, q: fits.deterministic.q },
         stochastic: { p: fits.stochastic.p, q: fits.stochastic.q },
@@ -91,7 +95,13 @@ export function collectEvidence(
       return stability;
     }),
     unavailable,
+    notes,
   };
+}
+
+function skipStability(unavailable: EvidenceRecord['unavailable']): null {
+  unavailable.push({ test: 'stability', reason: evidenceNotes.stabilityNeedsComplete });
+  return null;
 }
 
 function toReading(verdict: ReturnType<typeof trendVerdict>): EvidenceRecord['reading'] {

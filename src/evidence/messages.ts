@@ -80,3 +80,11 @@ export function breakTestSummary(kind: 'deterministic' | 'stochastic', bound: Su
   if (weak) return `The drift looks broadly stable, with weak signs of a shift in the average change per period from ${when} (${p}).`;
   return `The drift does not look stable: the average change per period appears to shift from ${when} (${p}), so the recent pace may differ from the long-run average.`;
 }
+
+/** Notes on how the evidence was gathered. */
+export const evidenceNotes = {
+  missingInUnitRootTests(count: number): string {
+    return `${count} missing value${count === 1 ? ' was' : 's were'} left out of the unit-root tests, which then treat the remaining values as consecutive; read them as approximate.`;
+  },
+  stabilityNeedsComplete: 'the trend-stability checks need a series without missing values',
+};

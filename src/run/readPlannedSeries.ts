@@ -20,5 +20,6 @@ export function readPlannedSeries(series: SeriesPlan): Series {
     frequency: series.frequency,
     minObservations: requiredObservations(settings.maxP.value, settings.maxQ.value),
     transform: settings.transform.value,
+    missing: settings.missing.value,
   });
 }
