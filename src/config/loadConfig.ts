@@ -1,5 +1,5 @@
 // A config file from disk: size limit, encoding and file-system errors, then parseConfig.
-import { closeSync, fstatSync, openSync, readFileSync } from 'node:fs';
+import { closeSync, constants, fstatSync, openSync, readFileSync } from 'node:fs';
 import { dirname, resolve } from 'node:path';
 import { configMessages, InputError, type InputProblem } from '../errors.js';
 import { parseConfig } from './parseConfig.js';
@@ -18,7 +18,8 @@ function fileSystemProblem(file: string, error: unknown): InputProblem {
 function readConfigBytes(file: string): Buffer {
   let fd: number;
   try {
-    fd = openSync(file, 'r');
+    // Non-blocking, so a FIFO named as the file is refused below instead of waiting for a writer.
+    fd = openSync(file, constants.O_RDONLY | constants.O_NONBLOCK);
   } catch (error) {
     throw new InputError(fileSystemProblem(file, error));
   }

@@ -1,7 +1,7 @@
 // A series CSV file from disk: size limit, encoding and file-system errors, then parseSeriesCsv.
 
 import { createHash } from 'node:crypto';
-import { closeSync, fstatSync, openSync, readFileSync } from 'node:fs';
+import { closeSync, constants, fstatSync, openSync, readFileSync } from 'node:fs';
 import { dataMessages, InputError, type InputProblem } from '../errors.js';
 import { parseSeriesCsv } from './parseSeriesCsv.js';
 import type { Series, SeriesOptions } from './series.js';
@@ -19,7 +19,8 @@ function fileSystemProblem(file: string, error: unknown): InputProblem {
 function readBytes(file: string): Buffer {
   let fd: number;
   try {
-    fd = openSync(file, 'r');
+    // Non-blocking, so a FIFO named as the file is refused below instead of waiting for a writer.
+    fd = openSync(file, constants.O_RDONLY | constants.O_NONBLOCK);
   } catch (error) {
     throw new InputError(fileSystemProblem(file, error));
   }
