@@ -2,6 +2,7 @@
 
 import { dataMessages, InputError, type InputLocation, type InputProblem } from '../errors.js';
 import type { CsvRow } from './readCsvTable.js';
+import { firstRefusedCharacter } from '../config/textPatterns.js';
 import { closestName } from './closestName.js';
 import { parsePeriod } from './period.js';
 import { parseValue } from './parseValue.js';
@@ -23,6 +24,18 @@ function findColumn(header: readonly string[], name: string, at: InputLocation, 
     problems.push(dataMessages.duplicateColumn(at, name, positions.length));
   }
   return positions[0] ?? -1;
+}
+
+/** Longest column name, in code points: the limit of one-line text in a config. */
+const MAX_COLUMN_NAME = 200;
+
+/** The chosen columns' names reach the memo, so they follow the rules for one-line text in a config. */
+function nameProblem(name: string, position: number, at: InputLocation): InputProblem | undefined {
+  if (name === '') return dataMessages.unnamedColumn(at, position);
+  const length = [...name].length;
+  if (length > MAX_COLUMN_NAME) return dataMessages.columnNameTooLong(at, position, length, MAX_COLUMN_NAME);
+  const refused = firstRefusedCharacter(name, 'line');
+  return refused === undefined ? undefined : dataMessages.columnNameCharacter(at, position, refused.codePoint, refused.position);
 }
 
 /**
@@ -48,7 +61,8 @@ export function selectColumns(headerRow: CsvRow, file: string, wanted: { column?
 
   if (periodPosition === valuePosition) throw new InputError(dataMessages.sameColumn(at, header[periodPosition]));
   for (const position of [periodPosition, valuePosition]) {
-    if (header[position] === '') problems.push(dataMessages.unnamedColumn(at, position + 1));
+    const problem = nameProblem(header[position], position + 1, at);
+    if (problem !== undefined) problems.push(problem);
   }
   if (problems.length > 0) throw new InputError(problems);
   return { periodColumn: header[periodPosition], column: header[valuePosition], periodPosition, valuePosition };
