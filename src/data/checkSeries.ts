@@ -29,7 +29,45 @@ function isConstant(values: ArrayLike<number>): boolean {
 }
 
 /**
- * Too few observations, a constant series, and values outside the domain of the transform.
+ * Bounds on the model scale (the values after the transform). The likelihood works with sums of
+ * squares of the values and of their deviations, which overflow the double range (about 1.8e308)
+ * or underflow to zero far out; fits were measured to fail at magnitudes of 1e200 and at spreads of
+ * 1e-200 and to succeed at 1e150 and 1e-150, so these bounds keep a factor of 1e50 in hand.
+ * Real series sit far inside them: beyond them the units are almost surely wrong.
+ */
+export const MODEL_SCALE = { maxMagnitude: 1e100, minSpread: 1e-100 } as const;
+
+/** The value as the models see it: Box & Cox (1964), with lambda 0 the logarithm. */
+function onModelScale(value: number, transform: TransformSpec | undefined): number {
+  if (transform === undefined || transform.kind === 'none') return value;
+  const lambda = transform.kind === 'log' ? 0 : (transform.lambda ?? 0);
+  return lambda === 0 ? Math.log(value) : (Math.pow(value, lambda) - 1) / lambda;
+}
+
+function scaleProblems(series: SeriesValues, transform: TransformSpec | undefined): InputProblem[] {
+  const { file, column, values } = series;
+  const scale = transform === undefined || transform.kind === 'none' ? undefined : transformName(transform);
+  const problems: InputProblem[] = [];
+  let lowest = Infinity;
+  let highest = -Infinity;
+  for (let i = 0; i < values.length; i++) {
+    const y = onModelScale(values[i], transform);
+    if (Number.isNaN(y)) continue;
+    if (!(Math.abs(y) <= MODEL_SCALE.maxMagnitude)) {
+      problems.push(dataMessages.tooLargeForModels({ file, line: series.lines?.[i], field: column }, values[i], MODEL_SCALE.maxMagnitude, scale));
+    }
+    lowest = Math.min(lowest, y);
+    highest = Math.max(highest, y);
+  }
+  if (problems.length === 0 && highest - lowest < MODEL_SCALE.minSpread) {
+    problems.push(dataMessages.tooLittleSpread({ file, field: column }, highest - lowest, MODEL_SCALE.minSpread, scale));
+  }
+  return problems;
+}
+
+/**
+ * Too few observations, a constant series, values outside the domain of the transform, and values
+ * outside the range the models compute with (MODEL_SCALE).
  * Log and Box-Cox both need every value above zero (Box & Cox 1964 define the transform for y > 0).
  */
 export function checkSeries(series: SeriesValues, rules: SeriesRules = {}): InputProblem[] {
@@ -39,16 +77,20 @@ export function checkSeries(series: SeriesValues, rules: SeriesRules = {}): Inpu
   if (rules.minObservations !== undefined && n < rules.minObservations) {
     problems.push(dataMessages.tooFew({ file, field: column }, n, rules.minObservations));
   }
-  if (n >= 2 && isConstant(values)) {
+  const constant = n >= 2 && isConstant(values);
+  if (constant) {
     problems.push(dataMessages.constant({ file, field: column }, n, values[0]));
   }
   const transform = rules.transform;
+  let inDomain = true;
   if (transform !== undefined && transform.kind !== 'none') {
     const name = transformName(transform);
     for (let i = 0; i < n; i++) {
       if (values[i] > 0) continue;
+      inDomain = false;
       problems.push(dataMessages.nonPositive({ file, line: series.lines?.[i], field: column }, values[i], name));
     }
   }
+  if (n >= 2 && !constant && inDomain) problems.push(...scaleProblems(series, transform));
   return problems;
 }
