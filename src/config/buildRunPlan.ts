@@ -38,7 +38,7 @@ export function buildRunPlan(doc: ConfigDocument, source: PlanSource): RunPlan {
       reviewers: memo.reviewers ?? [],
       signOff: memo.sign_off ?? [],
     },
-    output: outputPlan(doc, source.baseDir),
+    output: outputPlan(doc, source.baseDir, placeOf),
     series: doc.series.map((entry, index) => seriesPlan(entry, index, doc.defaults ?? {}, source.baseDir, placeOf)),
   };
 }
@@ -47,17 +47,21 @@ function resolvePath(baseDir: string, written: string): string {
   return isAbsolute(written) ? resolve(written) : resolve(baseDir, written);
 }
 
-function outputPlan(doc: ConfigDocument, baseDir: string): OutputPlan {
+function outputPlan(doc: ConfigDocument, baseDir: string, placeOf: (field: string) => ConfigPlace): OutputPlan {
   const output = doc.output ?? {};
   const folderAsWritten = output.folder ?? DEFAULT_OUTPUT_FOLDER;
   const folder = resolvePath(baseDir, folderAsWritten);
   return {
     folder,
     folderAsWritten,
+    folderAt: output.folder === undefined ? undefined : placeOf('output.folder'),
     memoFolder: resolve(folder, doc.memo.id),
     formats: output.formats ?? [...OUTPUT_FORMATS],
     paper: output.paper ?? 'A4',
-    templates: output.templates === undefined ? undefined : { folder: resolvePath(baseDir, output.templates), folderAsWritten: output.templates },
+    templates:
+      output.templates === undefined
+        ? undefined
+        : { folder: resolvePath(baseDir, output.templates), folderAsWritten: output.templates, at: placeOf('output.templates') },
   };
 }
 

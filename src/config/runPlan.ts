@@ -121,12 +121,14 @@ export interface OutputPlan {
   folder: string;
   /** The folder as written in the config, or the default `out`. */
   folderAsWritten: string;
+  /** Where the config sets the folder; absent for the default. */
+  folderAt?: ConfigPlace;
   /** Absolute path of the memo's folder: `folder/<memo id>`. */
   memoFolder: string;
   formats: OutputFormat[];
   paper: 'A4' | 'Letter';
   /** A folder of templates replacing the built-in ones. */
-  templates?: { folder: string; folderAsWritten: string };
+  templates?: { folder: string; folderAsWritten: string; at: ConfigPlace };
 }
 
 export interface RunPlan {

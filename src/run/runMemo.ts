@@ -13,6 +13,7 @@ import type { MemoInput } from '../memo/memoInput.js';
 import { renderMemoHtml } from '../memo/renderMemoHtml.js';
 import type { PdfPrinter } from '../memo/print/pdfPrinter.js';
 import { assumptionsRegister } from './assumptionsRegister.js';
+import { checkRunPaths, writeFailure } from './checkRunPaths.js';
 import { forecastsCsv } from './forecastsCsv.js';
 import { readPlannedSeries } from './readPlannedSeries.js';
 import { buildManifest } from './manifest.js';
@@ -42,6 +43,7 @@ export interface MemoRunResult {
 
 export async function runMemo(configFile: string, options: RunMemoOptions): Promise<MemoRunResult> {
   const plan = loadConfig(configFile);
+  const paths = checkRunPaths(plan, options.outputFolder);
   const date = runDate();
   const loaded = readAllSeries(plan);
   const records: AnalysisRecord[] = [];
@@ -103,9 +105,12 @@ export async function runMemo(configFile: string, options: RunMemoOptions): Prom
     files,
   );
   files.push({ name: 'manifest.json', content: `${JSON.stringify(manifest, null, 2)}\n` });
-  const folder = options.outputFolder === undefined ? plan.output.memoFolder : `${options.outputFolder}/${plan.memo.id}`;
-  writeOutputFolder(folder, files);
-  return { configFile: plan.configFile, memoId: plan.memo.id, folder, series: records.length, files: files.map((file) => file.name) };
+  try {
+    writeOutputFolder(paths.memoFolder, files);
+  } catch (error) {
+    throw writeFailure(error, paths);
+  }
+  return { configFile: plan.configFile, memoId: plan.memo.id, folder: paths.memoFolder, series: records.length, files: files.map((file) => file.name) };
 }
 
 /** Reads every series file, collecting the problems of all of them before failing. */

@@ -70,10 +70,11 @@ describe('paths', () => {
     expect(plan.output).toEqual({
       folder: join(FIXTURES, 'build'),
       folderAsWritten: '../build',
+      folderAt: { field: 'output.folder', line: 63, column: 11 },
       memoFolder: join(FIXTURES, 'build/brackenfold-water-2026'),
       formats: ['html', 'json'],
       paper: 'Letter',
-      templates: { folder: join(FIXTURES, 'house-style'), folderAsWritten: '../house-style' },
+      templates: { folder: join(FIXTURES, 'house-style'), folderAsWritten: '../house-style', at: { field: 'output.templates', line: 66, column: 14 } },
     });
   });
 

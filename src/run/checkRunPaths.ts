@@ -1,0 +1,77 @@
+// The places a run touches besides its config and data files, checked before any analysis: the
+// output folder must be a folder or creatable as one, the memo's own folder, when it exists, a
+// folder (a run replaces a folder it wrote, never a file the user keeps there), and a
+// configured templates folder must exist. A run that would fail there fails at once, not after
+// minutes of fitting; failures while writing become the same kind of message.
+import { lstatSync, statSync, type Stats } from 'node:fs';
+import { dirname, resolve } from 'node:path';
+import type { RunPlan } from '../config/index.js';
+import { InputError, runMessages, type InputLocation, type InputProblem } from '../errors.js';
+import { shownPath } from './readPlannedSeries.js';
+
+export interface RunPaths {
+  /** Absolute folder the memo's folder is written into. */
+  outputFolder: string;
+  /** Absolute folder of the memo: the output folder and the memo id. */
+  memoFolder: string;
+  /** Where the output folder was chosen, for messages. */
+  chosenAt: InputLocation;
+}
+
+type PathKind = 'missing' | 'folder' | 'a regular file' | 'a special file' | 'a link to nothing';
+
+function pathKind(path: string): PathKind {
+  let stats: Stats;
+  try {
+    stats = statSync(path);
+  } catch {
+    try {
+      lstatSync(path);
+      return 'a link to nothing';
+    } catch {
+      return 'missing';
+    }
+  }
+  if (stats.isDirectory()) return 'folder';
+  return stats.isFile() ? 'a regular file' : 'a special file';
+}
+
+/** `outputFolder` is the --out option, already resolved; otherwise the config's folder is used. */
+export function checkRunPaths(plan: RunPlan, outputFolder: string | undefined): RunPaths {
+  const folder = outputFolder ?? plan.output.folder;
+  const chosenAt: InputLocation =
+    outputFolder !== undefined ? { field: '--out' } : { file: plan.configFile, field: 'output.folder', ...plan.output.folderAt };
+  const paths = { outputFolder: folder, memoFolder: resolve(folder, plan.memo.id), chosenAt };
+  const problems: InputProblem[] = [];
+  const folderKind = pathKind(folder);
+  if (folderKind === 'missing') {
+    let above = dirname(folder);
+    while (pathKind(above) === 'missing' && dirname(above) !== above) above = dirname(above);
+    const aboveKind = pathKind(above);
+    if (aboveKind !== 'folder') problems.push(runMessages.outputUnderNonFolder(chosenAt, shownPath(folder), shownPath(above), aboveKind));
+  } else if (folderKind !== 'folder') {
+    problems.push(runMessages.outputNotAFolder(chosenAt, shownPath(folder), folderKind));
+  } else {
+    const memoKind = pathKind(paths.memoFolder);
+    if (memoKind !== 'missing' && memoKind !== 'folder') problems.push(runMessages.memoFolderTaken(chosenAt, shownPath(paths.memoFolder), memoKind));
+  }
+  const templates = plan.output.templates;
+  if (templates !== undefined) {
+    const at = { file: plan.configFile, ...templates.at };
+    const kind = pathKind(templates.folder);
+    if (kind === 'missing') problems.push(runMessages.templatesMissing(at, shownPath(templates.folder)));
+    else if (kind !== 'folder') problems.push(runMessages.templatesNotAFolder(at, shownPath(templates.folder), kind));
+  }
+  if (problems.length > 0) throw new InputError(problems);
+  return paths;
+}
+
+/** File-system refusals while writing: the user's environment, not a fault of the program. */
+const REFUSALS = new Set(['EACCES', 'EPERM', 'EROFS', 'ENOSPC', 'EDQUOT', 'ENOTDIR', 'EEXIST', 'EISDIR', 'ENAMETOOLONG', 'ELOOP']);
+
+/** The error to throw for a failure while writing the memo folder. */
+export function writeFailure(error: unknown, paths: RunPaths): unknown {
+  const code = error instanceof Error && 'code' in error ? String(error.code) : undefined;
+  if (code === undefined || !REFUSALS.has(code)) return error;
+  return new InputError(runMessages.outputUnwritable(paths.chosenAt, shownPath(paths.outputFolder), code));
+}
