@@ -40,6 +40,8 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
   if (positionals.length === 0) problems.push(runMessages.noConfigs());
   const formats = parseFormats(values.get('formats'), problems);
   const out = values.get('out');
+  // `--out=` would otherwise resolve to the working folder.
+  if (out === '') problems.push(cliMessages.missingValue('--out', 'run'));
   if (problems.length > 0) throw new InputError(problems);
   const quiet = values.get('quiet') === true;
   let printer: Promise<PdfPrinter> | undefined;
