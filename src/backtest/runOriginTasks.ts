@@ -1,11 +1,12 @@
 // Runs the origin tasks inline (one thread) or on a pool of worker threads. Each task is a
 // pure function of its input and results are returned in task order, so the output does
-// not depend on the thread count. The worker module sits next to this one: compiled .js
-// under dist/, or TypeScript when running from the sources (tests, benchmarks).
+// not depend on the thread count. The worker module sits next to this one (see
+// parallel/workerModule.ts).
 //
 // A caller that runs many backtests (a batch of memos) opens one pool and passes it to
 // every runBacktest, so threads start once; otherwise each backtest opens its own.
 import Tinypool from 'tinypool';
+import { workerModule } from '../parallel/workerModule.js';
 import { forecastAtOrigin, type OriginForecast, type OriginTask } from './forecastAtOrigin.js';
 
 export interface OriginPool {
@@ -16,7 +17,7 @@ export interface OriginPool {
 
 /** A pool of `threads` workers for origin tasks; close it when done. */
 export function openOriginPool(threads: number): OriginPool {
-  const pool = new Tinypool({ filename: workerModule(), name: 'forecastAtOrigin', minThreads: threads, maxThreads: threads });
+  const pool = new Tinypool({ filename: workerModule(import.meta.url, 'forecastAtOrigin', 'forecastAtOrigin'), name: 'forecastAtOrigin', minThreads: threads, maxThreads: threads });
   return {
     threads,
     run: (tasks) => Promise.all(tasks.map((task): Promise<OriginForecast> => pool.run(task))),
@@ -33,17 +34,4 @@ export async function runOriginTasks(tasks: readonly OriginTask[], threads: numb
   } finally {
     await pool.close();
   }
-}
-
-/**
- * The module each worker imports. From the sources it is a small inline module that
- * registers tsx before importing the TypeScript file: Node 20 does not hand the parent's
- * loader hooks (nor an `--import` in the worker's execArgv) to worker threads.
- */
-function workerModule(): string {
-  if (!import.meta.url.endsWith('.ts')) return new URL('./forecastAtOrigin.js', import.meta.url).href;
-  const tsxApi = import.meta.resolve('tsx/esm/api');
-  const source = new URL('./forecastAtOrigin.ts', import.meta.url).href;
-  const entry = `const { register } = await import(${JSON.stringify(tsxApi)}); register(); export const { forecastAtOrigin } = await import(${JSON.stringify(source)});`;
-  return `data:text/javascript,${encodeURIComponent(entry)}`;
 }
