@@ -3,16 +3,17 @@
 //   ─completeAnalysis─▶ AnalysisRecord[] ─▶ MemoInput ─renderMemoHtml / printer─▶ files
 //   ─writeOutputFolder─▶ out/<memo id>/ (complete, or the previous folder left as it was)
 import { basename } from 'node:path';
-import { completeAnalysis } from '../analysis/completeAnalysis.js';
 import type { AnalysisRecord } from '../analysis/record.js';
 import { toolVersion } from '../analysis/toolVersion.js';
-import { loadConfig, toAnalysisOptions, type OutputFormat, type RunPlan, type SeriesPlan } from '../config/index.js';
+import { loadConfig, type OutputFormat, type RunPlan, type SeriesPlan } from '../config/index.js';
 import type { Series } from '../data/series.js';
 import { InputError, type InputProblem } from '../errors.js';
 import type { MemoInput } from '../memo/memoInput.js';
 import { renderMemoHtml } from '../memo/renderMemoHtml.js';
 import type { PdfPrinter } from '../memo/print/pdfPrinter.js';
+import { analysePlannedSeries, type SeriesTask } from './analysePlannedSeries.js';
 import { assumptionsRegister } from './assumptionsRegister.js';
+import type { SeriesPool } from './seriesPool.js';
 import { checkRunPaths, writeFailure } from './checkRunPaths.js';
 import { forecastsCsv } from './forecastsCsv.js';
 import { readPlannedSeries } from './readPlannedSeries.js';
@@ -29,8 +30,12 @@ export interface RunMemoOptions {
   printer?: () => Promise<PdfPrinter>;
   /** The command as the user would type it, for the reproducibility appendix. */
   command: string;
-  /** Worker threads for each series' backtest. */
+  /** Worker threads for each series' backtest (without a pool). */
   threads?: number;
+  /** Worker threads that analyse whole series; shared by every memo of a batch. */
+  pool?: SeriesPool;
+  /** Called as each series finishes, for progress reports. */
+  onSeriesDone?: (memoId: string, seriesId: string) => void;
 }
 
 export interface MemoRunResult {
@@ -47,7 +52,17 @@ export async function runMemo(configFile: string, options: RunMemoOptions): Prom
   const date = runDate();
   const loaded = readAllSeries(plan);
   const records: AnalysisRecord[] = [];
-  for (const { plan: seriesPlan, series } of loaded) records.push(await analyse(seriesPlan, series, options.threads));
+  // Series are independent: on a pool they run side by side, and their order is kept.
+  const analyse = options.pool?.analyse ?? ((task: SeriesTask) => analysePlannedSeries({ ...task, threads: options.threads }));
+  records.push(
+    ...(await Promise.all(
+      loaded.map(async ({ plan: seriesPlan, series }) => {
+        const record = await analyse({ plan: seriesPlan, series });
+        options.onSeriesDone?.(plan.memo.id, seriesPlan.id);
+        return record;
+      }),
+    )),
+  );
   const formats = options.formats ?? plan.output.formats;
   const configName = basename(plan.configFile);
   const input: MemoInput = {
@@ -119,7 +134,7 @@ function readAllSeries(plan: RunPlan): { plan: SeriesPlan; series: Series }[] {
   const loaded: { plan: SeriesPlan; series: Series }[] = [];
   for (const seriesPlan of plan.series) {
     try {
-      loaded.push({ plan: seriesPlan, series: readPlannedSeries(seriesPlan) });
+      loaded.push({ plan: seriesPlan, series: readPlannedSeries(seriesPlan, plan.configFile) });
     } catch (error) {
       if (!(error instanceof InputError)) throw error;
       problems.push(...error.problems);
@@ -129,26 +144,3 @@ function readAllSeries(plan: RunPlan): { plan: SeriesPlan; series: Series }[] {
   return loaded;
 }
 
-async function analyse(plan: SeriesPlan, series: Series, threads: number | undefined): Promise<AnalysisRecord> {
-  const { settings } = plan;
-  const record = await completeAnalysis(series, {
-    ...toAnalysisOptions(plan),
-    backtest: {
-      origins: settings.backtest.origins.value,
-      horizon: settings.backtest.horizon.value,
-      refit: settings.backtest.refit.value,
-      window: settings.backtest.window.value,
-      minTrainingLength: settings.backtest.minTrain.value,
-      threads,
-    },
-    recommendation: {
-      rule: settings.recommendation.rule.value,
-      significance: settings.recommendation.significance.value,
-      model: settings.recommendation.model.value,
-      justification: settings.recommendation.justification.value,
-    },
-  });
-  // The record names the data file as the config wrote it, never a path on this machine.
-  record.series.source.file = plan.fileAsWritten;
-  return record;
-}
