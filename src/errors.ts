@@ -318,6 +318,10 @@ export const dataMessages = {
       at,
     );
   },
+  /** A problem with a series file as a whole, told with the config entry that names the file. */
+  namedBy(about: InputProblem, entry: { file: string; line: number; column: number; field: string }): InputProblem {
+    return { ...about, hint: `${about.hint} (the file of ${entry.field}, ${entry.file}:${entry.line}:${entry.column})` };
+  },
   moreOfTheSame(like: InputProblem, lines: readonly number[]): InputProblem {
     return problem(like.code, `and ${plural(lines.length, 'more line')} with this kind of problem: ${abbreviateList(lines.map(String))}`, like.hint, {
       file: like.file,

@@ -40,7 +40,7 @@ function checkOne(file: string): { ok: string } | { problems: readonly InputProb
   const described: string[] = [];
   for (const series of plan.series) {
     try {
-      described.push(describeSeries(series.id, readPlannedSeries(series)));
+      described.push(describeSeries(series.id, readPlannedSeries(series, file)));
     } catch (error) {
       if (!(error instanceof InputError)) throw error;
       problems.push(...error.problems);
