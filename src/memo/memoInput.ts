@@ -2,6 +2,7 @@
 // AnalysisRecord plus what the analyst wrote about it) and the reproducibility facts.
 // Plain data, independent of the config code: whoever runs the analysis fills it in.
 import type { MemoRecord } from './recordParts.js';
+import type { Revisions } from './revisionsPart.js';
 
 export type Paper = 'A4' | 'Letter';
 
@@ -76,4 +77,6 @@ export interface MemoInput {
   paper: Paper;
   series: MemoSeries[];
   reproducibility: Reproducibility;
+  /** This memo against the previous as-of memo; absent for a memo without an as-of period. */
+  revisions?: Revisions;
 }

@@ -142,12 +142,13 @@ export const LABELS = {
   critical5: '5% critical value',
   outcome: 'Outcome',
   lags: 'Lags',
-  observations: 'Obs.',
+  origins: 'Origins',
 } as const;
 
 /** Short fixed text the templates place: table captions, column heads, small labels. */
 export const TEMPLATE_TEXT = {
   memoKind: 'Forecast memo',
+  atPeriod: (period: string) => `At ${period}`,
   recommendedMarker: 'recommended',
   assumes: 'It assumes',
   lossNames: { squared_error: 'Squared error', interval_score_95: '95% interval score' },

@@ -4,10 +4,16 @@
 import type { Config } from 'vega-lite';
 import { CHART_FONT, GRID, INK, MUTED, RULE } from './palette.js';
 
-/** Width in pixels of a chart that spans the text column (scaled to the column by CSS). */
-export const FULL_WIDTH = 620;
-/** Plot width of each of two side-by-side panels. */
-export const PANEL_WIDTH = 246;
+/**
+ * Every chart comes out about 640 px wide and CSS scales it to the text column, so all charts
+ * share one text size: single views fit their whole width to FULL_WIDTH; two panels of
+ * PANEL_WIDTH plus their axes and spacing add up to about the same.
+ */
+export const FULL_WIDTH = 640;
+export const PANEL_WIDTH = 262;
+
+/** For single views: axes and labels inside FULL_WIDTH rather than added to it. */
+export const FIT_WIDTH = { type: 'fit-x', contains: 'padding' } as const;
 
 export const CHART_CONFIG: Config = {
   font: CHART_FONT,

@@ -3,7 +3,7 @@ import type { TopLevelSpec } from 'vega-lite';
 import { chartWording } from '../chartWording.js';
 import { formatNumber, withUnits } from '../format/formatNumber.js';
 import type { HistoryPoint } from '../memoInput.js';
-import { CHART_CONFIG, FULL_WIDTH } from './chartConfig.js';
+import { CHART_CONFIG, FIT_WIDTH, FULL_WIDTH } from './chartConfig.js';
 import { INK } from './palette.js';
 import { periodPosition, timeAxis } from './periodPosition.js';
 
@@ -32,6 +32,7 @@ export function historyChart({ series, units, decimals, history }: HistoryChartI
     }),
     config: CHART_CONFIG,
     width: FULL_WIDTH,
+    autosize: FIT_WIDTH,
     height: 170,
     data: { values: rows },
     mark: { type: 'line', color: INK, strokeWidth: 1.3 },

@@ -6,6 +6,7 @@
 import { parse, View } from 'vega';
 import { compile, type TopLevelSpec } from 'vega-lite';
 import type { Spec as VegaSpec } from 'vega';
+import { useTextWidthEstimate } from './textWidth.js';
 
 export interface CompiledChart {
   spec: VegaSpec;
@@ -38,6 +39,7 @@ const ID = / id="([^"]+)"/g;
 
 /** The chart as an inline <svg> element; `prefix` makes its element ids unique in the page. */
 export async function renderChartSvg(chart: TopLevelSpec, prefix: string): Promise<string> {
+  useTextWidthEstimate();
   const view = new View(parse(compileChart(chart).spec), { renderer: 'none' });
   try {
     const raw = await view.toSVG();

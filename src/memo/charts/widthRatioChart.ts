@@ -4,7 +4,7 @@ import type { TopLevelSpec } from 'vega-lite';
 import { chartWording } from '../chartWording.js';
 import { formatNumber } from '../format/formatNumber.js';
 import type { MemoRecord } from '../recordParts.js';
-import { CHART_CONFIG, FULL_WIDTH } from './chartConfig.js';
+import { CHART_CONFIG, FIT_WIDTH, FULL_WIDTH } from './chartConfig.js';
 import { INK, MODEL_COLOUR } from './palette.js';
 
 export interface WidthRatioRow {
@@ -36,6 +36,7 @@ export function widthRatioChart({ series, record }: { series: string; record: Me
     }),
     config: CHART_CONFIG,
     width: FULL_WIDTH,
+    autosize: FIT_WIDTH,
     height: 140,
     layer: [
       {

@@ -90,7 +90,8 @@ export function backtestView(backtest: BacktestPart, frequency: Frequency, decim
           coverage95: formatPercent(row?.coverage?.['95']),
           width95: formatNumber(row?.width?.['95'], decimals),
           score95: formatNumber(row?.interval_score?.['95'], decimals),
-          crps: formatNumber(row?.crps, decimals),
+          // CRPS is on the modelling scale, which the series' decimals do not fit after a transform.
+          crps: formatSignificant(row?.crps, 3),
         };
       }),
     })),

@@ -5,6 +5,7 @@ import type { MemoInput } from '../memoInput.js';
 import { cssMargin, PAPER_SIZES } from '../print/paperSize.js';
 import { CAUTIONS, HEADINGS, LABELS, METHOD_NAME, MODEL_NAME, SIGN_OFF_NOTE, SUMMARY_INTRO, TEMPLATE_TEXT } from '../wording.js';
 import { memoStatus, type MemoStatus } from './memoStatus.js';
+import { revisionsView, type RevisionsView } from './revisionsView.js';
 import { seriesView, type SeriesView } from './seriesView.js';
 import { signOffView, type SignOffRow } from './signOffView.js';
 import type { SummaryCard } from './summaryView.js';
@@ -15,6 +16,7 @@ export interface MemoView {
   status: MemoStatus & { draft: boolean };
   summary: { intro: string; cards: SummaryCard[] };
   series: SeriesView[];
+  revisions: RevisionsView | null;
   assumptions: { anchor: string; title: string; rows: { choice: string; value: string; basis: string; setBy: string }[] }[];
   cautions: readonly string[];
   signOff: { note: string; rows: SignOffRow[] };
@@ -69,6 +71,7 @@ export async function buildMemoView(input: MemoInput): Promise<MemoView> {
     status: { ...status, detail: noLinks(status.detail), draft: status.state === 'draft' },
     summary: { intro: SUMMARY_INTRO, cards: series.map((s) => s.summary) },
     series,
+    revisions: await revisionsView(input),
     assumptions: input.series.map((entry, i) => ({
       anchor: series[i].anchor,
       title: series[i].title,

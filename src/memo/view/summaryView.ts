@@ -2,7 +2,7 @@
 // the end of the horizon under both models with both intervals, and the top caveat.
 import type { Caveat } from '../caveats/caveat.js';
 import type { MemoRecord, ModelKind } from '../recordParts.js';
-import { LABELS, MODEL_GLOSS, MODEL_NAME, NOT_RUN } from '../wording.js';
+import { LABELS, METHOD_NAME, MODEL_GLOSS, MODEL_NAME, NOT_RUN, TEMPLATE_TEXT } from '../wording.js';
 import { forecastCells, type ForecastCells } from './forecastTableView.js';
 
 export interface SummaryCard {
@@ -13,6 +13,7 @@ export interface SummaryCard {
   gloss: string;
   noRecommendation: string;
   endPeriod: string;
+  atEnd: string;
   models: (ForecastCells & { name: string; recommended: boolean })[];
   caveat: { label: string; severity: Caveat['severity']; text: string } | null;
 }
@@ -22,6 +23,7 @@ export function summaryCard(a: { anchor: string; title: string; units?: string; 
   const model: ModelKind | undefined = record.recommendation?.model;
   const last = record.forecasts.deterministic.length - 1;
   const top = a.caveats[0];
+  const endPeriod = record.forecasts.deterministic[last]?.period ?? record.series.last;
   return {
     anchor: a.anchor,
     title: a.title,
@@ -29,9 +31,10 @@ export function summaryCard(a: { anchor: string; title: string; units?: string; 
     recommended: model === undefined ? null : MODEL_NAME[model],
     gloss: model === undefined ? '' : MODEL_GLOSS[model],
     noRecommendation: NOT_RUN.recommendation,
-    endPeriod: record.forecasts.deterministic[last]?.period ?? record.series.last,
+    endPeriod,
+    atEnd: TEMPLATE_TEXT.atPeriod(endPeriod),
     models: (['deterministic', 'stochastic'] as const).map((kind) => ({
-      name: MODEL_NAME[kind],
+      name: METHOD_NAME[kind],
       recommended: kind === model,
       ...forecastCells(record, kind, last, a.decimals),
     })),

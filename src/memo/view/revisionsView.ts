@@ -1,0 +1,138 @@
+// The revisions section as the template places it: one block per series with its changed
+// orders and recommendation, the chart of both memos' forecasts, the table of forecast
+// revisions for the periods both memos forecast, and the revised observations.
+import { revisionChart } from '../charts/revisionChart.js';
+import { noLinks } from '../format/noLinks.js';
+import { formatNumber, formatPercentPoints, MISSING } from '../format/formatNumber.js';
+import { seriesDecimals } from '../format/seriesDecimals.js';
+import type { MemoInput } from '../memoInput.js';
+import type { ModelKind } from '../recordParts.js';
+import type { ForecastRevision, Revisions, SeriesRevisions } from '../revisionsPart.js';
+import { revisionsWording } from '../revisionsWording.js';
+import { figureView, type FigureView } from './figureView.js';
+
+/** Revised observations listed in the memo; the rest are counted. */
+export const DATA_ROWS_SHOWN = 24;
+
+interface Change {
+  earlier: string;
+  now: string;
+  change: string;
+  percent: string;
+}
+
+export interface RevisionSeriesView {
+  anchor: string;
+  title: string;
+  notes: string[];
+  figure: FigureView | null;
+  forecastCaption: string;
+  forecastRows: { period: string; steps: string; deterministic: Change; stochastic: Change }[];
+  noCommonPeriods: string;
+  dataCaption: string;
+  dataRows: ({ period: string } & Change)[];
+  dataNote: string;
+}
+
+export interface RevisionsView {
+  heading: string;
+  compared: boolean;
+  none: string;
+  intro: string;
+  dropped: string;
+  columns: typeof revisionsWording.columns;
+  /** The four column heads under each model, repeated for both. */
+  modelColumns: string[];
+  series: RevisionSeriesView[];
+}
+
+function signed(text: string, value: number | null): string {
+  return value !== null && value > 0 && text !== MISSING ? `+${text}` : text;
+}
+
+function change(earlier: number | null, now: number | null, difference: number | null, percent: number | null, decimals: number): Change {
+  return {
+    earlier: formatNumber(earlier, decimals),
+    now: formatNumber(now, decimals),
+    change: signed(formatNumber(difference, decimals), difference),
+    percent: signed(formatPercentPoints(percent, 2), percent),
+  };
+}
+
+const NO_ROW: Change = { earlier: MISSING, now: MISSING, change: MISSING, percent: MISSING };
+
+function forecastRows(forecasts: ForecastRevision[], decimals: number): RevisionSeriesView['forecastRows'] {
+  const periods = [...new Set(forecasts.map((row) => row.period))];
+  return periods.map((period) => {
+    const of = (model: ModelKind) => forecasts.find((row) => row.model === model && row.period === period);
+    const first = of('deterministic') ?? of('stochastic');
+    const cells = (model: ModelKind) => {
+      const row = of(model);
+      return row === undefined ? NO_ROW : change(row.point_earlier, row.point, row.change, row.percent_change, decimals);
+    };
+    return { period, steps: first === undefined ? MISSING : `${first.h_earlier} \u2192 ${first.h}`, deterministic: cells('deterministic'), stochastic: cells('stochastic') };
+  });
+}
+
+function notes(entry: SeriesRevisions): string[] {
+  const w = revisionsWording;
+  if (!entry.in_earlier || entry.last.earlier === null) return [w.newSeries];
+  const orders = entry.orders.length === 0 ? [w.ordersSame] : entry.orders.map((o) => w.orderChanged(o.model, o.earlier, o.now));
+  const recommendation = entry.recommendation === null ? [] : [w.recommendationChanged(entry.recommendation.earlier, entry.recommendation.now)];
+  return [w.lastObserved(entry.last.earlier, entry.last.now), ...orders, ...recommendation];
+}
+
+function dataNote(entry: SeriesRevisions): string {
+  if (!entry.in_earlier) return '';
+  if (entry.data === null) return revisionsWording.dataUnknown;
+  if (entry.data.length === 0) return revisionsWording.dataNone;
+  return entry.data.length > DATA_ROWS_SHOWN ? revisionsWording.dataMore(DATA_ROWS_SHOWN, entry.data.length) : '';
+}
+
+async function seriesBlock(entry: SeriesRevisions, input: MemoInput, revisions: Revisions, earlierAsOf: string): Promise<RevisionSeriesView> {
+  const index = input.series.findIndex((s) => s.record.series.id === entry.series_id);
+  const memoSeries = index < 0 ? undefined : input.series[index];
+  const anchor = index < 0 ? '' : `series-${index + 1}`;
+  const title = noLinks(entry.title);
+  const units = memoSeries?.units === undefined ? undefined : noLinks(memoSeries.units);
+  const decimals = memoSeries === undefined ? 2 : seriesDecimals(memoSeries.record);
+  const { earlier } = entry.paths;
+  const figure =
+    earlier === null
+      ? null
+      : await figureView(`revisions-${index + 1}`, revisionChart({ series: title, units, decimals, asOf: noLinks(revisions.as_of), earlierAsOf, paths: { now: entry.paths.now, earlier }, forecasts: entry.forecasts }));
+  return {
+    anchor,
+    title,
+    notes: notes(entry),
+    figure,
+    forecastCaption: revisionsWording.forecastCaption(units ?? ''),
+    forecastRows: forecastRows(entry.forecasts, decimals),
+    noCommonPeriods: entry.in_earlier && entry.forecasts.length === 0 ? revisionsWording.noCommonPeriods : '',
+    dataCaption: revisionsWording.dataCaption(units ?? ''),
+    dataRows: (entry.data ?? []).slice(0, DATA_ROWS_SHOWN).map((row) => ({ period: row.period, ...change(row.value_earlier, row.value, row.change, row.percent_change, decimals) })),
+    dataNote: dataNote(entry),
+  };
+}
+
+export async function revisionsView(input: MemoInput): Promise<RevisionsView | null> {
+  const { revisions } = input;
+  if (revisions === undefined) return null;
+  const asOf = noLinks(revisions.as_of);
+  const { columns } = revisionsWording;
+  const perModel = [columns.earlier, columns.now, columns.change, columns.percent];
+  const base = { heading: revisionsWording.heading, columns, modelColumns: [...perModel, ...perModel], none: revisionsWording.none(asOf) };
+  const { earlier } = revisions;
+  if (earlier === null) return { ...base, compared: false, intro: '', dropped: '', series: [] };
+  const earlierAsOf = noLinks(earlier.as_of);
+  const series: RevisionSeriesView[] = [];
+  // One chart at a time, as for the series sections.
+  for (const entry of revisions.series) series.push(await seriesBlock(entry, input, revisions, earlierAsOf));
+  return {
+    ...base,
+    compared: true,
+    intro: revisionsWording.intro(asOf, earlierAsOf, noLinks(earlier.run_date)),
+    dropped: revisions.dropped.length === 0 ? '' : revisionsWording.dropped(revisions.dropped.map((d) => noLinks(d.title))),
+    series,
+  };
+}
