@@ -479,6 +479,8 @@ const YAML_SYNTAX_DETAILS: Readonly<Record<string, readonly [string, string]>> =
   BAD_INDENT: ['the indentation does not fit the lines around it', 'line the key up with the keys beside it, using spaces'],
   TAB_AS_INDENT: ['a tab is used for indentation', 'indent with spaces'],
   MISSING_CHAR: ['a quote or bracket is still open here', 'close the quote or bracket opened above this point'],
+  // Ours, not the parser's: MISSING_CHAR moved to the quote that opens the value.
+  UNCLOSED_QUOTE: ['a quote opened here is never closed', 'end the value with the same quote mark, or remove this one'],
   MULTIPLE_DOCS: ['the file holds more than one document', 'remove the second --- line: a config is one document'],
   BLOCK_AS_IMPLICIT_KEY: ['a key runs over more than one line', 'write each key on one line, followed by a colon'],
   MULTILINE_IMPLICIT_KEY: ['a key runs over more than one line', 'write each key on one line, followed by a colon'],
@@ -738,3 +740,83 @@ export const runMessages = {
   },
 };
 
+
+// ---------------------------------------------------------------------------
+// Monthly memos and verify: as-of folders (src/run/runMemo.ts) and `trendbrief verify`
+// (src/run/verifyMemoFolder.ts, src/cli/verifyCommand.ts). Problems here exit with 2; the
+// report wording (matches, differences) follows them.
+// ---------------------------------------------------------------------------
+
+const VERIFY_HELP = 'see trendbrief verify --help';
+
+export const monthlyMessages = {
+  asOfFoldersWouldBeReplaced(at: InputLocation, folder: string, labels: readonly string[]): InputProblem {
+    return problem(
+      'run.as-of-folders',
+      `the memo's folder '${folder}' holds as-of memos (${abbreviateList(labels)}), which a run without an as-of period would replace`,
+      'set memo.as_of to the period this memo speaks for, or write elsewhere with --out',
+      at,
+    );
+  },
+};
+
+export const verifyMessages = {
+  noFolderGiven(): InputProblem {
+    return problem('verify.no-folder', 'verify needs the memo folder to check', 'give one, e.g. trendbrief verify out/lake-outlook/2026-01');
+  },
+  extraArguments(extra: readonly string[]): InputProblem {
+    return problem('verify.extra-arguments', `unexpected argument${extra.length > 1 ? 's' : ''} ${extra.join(' ')}`, `give one memo folder; ${VERIFY_HELP}`);
+  },
+  noManifest(folder: string, asOfFolders: readonly string[]): InputProblem {
+    const hint = asOfFolders.length > 0 ? `it holds as-of memos: give one of them, e.g. ${folder}/${asOfFolders[0]}` : 'give the folder a run wrote, the one with manifest.json in it';
+    return problem('verify.no-manifest', `'${folder}' has no manifest.json`, hint, { file: folder });
+  },
+  badManifest(file: string, field: string, expected: string): InputProblem {
+    return problem('verify.bad-manifest', `is not ${expected}`, 'the manifest is not as a run writes it; rerun the memo to write a new one', { file, field });
+  },
+  noInputLocation(file: string, field: string): InputProblem {
+    return problem(
+      'verify.no-input-location',
+      'does not say where the input lies relative to the memo folder (from_output)',
+      'the memo was written by an earlier version; rerun it with this version, then verify',
+      { file, field },
+    );
+  },
+  inputMissing(file: string, field: string, role: string, path: string, expected: string): InputProblem {
+    return problem('verify.input-missing', `the ${role} ${path} is missing (expected SHA-256 ${expected})`, 'put the file back where the manifest says, or rerun the memo', { file, field });
+  },
+  inputChanged(file: string, field: string, role: string, path: string, expected: string, actual: string): InputProblem {
+    return problem(
+      'verify.input-changed',
+      `the ${role} ${path} has changed: SHA-256 ${actual}, the manifest records ${expected}`,
+      'restore the file as it was when the memo was run, or rerun the memo to issue a new one',
+      { file, field },
+    );
+  },
+  earlierRecordUnreadable(file: string, field: string, path: string): InputProblem {
+    return problem('verify.earlier-record', `the earlier record ${path} is not a record document`, 'restore the previous as-of memo folder as it was issued', { file, field });
+  },
+};
+
+/** The lines of the verify report on stdout; numbers appear as JSON writes them. */
+export const verifyReport = {
+  header: (folder: string, runDate: string, tool: string, command: string) => `verify ${folder}: run on ${runDate} with ${tool}: ${command}`,
+  otherVersion: (recorded: string, current: string) =>
+    `note: recorded with ${recorded}, verified with ${current}; wording or numbers of another version may differ`,
+  inputs: (count: number) => `inputs: ${count} file${count === 1 ? '' : 's'} with the SHA-256 the manifest records`,
+  outputs: (count: number, changed: number) => `outputs: ${count - changed} of ${count} with the SHA-256 the manifest records`,
+  records: (series: number, numbers: number, tolerance: string) => `records: ${series} series recomputed; ${numbers} numbers compared within ${tolerance}`,
+  noRecord: 'records: the run wrote no record.json (its formats left it out); the numbers are compared through forecasts.csv',
+  bytes: (parts: readonly string[]) => `rerun bytes: ${parts.join(', ')}`,
+  identical: (file: string) => `${file} identical`,
+  differs: (file: string) => `${file} differs`,
+  notRebuilt: (file: string) => `${file} not rebuilt (verify prints no PDF; its recorded hash is checked above)`,
+  differencesHeading: (count: number) => `differences (${count}), stored vs recomputed:`,
+  more: (count: number) => `  ... and ${count} more`,
+  outputChanged: (file: string, expected: string, actual: string) => `${file}: SHA-256 ${actual}, the manifest records ${expected}`,
+  outputMissing: (file: string) => `${file}: listed in the manifest but missing`,
+  bytesDiffer: (file: string, line: number) => `${file}: the rerun differs from the stored file from line ${line}`,
+  numberDiffers: (path: string, stored: string, rerun: string) => `${path}: ${stored} vs ${rerun}`,
+  match: (folder: string) => `ok: ${folder} is what its inputs give`,
+  mismatch: (folder: string, count: number) => `mismatch: ${folder} differs from what its inputs give in ${count} place${count === 1 ? '' : 's'}`,
+};

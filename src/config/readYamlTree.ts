@@ -4,6 +4,7 @@
 // Duplicate keys are kept, in order: the validator reports them, as it knows the field path.
 import { isAlias, isMap, isScalar, isSeq, LineCounter, parseDocument, type Document, type Node as YamlAstNode } from 'yaml';
 import { configMessages, type InputProblem } from '../errors.js';
+import { unclosedQuoteOffset } from './unclosedQuote.js';
 
 export interface Position {
   line: number;
@@ -52,7 +53,13 @@ export function readYamlTree(text: string, file: string): YamlTree {
   };
   const faults = [...doc.errors, ...doc.warnings];
   if (faults.length > 0) {
-    return { problems: faults.map((fault) => configMessages.syntax({ file, ...positionOf(fault.pos[0]) }, fault.code, fault.message)) };
+    return {
+      problems: faults.map((fault) => {
+        const opened = fault.code === 'MISSING_CHAR' && /quote/i.test(fault.message) ? unclosedQuoteOffset(text) : undefined;
+        if (opened !== undefined) return configMessages.syntax({ file, ...positionOf(opened) }, 'UNCLOSED_QUOTE', fault.message);
+        return configMessages.syntax({ file, ...positionOf(fault.pos[0]) }, fault.code, fault.message);
+      }),
+    };
   }
   if (doc.contents === null) return { problems: [] };
   const problems: InputProblem[] = [];

@@ -21,9 +21,9 @@ function written(name: string, content: string | Buffer): string {
 }
 
 describe('YAML syntax', () => {
-  it('reports an unclosed quote where the parser runs out of text', () => {
+  it('reports an unclosed quote at the quote that opens it, not where the parser runs out of text', () => {
     expect(onlyProblem([...BASE.slice(0, 2), "  title: 'Water outlook", ...BASE.slice(3)]).text).toBe(
-      'memo.yaml:7:1: not valid YAML: a quote or bracket is still open here; close the quote or bracket opened above this point',
+      'memo.yaml:3:10: not valid YAML: a quote opened here is never closed; end the value with the same quote mark, or remove this one',
     );
   });
 
