@@ -1,19 +1,23 @@
 // The command line as a function: cli(argv, io) → exit code, so it is tested without
-// spawning processes. Exit codes: 0 success, 1 internal failure, 2 bad input or usage.
+// spawning processes. Exit codes: 0 success, 1 internal failure, 2 bad input or usage,
+// 3 a memo that verify finds different from what its inputs give.
 import { closestName } from './data/closestName.js';
 import { cliMessages, formatProblem, InputError } from './errors.js';
 import { runFit, FIT_HELP } from './cli/fitCommand.js';
 import { runCheck } from './cli/checkCommand.js';
 import { runInit } from './cli/initCommand.js';
 import { runRun } from './cli/runCommand.js';
+import { runVerify } from './cli/verifyCommand.js';
 import { toolVersion } from './analysis/toolVersion.js';
 
 export interface CliIo {
   stdout(text: string): void;
   stderr(text: string): void;
+  /** True when stderr is a terminal. */
+  isTTY?: boolean;
 }
 
-const COMMANDS = ['run', 'check', 'fit', 'init'] as const;
+const COMMANDS = ['run', 'check', 'fit', 'verify', 'init'] as const;
 const GLOBAL_OPTIONS = ['--help', '--version'] as const;
 
 export const EXIT = { ok: 0, internal: 1, input: 2, mismatch: 3 } as const;
@@ -24,6 +28,7 @@ Usage:
   trendbrief run CONFIG.yaml...       write the forecast memo of each config
   trendbrief fit FILE.csv [options]   fit both trend models to one series and forecast
   trendbrief check CONFIG.yaml...     check configs and their series files without fitting
+  trendbrief verify MEMO_FOLDER       check an issued memo against its inputs and a rerun
   trendbrief init [DIR]               write a starter config and an example series
   trendbrief --help                   this text
   trendbrief --version                the tool's version
@@ -55,6 +60,7 @@ export async function cli(argv: readonly string[], io: CliIo): Promise<number> {
     }
     if (command === 'run') return await runRun(rest, io);
     if (command === 'check') return await runCheck(rest, io);
+    if (command === 'verify') return await runVerify(rest, io);
     if (command === 'init') return await runInit(rest, io);
     if (command.startsWith('-')) throw new InputError(cliMessages.unknownOption(command, closestName(command, GLOBAL_OPTIONS), ''));
     throw new InputError(cliMessages.unknownCommand(command, closestName(command, COMMANDS)));
@@ -73,5 +79,6 @@ export function runCli(argv: readonly string[]): Promise<number> {
   return cli(argv, {
     stdout: (text) => process.stdout.write(text),
     stderr: (text) => process.stderr.write(text),
+    isTTY: process.stderr.isTTY,
   });
 }

@@ -19,7 +19,9 @@ export function progressReporter(totalSeries: number, totalMemos: number, target
   const started = now();
   let series = 0;
   let memos = 0;
+  let drawn = false;
   const draw = (): void => {
+    drawn = true;
     const share = totalSeries === 0 ? 1 : series / totalSeries;
     const filled = Math.round(share * BAR_WIDTH);
     const elapsed = (now() - started) / 1000;
@@ -37,7 +39,9 @@ export function progressReporter(totalSeries: number, totalMemos: number, target
       else target.write(`${ok ? 'done' : 'failed'}: memo ${memoId} (${memos}/${totalMemos} memos, ${series}/${totalSeries} series)\n`);
     },
     finish() {
-      if (target.isTTY) target.write('\n');
+      // End the redrawn line, once, so whatever is printed next starts on a fresh line.
+      if (drawn) target.write('\n');
+      drawn = false;
     },
   };
 }

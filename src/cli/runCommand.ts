@@ -1,11 +1,14 @@
 // `trendbrief run CONFIG... [--out DIR] [--formats html,pdf,json,csv] [--quiet]`: one memo per
 // config. A config that fails is reported and the others still run; the exit code says the
 // worst that happened (2 for bad input, 1 for an internal failure).
-import { basename, isAbsolute, resolve } from 'node:path';
-import { OUTPUT_FORMATS, type OutputFormat } from '../config/index.js';
+import { availableParallelism } from 'node:os';
+import { resolve } from 'node:path';
+import { loadConfig, OUTPUT_FORMATS, type OutputFormat } from '../config/index.js';
 import { cliMessages, formatProblem, InputError, runMessages, type InputProblem } from '../errors.js';
 import { openPdfPrinter, type PdfPrinter } from '../memo/print/pdfPrinter.js';
 import { runMemo } from '../run/runMemo.js';
+import { openSeriesPool } from '../run/seriesPool.js';
+import { progressReporter } from './progressReporter.js';
 import { shownPath } from '../run/readPlannedSeries.js';
 import { splitOptions } from './splitOptions.js';
 
@@ -18,19 +21,33 @@ forecasts.csv and manifest.json. A folder appears only when all its files are co
 Options:
   --out DIR                 write into DIR instead of the config's output folder
   --formats LIST            comma-separated subset of ${OUTPUT_FORMATS.join(', ')} (default: the config's)
+  --threads N               worker threads for the series (default: the machine's cores)
   --quiet                   print nothing but problems
   -h, --help                this text
+
+With several configs (e.g. configs/*.yaml) every memo is attempted; one that fails does not
+stop the others, and the summary at the end says which failed and why.
 `;
 
 interface Io {
   stdout(text: string): void;
   stderr(text: string): void;
+  /** True when stderr is a terminal (progress is then drawn in place). */
+  isTTY?: boolean;
+}
+
+interface MemoOutcome {
+  config: string;
+  memo: string;
+  series: number | null;
+  result: string;
+  folder: string;
 }
 
 export async function runRun(args: readonly string[], io: Io): Promise<number> {
   const { values, positionals, problems } = splitOptions(
     args,
-    { out: { type: 'string' }, formats: { type: 'string' }, quiet: { type: 'boolean' }, help: { type: 'boolean', short: 'h' } },
+    { out: { type: 'string' }, formats: { type: 'string' }, threads: { type: 'string' }, quiet: { type: 'boolean' }, help: { type: 'boolean', short: 'h' } },
     'run',
   );
   if (values.get('help') === true) {
@@ -42,42 +59,82 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
   const out = values.get('out');
   // `--out=` would otherwise resolve to the working folder.
   if (out === '') problems.push(cliMessages.missingValue('--out', 'run'));
+  const threads = parseThreads(values.get('threads'), problems);
   if (problems.length > 0) throw new InputError(problems);
   const quiet = values.get('quiet') === true;
+  const totalSeries = positionals.reduce((sum, config) => sum + countSeries(config), 0);
+  // On a terminal the bar is drawn on stderr; elsewhere progress is plain lines among the output.
+  const progress = progressReporter(
+    totalSeries,
+    positionals.length,
+    quiet ? undefined : { write: (text) => (io.isTTY === true ? io.stderr(text) : io.stdout(text)), isTTY: io.isTTY === true },
+  );
   let printer: Promise<PdfPrinter> | undefined;
   const sharedPrinter = (): Promise<PdfPrinter> => (printer ??= openPdfPrinter());
+  const pool = threads > 1 && totalSeries > 1 ? openSeriesPool(Math.min(threads, totalSeries)) : undefined;
+  const outcomes: MemoOutcome[] = [];
   let exitCode = 0;
   try {
     for (const config of positionals) {
-      const command = ['trendbrief run', pathForRecord(config), ...(typeof out === 'string' ? ['--out', out] : []), ...(formats ? ['--formats', formats.join(',')] : [])].join(' ');
       try {
         const result = await runMemo(config, {
           outputFolder: typeof out === 'string' ? resolve(out) : undefined,
           formats,
           printer: sharedPrinter,
-          command,
+          pool,
+          threads: threads > 1 ? undefined : 1,
+          onSeriesDone: (memoId, seriesId) => progress.seriesDone(memoId, seriesId),
         });
-        if (!quiet) io.stdout(`${config}: memo ${result.memoId}, ${result.series} series → ${shownPath(result.folder)} (${result.files.join(', ')})\n`);
+        progress.memoDone(result.memoId, true);
+        outcomes.push({ config, memo: result.memoId, series: result.series, result: `written (${result.files.join(', ')})`, folder: shownPath(result.folder) });
       } catch (error) {
+        progress.finish();
         if (!(error instanceof InputError)) {
           io.stderr(`${config}: internal error: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}\n`);
           exitCode = Math.max(exitCode, 1);
+          outcomes.push({ config, memo: '-', series: null, result: 'failed: internal error (see above)', folder: '-' });
+          progress.memoDone(config, false);
           continue;
         }
         for (const problem of error.problems) io.stderr(`${formatProblem(problem)}\n`);
+        progress.memoDone(config, false);
         exitCode = 2;
+        const count = error.problems.length;
+        outcomes.push({ config, memo: '-', series: null, result: `failed: ${count} input problem${count === 1 ? '' : 's'} (see above)`, folder: '-' });
       }
     }
   } finally {
+    progress.finish();
     if (printer !== undefined) await (await printer).close();
+    if (pool !== undefined) await pool.close();
   }
+  if (!quiet) io.stdout(summaryTable(outcomes));
   return exitCode;
 }
 
-/** The config path as it may appear in an output: relative to the working folder, else its name alone. */
-function pathForRecord(config: string): string {
-  const shown = shownPath(resolve(config));
-  return isAbsolute(shown) ? basename(shown) : shown;
+/** Series in a config, for the progress total; a config that does not load counts none. */
+function countSeries(config: string): number {
+  try {
+    return loadConfig(config).series.length;
+  } catch {
+    return 0;
+  }
+}
+
+function parseThreads(value: string | true | undefined, problems: InputProblem[]): number {
+  if (value === undefined) return availableParallelism();
+  const number = typeof value === 'string' && /^\d+$/.test(value) ? Number(value) : Number.NaN;
+  if (!(number >= 1 && number <= 64)) {
+    problems.push(cliMessages.notAnInteger('threads', typeof value === 'string' ? value : '', 1, 64));
+    return 1;
+  }
+  return number;
+}
+
+function summaryTable(outcomes: readonly MemoOutcome[]): string {
+  const rows = [['config', 'memo', 'series', 'result', 'folder'], ...outcomes.map((o) => [o.config, o.memo, o.series === null ? '-' : String(o.series), o.result, o.folder])];
+  const widths = rows[0].map((_, i) => Math.max(...rows.map((row) => row[i].length)));
+  return `${rows.map((row) => row.map((cell, i) => cell.padEnd(widths[i])).join('  ').trimEnd()).join('\n')}\n`;
 }
 
 function parseFormats(value: string | true | undefined, problems: InputProblem[]): OutputFormat[] | undefined {
