@@ -1,0 +1,21 @@
+// The workspace every hardening case starts from: the base config and series of
+// test/fixtures/hardening/base/ and the memo a good run wrote from them into out/, which a
+// later bad run must leave byte for byte as it was.
+import { cpSync, mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { runCli } from '../support/runCli.js';
+import { HARDENING_FIXTURES } from './refusedCases.js';
+
+export const EARLIER_MEMO = 'out/tarnwick-cargo';
+
+/** SOURCE_DATE_EPOCH for every run here: 2026-01-01T00:00:00Z (common practice: date -u -d @1767225600). */
+export const RUN_EPOCH = '1767225600';
+
+export async function workspaceWithEarlierMemo(): Promise<string> {
+  const root = mkdtempSync(join(tmpdir(), 'tb-hardening-base-'));
+  cpSync(join(HARDENING_FIXTURES, 'base'), root, { recursive: true });
+  const run = await runCli(['run', join(root, 'memo.yaml'), '--quiet']);
+  if (run.code !== 0) throw new Error(`the good run of the base config failed (exit ${run.code}): ${run.stderr}`);
+  return root;
+}
