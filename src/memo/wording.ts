@@ -113,7 +113,7 @@ export const LABELS = {
   value: 'Value',
   basis: 'Basis',
   setBy: 'Set by',
-  setByValue: { config: 'Analyst (configuration)', default: 'Tool default' },
+  setByValue: { config: 'Configuration', default: 'Tool default' },
   name: 'Name',
   role: 'Role',
   date: 'Date',

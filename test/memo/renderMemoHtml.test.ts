@@ -91,7 +91,7 @@ describe('the full memo', () => {
   });
 
   it('has the assumptions register, the sign-off block with blank lines, and the appendix', () => {
-    expect(html).toContain('<th scope="row">Transform</th><td>natural log</td><td>Growth is roughly proportional to the level</td><td>Analyst (configuration)</td>');
+    expect(html).toContain('<th scope="row">Transform</th><td>natural log</td><td>Growth is roughly proportional to the level</td><td>Configuration</td>');
     expect(html).toContain('<dd>Approved with changes</dd>');
     expect(html.match(/<dd class="line"><\/dd>/g)).toHaveLength(3);
     expect(html).toContain('<code>trendbrief run configs/basin-outlook.yaml</code>');

@@ -24,6 +24,9 @@ export function widthRatios(record: Pick<MemoRecord, 'forecasts'>): WidthRatioRo
   });
 }
 
+/** Above this many horizons the bars are too thin to carry their value as a label. */
+export const MAX_LABELLED_BARS = 12;
+
 export function widthRatioChart({ series, record }: { series: string; record: MemoRecord }): TopLevelSpec {
   const rows = widthRatios(record).map((r) => ({ ...r, label: formatNumber(r.ratio, 2) }));
   const top = Math.max(1.1, ...rows.map((r) => r.ratio * 1.12));
@@ -47,15 +50,19 @@ export function widthRatioChart({ series, record }: { series: string; record: Me
           y: { field: 'ratio', type: 'quantitative', title: 'ratio', scale: { domain: [0, top] } },
         },
       },
-      {
-        data: { values: rows },
-        mark: { type: 'text', baseline: 'top', dy: 4, fontSize: 9, color: '#ffffff' },
-        encoding: {
-          x: { field: 'period', type: 'ordinal', sort: null },
-          y: { field: 'ratio', type: 'quantitative' },
-          text: { field: 'label', type: 'nominal' },
-        },
-      },
+      ...(rows.length > MAX_LABELLED_BARS
+        ? []
+        : [
+            {
+              data: { values: rows },
+              mark: { type: 'text' as const, baseline: 'top' as const, dy: 4, fontSize: 9, color: '#ffffff' },
+              encoding: {
+                x: { field: 'period', type: 'ordinal' as const, sort: null },
+                y: { field: 'ratio', type: 'quantitative' as const },
+                text: { field: 'label', type: 'nominal' as const },
+              },
+            },
+          ]),
       { data: { values: [{ ratio: 1 }] }, mark: { type: 'rule', color: INK, strokeDash: [4, 2], strokeWidth: 1 }, encoding: { y: { field: 'ratio', type: 'quantitative' } } },
     ],
   };
