@@ -1,6 +1,6 @@
 // Number formatting rules for the memo. Expected strings are our spec (src/memo/format/).
 import { describe, expect, it } from 'vitest';
-import { decimalsForScale, formatNumber, formatP, formatPercent, formatSignificant, MISSING, withUnits } from '../../src/memo/format/formatNumber.js';
+import { decimalsForScale, formatNumber, formatP, formatPCell, formatPercent, formatSignificant, MISSING, withUnits } from '../../src/memo/format/formatNumber.js';
 import { seriesDecimals } from '../../src/memo/format/seriesDecimals.js';
 import { bareRecord } from './sampleInput.js';
 
@@ -54,9 +54,13 @@ describe('other formats', () => {
     expect(formatSignificant(12345678, 3)).toBe('1.23 \u00d7 10\u2077');
     expect(formatSignificant(0)).toBe('0');
   });
-  it('writes p-values to three decimals with a floor', () => {
+  it('writes p-values to three decimals with a floor, bare in table cells', () => {
     expect(formatP(0.04213)).toBe('p = 0.042');
     expect(formatP(0.0004)).toBe('p < 0.001');
     expect(formatP(null)).toBe(MISSING);
+    expect(formatPCell(0.04213)).toBe('0.042');
+    expect(formatPCell(0.0004)).toBe('< 0.001');
+    expect(formatPCell(0.01, 'below')).toBe('< 0.01');
+    expect(formatPCell(0.1, 'above')).toBe('> 0.10');
   });
 });

@@ -71,7 +71,18 @@ export function formatSignificant(value: JsonNumber | undefined, digits = 4): st
 
 /** "p = 0.042", "p < 0.001", or "n/a" when no p-value exists. */
 export function formatP(value: JsonNumber | undefined): string {
+  const cell = formatPCell(value);
+  return cell === MISSING ? cell : cell.startsWith('<') ? `p ${cell}` : `p = ${cell}`;
+}
+
+/**
+ * A p-value for a table column headed "p-value": "0.042", "< 0.001"; `bound` marks a value
+ * at the edge of a lookup table ("< 0.01" below it, "> 0.10" above it).
+ */
+export function formatPCell(value: JsonNumber | undefined, bound?: 'below' | 'above'): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return MISSING;
-  if (value < 0.001) return 'p < 0.001';
-  return `p = ${value.toFixed(3)}`;
+  if (bound === 'below') return `< ${value.toFixed(2)}`;
+  if (bound === 'above') return `> ${value.toFixed(2)}`;
+  if (value < 0.001) return '< 0.001';
+  return value.toFixed(3);
 }

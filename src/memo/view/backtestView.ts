@@ -2,7 +2,7 @@
 // the comparison tests. Null when the backtest was not run (the template shows the note).
 import type { Frequency } from '../../data/period.js';
 import { evidenceWording } from '../evidenceWording.js';
-import { formatNumber, formatP, formatPercent, formatPercentPoints, formatSignificant, MISSING } from '../format/formatNumber.js';
+import { formatNumber, formatPCell, formatPercent, formatPercentPoints, formatSignificant, MISSING } from '../format/formatNumber.js';
 import type { BacktestComparison, BacktestHorizonRow, BacktestMethod, BacktestPart } from '../recordParts.js';
 import { noLinks } from '../format/noLinks.js';
 
@@ -33,7 +33,7 @@ function comparisonCells(c: BacktestComparison | undefined, significance: number
   if (c === undefined) return { statistic: MISSING, p: MISSING, outcome: MISSING, decided: false };
   return {
     statistic: formatSignificant(c.statistic, 3),
-    p: formatP(c.p_value),
+    p: formatPCell(c.p_value),
     outcome: noLinks(evidenceWording.comparisonOutcome(c.better, c.available, c.reason)),
     decided: c.available && c.better !== null && c.p_value !== null && c.p_value < significance,
   };

@@ -1,9 +1,8 @@
 // The evidence section: the unit-root checks as a table with plain outcomes, the combined
 // reading as the evidence stage wrote it, and each model's residual findings.
-import { formatPValue } from '../../evidence/messages.js';
 import type { AdfResult, KpssResult } from '../../evidence/types.js';
 import { evidenceWording, UNIT_ROOT_ROWS } from '../evidenceWording.js';
-import { formatPercent, formatSignificant } from '../format/formatNumber.js';
+import { formatPCell, formatPercent, formatSignificant } from '../format/formatNumber.js';
 import { noLinks } from '../format/noLinks.js';
 import type { MemoRecord, ModelKind } from '../recordParts.js';
 import { MODEL_NAME } from '../wording.js';
@@ -42,7 +41,7 @@ function row(words: RowWords, result: KpssResult | AdfResult | null, rejects: bo
     name: words.name,
     statistic: formatSignificant(result.stat, 4),
     lags: String(result.lags),
-    p: formatPValue(result),
+    p: formatPCell(result.p_value, 'p_bound' in result ? result.p_bound : undefined),
     critical5: formatSignificant(result.critical['5'], 4),
     outcome: rejects ? words.rejects : words.holds,
     rejects,
