@@ -4,7 +4,7 @@
 // configured templates folder must exist. A run that would fail there fails at once, not after
 // minutes of fitting; failures while writing become the same kind of message.
 import { lstatSync, statSync, type Stats } from 'node:fs';
-import { dirname, resolve } from 'node:path';
+import { dirname, join, resolve } from 'node:path';
 import type { RunPlan } from '../config/index.js';
 import { InputError, runMessages, type InputLocation, type InputProblem } from '../errors.js';
 import { shownPath } from './readPlannedSeries.js';
@@ -12,7 +12,9 @@ import { shownPath } from './readPlannedSeries.js';
 export interface RunPaths {
   /** Absolute folder the memo's folder is written into. */
   outputFolder: string;
-  /** Absolute folder of the memo: the output folder and the memo id. */
+  /** Absolute folder of the memo id: the output folder and the memo id. */
+  idFolder: string;
+  /** Absolute folder of the memo: the memo id's folder, and in it the as-of period when the memo has one. */
   memoFolder: string;
   /** Where the output folder was chosen, for messages. */
   chosenAt: InputLocation;
@@ -41,7 +43,9 @@ export function checkRunPaths(plan: RunPlan, outputFolder: string | undefined): 
   const folder = outputFolder ?? plan.output.folder;
   const chosenAt: InputLocation =
     outputFolder !== undefined ? { field: '--out' } : { file: plan.configFile, field: 'output.folder', ...plan.output.folderAt };
-  const paths = { outputFolder: folder, memoFolder: resolve(folder, plan.memo.id), chosenAt };
+  const idFolder = resolve(folder, plan.memo.id);
+  const memoFolder = plan.memo.asOf === undefined ? idFolder : join(idFolder, plan.memo.asOf);
+  const paths = { outputFolder: folder, idFolder, memoFolder, chosenAt };
   const problems: InputProblem[] = [];
   const folderKind = pathKind(folder);
   if (folderKind === 'missing') {
@@ -52,8 +56,10 @@ export function checkRunPaths(plan: RunPlan, outputFolder: string | undefined): 
   } else if (folderKind !== 'folder') {
     problems.push(runMessages.outputNotAFolder(chosenAt, shownPath(folder), folderKind));
   } else {
-    const memoKind = pathKind(paths.memoFolder);
-    if (memoKind !== 'missing' && memoKind !== 'folder') problems.push(runMessages.memoFolderTaken(chosenAt, shownPath(paths.memoFolder), memoKind));
+    for (const path of new Set([idFolder, memoFolder])) {
+      const kind = pathKind(path);
+      if (kind !== 'missing' && kind !== 'folder') problems.push(runMessages.memoFolderTaken(chosenAt, shownPath(path), kind));
+    }
   }
   const templates = plan.output.templates;
   if (templates !== undefined) {
