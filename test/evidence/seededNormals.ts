@@ -1,17 +1,11 @@
 // Seeded pseudo-random numbers for simulation tests, so every run draws the same series.
-// mulberry32 (Tommy Ettinger's 32-bit generator, from memory) for uniforms, and the
-// Box & Muller (1958) transform for standard normals.
+// mulberry32 uniforms (test/support/seededUniforms.ts) through the Box & Muller (1958)
+// transform for standard normals.
+import { seededUniforms } from '../support/seededUniforms.js';
 
 /** A function returning independent N(0, 1) draws, fixed by `seed`. */
 export function seededNormals(seed: number): () => number {
-  let state = seed >>> 0;
-  const uniform = (): number => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let z = state;
-    z = Math.imul(z ^ (z >>> 15), z | 1);
-    z ^= z + Math.imul(z ^ (z >>> 7), z | 61);
-    return (((z ^ (z >>> 14)) >>> 0) + 0.5) / 4294967296;
-  };
+  const uniform = seededUniforms(seed);
   let spare: number | undefined;
   return () => {
     if (spare !== undefined) {
