@@ -43,15 +43,16 @@ function checkInputs(folder: string, manifest: Manifest, shown: string): void {
   manifest.inputs.forEach((input, i) => {
     const field = `inputs[${i}]`;
     const what = ROLE_NAME[input.role];
+    const path = resolve(folder, input.from_output);
     let bytes: Buffer;
     try {
-      bytes = readFileSync(resolve(folder, input.from_output));
+      bytes = readFileSync(path);
     } catch {
-      problems.push(verifyMessages.inputMissing(shown, field, what, input.from_output, input.sha256));
+      problems.push(verifyMessages.inputMissing(shown, field, what, shownPath(path), input.sha256));
       return;
     }
     const actual = inputDigest(input, bytes);
-    if (actual !== input.sha256) problems.push(verifyMessages.inputChanged(shown, field, what, input.from_output, input.sha256, actual));
+    if (actual !== input.sha256) problems.push(verifyMessages.inputChanged(shown, field, what, shownPath(path), input.sha256, actual));
   });
   if (problems.length > 0) throw new InputError(problems);
 }
