@@ -144,9 +144,9 @@ describe('verify refuses changed or missing inputs (exit 2)', () => {
 
   it('names a manifest written before inputs carried their place from the memo folder', async () => {
     const { folder } = await issuedMemo();
-    const manifest = readManifest(folder) as ManifestShape & { inputs: Partial<ManifestShape['inputs'][number]>[] };
-    delete manifest.inputs[1].from_output;
-    writeFileSync(join(folder, 'manifest.json'), JSON.stringify(manifest));
+    const manifest = readManifest(folder);
+    const inputs = manifest.inputs.map(({ from_output: place, ...input }, i) => (i === 1 ? input : { ...input, from_output: place }));
+    writeFileSync(join(folder, 'manifest.json'), JSON.stringify({ ...manifest, inputs }));
     const run = await runCli(['verify', folder]);
     expect(run.code).toBe(2);
     expect(run.errorLines).toEqual([
