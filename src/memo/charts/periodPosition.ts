@@ -9,7 +9,15 @@ export function periodPosition(label: string): number {
   return period.year + (period.sub - 1) / periodsPerYear(period.frequency);
 }
 
+const TIME_AXIS = {
+  field: 't',
+  type: 'quantitative',
+  title: null,
+  scale: { zero: false, nice: false },
+  axis: { format: 'd', tickMinStep: 1, labelOverlap: true },
+} as const;
+
 /** The x encoding for a `t` field made by periodPosition, labelled in whole years. */
-export function timeAxis(): { field: string; type: 'quantitative'; title: null; scale: { zero: false; nice: false }; axis: { format: string; tickMinStep: number; labelOverlap: boolean } } {
-  return { field: 't', type: 'quantitative', title: null, scale: { zero: false, nice: false }, axis: { format: 'd', tickMinStep: 1, labelOverlap: true } };
+export function timeAxis(): typeof TIME_AXIS {
+  return TIME_AXIS;
 }
