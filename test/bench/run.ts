@@ -3,13 +3,21 @@
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { cpus } from 'node:os';
 import { backtestBench } from './backtestBench.js';
+import { batchBench } from './batchBench.js';
 import { engineBench } from './engineBench.js';
 import type { BenchRow } from './timing.js';
 
-const suites: [string, () => BenchRow[] | Promise<BenchRow[]>][] = [['engine', engineBench], ['backtest', backtestBench]];
+const suites: [string, () => BenchRow[] | Promise<BenchRow[]>][] = [
+  ['engine', engineBench],
+  ['backtest', backtestBench],
+  ['batch', batchBench],
+];
+// `npm run bench -- engine` runs the named suites only.
+const only = process.argv.slice(2);
 
 const results: Record<string, BenchRow[]> = {};
 for (const [name, suite] of suites) {
+  if (only.length > 0 && !only.includes(name)) continue;
   const rows = await suite();
   results[name] = rows;
   console.log(`\n${name}`);
