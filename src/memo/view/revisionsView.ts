@@ -89,7 +89,7 @@ function dataNote(entry: SeriesRevisions): string {
   return entry.data.length > DATA_ROWS_SHOWN ? revisionsWording.dataMore(DATA_ROWS_SHOWN, entry.data.length) : '';
 }
 
-async function seriesBlock(entry: SeriesRevisions, input: MemoInput, revisions: Revisions, earlierAsOf: string): Promise<RevisionSeriesView> {
+async function seriesBlock(entry: SeriesRevisions, input: Pick<MemoInput, 'series'>, revisions: Revisions, earlierAsOf: string): Promise<RevisionSeriesView> {
   const index = input.series.findIndex((s) => s.record.series.id === entry.series_id);
   const memoSeries = index < 0 ? undefined : input.series[index];
   const anchor = index < 0 ? '' : `series-${index + 1}`;
@@ -115,7 +115,7 @@ async function seriesBlock(entry: SeriesRevisions, input: MemoInput, revisions: 
   };
 }
 
-export async function revisionsView(input: MemoInput): Promise<RevisionsView | null> {
+export async function revisionsView(input: Pick<MemoInput, 'revisions' | 'series'>): Promise<RevisionsView | null> {
   const { revisions } = input;
   if (revisions === undefined) return null;
   const asOf = noLinks(revisions.as_of);
