@@ -15,8 +15,10 @@ import { splitOptions } from './splitOptions.js';
 export const RUN_HELP = `Usage: trendbrief run CONFIG.yaml... [options]
 
 Analyses every series of each config (both trend models, evidence, backtest, recommendation)
-and writes the memo into <output folder>/<memo id>/: memo.html, memo.pdf, record.json,
-forecasts.csv and manifest.json. A folder appears only when all its files are complete.
+and writes the memo into <output folder>/<memo id>/<as-of>/ (<output folder>/<memo id>/ without
+memo.as_of): memo.html, memo.pdf, record.json, forecasts.csv and manifest.json. A memo with an
+as-of period compares itself with the latest earlier as-of memo beside it. A folder appears
+only when all its files are complete.
 
 Options:
   --out DIR                 write into DIR instead of the config's output folder
