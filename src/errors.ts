@@ -304,10 +304,11 @@ export const dataMessages = {
     );
   },
   /** `scale` names the transform when the models see the values transformed. */
-  tooLargeForModels(at: InputLocation, value: number, limit: number, scale: string | undefined): InputProblem {
-    const where = scale === undefined ? '' : ` after the ${scale} transform`;
+  /** `modelValue` is the value after the transform `scale` names, when there is one. */
+  tooLargeForModels(at: InputLocation, value: number, modelValue: number, limit: number, scale: string | undefined): InputProblem {
+    const reason = scale === undefined ? `, which compute with sizes up to ${limit}` : `: the ${scale} transform makes it ${roughly(modelValue)}, and they compute with sizes up to ${limit}`;
     const hint = scale === undefined ? 'express the series in larger units (thousands or millions, say), or choose the log transform' : 'express the series in other units, or choose a transform with a smaller lambda';
-    return problem('series.out-of-scale', `value ${roughly(value)} is too large for the models, which compute with sizes up to ${limit}${where}`, hint, at);
+    return problem('series.out-of-scale', `value ${roughly(value)} is too large for the models${reason}`, hint, at);
   },
   tooLittleSpread(at: InputLocation, spread: number, limit: number, scale: string | undefined): InputProblem {
     const where = scale === undefined ? '' : ` after the ${scale} transform`;

@@ -54,7 +54,7 @@ function scaleProblems(series: SeriesValues, transform: TransformSpec | undefine
     const y = onModelScale(values[i], transform);
     if (Number.isNaN(y)) continue;
     if (!(Math.abs(y) <= MODEL_SCALE.maxMagnitude)) {
-      problems.push(dataMessages.tooLargeForModels({ file, line: series.lines?.[i], field: column }, values[i], MODEL_SCALE.maxMagnitude, scale));
+      problems.push(dataMessages.tooLargeForModels({ file, line: series.lines?.[i], field: column }, values[i], y, MODEL_SCALE.maxMagnitude, scale));
     }
     lowest = Math.min(lowest, y);
     highest = Math.max(highest, y);

@@ -47,6 +47,8 @@ describe('refused inputs', () => {
         for (const fragment of refused.expect) expect(run.stderr).toContain(fragment);
         expect(run.errorLines.length).toBeGreaterThan(0);
         for (const line of run.errorLines) expect(namesItsPlace(line, root), line).toBe(true);
+        // Text echoed from the input never reaches the terminal as control characters.
+        expect(run.stderr).not.toMatch(/[\u0000-\u0009\u000B-\u001F\u007F-\u009F\u2028\u2029\u202A-\u202E\u2066-\u2069]/u);
         expect(treeSnapshot(root)).toEqual(before);
         expect(treeSnapshot(join(root, EARLIER_MEMO))).toEqual(earlierMemo);
       } finally {
