@@ -4,23 +4,12 @@
 // (test/fixtures/lake-huron.csv); the test raises it by 0.5 and appends an invented 1973.
 import { cpSync, existsSync, readdirSync, readFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { sha256 } from '../../src/run/manifest.js';
+import { describe, expect, it } from 'vitest';
+import { sha256, type Manifest } from '../../src/run/manifest.js';
 import { runCli } from '../support/runCli.js';
-import { EPOCH_2026_01_01, monthlyFolder, readText, reviseData, setAsOf } from './monthlySetup.js';
+import { fixRunDate, monthlyFolder, readText, reviseData, setAsOf } from './monthlySetup.js';
 
-interface ManifestShape {
-  inputs: { role: string; path: string; from_output: string; sha256: string }[];
-}
-
-const savedEpoch = process.env.SOURCE_DATE_EPOCH;
-beforeEach(() => {
-  process.env.SOURCE_DATE_EPOCH = EPOCH_2026_01_01;
-});
-afterEach(() => {
-  if (savedEpoch === undefined) delete process.env.SOURCE_DATE_EPOCH;
-  else process.env.SOURCE_DATE_EPOCH = savedEpoch;
-});
+fixRunDate();
 
 function sectionText(html: string): string {
   const start = html.indexOf('<section class="revisions"');
@@ -42,7 +31,7 @@ describe('a memo with an as-of period', () => {
     expect(document.history[0].values).toHaveLength(98);
     expect(document.history[0].values[49]).toEqual({ period: '1924', value: 577.79 });
     expect(sectionText(readText(folder, 'memo.html'))).toContain('No earlier memo (as of a period before 2025-11) was found beside this one, so there is nothing to compare with.');
-    const manifest = JSON.parse(readText(folder, 'manifest.json')) as ManifestShape;
+    const manifest = JSON.parse(readText(folder, 'manifest.json')) as Manifest;
     expect(manifest.inputs.map((input) => [input.role, input.path, input.from_output])).toEqual([
       ['config', 'memo.yaml', '../../../memo.yaml'],
       ['data', 'data/lake-huron.csv', '../../../data/lake-huron.csv'],
@@ -66,7 +55,7 @@ describe('a memo with an as-of period', () => {
     expect(text).toContain('1924 577.79 578.29 +0.50 +0.09%');
     // 1974 was two steps ahead in November and is one step ahead now.
     expect(text).toMatch(/1974 2 → 1 /);
-    const manifest = JSON.parse(readText(folder, 'manifest.json')) as ManifestShape;
+    const manifest = JSON.parse(readText(folder, 'manifest.json')) as Manifest;
     const earlier = manifest.inputs.find((input) => input.role === 'earlier-record');
     expect(earlier).toEqual({
       role: 'earlier-record',

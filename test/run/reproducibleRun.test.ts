@@ -5,20 +5,16 @@
 import { mkdirSync, mkdtempSync, readdirSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { afterEach, describe, expect, it } from 'vitest';
 import { runCli } from '../support/runCli.js';
-import { EPOCH_2026_01_01, monthlyFolder } from './monthlySetup.js';
+import { fixRunDate, monthlyFolder } from './monthlySetup.js';
 
-const saved = { epoch: process.env.SOURCE_DATE_EPOCH, tmpdir: process.env.TMPDIR, cwd: process.cwd() };
-beforeEach(() => {
-  process.env.SOURCE_DATE_EPOCH = EPOCH_2026_01_01;
-});
+fixRunDate();
+const saved = { tmpdir: process.env.TMPDIR, cwd: process.cwd() };
 afterEach(() => {
   process.chdir(saved.cwd);
-  for (const [key, value] of [['SOURCE_DATE_EPOCH', saved.epoch], ['TMPDIR', saved.tmpdir]] as const) {
-    if (value === undefined) delete process.env[key];
-    else process.env[key] = value;
-  }
+  if (saved.tmpdir === undefined) delete process.env.TMPDIR;
+  else process.env.TMPDIR = saved.tmpdir;
 });
 
 function filesOf(folder: string): Map<string, Buffer> {

@@ -2,24 +2,12 @@
 // differences listed, 2 when an input is missing or changed; DEVELOPERS.md "verify").
 import { readFileSync, rmSync, unlinkSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { afterEach, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { sha256 } from '../../src/run/manifest.js';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { sha256, type Manifest } from '../../src/run/manifest.js';
 import { runCli } from '../support/runCli.js';
-import { EPOCH_2026_01_01, monthlyFolder, reviseData, setAsOf } from '../run/monthlySetup.js';
+import { EPOCH_2026_01_01, fixRunDate, monthlyFolder, reviseData, setAsOf } from '../run/monthlySetup.js';
 
-interface ManifestShape {
-  inputs: { role: string; path: string; from_output: string; sha256: string }[];
-  outputs: { file: string; sha256: string; bytes: number }[];
-}
-
-const savedEpoch = process.env.SOURCE_DATE_EPOCH;
-beforeEach(() => {
-  process.env.SOURCE_DATE_EPOCH = EPOCH_2026_01_01;
-});
-afterEach(() => {
-  if (savedEpoch === undefined) delete process.env.SOURCE_DATE_EPOCH;
-  else process.env.SOURCE_DATE_EPOCH = savedEpoch;
-});
+fixRunDate();
 
 /** A memo folder for 2025-11 written once; each test works on its own copy of the inputs and outputs. */
 async function issuedMemo(): Promise<{ root: string; folder: string }> {
@@ -29,8 +17,8 @@ async function issuedMemo(): Promise<{ root: string; folder: string }> {
   return { root, folder: join(root, 'out/lake-outlook/2025-11') };
 }
 
-function readManifest(folder: string): ManifestShape {
-  return JSON.parse(readFileSync(join(folder, 'manifest.json'), 'utf8')) as ManifestShape;
+function readManifest(folder: string): Manifest {
+  return JSON.parse(readFileSync(join(folder, 'manifest.json'), 'utf8')) as Manifest;
 }
 
 /** Rewrites an output and the manifest's hash of it, so only the content can tell. */
