@@ -12,8 +12,7 @@ import { loadConfig } from '../config/index.js';
 import { InputError, verifyMessages, verifyReport, type InputProblem } from '../errors.js';
 import { readComparableDocument } from './comparableDocument.js';
 import { compareJson, TOLERANCE_TEXT, type Difference } from './compareJson.js';
-import type { EarlierRecord } from './findEarlierRecord.js';
-import { asOfFolders } from './findEarlierRecord.js';
+import { asOfFolders, type EarlierRecord } from './findEarlierRecord.js';
 import { sha256, type Manifest, type ManifestInput } from './manifest.js';
 import { prepareMemo } from './prepareMemo.js';
 import { shownPath } from './readPlannedSeries.js';
@@ -84,9 +83,11 @@ function earlierRecord(folder: string, manifest: Manifest, shown: string): Earli
   return { asOf: read.document.memo.as_of, file, ...read };
 }
 
+const NUMBER = /^-?\d+(\.\d+)?(e[+-]?\d+)?$/i;
+
+/** forecasts.csv as rows keyed by column, number cells as numbers, so compareJson can apply its tolerance. */
 function csvRows(text: string): Record<string, unknown>[] {
   const rows: Record<string, string>[] = parse(text, { columns: true });
-  const NUMBER = /^-?\d+(\.\d+)?(e[+-]?\d+)?$/i;
   return rows.map((row) => Object.fromEntries(Object.entries(row).map(([key, cell]) => [key, NUMBER.test(cell) ? Number(cell) : cell])));
 }
 
