@@ -1,9 +1,10 @@
 // The workspace every hardening case starts from: the base config and series of
 // test/fixtures/hardening/base/ and the memo a good run wrote from them into out/, which a
-// later bad run must leave byte for byte as it was.
+// later bad run must leave byte for byte as it was; and the fixed run date of all these runs.
 import { cpSync, mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { afterAll, beforeAll } from 'vitest';
 import { runCli } from '../support/runCli.js';
 import { HARDENING_FIXTURES } from './refusedCases.js';
 
@@ -11,6 +12,18 @@ export const EARLIER_MEMO = 'out/tarnwick-cargo';
 
 /** SOURCE_DATE_EPOCH for every run here: 2026-01-01T00:00:00Z (common practice: date -u -d @1767225600). */
 export const RUN_EPOCH = '1767225600';
+
+/** Fixes the run date of every run in the calling test file, and restores the environment after it; call it before other hooks. */
+export function pinRunDate(): void {
+  const saved = process.env.SOURCE_DATE_EPOCH;
+  beforeAll(() => {
+    process.env.SOURCE_DATE_EPOCH = RUN_EPOCH;
+  });
+  afterAll(() => {
+    if (saved === undefined) delete process.env.SOURCE_DATE_EPOCH;
+    else process.env.SOURCE_DATE_EPOCH = saved;
+  });
+}
 
 export async function workspaceWithEarlierMemo(): Promise<string> {
   const root = mkdtempSync(join(tmpdir(), 'tb-hardening-base-'));

@@ -6,19 +6,19 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { runCli } from '../support/runCli.js';
-import { RUN_EPOCH } from './earlierMemo.js';
+import { pinRunDate } from './earlierMemo.js';
 import { HARDENING_FIXTURES } from './refusedCases.js';
 
 const TITLE = '<img src=x onerror=alert(1)> {{handlebars}} {{{triple}}} </style><script>alert(2)</script>';
 const VALUE_COLUMN = '<img src=x onerror=alert(1)>';
-const savedEpoch = process.env.SOURCE_DATE_EPOCH;
 let root = '';
 let html = '';
 let exitCode = -1;
 let problems = '';
 
+pinRunDate();
+
 beforeAll(async () => {
-  process.env.SOURCE_DATE_EPOCH = RUN_EPOCH;
   root = mkdtempSync(join(tmpdir(), 'tb-hostile-'));
   cpSync(join(HARDENING_FIXTURES, 'accepted/hostile-text'), root, { recursive: true });
   const run = await runCli(['run', join(root, 'memo.yaml'), '--quiet']);
@@ -28,8 +28,6 @@ beforeAll(async () => {
 });
 
 afterAll(() => {
-  if (savedEpoch === undefined) delete process.env.SOURCE_DATE_EPOCH;
-  else process.env.SOURCE_DATE_EPOCH = savedEpoch;
   rmSync(root, { recursive: true, force: true });
 });
 

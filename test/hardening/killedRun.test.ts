@@ -12,7 +12,7 @@ import { setTimeout as sleep } from 'node:timers/promises';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { runCli } from '../support/runCli.js';
 import { seededUniforms } from '../support/seededUniforms.js';
-import { EARLIER_MEMO, RUN_EPOCH } from './earlierMemo.js';
+import { EARLIER_MEMO, pinRunDate, RUN_EPOCH } from './earlierMemo.js';
 import { manifestMismatches } from './memoIntegrity.js';
 import { buildPrivateCopy } from './privateBuild.js';
 import { HARDENING_FIXTURES } from './refusedCases.js';
@@ -24,7 +24,6 @@ const MEMO = 'tarnwick-cargo';
 const REVISED_TITLE = 'Tarnwick cargo outlook, revised';
 const LEFTOVER = new RegExp(`^\\.(partial-${MEMO}-\\d+|previous-${MEMO})$`);
 
-const savedEpoch = process.env.SOURCE_DATE_EPOCH;
 let build = '';
 let root = '';
 let runMilliseconds = 0;
@@ -60,8 +59,9 @@ function judgeOutput(out: string): string {
   return 'new';
 }
 
+pinRunDate();
+
 beforeAll(async () => {
-  process.env.SOURCE_DATE_EPOCH = RUN_EPOCH;
   build = buildPrivateCopy();
   root = mkdtempSync(join(tmpdir(), 'tb-killed-'));
   cpSync(join(HARDENING_FIXTURES, 'base'), root, { recursive: true });
@@ -79,8 +79,6 @@ beforeAll(async () => {
 }, 60_000);
 
 afterAll(() => {
-  if (savedEpoch === undefined) delete process.env.SOURCE_DATE_EPOCH;
-  else process.env.SOURCE_DATE_EPOCH = savedEpoch;
   rmSync(root, { recursive: true, force: true });
   rmSync(build, { recursive: true, force: true });
 });

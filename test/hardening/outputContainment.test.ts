@@ -6,24 +6,22 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { runCli } from '../support/runCli.js';
-import { RUN_EPOCH } from './earlierMemo.js';
+import { pinRunDate } from './earlierMemo.js';
 import { manifestMismatches } from './memoIntegrity.js';
 import { HARDENING_FIXTURES } from './refusedCases.js';
 import { treeSnapshot, type TreeSnapshot } from './treeSnapshot.js';
 
-const savedEpoch = process.env.SOURCE_DATE_EPOCH;
 let root = '';
 let config = '';
 
+pinRunDate();
+
 beforeAll(() => {
-  process.env.SOURCE_DATE_EPOCH = RUN_EPOCH;
   root = mkdtempSync(join(tmpdir(), 'tb-contained-'));
   config = readFileSync(join(HARDENING_FIXTURES, 'base/memo.yaml'), 'utf8');
 });
 
 afterAll(() => {
-  if (savedEpoch === undefined) delete process.env.SOURCE_DATE_EPOCH;
-  else process.env.SOURCE_DATE_EPOCH = savedEpoch;
   rmSync(root, { recursive: true, force: true });
 });
 

@@ -5,24 +5,22 @@ import { readFileSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { runCli } from '../support/runCli.js';
-import { EARLIER_MEMO, RUN_EPOCH, workspaceWithEarlierMemo } from './earlierMemo.js';
+import { EARLIER_MEMO, pinRunDate, workspaceWithEarlierMemo } from './earlierMemo.js';
 import { caseArguments, caseWorkspace, HARDENING_FIXTURES, refusedCases } from './refusedCases.js';
 import { treeSnapshot, type TreeSnapshot } from './treeSnapshot.js';
 
 const CASES = refusedCases();
-const savedEpoch = process.env.SOURCE_DATE_EPOCH;
 let baseline = '';
 let earlierMemo: TreeSnapshot = {};
 
+pinRunDate();
+
 beforeAll(async () => {
-  process.env.SOURCE_DATE_EPOCH = RUN_EPOCH;
   baseline = await workspaceWithEarlierMemo();
   earlierMemo = treeSnapshot(join(baseline, EARLIER_MEMO));
 });
 
 afterAll(() => {
-  if (savedEpoch === undefined) delete process.env.SOURCE_DATE_EPOCH;
-  else process.env.SOURCE_DATE_EPOCH = savedEpoch;
   rmSync(baseline, { recursive: true, force: true });
 });
 
