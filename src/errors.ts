@@ -821,3 +821,13 @@ export const verifyReport = {
   match: (folder: string) => `ok: ${folder} is what its inputs give`,
   mismatch: (folder: string, count: number) => `mismatch: ${folder} differs from what its inputs give in ${count} place${count === 1 ? '' : 's'}`,
 };
+
+// ---------------------------------------------------------------------------
+// Memo templates: messages about a consultancy's own templates folder (src/memo/).
+// ---------------------------------------------------------------------------
+
+export const templateMessages = {
+  badSyntax(file: string, line: number | undefined, detail: string): InputProblem {
+    return problem('template.syntax', `not a valid template (${detail})`, 'fix the template, or remove it to use the built-in one', { file, line });
+  },
+};

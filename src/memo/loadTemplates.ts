@@ -4,6 +4,8 @@
 import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import { basename, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import Handlebars from 'handlebars';
+import { InputError, templateMessages } from '../errors.js';
 
 export interface MemoTemplates {
   main: string;
@@ -24,13 +26,29 @@ function partialNames(dir: string): string[] {
     .map((f) => basename(f, '.hbs'));
 }
 
+/** Throws an InputError naming the file and line when Handlebars cannot parse `source`. */
+function checkTemplateSyntax(path: string, source: string): void {
+  try {
+    Handlebars.parse(source);
+  } catch (error) {
+    const detail = error instanceof Error ? error.message : String(error);
+    const line = /line (\d+)/.exec(detail);
+    const lines = detail.split('\n');
+    throw new InputError(templateMessages.badSyntax(path, line === null ? undefined : Number(line[1]), lines[lines.length - 1]));
+  }
+}
+
 export function loadTemplates(dir?: string): MemoTemplates {
   const builtIn = builtInTemplatesDir();
   const dirs = dir === undefined ? [builtIn] : [dir, builtIn];
   const read = (relative: string): string => {
     for (const d of dirs) {
       const path = join(d, relative);
-      if (existsSync(path)) return readFileSync(path, 'utf8');
+      if (!existsSync(path)) continue;
+      const source = readFileSync(path, 'utf8');
+      // A consultancy's own template is user input: a syntax error in it is their mistake to fix.
+      if (d !== builtIn && relative.endsWith('.hbs')) checkTemplateSyntax(path, source);
+      return source;
     }
     throw new Error(`memo template ${relative} is missing from ${dirs.join(' and ')}`);
   };
