@@ -707,6 +707,9 @@ const OUTPUT_FOLDER_HINT = 'choose a folder, or a path where one can be created'
 const TEMPLATES_HINT = 'correct the path, or remove output.templates to use the built-in templates';
 
 export const runMessages = {
+  sameMemoFolder(at: InputLocation, earlierConfig: string): InputProblem {
+    return problem('run.same-memo-folder', `writes the same memo folder as ${earlierConfig} earlier in this run`, 'give one of them another memo.id, as_of or output.folder', at);
+  },
   noConfigs(): InputProblem {
     return problem('cli.missing-config', 'run needs at least one config file', 'give one or more, e.g. trendbrief run configs/demo.yaml');
   },

@@ -2,7 +2,7 @@
 // config. A config that fails is reported and the others still run; the exit code says the
 // worst that happened (2 for bad input, 1 for an internal failure).
 import { availableParallelism } from 'node:os';
-import { resolve } from 'node:path';
+import { join, resolve } from 'node:path';
 import { loadConfig, OUTPUT_FORMATS, type OutputFormat } from '../config/index.js';
 import { cliMessages, formatProblem, InputError, runMessages, type InputProblem } from '../errors.js';
 import { openPdfPrinter, type PdfPrinter } from '../memo/print/pdfPrinter.js';
@@ -64,7 +64,9 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
   const threads = parseThreads(values.get('threads'), problems);
   if (problems.length > 0) throw new InputError(problems);
   const quiet = values.get('quiet') === true;
-  const totalSeries = positionals.reduce((sum, config) => sum + countSeries(config), 0);
+  const previews = positionals.map((config) => previewConfig(config, typeof out === 'string' ? resolve(out) : undefined));
+  const totalSeries = previews.reduce((sum, preview) => sum + preview.series, 0);
+  const claimed = new Map<string, string>();
   // On a terminal the bar is drawn on stderr; elsewhere progress is plain lines among the output.
   const progress = progressReporter(
     totalSeries,
@@ -77,8 +79,13 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
   const outcomes: MemoOutcome[] = [];
   let exitCode = 0;
   try {
-    for (const config of positionals) {
+    for (const [index, config] of positionals.entries()) {
       try {
+        // Two configs of one batch writing the same memo folder would silently replace each other.
+        const folder = previews[index].folder;
+        const earlier = folder === undefined ? undefined : claimed.get(folder);
+        if (earlier !== undefined) throw new InputError(runMessages.sameMemoFolder({ file: config, field: 'memo.id' }, earlier));
+        if (folder !== undefined) claimed.set(folder, config);
         const result = await runMemo(config, {
           outputFolder: typeof out === 'string' ? resolve(out) : undefined,
           formats,
@@ -114,12 +121,14 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
   return exitCode;
 }
 
-/** Series in a config, for the progress total; a config that does not load counts none. */
-function countSeries(config: string): number {
+/** The series count (for progress) and the memo folder (to catch two configs writing one folder); nothing for a config that does not load. */
+function previewConfig(config: string, outputFolder: string | undefined): { series: number; folder?: string } {
   try {
-    return loadConfig(config).series.length;
+    const plan = loadConfig(config);
+    const folder = join(outputFolder ?? plan.output.folder, plan.memo.id, plan.memo.asOf ?? '');
+    return { series: plan.series.length, folder };
   } catch {
-    return 0;
+    return { series: 0 };
   }
 }
 

@@ -12,7 +12,7 @@ import { shownPath } from './readPlannedSeries.js';
 import { recordedCommand } from './recordedCommand.js';
 import { runDate } from './runDate.js';
 import type { SeriesPool } from './seriesPool.js';
-import { writeOutputFolder } from './writeOutputFolder.js';
+import { recoverOutputFolder, writeOutputFolder } from './writeOutputFolder.js';
 
 export interface RunMemoOptions {
   /** Replaces the config's output folder (already resolved by the caller). */
@@ -42,6 +42,9 @@ export interface MemoRunResult {
 export async function runMemo(configFile: string, options: RunMemoOptions = {}): Promise<MemoRunResult> {
   const plan = loadConfig(configFile);
   const paths = checkRunPaths(plan, options.outputFolder);
+  // Put back an earlier memo left under its backup name by a killed run, before anything else
+  // (findEarlierRecord and a failing run must see it where it belongs).
+  recoverOutputFolder(paths.memoFolder);
   const { asOf } = plan.memo;
   // Without an as-of period the memo replaces <memo id>/ as a whole, which would delete the monthly memos in it.
   const monthly = asOf === undefined ? asOfFolders(paths.idFolder) : [];

@@ -114,3 +114,19 @@ describe('trendbrief run', () => {
     expect(formats.errorLines[0]).toMatch(/--formats: 'docx' is not one of html, pdf, json, csv/);
   });
 });
+
+describe('a batch', () => {
+  it('refuses a second config that would write the same memo folder, and still writes the first', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'tb-batch-'));
+    mkdirSync(join(dir, 'data'));
+    copyFileSync(join(FIXTURES, 'lake-huron.csv'), join(dir, 'data/lake-huron.csv'));
+    writeFileSync(join(dir, 'a.yaml'), config('First'));
+    writeFileSync(join(dir, 'b.yaml'), config('Second'));
+    const run = await runCli(['run', join(dir, 'a.yaml'), join(dir, 'b.yaml')]);
+    expect(run.code).toBe(2);
+    expect(run.errorLines[0]).toMatch(/b\.yaml: memo\.id: writes the same memo folder as .*a\.yaml/);
+    expect(readFileSync(join(dir, 'out/lake-outlook/memo.html'), 'utf8')).toContain('First');
+    // The summary table names the failed config (our spec).
+    expect(run.stdout).toMatch(/b\.yaml\s+-\s+-\s+failed: 1 input problem/);
+  });
+});
