@@ -6,7 +6,7 @@ import { join, resolve } from 'node:path';
 import { loadConfig, OUTPUT_FORMATS, type OutputFormat } from '../config/index.js';
 import { cliMessages, formatProblem, InputError, runMessages, type InputProblem } from '../errors.js';
 import { openPdfPrinter, type PdfPrinter } from '../memo/print/pdfPrinter.js';
-import { runMemo } from '../run/runMemo.js';
+import { runMemo, type MemoRunResult } from '../run/runMemo.js';
 import { openSeriesPool } from '../run/seriesPool.js';
 import { progressReporter } from './progressReporter.js';
 import { shownPath } from '../run/readPlannedSeries.js';
@@ -38,6 +38,9 @@ interface Io {
   isTTY?: boolean;
 }
 
+/** Memos whose analysis may run ahead while an earlier one is rendered. */
+const MEMOS_IN_FLIGHT = 3;
+
 interface MemoOutcome {
   config: string;
   memo: string;
@@ -66,7 +69,7 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
   const quiet = values.get('quiet') === true;
   const previews = positionals.map((config) => previewConfig(config, typeof out === 'string' ? resolve(out) : undefined));
   const totalSeries = previews.reduce((sum, preview) => sum + preview.series, 0);
-  const claimed = new Map<string, string>();
+  const claimed = new Map<string, number>();
   // On a terminal the bar is drawn on stderr; elsewhere progress is plain lines among the output.
   const progress = progressReporter(
     totalSeries,
@@ -78,39 +81,57 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
   const pool = threads > 1 && totalSeries > 1 ? openSeriesPool(Math.min(threads, totalSeries)) : undefined;
   const outcomes: MemoOutcome[] = [];
   let exitCode = 0;
+  const runOne = async (index: number): Promise<MemoRunResult> => {
+    const config = positionals[index];
+    // Two configs of one batch writing the same memo folder would silently replace each other.
+    const folder = previews[index].folder;
+    const first = folder === undefined ? undefined : claimed.get(folder);
+    if (first !== undefined && first !== index) throw new InputError(runMessages.sameMemoFolder({ file: config, field: 'memo.id' }, positionals[first]));
+    return runMemo(config, {
+      outputFolder: typeof out === 'string' ? resolve(out) : undefined,
+      formats,
+      printer: sharedPrinter,
+      pool,
+      threads: threads > 1 ? undefined : 1,
+      onSeriesDone: (memoId, seriesId) => progress.seriesDone(memoId, seriesId),
+    });
+  };
+  previews.forEach((preview, index) => {
+    if (preview.folder !== undefined && !claimed.has(preview.folder)) claimed.set(preview.folder, index);
+  });
+  // With a pool, the next memos' series are analysed while this one is rendered and written;
+  // reports still come in config order.
+  const window = pool === undefined ? 1 : MEMOS_IN_FLIGHT;
+  const settled: Promise<{ result?: MemoRunResult; error?: unknown }>[] = [];
+  const launch = (index: number): void => {
+    settled[index] = runOne(index).then(
+      (result) => ({ result }),
+      (error: unknown) => ({ error }),
+    );
+  };
   try {
+    for (let index = 0; index < Math.min(window, positionals.length); index++) launch(index);
     for (const [index, config] of positionals.entries()) {
-      try {
-        // Two configs of one batch writing the same memo folder would silently replace each other.
-        const folder = previews[index].folder;
-        const earlier = folder === undefined ? undefined : claimed.get(folder);
-        if (earlier !== undefined) throw new InputError(runMessages.sameMemoFolder({ file: config, field: 'memo.id' }, earlier));
-        if (folder !== undefined) claimed.set(folder, config);
-        const result = await runMemo(config, {
-          outputFolder: typeof out === 'string' ? resolve(out) : undefined,
-          formats,
-          printer: sharedPrinter,
-          pool,
-          threads: threads > 1 ? undefined : 1,
-          onSeriesDone: (memoId, seriesId) => progress.seriesDone(memoId, seriesId),
-        });
+      const { result, error } = await settled[index];
+      if (index + window < positionals.length) launch(index + window);
+      if (result !== undefined) {
         progress.memoDone(result.memoId, true);
         outcomes.push({ config, memo: result.memoId, series: result.series, result: `written (${result.files.join(', ')})`, folder: shownPath(result.folder) });
-      } catch (error) {
-        progress.finish();
-        if (!(error instanceof InputError)) {
-          io.stderr(`${config}: internal error: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}\n`);
-          exitCode = Math.max(exitCode, 1);
-          outcomes.push({ config, memo: '-', series: null, result: 'failed: internal error (see above)', folder: '-' });
-          progress.memoDone(config, false);
-          continue;
-        }
-        for (const problem of error.problems) io.stderr(`${formatProblem(problem)}\n`);
-        progress.memoDone(config, false);
-        exitCode = 2;
-        const count = error.problems.length;
-        outcomes.push({ config, memo: '-', series: null, result: `failed: ${count} input problem${count === 1 ? '' : 's'} (see above)`, folder: '-' });
+        continue;
       }
+      progress.finish();
+      if (!(error instanceof InputError)) {
+        io.stderr(`${config}: internal error: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}\n`);
+        exitCode = Math.max(exitCode, 1);
+        outcomes.push({ config, memo: '-', series: null, result: 'failed: internal error (see above)', folder: '-' });
+        progress.memoDone(config, false);
+        continue;
+      }
+      for (const problem of error.problems) io.stderr(`${formatProblem(problem)}\n`);
+      progress.memoDone(config, false);
+      exitCode = 2;
+      const count = error.problems.length;
+      outcomes.push({ config, memo: '-', series: null, result: `failed: ${count} input problem${count === 1 ? '' : 's'} (see above)`, folder: '-' });
     }
   } finally {
     progress.finish();
