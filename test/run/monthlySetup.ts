@@ -21,10 +21,10 @@ export function fixRunDate(): void {
   });
 }
 
-export function memoConfig(asOf: string | undefined, formats = '[html, json, csv]'): string {
+export function memoConfig(asOf: string | undefined, formats = '[html, json, csv]', title = 'Lake outlook'): string {
   return `memo:
   id: lake-outlook
-  title: Lake outlook
+  title: ${title}
   client: Invented Shoreline Trust
 ${asOf === undefined ? '' : `  as_of: ${asOf}\n`}  reviewers:
     - name: A. Reviewer

@@ -3,49 +3,24 @@
 import { copyFileSync, existsSync, mkdirSync, mkdtempSync, readFileSync, readdirSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { beforeEach, describe, expect, it } from 'vitest';
 import { sha256 } from '../../src/run/manifest.js';
 import { runCli } from '../support/runCli.js';
+import { fixRunDate, memoConfig } from './monthlySetup.js';
 
 const FIXTURES = resolve('test/fixtures');
 
-function config(title: string, extra = ''): string {
-  return `memo:
-  id: lake-outlook
-  title: ${title}
-  client: Invented Shoreline Trust
-  reviewers:
-    - name: A. Reviewer
-      role: lead
-defaults:
-  max_p: 1
-  max_q: 1
-  backtest: {origins: 4, horizon: 2, refit: reestimate}
-series:
-  - id: lake-level
-    title: Lake level
-    units: ft
-    file: data/lake-huron.csv
-    horizon: 5
-${extra}output:
-  folder: out
-  formats: [html, json, csv]
-`;
+function config(title: string): string {
+  return memoConfig(undefined, undefined, title);
 }
 
 let root = '';
-const savedEpoch = process.env.SOURCE_DATE_EPOCH;
+fixRunDate();
 
 beforeEach(() => {
   root = mkdtempSync(join(tmpdir(), 'tb-run-'));
   mkdirSync(join(root, 'data'));
   copyFileSync(join(FIXTURES, 'lake-huron.csv'), join(root, 'data/lake-huron.csv'));
-  process.env.SOURCE_DATE_EPOCH = '1767225600';
-});
-
-afterEach(() => {
-  if (savedEpoch === undefined) delete process.env.SOURCE_DATE_EPOCH;
-  else process.env.SOURCE_DATE_EPOCH = savedEpoch;
 });
 
 describe('trendbrief run', () => {
@@ -97,7 +72,7 @@ describe('trendbrief run', () => {
   });
 
   it('reports config mistakes with their line and writes nothing', async () => {
-    writeFileSync(join(root, 'memo.yaml'), config('Lake outlook').replace('horizon: 5', 'horizon: 5\n    horizn: 6'));
+    writeFileSync(join(root, 'memo.yaml'), config('Lake outlook').replace('horizon: 4', 'horizon: 4\n    horizn: 6'));
     const run = await runCli(['run', join(root, 'memo.yaml')]);
     expect(run.code).toBe(2);
     expect(run.errorLines.join('\n')).toMatch(/memo\.yaml:\d+:\d+: series\[0\]\.horizn: .*horizon/);
