@@ -11,7 +11,7 @@
 // temporal aggregation; Durbin & Koopman 2012, §4.10 on missing observations).
 //
 // Dense and general rather than fast: it runs only for series with gaps.
-import type { FilterWorkspace } from './kalmanFilter.js';
+import type { FilterWorkspace } from './filterWorkspace.js';
 
 /** Scratch the gap filter needs beyond the workspace's own arrays, for state dimension r. */
 export interface GapScratch {
