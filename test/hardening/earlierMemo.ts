@@ -4,25 +4,18 @@
 import { cpSync, mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { afterAll, beforeAll } from 'vitest';
 import { runCli } from '../support/runCli.js';
+import { EPOCH_2026_01_01, fixRunDate } from '../support/fixRunDate.js';
 import { HARDENING_FIXTURES } from './refusedCases.js';
 
 export const EARLIER_MEMO = 'out/tarnwick-cargo';
 
-/** SOURCE_DATE_EPOCH for every run here: 2026-01-01T00:00:00Z (common practice: date -u -d @1767225600). */
-export const RUN_EPOCH = '1767225600';
+/** SOURCE_DATE_EPOCH for every run here: 2026-01-01T00:00:00Z. */
+export const RUN_EPOCH = EPOCH_2026_01_01;
 
-/** Fixes the run date of every run in the calling test file, and restores the environment after it; call it before other hooks. */
+/** Fixes the run date of every run in the calling test file; call it before other hooks. */
 export function pinRunDate(): void {
-  const saved = process.env.SOURCE_DATE_EPOCH;
-  beforeAll(() => {
-    process.env.SOURCE_DATE_EPOCH = RUN_EPOCH;
-  });
-  afterAll(() => {
-    if (saved === undefined) delete process.env.SOURCE_DATE_EPOCH;
-    else process.env.SOURCE_DATE_EPOCH = saved;
-  });
+  fixRunDate('all');
 }
 
 export async function workspaceWithEarlierMemo(): Promise<string> {

@@ -4,22 +4,8 @@
 import { copyFileSync, mkdirSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
-import { afterEach, beforeEach } from 'vitest';
 
-/** SOURCE_DATE_EPOCH of 2026-01-01T00:00:00Z (common practice: date -u -d @1767225600). */
-export const EPOCH_2026_01_01 = '1767225600';
-
-/** Runs every test of the calling file at the run date 2026-01-01, restoring SOURCE_DATE_EPOCH after each. */
-export function fixRunDate(): void {
-  const saved = process.env.SOURCE_DATE_EPOCH;
-  beforeEach(() => {
-    process.env.SOURCE_DATE_EPOCH = EPOCH_2026_01_01;
-  });
-  afterEach(() => {
-    if (saved === undefined) delete process.env.SOURCE_DATE_EPOCH;
-    else process.env.SOURCE_DATE_EPOCH = saved;
-  });
-}
+export { EPOCH_2026_01_01, fixRunDate } from '../support/fixRunDate.js';
 
 export function memoConfig(asOf: string | undefined, formats = '[html, json, csv]', title = 'Lake outlook'): string {
   return `memo:
