@@ -1,5 +1,6 @@
 // One series → one AnalysisRecord: transform, fit both trend models (order search each),
 // forecast both, back-transform the intervals.
+import { BUILT_IN_SETTINGS } from '../config/builtInSettings.js';
 import { addPeriods } from '../data/period.js';
 import type { Series } from '../data/series.js';
 import { normalInv } from '../linalg/distributions.js';
@@ -29,8 +30,6 @@ export interface AnalysisOptions {
   kpssLagRule?: EvidenceOptions['kpssLagRule'];
 }
 
-export const DEFAULT_LEVELS = [80, 95];
-export const DEFAULT_MAX_ORDER = 3;
 
 /** Default horizon by frequency: ten years, three years of quarters, two years of months. */
 export function defaultHorizon(frequency: Series['frequency']): number {
@@ -45,9 +44,9 @@ export function requiredObservations(maxP: number, maxQ: number): number {
 export function analyseSeries(series: Series, options: AnalysisOptions = {}): AnalysisRecord {
   const transform = options.transform ?? { kind: 'none' };
   const horizon = options.horizon ?? defaultHorizon(series.frequency);
-  const levels = options.levels ?? DEFAULT_LEVELS;
-  const maxP = options.maxP ?? DEFAULT_MAX_ORDER;
-  const maxQ = options.maxQ ?? DEFAULT_MAX_ORDER;
+  const levels = options.levels ?? [...BUILT_IN_SETTINGS.levels];
+  const maxP = options.maxP ?? BUILT_IN_SETTINGS.max_p;
+  const maxQ = options.maxQ ?? BUILT_IN_SETTINGS.max_q;
   const coefficientUncertainty = options.coefficientUncertainty ?? true;
   const point = options.point ?? 'median';
   const w = series.values.map((y) => transformValue(transform, y));

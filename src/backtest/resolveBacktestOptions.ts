@@ -2,6 +2,7 @@
 // InputError. The interval levels, transform and coefficient-uncertainty settings should be
 // those of the main analysis, so the backtest scores the intervals the memo shows.
 import { backtestMessages, InputError, type InputProblem } from '../errors.js';
+import { BUILT_IN_SETTINGS } from '../config/builtInSettings.js';
 import type { TransformSpec } from '../models/transform.js';
 import { TREND_MODELS, type TrendModelKind } from '../models/trendModels.js';
 import type { OriginPool } from './runOriginTasks.js';
@@ -54,8 +55,6 @@ export interface BacktestSettingsInput {
 }
 
 export const DEFAULT_BACKTEST_HORIZON = 5;
-const DEFAULT_LEVELS = [80, 95];
-const DEFAULT_MAX_ORDER = 3;
 
 export function resolveBacktestOptions(options: BacktestOptions): BacktestSettingsInput {
   const problems: InputProblem[] = [];
@@ -68,7 +67,7 @@ export function resolveBacktestOptions(options: BacktestOptions): BacktestSettin
     return value ?? fallback;
   };
   const refit = choice('refit', options.refit, REFIT_POLICIES, 'reselect');
-  const levels = options.levels ?? DEFAULT_LEVELS;
+  const levels = options.levels ?? [...BUILT_IN_SETTINGS.levels];
   for (const level of levels) if (!(level > 0 && level < 100)) problems.push(backtestMessages.badLevel(level));
   const significance = options.significance ?? 0.05;
   if (!(significance > 0 && significance < 1)) problems.push(backtestMessages.badSignificance(significance));
@@ -88,8 +87,8 @@ export function resolveBacktestOptions(options: BacktestOptions): BacktestSettin
     step: whole('step', options.step, 1) ?? 1,
     refit,
     minTrainingLength: whole('minTrainingLength', options.minTrainingLength, 1),
-    maxP: whole('maxP', options.maxP, 0) ?? DEFAULT_MAX_ORDER,
-    maxQ: whole('maxQ', options.maxQ, 0) ?? DEFAULT_MAX_ORDER,
+    maxP: whole('maxP', options.maxP, 0) ?? BUILT_IN_SETTINGS.max_p,
+    maxQ: whole('maxQ', options.maxQ, 0) ?? BUILT_IN_SETTINGS.max_q,
     transform,
     levels: [...new Set(levels)].sort((a, b) => a - b),
     coefficientUncertainty: options.coefficientUncertainty ?? true,

@@ -4,6 +4,7 @@ import { splitOptions, type OptionSpec } from './splitOptions.js';
 import { FREQUENCIES, type Frequency } from '../data/period.js';
 import type { TransformSpec } from '../data/series.js';
 import { REFIT_POLICIES, type RefitPolicy } from '../backtest/index.js';
+import { BUILT_IN_SETTINGS } from '../config/builtInSettings.js';
 import { MAX_HORIZON, MAX_ORDER } from '../config/settingsSpec.js';
 
 export interface FitRequest {
@@ -81,8 +82,8 @@ export function parseFitOptions(args: readonly string[]): FitRequest {
     frequency: choice('frequency', text('frequency'), FREQUENCIES),
     transform: parseTransform(text('transform'), problems),
     horizon: integer('horizon', text('horizon'), 1, MAX_HORIZON),
-    maxP: integer('max-p', text('max-p'), 0, MAX_ORDER) ?? 3,
-    maxQ: integer('max-q', text('max-q'), 0, MAX_ORDER) ?? 3,
+    maxP: integer('max-p', text('max-p'), 0, MAX_ORDER) ?? BUILT_IN_SETTINGS.max_p,
+    maxQ: integer('max-q', text('max-q'), 0, MAX_ORDER) ?? BUILT_IN_SETTINGS.max_q,
     levels: parseLevels(text('levels'), problems),
     coefficientUncertainty: given.get('no-coef-uncertainty') !== true,
     point: choice('point', text('point'), ['median', 'mean'] as const) ?? 'median',
@@ -113,11 +114,11 @@ function parseTransform(value: string | undefined, problems: InputProblem[]): Tr
 }
 
 function parseLevels(value: string | undefined, problems: InputProblem[]): number[] {
-  if (value === undefined) return [80, 95];
+  if (value === undefined) return [...BUILT_IN_SETTINGS.levels];
   const levels = value.split(',').map((part) => (/^\s*\d+(\.\d+)?\s*$/.test(part) ? Number(part) : Number.NaN));
   if (levels.length === 0 || levels.some((level) => !(level >= 50 && level <= 99.9))) {
     problems.push(cliMessages.badLevels(value));
-    return [80, 95];
+    return [...BUILT_IN_SETTINGS.levels];
   }
   return [...new Set(levels)].sort((a, b) => a - b);
 }

@@ -142,7 +142,8 @@ function residualSum(innovations: Float64Array, f: Float64Array, beta: Float64Ar
   return sum;
 }
 
-function countObserved(y: Float64Array): number {
+/** Observations that are not missing (NaN). */
+export function countObserved(y: Float64Array): number {
   let count = 0;
   for (let t = 0; t < y.length; t++) if (!Number.isNaN(y[t])) count++;
   return count;

@@ -4,7 +4,7 @@
 // neighbours padded with a zero partial autocorrelation, which reproduces the smaller
 // model exactly, so a larger model never ends below a nested smaller one.
 import { unconstrainAr, unconstrainMa } from './constraints.js';
-import { fitRegressionArma, type RegressionArmaFit } from './fitRegressionArma.js';
+import { countObserved, fitRegressionArma, type RegressionArmaFit } from './fitRegressionArma.js';
 import type { WorkspaceOptions } from '../statespace/kalmanFilter.js';
 
 /** Real roots of the common factor tried by `cancellingStart` from the (p−1, q−1) optimum. */
@@ -115,10 +115,4 @@ function padStart(fit: RegressionArmaFit, p: number, q: number): Float64Array {
 
 function key(p: number, q: number): string {
   return `${p},${q}`;
-}
-
-function countObserved(y: Float64Array): number {
-  let count = 0;
-  for (let t = 0; t < y.length; t++) if (!Number.isNaN(y[t])) count++;
-  return count;
 }

@@ -7,7 +7,7 @@
 import { fitRegressionArma, olsFit, type RegressionArmaFit } from './fitRegressionArma.js';
 import { forecastRegressionArma, type ForecastMoments } from '../statespace/forecast.js';
 import { createProfileLikelihood } from './profileLikelihood.js';
-import { searchOrders, type Candidate } from './orderSearch.js';
+import { aicc, searchOrders, type Candidate } from './orderSearch.js';
 import { armaStandardErrors } from './standardErrors.js';
 
 export type TrendModelKind = 'deterministic' | 'stochastic';
@@ -97,9 +97,8 @@ export function fitTrendModelAtOrder(kind: TrendModelKind, w: Float64Array, p: n
   const design = trendDesign(kind, w);
   const fit = fitRegressionArma(design.response, design.regressors, p, q, { accumulateGaps: design.accumulateGaps });
   const k = p + q + design.regressors.length + 1;
-  const m = fit.nobs;
-  const aicc = m - k - 1 > 0 ? -2 * fit.loglik + 2 * k + (2 * k * (k + 1)) / (m - k - 1) : Number.POSITIVE_INFINITY;
-  return describeFit(kind, design, fit, aicc, [{ p, q, loglik: fit.loglik, aicc, converged: fit.converged }]);
+  const value = aicc(fit.loglik, k, fit.nobs);
+  return describeFit(kind, design, fit, value, [{ p, q, loglik: fit.loglik, aicc: value, converged: fit.converged }]);
 }
 
 function describeFit(

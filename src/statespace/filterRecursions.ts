@@ -69,10 +69,7 @@ export function runCovariance(ws: FilterWorkspace, y: Float64Array): number {
     const invF = 1 / f;
     const row = t * stride;
     for (let i = 0; i < stride; i++) gains[row + i] = i < r ? (phi[i] * pmat[0] + (i + 1 < r ? pmat[(i + 1) * r] : 0)) * invF : 0;
-    for (let s = t; s < n; s++) {
-      variances[s] = f;
-      weights[s] = invF;
-    }
+    fillSteady(ws, t, f);
     sumLogF += (n - t) * Math.log(f);
   }
   ws.sumLogF = sumLogF;
@@ -289,8 +286,10 @@ export function filterColumnsScalar(ws: FilterWorkspace, columns: readonly Float
     cross[ncol + 2] = s12;
     cross[2 * ncol + 2] = s22;
   }
-  const finals = [a0, a1, a2, a3, b0, b1, b2, b3, c0, c1, c2, c3];
-  for (let c = 0; c < ncol; c++) for (let i = 0; i < r; i++) state[c * r + i] = finals[c * SCALAR_STATE + i];
+  // Written out rather than through an array: this runs once per likelihood evaluation.
+  writeState(state, 0, r, a0, a1, a2, a3);
+  if (ncol > 1) writeState(state, r, r, b0, b1, b2, b3);
+  if (ncol > 2) writeState(state, 2 * r, r, c0, c1, c2, c3);
 }
 
 /** The same recursion for state dimensions above four. */
@@ -323,3 +322,10 @@ export function accumulateCross(ws: FilterWorkspace): void {
   }
 }
 
+/** The first r of four state entries into `state` at `base`. */
+function writeState(state: Float64Array, base: number, r: number, s0: number, s1: number, s2: number, s3: number): void {
+  state[base] = s0;
+  if (r > 1) state[base + 1] = s1;
+  if (r > 2) state[base + 2] = s2;
+  if (r > 3) state[base + 3] = s3;
+}
