@@ -2,35 +2,13 @@
 // the differences across it (stochastic model, gapFilter.ts). Checked against the exact
 // Gaussian likelihood of the observed values computed directly from their covariance matrix
 // (another route to the same number; common practice).
-import { CholeskyDecomposition, Matrix, solve } from 'ml-matrix';
+import { Matrix } from 'ml-matrix';
 import { describe, expect, it } from 'vitest';
 import { createProfileLikelihood } from '../../src/models/profileLikelihood.js';
 import { fitTrendModel, forecastTrendModel, trendDesign } from '../../src/models/trendModels.js';
 import { expectRelative } from '../evidence/expectRelative.js';
 import { seededNormals } from '../evidence/seededNormals.js';
-
-/** ARMA(1,1) autocovariances for σ² = 1 from 4000 ψ-weights. */
-function armaAutocovariance(phi: number, theta: number, maxLag: number): number[] {
-  const psi = [1];
-  for (let j = 1; j < 4000; j++) psi.push(j === 1 ? phi + theta : phi * psi[j - 1]);
-  return Array.from({ length: maxLag + 1 }, (_, lag) => psi.slice(0, psi.length - lag).reduce((sum, v, j) => sum + v * psi[j + lag], 0));
-}
-
-/** Profile log-likelihood of z ~ N(Gβ, σ²Σ), β by GLS and σ² by ML, computed densely. */
-function denseProfileLoglik(z: number[], design: number[][], sigma: Matrix): number {
-  const m = z.length;
-  const chol = new CholeskyDecomposition(sigma);
-  const x = new Matrix(design);
-  const y = Matrix.columnVector(z);
-  const sx = chol.solve(x);
-  const beta = solve(x.transpose().mmul(sx), x.transpose().mmul(chol.solve(y)));
-  const resid = y.sub(x.mmul(beta));
-  const quad = resid.transpose().mmul(chol.solve(resid)).get(0, 0);
-  let logDet = 0;
-  const lower = chol.lowerTriangularMatrix;
-  for (let i = 0; i < m; i++) logDet += 2 * Math.log(lower.get(i, i));
-  return -0.5 * m * (Math.log((2 * Math.PI * quad) / m) + 1) - 0.5 * logDet;
-}
+import { armaAutocovariance, covarianceAtTimes, denseProfileLoglik } from '../support/denseLikelihood.js';
 
 function simulate(n: number, seed: number): Float64Array {
   const draw = seededNormals(seed);
@@ -57,7 +35,7 @@ describe('stochastic trend with missing levels', () => {
     const likelihood = createProfileLikelihood(design.response, design.regressors, 1, 1, { accumulateGaps: true });
     const loglik = likelihood.atCoefficients([0.5], [0.3], true);
     // Observed changes Δ = A d, d the 29 differences ~ ARMA(1,1); Cov(Δ) = A Γ A'.
-    const gamma = armaAutocovariance(0.5, 0.3, 30);
+    const gamma = armaAutocovariance([0.5], [0.3], 30);
     const rows: number[][] = [];
     const changes: number[] = [];
     const spans: number[][] = [];
@@ -70,8 +48,7 @@ describe('stochastic trend with missing levels', () => {
       last = t;
     }
     const a = new Matrix(rows);
-    const gammaMatrix = new Matrix(29, 29);
-    for (let i = 0; i < 29; i++) for (let j = 0; j < 29; j++) gammaMatrix.set(i, j, gamma[Math.abs(i - j)]);
+    const gammaMatrix = covarianceAtTimes(gamma, Array.from({ length: 29 }, (_, t) => t));
     const direct = denseProfileLoglik(changes, spans, a.mmul(gammaMatrix).mmul(a.transpose()));
     expectRelative(loglik, direct, 1e-9);
   });
@@ -108,9 +85,8 @@ describe('deterministic trend with missing observations', () => {
     const likelihood = createProfileLikelihood(design.response, design.regressors, 1, 1);
     const loglik = likelihood.atCoefficients([0.5], [0.3], true);
     const observed = Array.from({ length: n }, (_, t) => t).filter((t) => !MISSING.includes(t));
-    const gamma = armaAutocovariance(0.5, 0.3, n);
-    const sigma = new Matrix(observed.length, observed.length);
-    observed.forEach((s, i) => observed.forEach((t, j) => sigma.set(i, j, gamma[Math.abs(s - t)])));
+    const gamma = armaAutocovariance([0.5], [0.3], n);
+    const sigma = covarianceAtTimes(gamma, observed);
     const direct = denseProfileLoglik(observed.map((t) => y[t]), observed.map((t) => [1, t + 1]), sigma);
     expectRelative(loglik, direct, 1e-9);
   });
