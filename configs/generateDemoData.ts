@@ -5,7 +5,7 @@
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
-import { addPeriods } from '../src/data/period.js';
+import { addPeriods } from '../src/base/period.js';
 import { demoRandom, type DemoRandom } from './demoRandom.js';
 
 export interface DemoSeries {

@@ -1,14 +1,15 @@
 // The command line as a function: cli(argv, io) → exit code, so it is tested without
 // spawning processes. Exit codes: 0 success, 1 internal failure, 2 bad input or usage,
 // 3 a memo that verify finds different from what its inputs give.
-import { closestName } from './data/closestName.js';
-import { cliMessages, formatProblem, InputError } from './errors.js';
+import { closestName } from './base/closestName.js';
+import { formatProblem, InputError } from './base/problem.js';
+import { cliMessages } from './cli/messages.js';
 import { runFit, FIT_HELP } from './cli/fitCommand.js';
 import { runCheck } from './cli/checkCommand.js';
 import { runInit } from './cli/initCommand.js';
 import { runRun } from './cli/runCommand.js';
 import { runVerify } from './cli/verifyCommand.js';
-import { toolVersion } from './analysis/toolVersion.js';
+import { toolVersion } from './base/toolVersion.js';
 
 export interface CliIo {
   stdout(text: string): void;

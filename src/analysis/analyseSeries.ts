@@ -1,106 +1,121 @@
-// One series → one AnalysisRecord: transform, fit both trend models (order search each),
-// forecast both, back-transform the intervals.
-import { BUILT_IN_SETTINGS } from '../config/builtInSettings.js';
-import { addPeriods } from '../data/period.js';
-import type { Series } from '../data/series.js';
-import { normalInv } from '../linalg/distributions.js';
-import { biasAdjustedMean, inverseTransform, transformValue, type TransformSpec } from '../models/transform.js';
-import { fitTrendModel, forecastTrendModel, minimumObservations, type TrendModelFit, type TrendModelKind } from '../models/trendModels.js';
+// One series → one AnalysisRecord, at settings resolved beforehand (src/config/resolveSettings.ts):
+//
+//   Series ─transform─▶ w ─fitTrendModel × 2 (order search each)─▶ fits ─┬─ forecasts (back-transformed)
+//                                                                        ├─ collectEvidence
+//                                                                        ├─ runBacktest (when asked)
+//                                                                        └─ recommendModel
+//   ─▶ the record, built once as a new value
+import { addPeriods } from '../base/period.js';
+import { formatProblem, InputError } from '../base/problem.js';
+import type { Series } from '../base/series.js';
+import { TREND_MODELS, type AnalysisSettings, type TrendModelKind } from '../base/settings.js';
+import { backTransformForecast, transformValue } from '../base/transform.js';
+import { toolVersion } from '../base/toolVersion.js';
+import type { BacktestRecord } from '../backtest/backtestRecord.js';
+import { runBacktest, type BacktestRun } from '../backtest/runBacktest.js';
 import { collectEvidence, type EvidenceOptions } from '../evidence/collectEvidence.js';
-import { describeEquation } from './describeEquation.js';
 import { smallestMaRootModulus, smallestRootModulus } from '../models/rootModulus.js';
-import { jsonNumber, RECORD_SCHEMA, type AnalysisRecord, type ForecastRow, type ModelRecord } from './record.js';
-import { toolVersion } from './toolVersion.js';
+import { fitTrendModel, forecastTrendModel, minimumObservations, type TrendModelFit } from '../models/trendModels.js';
+import { describeEquation } from './describeEquation.js';
+import { RECORD_SCHEMA, type AnalysisRecord, type DeterministicCoefficients, type ForecastRow, type JsonNumber, type ModelRecord, type StochasticCoefficients } from './record.js';
+import { recommendModel } from './recommendModel.js';
 
-export interface AnalysisOptions {
-  id?: string;
-  title?: string;
-  horizon?: number;
-  /** Interval levels in percent, e.g. [80, 95]. */
-  levels?: number[];
-  maxP?: number;
-  maxQ?: number;
-  transform?: TransformSpec;
-  /** Add the coefficient term to the interval variance (default true). */
-  coefficientUncertainty?: boolean;
-  /** Point forecast: back-transformed median (default) or bias-adjusted mean. */
-  point?: 'median' | 'mean';
-  /** Significance level of the evidence tests (default 0.05). */
-  significance?: number;
-  kpssLagRule?: EvidenceOptions['kpssLagRule'];
+/** Who the series is, as the record names it. */
+export interface SeriesIdentity {
+  id: string;
+  title: string;
+  /** The data file as the user named it (a config's path as written), never a path on this machine. */
+  file: string;
 }
 
-
-/** Default horizon by frequency: ten years, three years of quarters, two years of months. */
-export function defaultHorizon(frequency: Series['frequency']): number {
-  return frequency === 'annual' ? 10 : frequency === 'quarterly' ? 12 : 24;
+export interface AnalysisRun {
+  /** Run the rolling-origin backtest and apply the recommendation rule (true), or fit and forecast only. */
+  backtest: boolean;
+  /** Threads and pool for the backtest; the record does not depend on them. */
+  threads?: BacktestRun['threads'];
+  pool?: BacktestRun['pool'];
+  /** KPSS lag truncation (reference checks only). */
+  kpssLagRule?: EvidenceOptions['kpssLagRule'];
 }
 
 /** Fewest observations an analysis with these order limits needs. */
 export function requiredObservations(maxP: number, maxQ: number): number {
-  return Math.max(minimumObservations('deterministic', maxP, maxQ), minimumObservations('stochastic', maxP, maxQ));
+  return Math.max(...TREND_MODELS.map((kind) => minimumObservations(kind, maxP, maxQ)));
 }
 
-export function analyseSeries(series: Series, options: AnalysisOptions = {}): AnalysisRecord {
-  const transform = options.transform ?? { kind: 'none' };
-  const horizon = options.horizon ?? defaultHorizon(series.frequency);
-  const levels = options.levels ?? [...BUILT_IN_SETTINGS.levels];
-  const maxP = options.maxP ?? BUILT_IN_SETTINGS.max_p;
-  const maxQ = options.maxQ ?? BUILT_IN_SETTINGS.max_q;
-  const coefficientUncertainty = options.coefficientUncertainty ?? true;
-  const point = options.point ?? 'median';
-  const w = series.values.map((y) => transformValue(transform, y));
-
+export async function analyseSeries(series: Series, settings: AnalysisSettings, identity: SeriesIdentity, run: AnalysisRun): Promise<AnalysisRecord> {
+  const w = series.values.map((y) => transformValue(settings.transform, y));
   const fitted = {
-    deterministic: fitTrendModel('deterministic', w, maxP, maxQ),
-    stochastic: fitTrendModel('stochastic', w, maxP, maxQ),
+    deterministic: fitTrendModel('deterministic', w, settings.max_p, settings.max_q),
+    stochastic: fitTrendModel('stochastic', w, settings.max_p, settings.max_q),
   };
-  const models = {} as AnalysisRecord['models'];
-  const forecasts = {} as AnalysisRecord['forecasts'];
-  for (const kind of ['deterministic', 'stochastic'] as const) {
-    models[kind] = modelRecord(kind, fitted[kind]);
-    forecasts[kind] = forecastRows(fitted[kind], horizon, series.last, levels, transform, coefficientUncertainty, point);
-  }
   const evidence = collectEvidence(
     w,
     { deterministic: fitted.deterministic.fit, stochastic: fitted.stochastic.fit },
-    { significance: options.significance, kpssLagRule: options.kpssLagRule, periodOf: (index) => series.periods[index] ?? addPeriods(series.first, index) },
+    { significance: settings.significance, kpssLagRule: run.kpssLagRule, periodOf: (index) => series.periods[index] ?? addPeriods(series.first, index) },
   );
+  const backtest = run.backtest ? await backtestOrReason(series, settings, fitted, run) : undefined;
   return {
     schema: RECORD_SCHEMA,
     tool: toolVersion(),
     series: {
-      id: options.id ?? series.column,
-      title: options.title ?? series.column,
+      id: identity.id,
+      title: identity.title,
       frequency: series.frequency,
       first: series.first,
       last: series.last,
       n: series.n,
-      transform: transform.kind === 'box-cox' ? { kind: 'box-cox', lambda: transform.lambda } : { kind: transform.kind },
-      source: { file: series.file, sha256: series.sha256, column: series.column },
+      transform: settings.transform,
+      source: { file: identity.file, sha256: series.sha256, column: series.column },
     },
-    settings: {
-      horizon,
-      levels,
-      max_p: maxP,
-      max_q: maxQ,
-      coefficient_uncertainty: coefficientUncertainty,
-      point,
-      significance: evidence.reading.level,
+    settings,
+    models: {
+      deterministic: modelRecord('deterministic', fitted.deterministic) as ModelRecord<DeterministicCoefficients>,
+      stochastic: modelRecord('stochastic', fitted.stochastic) as ModelRecord<StochasticCoefficients>,
     },
-    models,
-    forecasts,
+    forecasts: {
+      deterministic: forecastRows(fitted.deterministic, series.last, settings),
+      stochastic: forecastRows(fitted.stochastic, series.last, settings),
+    },
     evidence,
+    ...(backtest === undefined
+      ? {}
+      : {
+          backtest: backtest.record,
+          ...(backtest.reason === undefined ? {} : { backtest_unavailable: backtest.reason }),
+          recommendation: recommendModel({ verdict: evidence.reading.verdict, backtest: backtest.record ?? undefined }, settings.recommendation),
+        }),
   };
+}
+
+/** The backtest, or why the series cannot have one: a short series still gets its memo, with the reason shown. */
+async function backtestOrReason(
+  series: Series,
+  settings: AnalysisSettings,
+  fitted: Record<TrendModelKind, TrendModelFit>,
+  run: AnalysisRun,
+): Promise<{ record: BacktestRecord | null; reason?: string }> {
+  // Orders chosen on the full sample, for the policies that keep them (a look-ahead the record notes).
+  const orders = settings.backtest.refit === 'reselect' ? undefined : { deterministic: orderOf(fitted.deterministic), stochastic: orderOf(fitted.stochastic) };
+  try {
+    return { record: await runBacktest({ values: series.values, periods: series.periods }, settings, { orders, threads: run.threads, pool: run.pool }) };
+  } catch (error) {
+    if (!(error instanceof InputError)) throw error;
+    return { record: null, reason: error.problems.map((problem) => formatProblem({ ...problem, file: undefined })).join(' ') };
+  }
+}
+
+function orderOf(model: TrendModelFit): { p: number; q: number } {
+  return { p: model.fit.p, q: model.fit.q };
+}
+
+function jsonNumber(value: number): JsonNumber {
+  return Number.isFinite(value) ? value : null;
 }
 
 function modelRecord(kind: TrendModelKind, model: TrendModelFit): ModelRecord {
   const { fit } = model;
-  const coefficients: ModelRecord['coefficients'] = { ...model.coefficients, ar: Array.from(fit.ar), ma: Array.from(fit.ma) };
-  const stderr: ModelRecord['stderr'] = {};
-  for (const [name, value] of Object.entries(model.stderr.regression)) stderr[name] = jsonNumber(value);
-  stderr.ar = model.stderr.ar.map(jsonNumber);
-  stderr.ma = model.stderr.ma.map(jsonNumber);
+  const regressionSe = Object.fromEntries(Object.entries(model.stderr.regression).map(([name, value]) => [name, jsonNumber(value)]));
   return {
     p: fit.p,
     q: fit.q,
@@ -109,8 +124,9 @@ function modelRecord(kind: TrendModelKind, model: TrendModelFit): ModelRecord {
     aicc: jsonNumber(model.aicc),
     sigma2: fit.sigma2,
     converged: fit.converged,
-    coefficients,
-    stderr,
+    // The design names the regression coefficients (intercept and slope, or drift), so the shape follows the kind.
+    coefficients: { ...model.coefficients, ar: Array.from(fit.ar), ma: Array.from(fit.ma) } as DeterministicCoefficients | StochasticCoefficients,
+    stderr: { ...regressionSe, ar: model.stderr.ar.map(jsonNumber), ma: model.stderr.ma.map(jsonNumber) } as DeterministicCoefficients<JsonNumber> | StochasticCoefficients<JsonNumber>,
     candidates: model.candidates.map((c) => ({ p: c.p, q: c.q, loglik: jsonNumber(c.loglik), aicc: jsonNumber(c.aicc), converged: c.converged })),
     equation: describeEquation(kind, model),
     roots: {
@@ -120,32 +136,16 @@ function modelRecord(kind: TrendModelKind, model: TrendModelFit): ModelRecord {
   };
 }
 
-function forecastRows(
-  model: TrendModelFit,
-  horizon: number,
-  last: string,
-  levels: readonly number[],
-  transform: TransformSpec,
-  coefficientUncertainty: boolean,
-  point: 'median' | 'mean',
-): ForecastRow[] {
-  const moments = forecastTrendModel(model, horizon);
-  const rows: ForecastRow[] = [];
-  for (let h = 0; h < horizon; h++) {
+function forecastRows(model: TrendModelFit, last: string, settings: AnalysisSettings): ForecastRow[] {
+  const moments = forecastTrendModel(model, settings.horizon);
+  return Array.from({ length: settings.horizon }, (_, h) => {
     const mean = moments.mean[h];
-    const se = coefficientUncertainty ? moments.seTotal[h] : moments.seProcess[h];
-    const intervals: ForecastRow['intervals'] = {};
-    for (const level of levels) {
-      const z = normalInv(0.5 + level / 200);
-      intervals[String(level)] = [inverseTransform(transform, mean - z * se), inverseTransform(transform, mean + z * se)];
-    }
-    rows.push({
+    const se = settings.coefficient_uncertainty ? moments.seTotal[h] : moments.seProcess[h];
+    return {
       h: h + 1,
       period: addPeriods(last, h + 1),
-      point: point === 'mean' ? biasAdjustedMean(transform, mean, se) : inverseTransform(transform, mean),
-      intervals,
+      ...backTransformForecast(settings.transform, settings.point, settings.levels, mean, se),
       model_scale: { mean, se_process: moments.seProcess[h], se_total: moments.seTotal[h] },
-    });
-  }
-  return rows;
+    };
+  });
 }

@@ -1,6 +1,7 @@
 // A fitted trend model written out as algebra with its estimates, for the terminal summary
 // and the memo (plain text; the memo escapes it).
-import type { TrendModelFit, TrendModelKind } from '../models/trendModels.js';
+import type { TrendModelFit } from '../models/trendModels.js';
+import { type TrendModelKind } from '../base/settings.js';
 
 export function describeEquation(kind: TrendModelKind, model: TrendModelFit): string {
   const { fit } = model;

@@ -1,87 +1,73 @@
-// The documented rule that turns evidence and backtest scores into a recommended model.
+// The documented rule that turns evidence and backtest scores into a recommended model. Every
+// interval score it reads is at the scored level (`recommendation.scored_level`, by default the
+// widest interval level).
 //
 // Default rule, "prefer-stochastic": recommend the stochastic trend, the safer extrapolation
 // because it lets the trend change direction (common practice), unless the deterministic
 // trend earns its narrower intervals on all three counts:
-//   1. a lower mean 95% interval score than the stochastic trend at every horizon in the
-//      upper half of the backtest (h > B/2),
-//   2. the Diebold-Mariano comparison of 95% interval scores at the longest horizon favours it
-//      at the significance level,
+//   1. a lower mean interval score than the stochastic trend at every horizon in the upper
+//      half of the backtest (h > B/2),
+//   2. the Diebold-Mariano comparison of interval scores at the longest horizon favours it at
+//      the significance level,
 //   3. the unit-root evidence does not point to a stochastic trend (reading ≠ 'stochastic').
-// Alternative rule, "lowest-interval-score": the model with the lower mean 95% interval score
+// Alternative rule, "lowest-interval-score": the model with the lower mean interval score
 // over the upper-half horizons (the stochastic trend on a tie or without a backtest).
 // A config may instead fix the model with a written justification.
-import { RECOMMENDATION_RULES } from '../config/builtInSettings.js';
-import type { TrendModelKind } from '../models/trendModels.js';
-
-export { RECOMMENDATION_RULES };
-export type RecommendationRule = (typeof RECOMMENDATION_RULES)[number];
-
-export interface RecommendationRecord {
-  model: TrendModelKind;
-  rule: RecommendationRule | 'fixed-by-config';
-  /** The rule in one plain sentence. */
-  rule_text: string;
-  fixed_by_config: boolean;
-  justification?: string;
-  significance: number;
-  reasons: string[];
-}
+import { levelKey, type RecommendationChoices, type RecommendationRule, type TrendModelKind } from '../base/settings.js';
+import { intervalScoreLoss } from '../backtest/backtestRecord.js';
+import type { RecommendationRecord } from './record.js';
 
 /** What the rule reads from a record: the evidence reading and the backtest scores. */
 export interface RecommendationEvidence {
   verdict: string;
   backtest?: {
-    per_horizon: Record<'deterministic' | 'stochastic', { h: number; interval_score: Record<string, number | null> }[]>;
+    per_horizon: Record<TrendModelKind, { h: number; interval_score: Record<string, number | null> }[]>;
     comparison: { h: number; loss: string; p_value: number | null; better: string | null; available?: boolean }[];
   };
 }
 
-export interface RecommendationOptions {
-  rule?: RecommendationRule;
-  significance?: number;
-  /** Fixes the model; `justification` is then required. */
-  model?: TrendModelKind;
-  justification?: string;
+function ruleText(rule: RecommendationRule | 'fixed-by-config', level: number): string {
+  switch (rule) {
+    case 'prefer-stochastic':
+      return `Recommend the stochastic trend, which lets the trend change direction, unless the deterministic trend has better backtest ${level}% interval scores at the longer horizons, confirmed by a significant comparison test, and the unit-root evidence does not point to a stochastic trend.`;
+    case 'lowest-interval-score':
+      return `Recommend the model with the lower average ${level}% interval score over the longer backtest horizons.`;
+    case 'fixed-by-config':
+      return 'The model was fixed in the configuration, with the justification given.';
+  }
 }
 
-const RULE_TEXT: Record<RecommendationRule | 'fixed-by-config', string> = {
-  'prefer-stochastic':
-    'Recommend the stochastic trend, which lets the trend change direction, unless the deterministic trend has better backtest interval scores at the longer horizons, confirmed by a significant comparison test, and the unit-root evidence does not point to a stochastic trend.',
-  'lowest-interval-score': 'Recommend the model with the lower average 95% interval score over the longer backtest horizons.',
-  'fixed-by-config': 'The model was fixed in the configuration, with the justification given.',
-};
-
-export function recommendModel(evidence: RecommendationEvidence, options: RecommendationOptions = {}): RecommendationRecord {
-  const significance = options.significance ?? 0.05;
-  if (options.model !== undefined) {
+export function recommendModel(evidence: RecommendationEvidence, choices: RecommendationChoices): RecommendationRecord {
+  const { significance, scored_level: level } = choices;
+  if (choices.model !== null) {
     return {
-      model: options.model,
+      model: choices.model,
       rule: 'fixed-by-config',
-      rule_text: RULE_TEXT['fixed-by-config'],
+      rule_text: ruleText('fixed-by-config', level),
       fixed_by_config: true,
-      justification: options.justification,
+      justification: choices.justification ?? undefined,
       significance,
-      reasons: [`Fixed to the ${options.model} trend by the configuration: ${options.justification ?? 'no justification given'}.`],
+      scored_level: level,
+      reasons: [`Fixed to the ${choices.model} trend by the configuration: ${choices.justification ?? 'no justification given'}.`],
     };
   }
-  const rule = options.rule ?? 'prefer-stochastic';
-  const scores = longerHorizonScores(evidence);
+  const { rule } = choices;
+  const scores = longerHorizonScores(evidence, level);
   const reasons: string[] = [];
   let model: TrendModelKind = 'stochastic';
   if (scores === undefined) {
-    reasons.push('No backtest interval scores are available, so the rule falls back to the stochastic trend.');
+    reasons.push(`No backtest ${level}% interval scores are available, so the rule falls back to the stochastic trend.`);
   } else if (rule === 'lowest-interval-score') {
-    reasons.push(scoreSentence(scores));
+    reasons.push(scoreSentence(scores, level));
     if (scores.deterministicMean < scores.stochasticMean) model = 'deterministic';
   } else {
     const everyHorizonBetter = scores.rows.every((row) => row.deterministic < row.stochastic);
     reasons.push(
       everyHorizonBetter
-        ? `The deterministic trend scored better at every longer horizon (h = ${scores.rows.map((r) => r.h).join(', ')}). ${scoreSentence(scores)}`
-        : `The deterministic trend did not score better at every longer horizon. ${scoreSentence(scores)}`,
+        ? `The deterministic trend scored better at every longer horizon (h = ${scores.rows.map((r) => r.h).join(', ')}). ${scoreSentence(scores, level)}`
+        : `The deterministic trend did not score better at every longer horizon. ${scoreSentence(scores, level)}`,
     );
-    const test = evidence.backtest?.comparison.find((c) => c.h === scores.longest && c.loss === 'interval_score_95');
+    const test = evidence.backtest?.comparison.find((c) => c.h === scores.longest && c.loss === intervalScoreLoss(level));
     const significant = test !== undefined && test.available !== false && test.p_value !== null && test.p_value < significance && test.better === 'deterministic';
     reasons.push(
       test === undefined || test.available === false || test.p_value === null
@@ -97,7 +83,7 @@ export function recommendModel(evidence: RecommendationEvidence, options: Recomm
       ? 'So the deterministic trend is recommended; its narrower intervals rest on the trend line continuing unchanged.'
       : 'So the stochastic trend is recommended.',
   );
-  return { model, rule, rule_text: RULE_TEXT[rule], fixed_by_config: false, significance, reasons };
+  return { model, rule, rule_text: ruleText(rule, level), fixed_by_config: false, significance, scored_level: level, reasons };
 }
 
 interface LongerHorizonScores {
@@ -107,17 +93,18 @@ interface LongerHorizonScores {
   stochasticMean: number;
 }
 
-/** Mean 95% interval scores at the horizons above half the backtest horizon. */
-function longerHorizonScores(evidence: RecommendationEvidence): LongerHorizonScores | undefined {
+/** Mean interval scores at `level` at the horizons above half the backtest horizon. */
+function longerHorizonScores(evidence: RecommendationEvidence, level: number): LongerHorizonScores | undefined {
   const backtest = evidence.backtest;
   if (backtest === undefined) return undefined;
+  const key = levelKey(level);
   const longest = Math.max(...backtest.per_horizon.deterministic.map((row) => row.h));
   const rows: LongerHorizonScores['rows'] = [];
   for (const det of backtest.per_horizon.deterministic) {
     if (det.h <= longest / 2 && det.h !== longest) continue;
     const sto = backtest.per_horizon.stochastic.find((row) => row.h === det.h);
-    const a = det.interval_score['95'];
-    const b = sto?.interval_score['95'];
+    const a = det.interval_score[key];
+    const b = sto?.interval_score[key];
     if (a === null || a === undefined || b === null || b === undefined) return undefined;
     rows.push({ h: det.h, deterministic: a, stochastic: b });
   }
@@ -131,6 +118,6 @@ function longerHorizonScores(evidence: RecommendationEvidence): LongerHorizonSco
   };
 }
 
-function scoreSentence(scores: LongerHorizonScores): string {
-  return `Average 95% interval score at h = ${scores.rows.map((r) => r.h).join(', ')}: deterministic ${scores.deterministicMean.toPrecision(4)}, stochastic ${scores.stochasticMean.toPrecision(4)} (lower is better).`;
+function scoreSentence(scores: LongerHorizonScores, level: number): string {
+  return `Average ${level}% interval score at h = ${scores.rows.map((r) => r.h).join(', ')}: deterministic ${scores.deterministicMean.toPrecision(4)}, stochastic ${scores.stochasticMean.toPrecision(4)} (lower is better).`;
 }

@@ -1,11 +1,19 @@
 // The AnalysisRecord: one series' complete analysis as plain JSON, the hinge between the
 // statistics and everything that shows it (../../DEVELOPERS.md, "The AnalysisRecord").
 // Keys are a contract: add freely, rename none. Numbers that do not exist (a standard
-// error at a singular Hessian, say) are null, never NaN.
-import type { Frequency } from '../data/period.js';
+// error at a singular Hessian, say) are null, never NaN. The memo reads this module's types
+// and nothing else of the analysis stages, so the parts the stages define are named here too.
+import type { Frequency } from '../base/period.js';
+import type { AnalysisSettings, RecommendationRule, Transform, TrendModelKind } from '../base/settings.js';
+import type { IntervalsByLevel } from '../base/transform.js';
 import type { BacktestRecord } from '../backtest/backtestRecord.js';
 import type { EvidenceRecord } from '../evidence/collectEvidence.js';
-import type { RecommendationRecord } from './recommendModel.js';
+
+export type { ArmaOrder, BacktestForecast, BacktestRecord, ComparisonRow, ForecastMethod, HorizonScores, OriginRecord } from '../backtest/backtestRecord.js';
+export type { EvidenceRecord } from '../evidence/collectEvidence.js';
+export type { ResidualChecks } from '../evidence/residualChecks.js';
+export type { AdfResult, KpssResult, StabilityRecord, SupWaldPBound, TrendVerdictKind } from '../evidence/types.js';
+export type { IntervalsByLevel } from '../base/transform.js';
 
 export const RECORD_SCHEMA = 'trendbrief.analysis/1';
 
@@ -19,7 +27,22 @@ export interface CandidateRecord {
   converged: boolean;
 }
 
-export interface ModelRecord {
+/** The deterministic trend's estimates: w_t = intercept + slope·t + η_t. */
+export interface DeterministicCoefficients<N = number> {
+  intercept: N;
+  slope: N;
+  ar: N[];
+  ma: N[];
+}
+
+/** The stochastic trend's estimates: (1 − B)w_t = drift + η_t. */
+export interface StochasticCoefficients<N = number> {
+  drift: N;
+  ar: N[];
+  ma: N[];
+}
+
+export interface ModelRecord<C extends DeterministicCoefficients | StochasticCoefficients = DeterministicCoefficients | StochasticCoefficients> {
   p: number;
   q: number;
   nobs: number;
@@ -27,9 +50,9 @@ export interface ModelRecord {
   aicc: JsonNumber;
   sigma2: number;
   converged: boolean;
-  /** intercept and slope (deterministic) or drift (stochastic), plus ar and ma. */
-  coefficients: Record<string, number | number[]>;
-  stderr: Record<string, JsonNumber | JsonNumber[]>;
+  coefficients: C;
+  /** The same keys as `coefficients`; null where the standard error does not exist. */
+  stderr: C extends DeterministicCoefficients ? DeterministicCoefficients<JsonNumber> : StochasticCoefficients<JsonNumber>;
   candidates: CandidateRecord[];
   /** The model in one line of algebra, with its estimates. */
   equation: string;
@@ -44,8 +67,22 @@ export interface ForecastRow {
   h: number;
   period: string;
   point: number;
-  intervals: Record<string, [number, number]>;
+  /** One interval per level of `settings.levels`, keyed by levelKey(level). */
+  intervals: IntervalsByLevel;
   model_scale: { mean: number; se_process: number; se_total: number };
+}
+
+export interface RecommendationRecord {
+  model: TrendModelKind;
+  rule: RecommendationRule | 'fixed-by-config';
+  /** The rule in one plain sentence. */
+  rule_text: string;
+  fixed_by_config: boolean;
+  justification?: string;
+  significance: number;
+  /** The interval level whose backtest scores the rule compared. */
+  scored_level: number;
+  reasons: string[];
 }
 
 export interface AnalysisRecord {
@@ -58,29 +95,17 @@ export interface AnalysisRecord {
     first: string;
     last: string;
     n: number;
-    transform: { kind: 'none' | 'log' | 'box-cox'; lambda?: number };
+    transform: Transform;
     source: { file: string; sha256: string; column: string };
   };
-  settings: {
-    horizon: number;
-    levels: number[];
-    max_p: number;
-    max_q: number;
-    coefficient_uncertainty: boolean;
-    point: 'median' | 'mean';
-    significance: number;
-  };
-  models: { deterministic: ModelRecord; stochastic: ModelRecord };
+  /** The settings the analysis ran at, complete (src/base/settings.ts). */
+  settings: AnalysisSettings;
+  models: { deterministic: ModelRecord<DeterministicCoefficients>; stochastic: ModelRecord<StochasticCoefficients> };
   forecasts: { deterministic: ForecastRow[]; stochastic: ForecastRow[] };
   evidence: EvidenceRecord;
-  /** Rolling-origin backtest (see completeAnalysis); null when the series is too short for one. */
+  /** Rolling-origin backtest; null when the series is too short for one, absent when none was asked for. */
   backtest?: BacktestRecord | null;
   /** Why there is no backtest, when `backtest` is null. */
   backtest_unavailable?: string;
   recommendation?: RecommendationRecord;
-}
-
-/** A number for JSON: non-finite values become null. */
-export function jsonNumber(value: number): JsonNumber {
-  return Number.isFinite(value) ? value : null;
 }

@@ -1,23 +1,24 @@
 // The backtest block of the AnalysisRecord: rolling-origin forecasts of both trend models and
 // the no-change yardstick, their scores per horizon and the comparison tests. Plain JSON;
 // numbers that do not exist are null. Keys are a contract: add freely, rename none.
-import type { TrendModelKind } from '../models/trendModels.js';
+import type { PointForecast, RefitPolicy, Transform, TrendModelKind, WindowKind } from '../base/settings.js';
+import type { IntervalsByLevel } from '../base/transform.js';
 
 export type BacktestNumber = number | null;
-
-export const REFIT_POLICIES = ['reselect', 'reestimate', 'fixed'] as const;
-export type RefitPolicy = (typeof REFIT_POLICIES)[number];
-
-export const WINDOW_KINDS = ['expanding', 'sliding'] as const;
-export type WindowKind = (typeof WINDOW_KINDS)[number];
 
 /** The two trend models and the no-change forecast. */
 export type ForecastMethod = TrendModelKind | 'naive';
 export const FORECAST_METHODS: readonly ForecastMethod[] = ['deterministic', 'stochastic', 'naive'];
 
-export type ComparisonLoss = 'squared_error' | 'interval_score_95';
+/** The squared error of the point forecast, or the interval score at a level, e.g. `interval_score_95`. */
+export type ComparisonLoss = 'squared_error' | `interval_score_${number}`;
 
-/** Values keyed by interval level in percent, e.g. {"80": …, "95": …}. */
+/** The loss name of the interval score at `level` percent. */
+export function intervalScoreLoss(level: number): ComparisonLoss {
+  return `interval_score_${level}`;
+}
+
+/** Values keyed by interval level (levelKey), e.g. {"80": …, "95": …}. */
 export type LevelTable = Record<string, BacktestNumber>;
 
 export interface ArmaOrder {
@@ -36,9 +37,9 @@ export interface BacktestSettings {
   refit: RefitPolicy;
   min_training_length: number;
   levels: number[];
-  transform: { kind: 'none' | 'log' | 'box-cox'; lambda?: number };
+  transform: Transform;
   coefficient_uncertainty: boolean;
-  point: 'median' | 'mean';
+  point: PointForecast;
   max_p: number;
   max_q: number;
   /** Orders from the full sample under `reestimate` and `fixed`; null under `reselect`. */
@@ -105,7 +106,7 @@ export interface BacktestForecast {
   period: string | null;
   actual: number;
   point: number;
-  intervals: Record<string, [number, number]>;
+  intervals: IntervalsByLevel;
   /** The Gaussian predictive on the model scale the scores use. */
   model_scale: { mean: number; se: number };
 }

@@ -1,7 +1,8 @@
 // The model-scale forecasts of every origin turned into the record's rows: each method's
 // predictive on the data's scale beside the actual, and, per method and horizon, the list
 // of forecasts the scores are computed from (in origin order, so the comparison pairs them).
-import { TREND_MODELS } from '../models/trendModels.js';
+import { TREND_MODELS, type AnalysisSettings } from '../base/settings.js';
+import { backTransformForecast } from '../base/transform.js';
 import {
   finiteOrNull,
   FORECAST_METHODS,
@@ -9,12 +10,10 @@ import {
   type ForecastMethod,
   type OriginRecord,
 } from './backtestRecord.js';
-import { backTransformForecast } from './backTransformForecast.js';
 import type { OriginForecast } from './forecastAtOrigin.js';
 import { inSampleNaiveMae, naiveForecast } from './naiveForecast.js';
 import type { PlannedOrigin } from './planOrigins.js';
 import type { BacktestData } from './readBacktestInput.js';
-import type { BacktestSettingsInput } from './resolveBacktestOptions.js';
 import type { ScoredForecast } from './scoreHorizon.js';
 
 export interface CollectedForecasts {
@@ -29,9 +28,10 @@ export function collectForecasts(
   data: BacktestData,
   planned: readonly PlannedOrigin[],
   results: readonly OriginForecast[],
-  settings: BacktestSettingsInput,
+  settings: AnalysisSettings,
 ): CollectedForecasts {
-  const { horizon, transform, point, levels } = settings;
+  const { transform, point, levels } = settings;
+  const { horizon } = settings.backtest;
   const label = (index: number): string | null => (data.periods === null ? null : data.periods[index]);
   const scored = {} as CollectedForecasts['scored'];
   for (const method of FORECAST_METHODS) scored[method] = Array.from({ length: horizon }, () => []);
@@ -44,7 +44,7 @@ export function collectForecasts(
     TREND_MODELS.forEach((kind, j) => {
       const result = results[i * TREND_MODELS.length + j];
       models[kind] = { p: result.p, q: result.q, loglik: result.loglik === null ? null : finiteOrNull(result.loglik), converged: result.converged };
-      moments[kind] = { mean: result.mean, se: settings.coefficientUncertainty ? result.seTotal : result.seProcess };
+      moments[kind] = { mean: result.mean, se: settings.coefficient_uncertainty ? result.seTotal : result.seProcess };
     });
     moments.naive = naiveForecast(data.w.subarray(start, end), horizon);
     origins.push({ length: end, period: label(end - 1), training_length: end - start, mase_scale: finiteOrNull(maseScale), models });

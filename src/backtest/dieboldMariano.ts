@@ -4,7 +4,7 @@
 //   DM = d̄ / √(V/n),  DM* = DM · √((n + 1 − 2h + h(h−1)/n)/n),
 // referred to Student's t with n − 1 degrees of freedom, two-sided. h-step errors from
 // consecutive origins overlap, hence the h − 1 lags (Diebold & Mariano 1995, §2).
-import { autocovariances, demean } from '../evidence/autocovariances.js';
+import { autocovariances, demean } from '../linalg/autocovariances.js';
 import { studentTCdf } from '../linalg/distributions.js';
 import { comparisonReasons } from './messages.js';
 

@@ -3,9 +3,10 @@
 // inline or on a worker thread (the pool calls this module's `forecastAtOrigin` export),
 // and the results do not depend on which thread ran it.
 import { createProfileLikelihood } from '../models/profileLikelihood.js';
-import { fitTrendModel, fitTrendModelAtOrder, forecastTrendModel, trendDesign, type TrendModelKind } from '../models/trendModels.js';
+import type { RefitPolicy, TrendModelKind } from '../base/settings.js';
+import { fitTrendModel, fitTrendModelAtOrder, forecastTrendModel, trendDesign } from '../models/trendModels.js';
 import { forecastRegressionArma, type ForecastMoments } from '../statespace/forecast.js';
-import type { ArmaOrder, RefitPolicy } from './backtestRecord.js';
+import type { ArmaOrder } from './backtestRecord.js';
 
 /** Full-sample parameters held fixed under the `fixed` policy, in the window's time index. */
 export interface FixedParameters {

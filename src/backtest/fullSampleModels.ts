@@ -1,8 +1,9 @@
 // What the `reestimate` and `fixed` policies take from the full sample: the orders (searched
 // by AICc unless given) and, under `fixed`, every parameter. Using them at past origins is a
 // look-ahead, which the record notes.
-import { fitTrendModel, fitTrendModelAtOrder, TREND_MODELS, type TrendModelKind } from '../models/trendModels.js';
-import type { ArmaOrder, RefitPolicy } from './backtestRecord.js';
+import { TREND_MODELS, type RefitPolicy, type TrendModelKind } from '../base/settings.js';
+import { fitTrendModel, fitTrendModelAtOrder } from '../models/trendModels.js';
+import type { ArmaOrder } from './backtestRecord.js';
 import type { FixedParameters } from './forecastAtOrigin.js';
 
 export interface FullSampleModels {

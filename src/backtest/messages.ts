@@ -1,6 +1,7 @@
-// Wording of the backtest's notes and of the reasons a comparison test is not available,
-// kept in one place so the record and the summary say the same thing.
-import type { RefitPolicy } from './backtestRecord.js';
+// Wording of the backtest: its problems with the input, its notes and the reasons a comparison
+// test is not available, kept in one place so the record and the summary say the same thing.
+import { plural, problem, type InputProblem } from '../base/problem.js';
+import type { RefitPolicy } from '../base/settings.js';
 
 export const comparisonReasons = {
   tooFewOrigins: 'fewer than two origins were scored at this horizon',
@@ -28,9 +29,51 @@ export const backtestNotes = {
   },
 };
 
-/** One line on how each origin refits the models, for the summary. */
-export function describeRefit(refit: RefitPolicy): string {
-  if (refit === 'reselect') return 'orders re-selected by AICc and parameters re-estimated at every origin';
-  if (refit === 'reestimate') return 'orders fixed from the full sample, parameters re-estimated at every origin';
-  return 'orders and parameters fixed from the full sample';
-}
+// Problems with what a caller handed the backtest. Settings were checked when they were
+// resolved; these name the settings as a config writes them (`backtest.min_train`) and the
+// library's own arguments (`orders`, `threads`, `values`) as a caller writes those.
+export const backtestMessages = {
+  badOrder(name: string, value: number): InputProblem {
+    return problem('backtest.bad-value', `${value} is not a whole number of at least 0`, 'give each order a whole number from 0 up', { field: `orders.${name}` });
+  },
+  badThreads(value: number): InputProblem {
+    return problem('backtest.bad-value', `${value} is not a whole number of at least 1`, 'give threads a whole number from 1 up', { field: 'threads' });
+  },
+  ordersWithReselect(): InputProblem {
+    return problem(
+      'backtest.orders-unused',
+      'orders are given, but the reselect policy chooses the orders at every origin',
+      'drop the orders, or choose the reestimate or fixed policy',
+      { field: 'orders' },
+    );
+  },
+  trainingTooShort(value: number, needed: number): InputProblem {
+    return problem(
+      'backtest.training-too-short',
+      `a shortest training window of ${value} observations leaves too few for the largest model`,
+      `give at least ${needed}, or lower max_p and max_q`,
+      { field: 'backtest.min_train' },
+    );
+  },
+  badObservation(position: number, value: number): InputProblem {
+    return problem('backtest.bad-observation', `observation ${position} is ${value}, not a finite number`, 'supply a complete series of finite values', { field: 'values' });
+  },
+  notTransformable(position: number, value: number, transform: string): InputProblem {
+    return problem(
+      'backtest.bad-observation',
+      `observation ${position} is ${value}, which the ${transform} transform cannot take`,
+      'choose no transform, or a series whose values are all above zero',
+      { field: 'values' },
+    );
+  },
+  periodsMismatch(periods: number, values: number): InputProblem {
+    return problem('backtest.periods-mismatch', `${periods} period labels for ${values} observations`, 'give one period label per observation', { field: 'periods' });
+  },
+  seriesTooShort(n: number, horizon: number, minimumTraining: number): InputProblem {
+    return problem(
+      'backtest.too-short',
+      `the series has ${plural(n, 'observation')}; a backtest at horizon ${horizon} needs at least ${minimumTraining + horizon} (${minimumTraining} to train on, ${horizon} to score)`,
+      'supply a longer series, shorten backtest.horizon, or lower backtest.min_train or max_p and max_q',
+    );
+  },
+};

@@ -2,14 +2,7 @@
 // horizons can be scored, T = n − B − (K − 1)·step, …, n − B, none shorter than the minimum
 // training length. An expanding window trains on observations 1..T; a sliding window keeps
 // the first origin's length and drops the oldest observations as the origin moves.
-import type { WindowKind } from './backtestRecord.js';
-
-/** Origins used when the caller does not say (fewer when the series is too short). */
-export const DEFAULT_ORIGINS = 20;
-/** Floor of the default minimum training length. */
-export const MINIMUM_TRAINING_FLOOR = 20;
-/** The default minimum training length is this many times the largest model's parameters. */
-export const OBSERVATIONS_PER_PARAMETER = 3;
+import type { WindowKind } from '../base/settings.js';
 
 export interface PlannedOrigin {
   /** Observations up to and including the origin. */
@@ -27,16 +20,11 @@ export interface OriginPlan {
 
 export interface OriginPlanOptions {
   horizon: number;
-  /** Origins asked for; default DEFAULT_ORIGINS. */
-  origins?: number;
+  /** Origins asked for. */
+  origins: number;
   step: number;
   window: WindowKind;
   minTrainingLength: number;
-}
-
-/** The default minimum training length: max(20, 3 × the largest model's parameter count). */
-export function defaultMinimumTraining(largestParameterCount: number): number {
-  return Math.max(MINIMUM_TRAINING_FLOOR, OBSERVATIONS_PER_PARAMETER * largestParameterCount);
 }
 
 /** Origins available for a series of n observations (0 when none can be scored). */
@@ -46,7 +34,7 @@ export function availableOrigins(n: number, options: Omit<OriginPlanOptions, 'or
 }
 
 export function planOrigins(n: number, options: OriginPlanOptions): OriginPlan {
-  const requested = options.origins ?? DEFAULT_ORIGINS;
+  const requested = options.origins;
   const available = availableOrigins(n, options);
   const count = Math.min(requested, available);
   const last = n - options.horizon;

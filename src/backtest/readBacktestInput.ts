@@ -1,8 +1,10 @@
 // The series a backtest runs on: a Series from the data stage (period labels kept for the
 // record) or a bare array of values. Every observation must be finite or NaN (missing) and,
 // after the transform, still finite; all problems are reported together.
-import { backtestMessages, InputError, type InputProblem } from '../errors.js';
-import { describeTransform, transformValue, type TransformSpec } from '../models/transform.js';
+import { InputError, type InputProblem } from '../base/problem.js';
+import { backtestMessages } from './messages.js';
+import type { Transform } from '../base/settings.js';
+import { describeTransform, transformValue } from '../base/transform.js';
 
 export interface BacktestSeries {
   values: ArrayLike<number>;
@@ -20,7 +22,7 @@ export interface BacktestData {
   periods: readonly string[] | null;
 }
 
-export function readBacktestInput(input: BacktestInput, transform: TransformSpec): BacktestData {
+export function readBacktestInput(input: BacktestInput, transform: Transform): BacktestData {
   const series: BacktestSeries = isBareValues(input) ? { values: input } : input;
   const y = Float64Array.from(series.values);
   const w = y.map((value) => transformValue(transform, value));

@@ -1,41 +1,51 @@
 // Rolling-origin backtest of the whole method: at every origin each trend model is refitted
 // on the data up to that origin alone (order search included under `reselect`), forecast
-// B steps, and scored against what happened, beside the no-change yardstick.
+// B steps, and scored against what happened, beside the no-change yardstick. Everything it
+// does is set by the analysis settings; how many threads run it is the caller's choice.
 //
 //   values ─readBacktestInput─▶ y, w ─planOrigins─▶ origins ─runOriginTasks (threads)─▶
 //   model-scale forecasts ─backTransformForecast─▶ forecasts ─scoreHorizon / compareModels─▶ record
 import { availableParallelism } from 'node:os';
-import { backtestMessages, InputError } from '../errors.js';
-import { minimumObservations, TREND_MODELS, type TrendModelKind } from '../models/trendModels.js';
+import { InputError, type InputProblem } from '../base/problem.js';
+import { TREND_MODELS, type AnalysisSettings, type TrendModelKind } from '../base/settings.js';
+import { minimumObservations } from '../models/trendModels.js';
 import { FORECAST_METHODS, type ArmaOrder, type BacktestRecord } from './backtestRecord.js';
 import { collectForecasts } from './collectForecasts.js';
 import { compareModels } from './compareModels.js';
 import type { OriginTask } from './forecastAtOrigin.js';
 import { fullSampleModels, parametersForWindow } from './fullSampleModels.js';
-import { backtestNotes } from './messages.js';
-import { defaultMinimumTraining, MINIMUM_TRAINING_FLOOR, planOrigins } from './planOrigins.js';
+import { backtestMessages, backtestNotes } from './messages.js';
+import { planOrigins } from './planOrigins.js';
 import { readBacktestInput, type BacktestInput } from './readBacktestInput.js';
-import { resolveBacktestOptions, type BacktestOptions } from './resolveBacktestOptions.js';
-import { runOriginTasks } from './runOriginTasks.js';
+import { runOriginTasks, type OriginPool } from './runOriginTasks.js';
 import { scoreHorizon } from './scoreHorizon.js';
 
-export async function runBacktest(input: BacktestInput, options: BacktestOptions = {}): Promise<BacktestRecord> {
-  const settings = resolveBacktestOptions(options);
-  const { horizon, refit, maxP, maxQ } = settings;
+/** Origins are one observation apart. */
+const ORIGIN_STEP = 1;
+
+export interface BacktestRun {
+  /** Orders chosen on the full sample, kept by the `reestimate` and `fixed` policies; searched on the full sample when absent. */
+  orders?: Record<TrendModelKind, ArmaOrder>;
+  /** Worker threads; without a pool, min(available cores, origins). The record does not depend on it. */
+  threads?: number;
+  /** An open pool to run on instead of starting threads for this backtest alone. */
+  pool?: OriginPool;
+}
+
+export async function runBacktest(input: BacktestInput, settings: AnalysisSettings, run: BacktestRun = {}): Promise<BacktestRecord> {
+  const { max_p: maxP, max_q: maxQ } = settings;
+  const { horizon, refit, origins, window, min_train: minTrainingLength } = settings.backtest;
+  checkRun(run, refit);
   const data = readBacktestInput(input, settings.transform);
   const n = data.y.length;
-  const floor = settings.minTrainingLength ?? MINIMUM_TRAINING_FLOOR;
-  if (n - horizon < floor) throw new InputError(backtestMessages.seriesTooShort(n, horizon, floor));
+  if (n - horizon < minTrainingLength) throw new InputError(backtestMessages.seriesTooShort(n, horizon, minTrainingLength));
 
-  const full = refit === 'reselect' ? undefined : fullSampleModels(data.w, refit, maxP, maxQ, settings.orders);
+  const full = refit === 'reselect' ? undefined : fullSampleModels(data.w, refit, maxP, maxQ, run.orders);
   // The largest order each model is fitted at: the fixed one, or the top of the search grid.
   const largestOrder = (kind: TrendModelKind): ArmaOrder => full?.orders[kind] ?? { p: maxP, q: maxQ };
-  // Parameters: p + q, the regression coefficients (2 or 1) and σ².
-  const parameterCount = Math.max(...TREND_MODELS.map((kind) => largestOrder(kind).p + largestOrder(kind).q + (kind === 'deterministic' ? 3 : 2)));
   const needed = Math.max(...TREND_MODELS.map((kind) => minimumObservations(kind, largestOrder(kind).p, largestOrder(kind).q)));
-  const minTrainingLength = settings.minTrainingLength ?? defaultMinimumTraining(parameterCount);
   if (minTrainingLength < needed) throw new InputError(backtestMessages.trainingTooShort(minTrainingLength, needed));
-  const planned = planOrigins(n, { horizon, origins: settings.origins, step: settings.step, window: settings.window, minTrainingLength });
+  const planned = planOrigins(n, { horizon, origins, step: ORIGIN_STEP, window, minTrainingLength });
   // A forecast starts from an observed value: origins whose last training value is missing are left out.
   const observedOrigins = planned.origins.filter(({ end }) => !Number.isNaN(data.w[end - 1]));
   const skippedOrigins = planned.origins.length - observedOrigins.length;
@@ -54,15 +64,15 @@ export async function runBacktest(input: BacktestInput, options: BacktestOptions
       parameters: full?.parameters === undefined ? undefined : parametersForWindow(kind, full.parameters[kind], start),
     })),
   );
-  const threads = settings.threads ?? Math.min(availableParallelism(), plan.origins.length);
-  const results = await runOriginTasks(tasks, threads, options.pool);
+  const threads = run.threads ?? Math.min(availableParallelism(), plan.origins.length);
+  const results = await runOriginTasks(tasks, threads, run.pool);
   const collected = collectForecasts(data, plan.origins, results, settings);
 
   const perHorizon = {} as BacktestRecord['per_horizon'];
   for (const method of FORECAST_METHODS) {
     perHorizon[method] = collected.scored[method].map((rows, i) => scoreHorizon(i + 1, rows, settings.levels));
   }
-  const comparison = collected.scored.deterministic.flatMap((rows, i) => compareModels(i + 1, rows, collected.scored.stochastic[i], settings.transform));
+  const comparison = collected.scored.deterministic.flatMap((rows, i) => compareModels(i + 1, rows, collected.scored.stochastic[i], settings.recommendation.scored_level));
   const notes: string[] = [];
   if (plan.available < plan.requested) notes.push(backtestNotes.originsCut(plan.requested, plan.origins.length, minTrainingLength));
   if (full !== undefined) notes.push(backtestNotes.lookAhead(refit));
@@ -75,13 +85,13 @@ export async function runBacktest(input: BacktestInput, options: BacktestOptions
       origins: plan.origins.length,
       requested_origins: plan.requested,
       horizon,
-      window: settings.window,
-      step: settings.step,
+      window,
+      step: ORIGIN_STEP,
       refit,
       min_training_length: minTrainingLength,
-      levels: settings.levels,
-      transform: settings.transform.kind === 'box-cox' ? { kind: 'box-cox', lambda: settings.transform.lambda } : { kind: settings.transform.kind },
-      coefficient_uncertainty: settings.coefficientUncertainty,
+      levels: [...settings.levels],
+      transform: settings.transform,
+      coefficient_uncertainty: settings.coefficient_uncertainty,
       point: settings.point,
       max_p: maxP,
       max_q: maxQ,
@@ -94,4 +104,20 @@ export async function runBacktest(input: BacktestInput, options: BacktestOptions
     comparison,
     forecasts: collected.forecasts,
   };
+}
+
+/** The caller's orders and thread count, checked together. */
+function checkRun(run: BacktestRun, refit: AnalysisSettings['backtest']['refit']): void {
+  const problems: InputProblem[] = [];
+  if (run.orders !== undefined) {
+    if (refit === 'reselect') problems.push(backtestMessages.ordersWithReselect());
+    for (const kind of TREND_MODELS) {
+      for (const part of ['p', 'q'] as const) {
+        const value = run.orders[kind][part];
+        if (!(Number.isInteger(value) && value >= 0)) problems.push(backtestMessages.badOrder(`${kind}.${part}`, value));
+      }
+    }
+  }
+  if (run.threads !== undefined && !(Number.isInteger(run.threads) && run.threads >= 1)) problems.push(backtestMessages.badThreads(run.threads));
+  if (problems.length > 0) throw new InputError(problems);
 }

@@ -6,7 +6,7 @@
 // A caller that runs many backtests (a batch of memos) opens one pool and passes it to
 // every runBacktest, so threads start once; otherwise each backtest opens its own.
 import Tinypool from 'tinypool';
-import { workerModule } from '../parallel/workerModule.js';
+import { workerModule } from '../base/workerModule.js';
 import { forecastAtOrigin, type OriginForecast, type OriginTask } from './forecastAtOrigin.js';
 
 export interface OriginPool {

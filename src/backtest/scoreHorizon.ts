@@ -5,6 +5,8 @@
 //   window (Hyndman & Koehler 2006, eq. for q_t). Coverage: share of actuals inside the
 //   interval, limits included. Interval score: Gneiting & Raftery (2007), eq. 43.
 //   CRPS: Gneiting et al. (2005), eq. 5.
+import { levelKey } from '../base/settings.js';
+import type { IntervalsByLevel } from '../base/transform.js';
 import { finiteOrNull, type HorizonScores, type LevelTable } from './backtestRecord.js';
 import { gaussianCrps } from './gaussianCrps.js';
 import { intervalScore } from './intervalScore.js';
@@ -13,7 +15,7 @@ import { intervalScore } from './intervalScore.js';
 export interface ScoredForecast {
   actual: number;
   point: number;
-  intervals: Record<string, [number, number]>;
+  intervals: IntervalsByLevel;
   /** Gaussian predictive on the model scale, and the actual on that scale. */
   mean: number;
   se: number;
@@ -29,7 +31,7 @@ export function scoreHorizon(h: number, rows: readonly ScoredForecast[], levels:
   const width: LevelTable = {};
   const interval_score: LevelTable = {};
   for (const level of levels) {
-    const key = String(level);
+    const key = levelKey(level);
     coverage[key] = finiteOrNull(average(({ actual, intervals }) => (actual >= intervals[key][0] && actual <= intervals[key][1] ? 1 : 0)));
     width[key] = finiteOrNull(average(({ intervals }) => intervals[key][1] - intervals[key][0]));
     interval_score[key] = finiteOrNull(average(({ actual, intervals }) => intervalScore(intervals[key][0], intervals[key][1], level, actual)));

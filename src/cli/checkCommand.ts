@@ -3,9 +3,10 @@
 // accepts), without fitting. Every config is checked even when an earlier one fails.
 import { loadConfig } from '../config/loadConfig.js';
 import type { RunPlan } from '../config/runPlan.js';
-import type { Series } from '../data/series.js';
+import type { Series } from '../base/series.js';
 import { readPlannedSeries } from '../run/readPlannedSeries.js';
-import { configCommandMessages, formatProblem, InputError, type InputProblem } from '../errors.js';
+import { formatProblem, InputError, type InputProblem } from '../base/problem.js';
+import { configCommandMessages } from './messages.js';
 import { splitOptions } from './splitOptions.js';
 
 export const CHECK_HELP = `Usage: trendbrief check CONFIG.yaml...
@@ -40,7 +41,7 @@ function checkOne(file: string): { ok: string } | { problems: readonly InputProb
   const described: string[] = [];
   for (const series of plan.series) {
     try {
-      described.push(describeSeries(series.id, readPlannedSeries(series, file)));
+      described.push(describeSeries(series.id, readPlannedSeries(series, file).series));
     } catch (error) {
       if (!(error instanceof InputError)) throw error;
       problems.push(...error.problems);

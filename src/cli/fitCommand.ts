@@ -1,33 +1,41 @@
 // `trendbrief fit FILE.csv`: read, analyse, print the record (--json) or a summary.
-import { readSeriesCsv } from '../data/readSeriesCsv.js';
 import { analyseSeries, requiredObservations } from '../analysis/analyseSeries.js';
-import { completeAnalysis } from '../analysis/completeAnalysis.js';
+import { BUILT_IN_SETTINGS as BUILT_IN, HORIZON_BY_FREQUENCY } from '../config/builtInSettings.js';
+import { readingSettings, resolveSettings } from '../config/resolveSettings.js';
+import { BACKTEST_FIELDS, LEVEL, SETTINGS_FIELDS } from '../config/settingsSpec.js';
+import { readSeriesCsv } from '../data/readSeriesCsv.js';
 import { formatSummary } from './formatSummary.js';
-import { parseFitOptions, MAX_BACKTEST_HORIZON, MAX_BACKTEST_ORIGINS, MAX_HORIZON, MAX_ORDER } from './parseFitOptions.js';
+import { fitOptionPlace, parseFitOptions } from './parseFitOptions.js';
+
+const H = HORIZON_BY_FREQUENCY;
 
 export const FIT_HELP = `Usage: trendbrief fit FILE.csv [options]
 
 Fits the deterministic trend (levels on [1, t] with ARMA errors) and the stochastic trend
 (differences on a drift with ARMA errors), each with its own AICc order search, and
-forecasts both with prediction intervals.
+forecasts both with prediction intervals. Each option sets the config setting of the same
+meaning, with the same range and default.
 
 Options:
   --column NAME             value column (default: the first column after the period)
   --period-column NAME      period column (default: the first column)
   --frequency F             annual, quarterly or monthly (default: inferred from the periods)
-  --transform T             none, log or box-cox:LAMBDA (default: none)
-  --horizon H               forecast steps, 1 to ${MAX_HORIZON} (default: 10 annual, 12 quarterly, 24 monthly)
-  --max-p N, --max-q N      largest AR and MA orders searched, 0 to ${MAX_ORDER} (default: 3 each)
-  --levels L1,L2            interval levels in percent (default: 80,95)
+  --transform T             none, log or box-cox:LAMBDA (default: ${BUILT_IN.transform})
+  --horizon H               forecast steps, 1 to ${SETTINGS_FIELDS.horizon.max} (default: ${H.annual} annual, ${H.quarterly} quarterly, ${H.monthly} monthly)
+  --max-p N, --max-q N      largest AR and MA orders searched, 0 to ${SETTINGS_FIELDS.max_p.max} (default: ${BUILT_IN.max_p} and ${BUILT_IN.max_q})
+  --levels L1,L2            one to ${SETTINGS_FIELDS.levels.maxItems} interval levels in percent, above ${LEVEL.min} and below ${LEVEL.max}
+                            (default: ${BUILT_IN.levels.join(',')})
   --no-coef-uncertainty     intervals from the ARMA process alone, without coefficient uncertainty
   --point median|mean       back-transformed median (default) or bias-adjusted mean
   --backtest                re-run the whole method at past origins and score both models,
                             then apply the recommendation rule
-  --origins K               backtest origins, 1 to ${MAX_BACKTEST_ORIGINS} (default: as many as fit, up to 20)
-  --backtest-horizon B      horizons scored in the backtest, 1 to ${MAX_BACKTEST_HORIZON} (default: 5)
+  --origins K               backtest origins, 1 to ${BACKTEST_FIELDS.origins.max} (default: ${BUILT_IN.backtest.origins}, fewer when the series is short)
+  --backtest-horizon B      horizons scored in the backtest, 1 to ${BACKTEST_FIELDS.horizon.max} (default: ${BUILT_IN.backtest.horizon})
   --refit P                 at each origin: reselect the orders (default), reestimate at the
                             full-sample orders, or keep the full-sample fit (fixed)
-                            (--origins, --backtest-horizon and --refit imply --backtest)
+  --scored-level L          the interval level whose backtest scores the recommendation rule
+                            compares; one of the levels (default: the widest)
+                            (--origins, --backtest-horizon, --refit and --scored-level imply --backtest)
   --allow-missing           treat empty cells, missing-value markers and missing periods as gaps
                             (the filter skips them; first and last values must be present)
   --json                    print the full analysis record as JSON
@@ -36,24 +44,18 @@ Options:
 
 export async function runFit(args: readonly string[], io: { stdout(text: string): void }): Promise<number> {
   const request = parseFitOptions(args);
+  const reading = readingSettings(request.settings);
   const series = readSeriesCsv(request.file, {
     column: request.column,
     periodColumn: request.periodColumn,
     frequency: request.frequency,
-    minObservations: requiredObservations(request.maxP, request.maxQ),
-    transform: request.transform,
-    missing: request.allowMissing ? 'allow' : 'error',
+    minObservations: requiredObservations(reading.max_p, reading.max_q),
+    transform: reading.transform,
+    missing: reading.missing,
   });
-  const options = {
-    horizon: request.horizon,
-    levels: request.levels,
-    maxP: request.maxP,
-    maxQ: request.maxQ,
-    transform: request.transform,
-    coefficientUncertainty: request.coefficientUncertainty,
-    point: request.point,
-  };
-  const record = request.backtest === undefined ? analyseSeries(series, options) : await completeAnalysis(series, { ...options, backtest: request.backtest });
+  const settings = resolveSettings(request.settings, series.frequency, fitOptionPlace);
+  const identity = { id: series.column, title: series.column, file: series.file };
+  const record = await analyseSeries(series, settings, identity, { backtest: request.backtest });
   io.stdout(request.json ? `${JSON.stringify(record, null, 2)}\n` : formatSummary(record));
   return 0;
 }

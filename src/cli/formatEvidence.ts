@@ -1,8 +1,8 @@
 // The evidence block of the terminal summary: unit-root tests, their reading, residual checks.
 import type { AnalysisRecord } from '../analysis/record.js';
-import { addPeriods } from '../data/period.js';
-import { formatPValue } from '../evidence/messages.js';
-import type { AdfResult, KpssResult } from '../evidence/types.js';
+import { addPeriods } from '../base/period.js';
+import type { AdfResult, KpssResult } from '../analysis/record.js';
+import { formatPValue } from '../base/pValueText.js';
 
 export function formatEvidence(record: AnalysisRecord): string[] {
   const { evidence } = record;

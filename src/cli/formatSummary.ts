@@ -2,7 +2,7 @@
 // forecast table. Plain text, fixed-width columns.
 import type { AnalysisRecord, ModelRecord } from '../analysis/record.js';
 import { formatEvidence } from './formatEvidence.js';
-import { formatBacktest } from '../backtest/index.js';
+import { formatBacktest } from './formatBacktest.js';
 
 const MODEL_TITLES = { deterministic: 'Deterministic trend', stochastic: 'Stochastic trend' } as const;
 
@@ -28,12 +28,12 @@ export function formatSummary(record: AnalysisRecord): string {
   return `${lines.join('\n')}\n`;
 }
 
-function modelTable(det: ModelRecord, sto: ModelRecord): string[] {
+function modelTable(det: AnalysisRecord['models']['deterministic'], sto: AnalysisRecord['models']['stochastic']): string[] {
   const rows: [string, string, string][] = [['', MODEL_TITLES.deterministic, MODEL_TITLES.stochastic]];
   rows.push(['order (p, q)', `(${det.p}, ${det.q})`, `(${sto.p}, ${sto.q})`]);
-  for (const name of ['intercept', 'slope', 'drift']) {
-    rows.push([name, coefficient(det, name), coefficient(sto, name)]);
-  }
+  rows.push(['intercept', estimate(det.coefficients.intercept, det.stderr.intercept), '']);
+  rows.push(['slope', estimate(det.coefficients.slope, det.stderr.slope), '']);
+  rows.push(['drift', '', estimate(sto.coefficients.drift, sto.stderr.drift)]);
   const arOrder = Math.max(det.p, sto.p);
   for (let i = 0; i < arOrder; i++) rows.push([`ar${i + 1}`, lagged(det, 'ar', i), lagged(sto, 'ar', i)]);
   const maOrder = Math.max(det.q, sto.q);
@@ -66,19 +66,13 @@ function forecastTable(record: AnalysisRecord): string[] {
   return [`Forecasts (intervals ${scale} coefficient uncertainty; point = ${record.settings.point}):`, ...alignRows(rows)];
 }
 
-function coefficient(model: ModelRecord, name: string): string {
-  const value = model.coefficients[name];
-  if (typeof value !== 'number') return '';
-  const se = model.stderr[name];
-  return `${num(value)} ± ${typeof se === 'number' ? num(se, 3) : 'n/a'}`;
+function estimate(value: number, se: number | null): string {
+  return `${num(value)} ± ${se === null ? 'n/a' : num(se, 3)}`;
 }
 
 function lagged(model: ModelRecord, part: 'ar' | 'ma', index: number): string {
   const values = model.coefficients[part];
-  const errors = model.stderr[part];
-  if (!Array.isArray(values) || index >= values.length) return '';
-  const se = Array.isArray(errors) ? errors[index] : null;
-  return `${num(values[index])} ± ${typeof se === 'number' ? num(se, 3) : 'n/a'}`;
+  return index < values.length ? estimate(values[index], model.stderr[part][index]) : '';
 }
 
 function num(value: number | null, digits = 4): string {

@@ -3,7 +3,8 @@
 import { existsSync, mkdirSync, statSync, unlinkSync, writeFileSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { STARTER_CONFIG, STARTER_SCHEMA, STARTER_SERIES, starterFiles } from '../config/starterFiles.js';
-import { configCommandMessages, InputError } from '../errors.js';
+import { InputError } from '../base/problem.js';
+import { configCommandMessages } from './messages.js';
 import { splitOptions } from './splitOptions.js';
 
 export const INIT_HELP = `Usage: trendbrief init [DIR]

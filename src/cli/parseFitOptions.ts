@@ -1,35 +1,48 @@
-// `trendbrief fit` arguments → validated analysis settings, every problem collected.
-import { cliMessages, InputError, type InputProblem } from '../errors.js';
+// `trendbrief fit` arguments → the settings as a config would write them, every problem
+// collected. Ranges and choices come from the config's settings spec, so an option accepts
+// exactly what the config key does; resolveSettings then fills in the rest, as for a config.
+import type { Frequency } from '../base/period.js';
+import { InputError, type InputLocation, type InputProblem } from '../base/problem.js';
+import type { WrittenSettings } from '../config/resolveSettings.js';
+import { numberFault, type ChoiceSpec, type NumericSpec, type Spec, type ValueOf } from '../config/keySpec.js';
+import { FREQUENCY } from '../config/configSpec.js';
+import { BACKTEST_FIELDS as BACKTEST, BOX_COX_LAMBDA, LEVEL, SETTINGS_FIELDS } from '../config/settingsSpec.js';
+import { cliMessages } from './messages.js';
 import { splitOptions, type OptionSpec } from './splitOptions.js';
-import { FREQUENCIES, type Frequency } from '../data/period.js';
-import type { TransformSpec } from '../data/series.js';
-import { REFIT_POLICIES, type RefitPolicy } from '../backtest/index.js';
-import { BUILT_IN_SETTINGS } from '../config/builtInSettings.js';
-import { MAX_HORIZON, MAX_ORDER } from '../config/settingsSpec.js';
 
 export interface FitRequest {
   file: string;
   column?: string;
   periodColumn?: string;
   frequency?: Frequency;
-  transform: TransformSpec;
-  horizon?: number;
-  maxP: number;
-  maxQ: number;
-  levels: number[];
-  coefficientUncertainty: boolean;
-  point: 'median' | 'mean';
+  /** The settings the options give, in the config's shape; what they leave out is absent. */
+  settings: WrittenSettings;
+  /** Run the backtest and the recommendation rule (--backtest, or one of its options). */
+  backtest: boolean;
   json: boolean;
   help: boolean;
-  /** Missing values and periods become gaps the models handle, instead of errors. */
-  allowMissing: boolean;
-  /** Backtest settings; undefined without --backtest (or one of its options, which imply it). */
-  backtest?: { origins?: number; horizon?: number; refit: RefitPolicy };
 }
 
-export { MAX_HORIZON, MAX_ORDER };
-export const MAX_BACKTEST_ORIGINS = 200;
-export const MAX_BACKTEST_HORIZON = 100;
+/** The option that sets each setting, for messages about the settings fit resolves. */
+export const FIT_OPTION_OF: Readonly<Record<string, string>> = {
+  horizon: '--horizon',
+  transform: '--transform',
+  levels: '--levels',
+  coefficient_uncertainty: '--no-coef-uncertainty',
+  point: '--point',
+  max_p: '--max-p',
+  max_q: '--max-q',
+  missing: '--allow-missing',
+  'backtest.origins': '--origins',
+  'backtest.horizon': '--backtest-horizon',
+  'backtest.refit': '--refit',
+  'recommendation.scored_level': '--scored-level',
+};
+
+/** Where a fit setting came from: its option, or the setting's own name when no option sets it. */
+export function fitOptionPlace(key: string): InputLocation {
+  return { field: FIT_OPTION_OF[key] ?? key };
+}
 
 const FIT_OPTIONS: Readonly<Record<string, OptionSpec>> = {
   column: { type: 'string' },
@@ -48,6 +61,7 @@ const FIT_OPTIONS: Readonly<Record<string, OptionSpec>> = {
   origins: { type: 'string' },
   'backtest-horizon': { type: 'string' },
   refit: { type: 'string' },
+  'scored-level': { type: 'string' },
   help: { type: 'boolean', short: 'h' },
 };
 
@@ -60,65 +74,83 @@ export function parseFitOptions(args: readonly string[]): FitRequest {
   const help = given.get('help') === true;
   if (!help && positionals.length === 0) problems.push(cliMessages.missingFile('fit'));
   if (positionals.length > 1) problems.push(cliMessages.extraArguments(positionals.slice(1)));
-  const integer = (option: string, value: string | undefined, min: number, max: number): number | undefined => {
+  const integer = (option: string, spec: NumericSpec): number | undefined => {
+    const value = text(option);
     if (value === undefined) return undefined;
     const number = /^\d+$/.test(value.trim()) ? Number(value) : Number.NaN;
-    if (!Number.isInteger(number) || number < min || number > max) {
-      problems.push(cliMessages.notAnInteger(option, value, min, max));
-      return undefined;
-    }
-    return number;
+    if (numberFault(spec, number) === undefined) return number;
+    problems.push(cliMessages.notAnInteger(option, value, spec.min, spec.max));
+    return undefined;
   };
-  const choice = <T extends string>(option: string, value: string | undefined, choices: readonly T[]): T | undefined => {
+  const choice = <S extends Spec<ChoiceSpec, string>>(option: string, spec: S): ValueOf<S> | undefined => {
+    const value = text(option);
     if (value === undefined) return undefined;
-    const found = choices.find((c) => c === value);
-    if (found === undefined) problems.push(cliMessages.badChoice(option, value, choices));
-    return found;
+    if (spec.values.includes(value)) return value as ValueOf<S>;
+    problems.push(cliMessages.badChoice(option, value, spec.values));
+    return undefined;
+  };
+  const origins = integer('origins', BACKTEST.origins);
+  const backtestHorizon = integer('backtest-horizon', BACKTEST.horizon);
+  const refit = choice('refit', BACKTEST.refit);
+  const scoredLevel = parseLevel(text('scored-level'), problems);
+  const settings: WrittenSettings = {
+    transform: parseTransform(text('transform'), problems),
+    horizon: integer('horizon', SETTINGS_FIELDS.horizon),
+    max_p: integer('max-p', SETTINGS_FIELDS.max_p),
+    max_q: integer('max-q', SETTINGS_FIELDS.max_q),
+    levels: parseLevels(text('levels'), problems),
+    coefficient_uncertainty: given.get('no-coef-uncertainty') === true ? false : undefined,
+    point: choice('point', SETTINGS_FIELDS.point),
+    missing: given.get('allow-missing') === true ? 'allow' : undefined,
+    backtest: { origins, horizon: backtestHorizon, refit },
+    recommendation: { scored_level: scoredLevel },
   };
   const request: FitRequest = {
     file: positionals[0] ?? '',
     column: text('column'),
     periodColumn: text('period-column'),
-    frequency: choice('frequency', text('frequency'), FREQUENCIES),
-    transform: parseTransform(text('transform'), problems),
-    horizon: integer('horizon', text('horizon'), 1, MAX_HORIZON),
-    maxP: integer('max-p', text('max-p'), 0, MAX_ORDER) ?? BUILT_IN_SETTINGS.max_p,
-    maxQ: integer('max-q', text('max-q'), 0, MAX_ORDER) ?? BUILT_IN_SETTINGS.max_q,
-    levels: parseLevels(text('levels'), problems),
-    coefficientUncertainty: given.get('no-coef-uncertainty') !== true,
-    point: choice('point', text('point'), ['median', 'mean'] as const) ?? 'median',
+    frequency: choice('frequency', FREQUENCY),
+    settings,
+    backtest: given.get('backtest') === true || origins !== undefined || backtestHorizon !== undefined || refit !== undefined || scoredLevel !== undefined,
     json: given.get('json') === true,
     help,
-    allowMissing: given.get('allow-missing') === true,
   };
-  const origins = integer('origins', text('origins'), 1, MAX_BACKTEST_ORIGINS);
-  const backtestHorizon = integer('backtest-horizon', text('backtest-horizon'), 1, MAX_BACKTEST_HORIZON);
-  const refit = choice('refit', text('refit'), REFIT_POLICIES);
-  if (given.get('backtest') === true || origins !== undefined || backtestHorizon !== undefined || refit !== undefined) {
-    request.backtest = { origins, horizon: backtestHorizon, refit: refit ?? 'reselect' };
-  }
   if (problems.length > 0 && !help) throw new InputError(problems);
   return request;
 }
 
-function parseTransform(value: string | undefined, problems: InputProblem[]): TransformSpec {
-  if (value === undefined || value === 'none') return { kind: 'none' };
-  if (value === 'log') return { kind: 'log' };
+/** `none`, `log` or `box-cox:LAMBDA`, LAMBDA within the spec's range. */
+function parseTransform(value: string | undefined, problems: InputProblem[]): WrittenSettings['transform'] {
+  if (value === undefined) return undefined;
+  if (value === 'none' || value === 'log') return value;
   const match = /^box-cox:(-?\d+(\.\d+)?)$/.exec(value);
   if (match !== null) {
     const lambda = Number(match[1]);
-    if (Math.abs(lambda) <= 2) return { kind: 'box-cox', lambda };
+    if (numberFault(BOX_COX_LAMBDA, lambda) === undefined) return { box_cox: lambda };
   }
   problems.push(cliMessages.badTransform(value));
-  return { kind: 'none' };
+  return undefined;
 }
 
-function parseLevels(value: string | undefined, problems: InputProblem[]): number[] {
-  if (value === undefined) return [...BUILT_IN_SETTINGS.levels];
+/** One interval level in percent, as the spec's level items allow. */
+function parseLevel(value: string | undefined, problems: InputProblem[]): number | undefined {
+  if (value === undefined) return undefined;
+  const level = /^\s*\d+(\.\d+)?\s*$/.test(value) ? Number(value) : Number.NaN;
+  if (numberFault(LEVEL, level) === undefined) return level;
+  problems.push(cliMessages.badLevel('scored-level', value));
+  return undefined;
+}
+
+/** Levels separated by commas: as many, as distinct and in the range the spec allows. */
+function parseLevels(value: string | undefined, problems: InputProblem[]): number[] | undefined {
+  if (value === undefined) return undefined;
+  const spec = SETTINGS_FIELDS.levels;
   const levels = value.split(',').map((part) => (/^\s*\d+(\.\d+)?\s*$/.test(part) ? Number(part) : Number.NaN));
-  if (levels.length === 0 || levels.some((level) => !(level >= 50 && level <= 99.9))) {
-    problems.push(cliMessages.badLevels(value));
-    return [...BUILT_IN_SETTINGS.levels];
+  const distinct = [...new Set(levels)];
+  const fits = levels.every((level) => numberFault(LEVEL, level) === undefined);
+  if (!fits || distinct.length !== levels.length || levels.length < spec.minItems || levels.length > spec.maxItems) {
+    problems.push(cliMessages.badLevels(value, spec.maxItems));
+    return undefined;
   }
-  return [...new Set(levels)].sort((a, b) => a - b);
+  return levels;
 }

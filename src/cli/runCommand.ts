@@ -3,14 +3,18 @@
 // worst that happened (2 for bad input, 1 for an internal failure).
 import { availableParallelism } from 'node:os';
 import { join, resolve } from 'node:path';
-import { loadConfig, OUTPUT_FORMATS, type OutputFormat } from '../config/index.js';
-import { cliMessages, formatProblem, InputError, runMessages, type InputProblem } from '../errors.js';
+import { OUTPUT_FORMATS } from '../config/configSpec.js';
+import { loadConfig } from '../config/loadConfig.js';
+import type { OutputFormat } from '../config/runPlan.js';
+import { formatProblem, InputError, type InputProblem } from '../base/problem.js';
+import { cliMessages, configCommandMessages } from './messages.js';
+import { runMessages } from '../run/messages.js';
 import { openPdfPrinter, type PdfPrinter } from '../memo/print/pdfPrinter.js';
 import { runMemo, type MemoRunResult } from '../run/runMemo.js';
 import { openSeriesPool } from '../run/seriesPool.js';
 import { progressReporter } from './progressReporter.js';
-import { shownPath } from '../run/readPlannedSeries.js';
 import { splitOptions } from './splitOptions.js';
+import { shownPath } from '../base/shownPath.js';
 
 export const RUN_HELP = `Usage: trendbrief run CONFIG.yaml... [options]
 
@@ -59,7 +63,7 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
     io.stdout(RUN_HELP);
     return 0;
   }
-  if (positionals.length === 0) problems.push(runMessages.noConfigs());
+  if (positionals.length === 0) problems.push(configCommandMessages.noConfigsToRun());
   const formats = parseFormats(values.get('formats'), problems);
   const out = values.get('out');
   // `--out=` would otherwise resolve to the working folder.

@@ -2,8 +2,9 @@
 // in one pass (a typo in one option must not hide a bad value in another). Node's
 // util.parseArgs stops at the first unknown option and words its own messages, so the
 // split is done here: `--name value`, `--name=value`, `-h`, and `--` ending the options.
-import { closestName } from '../data/closestName.js';
-import { cliMessages, type InputProblem } from '../errors.js';
+import { closestName } from '../base/closestName.js';
+import { type InputProblem } from '../base/problem.js';
+import { cliMessages } from './messages.js';
 
 export interface OptionSpec {
   type: 'string' | 'boolean';

@@ -1,7 +1,8 @@
 // `trendbrief verify MEMO_FOLDER`: checks an issued memo against its inputs. Exit 0 when
 // everything matches, 3 with the differences listed, 2 when an input is missing or changed
 // (or the folder is not a memo folder), with each problem on stderr.
-import { InputError, verifyMessages, verifyReport } from '../errors.js';
+import { InputError } from '../base/problem.js';
+import { verifyMessages, verifyReport } from '../run/messages.js';
 import { TOLERANCE_TEXT } from '../run/compareJson.js';
 import { verifyMemoFolder } from '../run/verifyMemoFolder.js';
 import { splitOptions } from './splitOptions.js';

@@ -1,12 +1,12 @@
 // A valid config → RunPlan: each series' settings merged key by key (the series' own value,
-// else the one under defaults, else the built-in one), each with its source and position, and
-// every path resolved against the config's folder.
+// else the one under defaults) with the position that set each, and every path resolved
+// against the config's folder. Built-in values are applied later, by resolveSettings.
 import { isAbsolute, resolve } from 'node:path';
-import type { TransformSpec } from '../data/series.js';
-import { BUILT_IN_SETTINGS as BUILT_IN } from './builtInSettings.js';
 import { DEFAULT_OUTPUT_FOLDER, OUTPUT_FORMATS, type ConfigDocument, type SeriesEntry, type SettingsEntry } from './configSpec.js';
 import type { Position } from './readYamlTree.js';
-import type { ConfigPlace, OutputPlan, RunPlan, SeriesPlan, SeriesSettings, Setting } from './runPlan.js';
+import type { WrittenSettings } from './resolveSettings.js';
+import type { ConfigPlace, OutputPlan, RunPlan, SeriesPlan } from './runPlan.js';
+import { SETTING_KEYS } from './settingsSpec.js';
 
 export interface PlanSource {
   configFile: string;
@@ -65,10 +65,6 @@ function outputPlan(doc: ConfigDocument, baseDir: string, placeOf: (field: strin
   };
 }
 
-function toTransform(written: 'none' | 'log' | { box_cox: number }): TransformSpec {
-  return typeof written === 'string' ? { kind: written } : { kind: 'box-cox', lambda: written.box_cox };
-}
-
 function seriesPlan(
   entry: SeriesEntry,
   index: number,
@@ -76,49 +72,26 @@ function seriesPlan(
   baseDir: string,
   placeOf: (field: string) => ConfigPlace,
 ): SeriesPlan {
-  const pick = <T>(key: string, own: T | undefined, shared: T | undefined, fallback: T): Setting<T> => {
-    if (own !== undefined) return { key, value: own, source: 'config', at: placeOf(`series[${index}].${key}`) };
-    if (shared !== undefined) return { key, value: shared, source: 'config', at: placeOf(`defaults.${key}`) };
-    return { key, value: fallback, source: 'default' };
+  const settingPlaces = new Map<string, ConfigPlace>();
+  // The series' own value first, then the one under defaults; groups merge key by key.
+  const pick = <T>(key: string, own: T | undefined, shared: T | undefined): T | undefined => {
+    if (own !== undefined) settingPlaces.set(key, placeOf(`series[${index}].${key}`));
+    else if (shared !== undefined) settingPlaces.set(key, placeOf(`defaults.${key}`));
+    return own ?? shared;
   };
-  const transform = pick('transform', entry.transform, defaults.transform, BUILT_IN.transform);
-  const levels = pick<readonly number[]>('levels', entry.levels, defaults.levels, BUILT_IN.levels);
-  const backtest = { own: entry.backtest ?? {}, shared: defaults.backtest ?? {} };
-  const recommendation = { own: entry.recommendation ?? {}, shared: defaults.recommendation ?? {} };
-  const settings: SeriesSettings = {
-    horizon: pick<number | undefined>('horizon', entry.horizon, defaults.horizon, undefined),
-    transform: { ...transform, value: toTransform(transform.value) },
-    levels: { ...levels, value: [...levels.value].sort((a, b) => a - b) },
-    coefficientUncertainty: pick('coefficient_uncertainty', entry.coefficient_uncertainty, defaults.coefficient_uncertainty, BUILT_IN.coefficient_uncertainty),
-    point: pick('point', entry.point, defaults.point, BUILT_IN.point),
-    maxP: pick('max_p', entry.max_p, defaults.max_p, BUILT_IN.max_p),
-    maxQ: pick('max_q', entry.max_q, defaults.max_q, BUILT_IN.max_q),
-    significance: pick('significance', entry.significance, defaults.significance, BUILT_IN.significance),
-    backtest: {
-      origins: pick('backtest.origins', backtest.own.origins, backtest.shared.origins, BUILT_IN.backtest.origins),
-      horizon: pick<number | undefined>('backtest.horizon', backtest.own.horizon, backtest.shared.horizon, undefined),
-      refit: pick('backtest.refit', backtest.own.refit, backtest.shared.refit, BUILT_IN.backtest.refit),
-      window: pick('backtest.window', backtest.own.window, backtest.shared.window, BUILT_IN.backtest.window),
-      minTrain: pick<number | undefined>('backtest.min_train', backtest.own.min_train, backtest.shared.min_train, undefined),
-    },
-    recommendation: {
-      rule: pick('recommendation.rule', recommendation.own.rule, recommendation.shared.rule, BUILT_IN.recommendation.rule),
-      significance: pick(
-        'recommendation.significance',
-        recommendation.own.significance,
-        recommendation.shared.significance,
-        BUILT_IN.recommendation.significance,
-      ),
-      model: pick<'deterministic' | 'stochastic' | undefined>('recommendation.model', recommendation.own.model, recommendation.shared.model, undefined),
-      justification: pick<string | undefined>(
-        'recommendation.justification',
-        recommendation.own.justification,
-        recommendation.shared.justification,
-        undefined,
-      ),
-    },
-    missing: pick('missing', entry.missing, defaults.missing, BUILT_IN.missing),
-  };
+  const merged: Record<string, unknown> = {};
+  for (const key of SETTING_KEYS) {
+    const [group, inner] = key.split('.');
+    const own = (entry as Record<string, unknown>)[group];
+    const shared = (defaults as Record<string, unknown>)[group];
+    if (inner === undefined) {
+      const value = pick(key, own, shared);
+      if (value !== undefined) merged[key] = value;
+      continue;
+    }
+    const value = pick(key, (own as Record<string, unknown> | undefined)?.[inner], (shared as Record<string, unknown> | undefined)?.[inner]);
+    if (value !== undefined) merged[group] = { ...(merged[group] as object | undefined), [inner]: value };
+  }
   return {
     id: entry.id,
     title: entry.title ?? entry.id,
@@ -130,6 +103,8 @@ function seriesPlan(
     column: entry.column,
     frequency: entry.frequency,
     at: placeOf(`series[${index}]`),
-    settings,
+    // The spec validated every value; the merge keeps each under its own key.
+    settings: merged as WrittenSettings,
+    settingPlaces,
   };
 }

@@ -1,11 +1,9 @@
-// The value every overridable setting takes when neither the series nor `defaults` sets it.
-// The spec shows these in the JSON Schema and the plan builder applies them, so each number
-// is written here only. Settings whose default depends on the data (the horizon on the
-// frequency, the backtest's training length on the order limits) have none here: the stage
-// that knows the data chooses them, and the plan records them as undefined.
-
-/** Names of the rules that can pick the recommended model; the first is the default. */
-export const RECOMMENDATION_RULES = ['prefer-stochastic', 'lowest-interval-score'] as const;
+// The value every setting takes when neither the series nor `defaults` sets it, written once:
+// the spec shows these in the JSON Schema and resolveSettings applies them. The defaults that
+// depend on the data or on other settings (the horizon on the frequency, the backtest's
+// shortest training window on the order limits, the scored level on the levels) are rules in
+// resolveSettings.ts, stated in words in the spec.
+import { RECOMMENDATION_RULES } from '../base/settings.js';
 
 export const BUILT_IN_SETTINGS = {
   transform: 'none',
@@ -15,7 +13,15 @@ export const BUILT_IN_SETTINGS = {
   max_p: 3,
   max_q: 3,
   significance: 0.05,
-  backtest: { origins: 20, refit: 'reselect', window: 'expanding' },
+  backtest: { origins: 20, horizon: 5, refit: 'reselect', window: 'expanding' },
   recommendation: { rule: RECOMMENDATION_RULES[0], significance: 0.05 },
   missing: 'error',
 } as const;
+
+/** Forecast steps by frequency when no horizon is set: ten years, three years of quarters, two years of months. */
+export const HORIZON_BY_FREQUENCY = { annual: 10, quarterly: 12, monthly: 24 } as const;
+
+/** The shortest backtest training window when none is set: at least this many observations ... */
+export const MIN_TRAIN_FLOOR = 20;
+/** ... and this many per parameter of the largest candidate (the deterministic trend at max_p, max_q). */
+export const MIN_TRAIN_PER_PARAMETER = 3;

@@ -1,8 +1,8 @@
 // Rules that span several keys, which a JSON Schema cannot state: series ids unique across the
 // list, reviewers listed once, and every sign-off by a listed reviewer. They read the partial
 // document validation leaves, so they still run when other keys are wrong.
-import { closestName } from '../data/closestName.js';
-import { configMessages } from '../errors.js';
+import { closestName } from '../base/closestName.js';
+import { configMessages } from './messages.js';
 import type { ConfigDocument, Loose } from './configSpec.js';
 import type { Validation } from './validateNode.js';
 

@@ -1,4 +1,5 @@
 // The whole config file as one spec: memo details, shared settings, the series, the output.
+import { FREQUENCIES } from '../base/period.js';
 import { choice, list, object, period, text, type ValueOf } from './keySpec.js';
 import { DEFAULTS_SPEC, SETTINGS_FIELDS } from './settingsSpec.js';
 
@@ -45,6 +46,9 @@ const memo = object(
   { required: ['id', 'title'], example: '{id: water-demand-2026, title: Water demand outlook}' },
 );
 
+/** The frequency of a series, also read by the command line's --frequency. */
+export const FREQUENCY = choice('Frequency of the series.', FREQUENCIES, { defaultText: 'read from the period labels' });
+
 const seriesEntry = object(
   'One series to forecast; any key of defaults may be overridden here.',
   {
@@ -54,7 +58,7 @@ const seriesEntry = object(
     file: path('CSV file holding the series, relative to this config file.'),
     period_column: text('Column holding the period labels.', { defaultText: 'the first column' }),
     column: text('Column holding the values.', { defaultText: 'the first column after the period column' }),
-    frequency: choice('Frequency of the series.', ['annual', 'quarterly', 'monthly'], { defaultText: 'read from the period labels' }),
+    frequency: FREQUENCY,
     notes: text('Notes printed with the series.', { form: 'block' }),
     ...SETTINGS_FIELDS,
   },

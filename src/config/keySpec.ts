@@ -3,12 +3,8 @@
 // derived from these nodes, so the two cannot drift apart. The builders carry the TypeScript
 // type of the validated value, so the shape of a checked config is inferred from the spec
 // rather than written a second time.
+import type { TextForm } from '../base/textPatterns.js';
 
-/**
- * Free text on one line, text that may span lines, an id that becomes a folder name, or a
- * calendar date written YYYY-MM-DD.
- */
-export type TextForm = 'line' | 'block' | 'slug' | 'date';
 
 interface Described {
   /** One or two sentences for the JSON Schema description and the contributor guide. */
@@ -29,6 +25,8 @@ export interface NumericSpec extends Described {
   readonly kind: 'whole' | 'number';
   readonly min: number;
   readonly max: number;
+  /** Both bounds excluded: the value lies strictly between min and max. */
+  readonly exclusive: boolean;
 }
 
 export interface BooleanSpec extends Described {
@@ -101,11 +99,20 @@ export function text(doc: string, options: { form?: TextForm; maxLength?: number
 }
 
 export function whole(doc: string, min: number, max: number, options: DefaultOptions<number> = {}): Spec<NumericSpec, number> {
-  return { kind: 'whole', doc, min, max, ...options };
+  return { kind: 'whole', doc, min, max, exclusive: false, ...options };
 }
 
-export function decimal(doc: string, min: number, max: number, options: DefaultOptions<number> = {}): Spec<NumericSpec, number> {
-  return { kind: 'number', doc, min, max, ...options };
+export function decimal(doc: string, min: number, max: number, options: DefaultOptions<number> & { exclusive?: boolean } = {}): Spec<NumericSpec, number> {
+  const { exclusive = false, ...rest } = options;
+  return { kind: 'number', doc, min, max, exclusive, ...rest };
+}
+
+/** Why a number breaks a numeric spec, or undefined when it fits; shared by the config and the command line. */
+export function numberFault(spec: NumericSpec, value: number): 'not-finite' | 'not-whole' | 'out-of-range' | undefined {
+  if (!Number.isFinite(value)) return 'not-finite';
+  if (spec.kind === 'whole' && !Number.isInteger(value)) return 'not-whole';
+  const inside = spec.exclusive ? value > spec.min && value < spec.max : value >= spec.min && value <= spec.max;
+  return inside ? undefined : 'out-of-range';
 }
 
 export function flag(doc: string, options: DefaultOptions<boolean> = {}): Spec<BooleanSpec, boolean> {

@@ -1,7 +1,7 @@
 // A config file from disk: size limit, encoding and file-system errors, then parseConfig.
 import { dirname, resolve } from 'node:path';
-import { readInputFile } from '../data/readInputFile.js';
-import { configMessages } from '../errors.js';
+import { readInputFile } from '../base/readInputFile.js';
+import { configMessages } from './messages.js';
 import { parseConfig } from './parseConfig.js';
 import type { RunPlan } from './runPlan.js';
 

@@ -3,8 +3,9 @@
 //   → checkConfigRules (rules across keys) → buildRunPlan (merge, sources, paths)
 import { createHash } from 'node:crypto';
 import { resolve } from 'node:path';
-import { limitProblems } from '../data/limitProblems.js';
-import { configMessages, InputError, type InputProblem } from '../errors.js';
+import { limitProblems } from '../base/limitProblems.js';
+import { InputError, type InputProblem } from '../base/problem.js';
+import { configMessages } from './messages.js';
 import { buildRunPlan } from './buildRunPlan.js';
 import { checkConfigRules } from './checkConfigRules.js';
 import { CONFIG_SPEC, type ConfigDocument, type Loose } from './configSpec.js';

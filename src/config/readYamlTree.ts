@@ -3,7 +3,8 @@
 // LineCounter; this file turns its AST into our tree and resolves aliases within a fixed budget.
 // Duplicate keys are kept, in order: the validator reports them, as it knows the field path.
 import { isAlias, isMap, isScalar, isSeq, LineCounter, parseDocument, type Document, type Node as YamlAstNode } from 'yaml';
-import { configMessages, type InputProblem } from '../errors.js';
+import { type InputProblem } from '../base/problem.js';
+import { configMessages } from './messages.js';
 import { unclosedQuoteOffset } from './unclosedQuote.js';
 
 export interface Position {

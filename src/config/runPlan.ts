@@ -1,12 +1,9 @@
-// What a checked config asks for, in the terms the later stages use: the memo's details, where
-// the output goes, and per series the effective value of every setting together with who set it,
-// so the memo can print each choice with "set by: config" or "set by: default".
-import type { Frequency } from '../data/period.js';
-import type { TransformSpec } from '../data/series.js';
-import type { OUTPUT_FORMATS, SettingsEntry } from './configSpec.js';
-import type { RECOMMENDATION_RULES } from './builtInSettings.js';
-
-export type SettingSource = 'config' | 'default';
+// What a checked config asks for: the memo's details, where the output goes, and per series
+// its file and the settings the config writes for it, with where each is written, so the memo
+// can print each choice with "set by: config" or "set by: default".
+import type { Frequency } from '../base/period.js';
+import type { OUTPUT_FORMATS } from './configSpec.js';
+import type { WrittenSettings } from './resolveSettings.js';
 
 /** Where in the config a value is written. */
 export interface ConfigPlace {
@@ -16,60 +13,7 @@ export interface ConfigPlace {
   column: number;
 }
 
-export interface Setting<T> {
-  /** The key as written in YAML, e.g. `backtest.min_train`. */
-  key: string;
-  value: T;
-  source: SettingSource;
-  /** Where the config sets the value; absent for a built-in default. */
-  at?: ConfigPlace;
-}
-
-type Backtest = NonNullable<SettingsEntry['backtest']>;
-type Recommendation = NonNullable<SettingsEntry['recommendation']>;
-
-export type BacktestRefit = NonNullable<Backtest['refit']>;
-export type BacktestWindow = NonNullable<Backtest['window']>;
-export type RecommendationRule = (typeof RECOMMENDATION_RULES)[number];
-export type TrendModelChoice = NonNullable<Recommendation['model']>;
 export type OutputFormat = (typeof OUTPUT_FORMATS)[number];
-
-/** Every overridable setting of one series; undefined values are left to the stage that knows the data. */
-export interface SeriesSettings {
-  /** Undefined: the frequency's default horizon (10 annual, 12 quarterly, 24 monthly). */
-  horizon: Setting<number | undefined>;
-  transform: Setting<TransformSpec>;
-  /** Ascending. */
-  levels: Setting<number[]>;
-  coefficientUncertainty: Setting<boolean>;
-  point: Setting<'median' | 'mean'>;
-  maxP: Setting<number>;
-  maxQ: Setting<number>;
-  significance: Setting<number>;
-  backtest: {
-    origins: Setting<number>;
-    /** Undefined: the backtest stage's default, 5. */
-    horizon: Setting<number | undefined>;
-    refit: Setting<BacktestRefit>;
-    window: Setting<BacktestWindow>;
-    /** Undefined: the fewest observations the order limits need. */
-    minTrain: Setting<number | undefined>;
-  };
-  recommendation: {
-    rule: Setting<RecommendationRule>;
-    significance: Setting<number>;
-    /** Undefined: the rule decides. */
-    model: Setting<TrendModelChoice | undefined>;
-    justification: Setting<string | undefined>;
-  };
-  missing: Setting<'error' | 'allow'>;
-}
-
-/** A series' settings as one flat list in config order, for the memo's assumptions register. */
-export function listSettings(settings: SeriesSettings): Setting<unknown>[] {
-  const { backtest, recommendation, missing, ...modelling } = settings;
-  return [...Object.values(modelling), ...Object.values(backtest), ...Object.values(recommendation), missing];
-}
 
 export interface SeriesPlan {
   id: string;
@@ -86,7 +30,10 @@ export interface SeriesPlan {
   frequency?: Frequency;
   /** Where the series entry starts. */
   at: ConfigPlace;
-  settings: SeriesSettings;
+  /** The series' own settings over those under `defaults`, as written; what neither sets is absent (resolveSettings fills it). */
+  settings: WrittenSettings;
+  /** Where the config writes each setting, by key (`horizon`, `backtest.origins`); absent for a key it leaves out. */
+  settingPlaces: ReadonlyMap<string, ConfigPlace>;
 }
 
 export interface Reviewer {

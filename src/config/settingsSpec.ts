@@ -1,54 +1,64 @@
 // The settings a config may give once under `defaults` and override per series.
-import { BUILT_IN_SETTINGS as BUILT_IN, RECOMMENDATION_RULES } from './builtInSettings.js';
+import { MISSING_POLICIES, POINT_FORECASTS, RECOMMENDATION_RULES, REFIT_POLICIES, TREND_MODELS, WINDOW_KINDS } from '../base/settings.js';
+import { BUILT_IN_SETTINGS as BUILT_IN, HORIZON_BY_FREQUENCY, MIN_TRAIN_FLOOR, MIN_TRAIN_PER_PARAMETER } from './builtInSettings.js';
 import { choice, decimal, flag, list, object, shapes, text, whole } from './keySpec.js';
 
-/** Limits shared with the `fit` command's options. */
-export const MAX_HORIZON = 1000;
-export const MAX_ORDER = 8;
+const MAX_ORDER = 8;
+/** Interval levels a memo shows at most: each is shaded in the charts and has its columns in the tables. */
+const MAX_LEVELS = 4;
 
 const significance = (doc: string, fallback: number) => decimal(doc, 0.01, 0.1, { default: fallback });
+
+/** The Box-Cox λ, also read by the command line's --transform box-cox:LAMBDA. */
+export const BOX_COX_LAMBDA = decimal('The Box-Cox lambda.', -2, 2);
+
+/** One interval level, also read by the command line's --levels and --scored-level. */
+export const LEVEL = decimal('An interval level in percent.', 0, 100, { exclusive: true });
 
 const transform = shapes(
   'Transform applied to the values before both models are fitted; forecasts are transformed back.',
   choice('No transform, or the natural logarithm.', ['none', 'log']),
   object(
     'Box-Cox transform with the given lambda (0 is the logarithm).',
-    { box_cox: decimal('The Box-Cox lambda.', -2, 2) },
+    { box_cox: BOX_COX_LAMBDA },
     { required: ['box_cox'], example: '{box_cox: 0.5}' },
   ),
   { description: 'none, log, or a mapping such as {box_cox: 0.5}', default: BUILT_IN.transform },
 );
 
-const backtest = object(
-  'Rolling-origin evaluation of both models.',
-  {
-    origins: whole('Number of forecast origins, the latest ones in the series; fewer when the series is too short for them.', 1, 200, { default: BUILT_IN.backtest.origins }),
-    horizon: whole('Steps forecast from each origin.', 1, 100, { defaultText: '5' }),
-    refit: choice(
-      'At each origin: search the orders again (reselect), re-estimate the orders chosen on the full series (reestimate), or keep the full-series fit (fixed).',
-      ['reselect', 'reestimate', 'fixed'],
-      { default: BUILT_IN.backtest.refit },
-    ),
-    window: choice('Training data from the start of the series (expanding) or of constant length (sliding).', ['expanding', 'sliding'], {
-      default: BUILT_IN.backtest.window,
-    }),
-    min_train: whole('Fewest observations in a training window.', 3, 10000, {
-      defaultText: 'the fewest observations the order limits need',
-    }),
-  },
-  { example: '{origins: 8, horizon: 4}' },
-);
+/** The keys of `backtest`, each spec node kept by name for the command line's options. */
+export const BACKTEST_FIELDS = {
+  origins: whole('Number of forecast origins, the latest ones in the series; fewer when the series is too short for them.', 1, 200, { default: BUILT_IN.backtest.origins }),
+  horizon: whole('Steps forecast from each origin.', 1, 100, { default: BUILT_IN.backtest.horizon }),
+  refit: choice(
+    'At each origin: search the orders again (reselect), re-estimate the orders chosen on the full series (reestimate), or keep the full-series fit (fixed).',
+    REFIT_POLICIES,
+    { default: BUILT_IN.backtest.refit },
+  ),
+  window: choice('Training data from the start of the series (expanding) or of constant length (sliding).', WINDOW_KINDS, {
+    default: BUILT_IN.backtest.window,
+  }),
+  min_train: whole('Fewest observations in a training window.', 3, 10000, {
+    defaultText: `max(${MIN_TRAIN_FLOOR}, ${MIN_TRAIN_PER_PARAMETER} × (max_p + max_q + 3)): ${MIN_TRAIN_PER_PARAMETER} observations per parameter of the largest candidate, the deterministic trend at the order limits`,
+  }),
+};
+
+const backtest = object('Rolling-origin evaluation of both models.', BACKTEST_FIELDS, { example: '{origins: 8, horizon: 4}' });
 
 const recommendation = object(
   'How the memo picks the model it recommends.',
   {
     rule: choice(
-      "The rule that picks the model. 'prefer-stochastic': the stochastic trend unless the deterministic one has better backtest interval scores at the longer horizons, a significant comparison test, and no unit-root evidence against it. 'lowest-interval-score': the model with the lower average 95% interval score at the longer horizons.",
+      "The rule that picks the model. 'prefer-stochastic': the stochastic trend unless the deterministic one has better backtest interval scores at the longer horizons, a significant comparison test, and no unit-root evidence against it. 'lowest-interval-score': the model with the lower average interval score at the longer horizons. Both score the intervals at scored_level.",
       RECOMMENDATION_RULES,
       { default: BUILT_IN.recommendation.rule },
     ),
     significance: significance("Significance level of the rule's comparisons.", BUILT_IN.recommendation.significance),
-    model: choice('Fixes the recommended model instead of applying the rule; needs a justification.', ['deterministic', 'stochastic'], {
+    scored_level: decimal('The interval level, in percent, whose backtest interval scores the rule compares; one of levels.', 0, 100, {
+      exclusive: true,
+      defaultText: 'the widest of levels',
+    }),
+    model: choice('Fixes the recommended model instead of applying the rule; needs a justification.', TREND_MODELS, {
       defaultText: 'chosen by the rule',
     }),
     justification: text('Why the model is fixed; printed in the memo.', { form: 'block' }),
@@ -58,11 +68,13 @@ const recommendation = object(
 
 /** Keys shared by `defaults` and every series entry. */
 export const SETTINGS_FIELDS = {
-  horizon: whole('Forecast steps.', 1, MAX_HORIZON, { defaultText: '10 for annual, 12 for quarterly, 24 for monthly series' }),
+  horizon: whole('Forecast steps.', 1, 1000, {
+    defaultText: `${HORIZON_BY_FREQUENCY.annual} for annual, ${HORIZON_BY_FREQUENCY.quarterly} for quarterly, ${HORIZON_BY_FREQUENCY.monthly} for monthly series`,
+  }),
   transform,
-  levels: list('Prediction interval levels in percent.', decimal('An interval level in percent.', 50, 99.9), {
+  levels: list('Prediction interval levels in percent.', LEVEL, {
     minItems: 1,
-    maxItems: 6,
+    maxItems: MAX_LEVELS,
     unique: true,
     example: '[80, 95]',
     default: BUILT_IN.levels,
@@ -70,15 +82,23 @@ export const SETTINGS_FIELDS = {
   coefficient_uncertainty: flag('Widen the intervals by the uncertainty of the estimated trend coefficients.', {
     default: BUILT_IN.coefficient_uncertainty,
   }),
-  point: choice('Point forecast: the back-transformed median, or the bias-adjusted mean.', ['median', 'mean'], { default: BUILT_IN.point }),
+  point: choice('Point forecast: the back-transformed median, or the bias-adjusted mean.', POINT_FORECASTS, { default: BUILT_IN.point }),
   max_p: whole('Largest autoregressive order searched.', 0, MAX_ORDER, { default: BUILT_IN.max_p }),
   max_q: whole('Largest moving-average order searched.', 0, MAX_ORDER, { default: BUILT_IN.max_q }),
   significance: significance('Significance level of the unit-root and residual tests.', BUILT_IN.significance),
   backtest,
   recommendation,
-  missing: choice('Whether missing values in a series file are an error or are allowed.', ['error', 'allow'], { default: BUILT_IN.missing }),
+  missing: choice('Whether missing values in a series file are an error or are allowed.', MISSING_POLICIES, { default: BUILT_IN.missing }),
 };
 
 export const DEFAULTS_SPEC = object('Settings for every series; a series may override any of them.', SETTINGS_FIELDS, {
   example: '{horizon: 12, levels: [80, 95]}',
 });
+
+/**
+ * Every setting's key in spec order, groups flattened (`backtest.origins`): the order of the
+ * memo's assumptions register. `transform` is one setting, whichever shape it is written in.
+ */
+export const SETTING_KEYS: readonly string[] = Object.entries(SETTINGS_FIELDS).flatMap(([key, spec]) =>
+  spec.kind === 'object' ? Object.keys(spec.fields).map((inner) => `${key}.${inner}`) : [key],
+);

@@ -3,7 +3,7 @@
 // the authority, as it also applies the rules that span several keys (checkConfigRules.ts).
 import { CONFIG_SPEC } from './configSpec.js';
 import type { KeySpec } from './keySpec.js';
-import { PERIOD_PATTERN, PERIOD_YEAR_RANGE, textPattern } from './textPatterns.js';
+import { PERIOD_PATTERN, PERIOD_YEAR_RANGE, textPattern } from '../base/textPatterns.js';
 
 export type JsonSchema = { [keyword: string]: unknown };
 
@@ -20,7 +20,9 @@ function shape(spec: KeySpec): JsonSchema {
       return { type: 'string', minLength: 1, maxLength: spec.maxLength, pattern: textPattern(spec.form) };
     case 'whole':
     case 'number':
-      return { type: spec.kind === 'whole' ? 'integer' : 'number', minimum: spec.min, maximum: spec.max };
+      return spec.exclusive
+        ? { type: 'number', exclusiveMinimum: spec.min, exclusiveMaximum: spec.max }
+        : { type: spec.kind === 'whole' ? 'integer' : 'number', minimum: spec.min, maximum: spec.max };
     case 'boolean':
       return { type: 'boolean' };
     case 'choice':
@@ -64,7 +66,7 @@ export function configSchemaText(): string {
     title: 'trendbrief config',
     ...toJsonSchema(CONFIG_SPEC),
     $comment:
-      'Generated from src/config/configSpec.ts by npm run schema. trendbrief check also requires unique series ids, reviewers listed once, sign-offs by listed reviewers and dates that exist in the calendar.',
+      'Generated from src/config/configSpec.ts by npm run schema. trendbrief check also requires unique series ids, reviewers listed once, sign-offs by listed reviewers, dates that exist in the calendar and a recommendation.scored_level among the levels.',
   };
   return `${JSON.stringify(schema, null, 2)}\n`;
 }

@@ -2,11 +2,12 @@
 // first: a value that fails is left out of the result and its siblings are still checked.
 // Everything checked here is also stated in the JSON Schema derived from the same spec; the
 // rules that span several keys live in checkConfigRules.ts.
-import { closestName } from '../data/closestName.js';
-import { configMessages, type ExpectedValue, type FoundValue, type InputLocation, type InputProblem } from '../errors.js';
-import type { ChoiceSpec, KeySpec, ListSpec, NumericSpec, ObjectSpec, ShapesSpec, TextSpec } from './keySpec.js';
+import { closestName } from '../base/closestName.js';
+import { type InputLocation, type InputProblem } from '../base/problem.js';
+import { configMessages, type ExpectedValue, type FoundValue } from './messages.js';
+import { numberFault, type ChoiceSpec, type KeySpec, type ListSpec, type NumericSpec, type ObjectSpec, type ShapesSpec, type TextSpec } from './keySpec.js';
 import type { Position, YamlNode } from './readYamlTree.js';
-import { firstRefusedCharacter, PERIOD_PATTERN, PERIOD_YEAR_RANGE, textPattern } from './textPatterns.js';
+import { firstRefusedCharacter, PERIOD_PATTERN, PERIOD_YEAR_RANGE, textPattern } from '../base/textPatterns.js';
 
 export interface Validation {
   file: string;
@@ -52,8 +53,9 @@ function expectedOf(spec: KeySpec): ExpectedValue {
     case 'text':
       return { kind: 'text' };
     case 'whole':
+      return { kind: 'whole', min: spec.min, max: spec.max };
     case 'number':
-      return { kind: spec.kind, min: spec.min, max: spec.max };
+      return { kind: 'number', min: spec.min, max: spec.max, exclusive: spec.exclusive };
     case 'boolean':
     case 'period':
       return { kind: spec.kind };
@@ -116,14 +118,20 @@ function validateText(spec: TextSpec, node: YamlNode, field: string, v: Validati
 }
 
 function validateNumber(spec: NumericSpec, node: YamlNode, field: string, v: Validation): Checked {
-  const expected = { kind: spec.kind, min: spec.min, max: spec.max };
+  const expected = expectedOf(spec) as Extract<ExpectedValue, { min: number }>;
   if (node.kind !== 'scalar' || typeof node.value !== 'number') return wrongType(v, node, field, expected);
   const value = node.value;
   const at = place(v, node.at, field);
-  if (!Number.isFinite(value)) return reject(v, configMessages.notFinite(at, value, expected));
-  if (spec.kind === 'whole' && !Number.isInteger(value)) return reject(v, configMessages.notWhole(at, value, expected));
-  if (value < spec.min || value > spec.max) return reject(v, configMessages.outOfRange(at, value, expected));
-  return value;
+  switch (numberFault(spec, value)) {
+    case 'not-finite':
+      return reject(v, configMessages.notFinite(at, value, expected));
+    case 'not-whole':
+      return reject(v, configMessages.notWhole(at, value, expected));
+    case 'out-of-range':
+      return reject(v, configMessages.outOfRange(at, value, expected));
+    case undefined:
+      return value;
+  }
 }
 
 function validateChoice(spec: ChoiceSpec, node: YamlNode, field: string, v: Validation): Checked {

@@ -1,7 +1,8 @@
 // Checks that the period labels form one unbroken, ordered run of a single frequency.
 
-import { dataMessages, type InputLocation, type InputProblem } from '../errors.js';
-import { formatPeriod, periodFromIndex, periodIndex, type Frequency, type Period } from './period.js';
+import { type InputLocation, type InputProblem } from '../base/problem.js';
+import { dataMessages } from './messages.js';
+import { formatPeriod, periodFromIndex, periodIndex, type Frequency, type Period } from '../base/period.js';
 
 export interface DatedLine {
   line: number;

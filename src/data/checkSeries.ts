@@ -1,11 +1,13 @@
 // Checks on the values of a series that concern its later use rather than the file's format.
 
-import { dataMessages, type InputProblem } from '../errors.js';
-import type { TransformSpec } from './series.js';
+import { type InputProblem } from '../base/problem.js';
+import { dataMessages } from './messages.js';
+import type { Transform } from '../base/settings.js';
+import { describeTransform, transformValue } from '../base/transform.js';
 
 export interface SeriesRules {
   minObservations?: number;
-  transform?: TransformSpec;
+  transform?: Transform;
 }
 
 export interface SeriesValues {
@@ -14,13 +16,6 @@ export interface SeriesValues {
   values: ArrayLike<number>;
   /** File line of each value, when the values came from a file. */
   lines?: readonly number[];
-}
-
-function transformName(transform: TransformSpec): string {
-  if (transform.kind === 'box-cox') {
-    return transform.lambda === undefined ? 'Box-Cox' : `Box-Cox (lambda ${transform.lambda})`;
-  }
-  return transform.kind;
 }
 
 function isConstant(values: ArrayLike<number>): boolean {
@@ -37,21 +32,14 @@ function isConstant(values: ArrayLike<number>): boolean {
  */
 export const MODEL_SCALE = { maxMagnitude: 1e100, minSpread: 1e-100 } as const;
 
-/** The value as the models see it: Box & Cox (1964), with lambda 0 the logarithm. */
-function onModelScale(value: number, transform: TransformSpec | undefined): number {
-  if (transform === undefined || transform.kind === 'none') return value;
-  const lambda = transform.kind === 'log' ? 0 : (transform.lambda ?? 0);
-  return lambda === 0 ? Math.log(value) : (Math.pow(value, lambda) - 1) / lambda;
-}
-
-function scaleProblems(series: SeriesValues, transform: TransformSpec | undefined): InputProblem[] {
+function scaleProblems(series: SeriesValues, transform: Transform | undefined): InputProblem[] {
   const { file, column, values } = series;
-  const scale = transform === undefined || transform.kind === 'none' ? undefined : transformName(transform);
+  const scale = transform === undefined || transform.kind === 'none' ? undefined : describeTransform(transform);
   const problems: InputProblem[] = [];
   let lowest = Infinity;
   let highest = -Infinity;
   for (let i = 0; i < values.length; i++) {
-    const y = onModelScale(values[i], transform);
+    const y = transform === undefined ? values[i] : transformValue(transform, values[i]);
     if (Number.isNaN(y)) continue;
     if (!(Math.abs(y) <= MODEL_SCALE.maxMagnitude)) {
       problems.push(dataMessages.tooLargeForModels({ file, line: series.lines?.[i], field: column }, values[i], y, MODEL_SCALE.maxMagnitude, scale));
@@ -84,7 +72,7 @@ export function checkSeries(series: SeriesValues, rules: SeriesRules = {}): Inpu
   const transform = rules.transform;
   let inDomain = true;
   if (transform !== undefined && transform.kind !== 'none') {
-    const name = transformName(transform);
+    const name = describeTransform(transform);
     for (let i = 0; i < n; i++) {
       if (values[i] > 0) continue;
       inDomain = false;

@@ -3,15 +3,17 @@
 // column) stop the pass early.
 
 import { createHash } from 'node:crypto';
-import { dataMessages, InputError, type InputLocation, type InputProblem } from '../errors.js';
+import { InputError, type InputLocation, type InputProblem } from '../base/problem.js';
+import { dataMessages } from './messages.js';
 import { checkPeriods, type DatedLine } from './checkPeriods.js';
 import { checkSeries } from './checkSeries.js';
-import { limitProblems } from './limitProblems.js';
-import { formatPeriod, parsePeriod, periodFromIndex, periodIndex, type Frequency } from './period.js';
+import { limitProblems } from '../base/limitProblems.js';
+import { formatPeriod, parsePeriod, periodFromIndex, periodIndex, type Frequency } from '../base/period.js';
 import { parseValue } from './parseValue.js';
 import { readCsvTable, type CsvRow } from './readCsvTable.js';
 import { selectColumns, type ColumnChoice } from './selectColumns.js';
-import type { Series, SeriesOptions } from './series.js';
+import type { Series } from '../base/series.js';
+import type { MissingPolicy, Transform } from '../base/settings.js';
 
 interface Observation extends DatedLine {
   value: number | undefined;
@@ -51,7 +53,26 @@ function readRow(row: CsvRow, width: number, choice: ColumnChoice, file: string,
  * The work of `readSeriesCsv` on text already read; `file` names the source in messages and in
  * the result, and `sha256` is taken over the text encoded as UTF-8.
  */
-export function parseSeriesCsv(text: string, file: string, options: SeriesOptions = {}): Series {
+/** What the caller wants from the file and what the later use of the series requires. */
+export interface SeriesOptions {
+  /** Value column; default: the first column that is not the period column. */
+  column?: string;
+  /** Period column; default: the first column. */
+  periodColumn?: string;
+  /** Expected frequency; default: inferred from the first period label. */
+  frequency?: Frequency;
+  /** Fewest observations the caller's use of the series needs. */
+  minObservations?: number;
+  /** The transform the models will apply: the values must allow it. */
+  transform?: Transform;
+  /**
+   * 'allow': empty cells, missing-value markers and missing periods become NaN observations
+   * (the first and last must still be present); 'error': each is a problem.
+   */
+  missing: MissingPolicy;
+}
+
+export function parseSeriesCsv(text: string, file: string, options: SeriesOptions): Series {
   const { header, rows } = readCsvTable(text, file);
   const choice = selectColumns(header, file, options);
   if (rows.length === 0) throw new InputError(dataMessages.noData({ file, line: header.line }));

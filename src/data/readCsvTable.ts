@@ -1,7 +1,8 @@
 // CSV text to a header and rows that remember their line in the file.
 
 import { CsvError, parse } from 'csv-parse/sync';
-import { dataMessages, InputError } from '../errors.js';
+import { InputError } from '../base/problem.js';
+import { dataMessages } from './messages.js';
 
 export interface CsvRow {
   /** 1-based line in the file where the row starts; the header is line 1 unless blank lines precede it. */

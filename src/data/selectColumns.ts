@@ -1,10 +1,11 @@
 // Finds the period column and the value column in the header.
 
-import { dataMessages, InputError, type InputLocation, type InputProblem } from '../errors.js';
+import { InputError, type InputLocation, type InputProblem } from '../base/problem.js';
+import { dataMessages } from './messages.js';
 import type { CsvRow } from './readCsvTable.js';
-import { firstRefusedCharacter } from '../config/textPatterns.js';
-import { closestName } from './closestName.js';
-import { parsePeriod } from './period.js';
+import { firstRefusedCharacter } from '../base/textPatterns.js';
+import { closestName } from '../base/closestName.js';
+import { parsePeriod } from '../base/period.js';
 import { parseValue } from './parseValue.js';
 
 export interface ColumnChoice {

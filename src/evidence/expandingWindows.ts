@@ -4,7 +4,8 @@
 // coefficient that wanders beyond its standard errors as data accrue is a sign of an
 // unstable trend (the recursive-estimates idea of Brown, Durbin & Evans 1975, §2.5).
 import { fitRegressionArma, type RegressionArmaFit } from '../models/fitRegressionArma.js';
-import { trendDesign, type TrendModelKind } from '../models/trendModels.js';
+import { trendDesign } from '../models/trendModels.js';
+import { type TrendModelKind } from '../base/settings.js';
 
 /** Most windows reported, the full sample included. */
 export const MAX_WINDOWS = 40;

@@ -1,7 +1,7 @@
 // Jarque & Bera (1987) normality test: JB = n/6 · (S² + (K − 3)²/4) from the sample skewness S
 // and kurtosis K (moments about the mean with divisor n), chi-square with 2 degrees of freedom.
 import { chiSquareCdf } from '../linalg/distributions.js';
-import { demean } from './autocovariances.js';
+import { demean } from '../linalg/autocovariances.js';
 import { finiteSeries } from './finiteSeries.js';
 import type { JarqueBeraResult } from './types.js';
 

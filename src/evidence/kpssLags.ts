@@ -1,7 +1,7 @@
 // Data-dependent lag truncation for the Bartlett-kernel long-run variance of the KPSS test:
 // Hobijn, Franses & Ooms (2004), §3, applying the Newey & West (1994) plug-in rule for the
 // Bartlett kernel, with its pilot truncation n^{2/9} and constant 1.1447.
-import { autocovariances } from './autocovariances.js';
+import { autocovariances } from '../linalg/autocovariances.js';
 
 /**
  * Lag truncation floor(γ̂ n^{1/3}) with γ̂ = 1.1447 (ŝ⁽¹⁾/ŝ⁽⁰⁾)^{2/3}, where

@@ -3,7 +3,7 @@
 // is η = n⁻² Σ S_t² / s²(l), with S_t the partial sums of the regression residuals and s²(l)
 // the Bartlett-weighted long-run variance of §2, w(j, l) = 1 − j/(l + 1).
 import { ols } from '../linalg/ols.js';
-import { autocovariances, demean } from './autocovariances.js';
+import { autocovariances, demean } from '../linalg/autocovariances.js';
 import { finiteSeries } from './finiteSeries.js';
 import { hobijnLags } from './kpssLags.js';
 import { kpssCritical, kpssPValue } from './kpssTable.js';

@@ -1,21 +1,8 @@
 // All wording this stage shows to readers of a memo, kept in one place so it can be reviewed
 // and reworded without touching the statistics. Written for a client reviewer: no test jargon
 // beyond naming the p-values.
+import { formatPValue, type StatedPValue } from '../base/pValueText.js';
 import type { SupWaldPBound, TrendVerdictKind } from './types.js';
-
-/** A test's p-value as the memo states it, honouring the edges of a lookup table. */
-export interface StatedPValue {
-  p_value: number;
-  p_bound?: 'below' | 'above';
-}
-
-/** "p = 0.042", "p below 0.01", "p above 0.10". */
-export function formatPValue({ p_value, p_bound }: StatedPValue): string {
-  if (p_bound === 'below') return `p below ${p_value.toFixed(2)}`;
-  if (p_bound === 'above') return `p above ${p_value.toFixed(2)}`;
-  if (p_value < 0.001) return 'p below 0.001';
-  return `p = ${p_value.toFixed(3)}`;
-}
 
 /** A short plain-language explanation of a trend verdict, with both p-values and the level used. */
 export function trendVerdictSummary(

@@ -1,7 +1,7 @@
 // Sample autocorrelations of residuals, r_k = c_k / c_0 with the divisor-n autocovariances
 // of the demeaned series, and the ±1.96/√n band inside which about 95% of them fall when the
 // residuals are white noise (Bartlett 1946; Box & Jenkins, common practice).
-import { autocovariances, demean } from './autocovariances.js';
+import { autocovariances, demean } from '../linalg/autocovariances.js';
 import { defaultAcfLags } from './defaultAcfLags.js';
 import { finiteSeries } from './finiteSeries.js';
 import type { AcfResult } from './types.js';

@@ -1,6 +1,6 @@
 // Plain-language wording of the residual checks, for a reviewer rather than a statistician.
-import { formatPValue } from './messages.js';
 import type { JarqueBeraResult, LjungBoxResult } from './types.js';
+import { formatPValue } from '../base/pValueText.js';
 
 export const residualFindingText = {
   ljungBox(result: LjungBoxResult | null, significance: number): string {

@@ -4,13 +4,14 @@
 //   deterministic: w on [1, t, D_τ, D_τ·(t − τ)], D_τ = 1{t > τ}: a shift in level and slope;
 //   stochastic:    Δw on [1, D_τ]: a shift in drift.
 import type { RegressionArmaFit } from '../models/fitRegressionArma.js';
-import type { TrendDesign, TrendModelKind } from '../models/trendModels.js';
+import type { TrendDesign } from '../models/trendModels.js';
 import { ANDREWS_SOURCE, andrewsCritical } from './andrewsCritical.js';
 import { breakDates, TRIMMING_PERCENT } from './breakDates.js';
 import { breakTestSummary } from './messages.js';
 import { TREND_BREAK_SOURCE, trendBreakCritical } from './trendBreakCritical.js';
 import type { BreakTestResult, SupWaldCritical, SupWaldPBound, SupWaldRejects } from './types.js';
 import { whitenedBreakScan, type BreakScan } from './whitenedBreakScan.js';
+import { type TrendModelKind } from '../base/settings.js';
 
 /**
  * The Wald statistic at every candidate date for the model `kind`, given its design and its

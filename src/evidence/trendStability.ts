@@ -2,11 +2,12 @@
 //   w ──fit at the given orders──▶ full-sample fits ─┬─expandingEstimates─▶ windows
 //                                                     └─trendBreakTest─────▶ break_test
 import { fitRegressionArma, type RegressionArmaFit } from '../models/fitRegressionArma.js';
-import { minimumObservations, trendDesign, type TrendModelKind } from '../models/trendModels.js';
+import { minimumObservations, trendDesign } from '../models/trendModels.js';
 import { expandingEstimates, expandingWindowSchedule } from './expandingWindows.js';
 import { finiteSeries } from './finiteSeries.js';
 import { trendBreakTest } from './trendBreakTest.js';
 import type { BreakTestResult, StabilityRecord } from './types.js';
+import { type TrendModelKind } from '../base/settings.js';
 
 export interface ArmaOrder {
   p: number;

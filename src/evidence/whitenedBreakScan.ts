@@ -7,7 +7,8 @@
 // Andrews (1993) takes the supremum of this sequence over a trimmed range of dates.
 import { olsFit } from '../models/fitRegressionArma.js';
 import { stateDimension } from '../statespace/armaStateSpace.js';
-import { createWorkspace, residualSumOfSquares, runFilter, setArma, type FilterWorkspace } from '../statespace/kalmanFilter.js';
+import { createWorkspace, residualSumOfSquares, runFilter, setArma } from '../statespace/kalmanFilter.js';
+import { type FilterWorkspace } from '../statespace/filterWorkspace.js';
 
 export interface BreakScanSpec {
   /** The response, with no missing values. */

@@ -1,6 +1,6 @@
 // Titles, panel names and text descriptions of the charts. Descriptions say in words what the
 // chart shows, with its key numbers, for readers who cannot see it.
-import type { ModelKind } from './recordParts.js';
+import type { TrendModelKind } from '../base/settings.js';
 import { MODEL_NAME } from './wording.js';
 
 export const chartWording = {
@@ -13,8 +13,8 @@ export const chartWording = {
   forecast: {
     title: (series: string, end: string) => `${series}: forecasts to ${end}`,
     subtitle: ['Solid line: observed. Dashed line: point forecast.', 'Shading: 80% (darker) and 95% prediction intervals.'],
-    panel: (model: ModelKind) => MODEL_NAME[model],
-    description: (a: { series: string; recent: number; end: string; models: { model: ModelKind; point: string; low: string; high: string }[] }) =>
+    panel: (model: TrendModelKind) => MODEL_NAME[model],
+    description: (a: { series: string; recent: number; end: string; models: { model: TrendModelKind; point: string; low: string; high: string }[] }) =>
       `Two panels on one vertical scale, one per model. Each shows the last ${a.recent} observations of ${a.series}, then the model's point forecast to ${a.end} with its 80% and 95% prediction intervals. ` +
       a.models.map((m) => `At ${a.end} the ${MODEL_NAME[m.model].toLowerCase()} model gives ${m.point} (95% interval ${m.low} to ${m.high}).`).join(' '),
   },
@@ -37,8 +37,8 @@ export const chartWording = {
   residualAcf: {
     title: (series: string) => `${series}: autocorrelation of one-step forecast errors`,
     subtitle: 'Dashed lines: \u00b11.96/\u221an. Bars beyond them suggest a pattern the model has missed.',
-    panel: (model: ModelKind) => MODEL_NAME[model],
-    description: (a: { lags: number; outside: { model: ModelKind; lags: number[] }[] }) =>
+    panel: (model: TrendModelKind) => MODEL_NAME[model],
+    description: (a: { lags: number; outside: { model: TrendModelKind; lags: number[] }[] }) =>
       `Two panels of error autocorrelations at lags 1 to ${a.lags} with the \u00b11.96/\u221an bounds. ` +
       a.outside
         .map((o) => `${MODEL_NAME[o.model]}: ${o.lags.length === 0 ? 'every lag inside the bounds' : `outside at lag${o.lags.length === 1 ? '' : 's'} ${o.lags.join(', ')}`}.`)
@@ -47,7 +47,7 @@ export const chartWording = {
   stability: {
     title: (series: string) => `${series}: trend estimated on growing stretches of history`,
     subtitle: ['Line: estimate from the first observation to each date; shading: \u00b12 standard errors.', 'Dashed line: the estimate from the full history.'],
-    panel: { deterministic: 'Slope of the trend line, per period', stochastic: 'Drift, average change per period' } as Record<ModelKind, string>,
+    panel: { deterministic: 'Slope of the trend line, per period', stochastic: 'Drift, average change per period' } as Record<TrendModelKind, string>,
     description: (a: { first: string; last: string; windows: number; slope: string; drift: string }) =>
       `Two panels of estimates on ${a.windows} expanding windows ending from ${a.first} to ${a.last}, each with a band of two standard errors. ` +
       `Full-history slope ${a.slope}; full-history drift ${a.drift}.`,

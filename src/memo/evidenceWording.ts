@@ -1,10 +1,10 @@
 // Sentences the memo builds from the record's numbers outside the caveats: the unit-root
 // table, the backtest, the comparison tests, the break tests and the recommendation. The
 // numbers arrive formatted; these functions only choose the words.
-import type { RefitPolicy, WindowKind } from '../backtest/backtestRecord.js';
-import type { Frequency } from '../data/period.js';
-import type { ModelKind } from './recordParts.js';
+import type { Frequency } from '../base/period.js';
+import type { TrendModelKind } from '../base/settings.js';
 import { countPeriods, MODEL_IN_TEXT, MODEL_NAME } from './wording.js';
+import { type RefitPolicy, type WindowKind } from '../base/settings.js';
 
 export const UNIT_ROOT_ROWS = {
   kpssLevel: { name: 'KPSS: steady level', holds: 'no evidence against a steady level', rejects: 'rules out a steady level' },
@@ -40,10 +40,10 @@ export const evidenceWording = {
   backtestUnavailable: (reason: string) => `Why: ${reason}`,
   comparisonIntro:
     'At each horizon a Diebold-Mariano test of equal accuracy compares the two models\u2019 backtest losses: squared error for the point forecasts and the 95% interval score for the intervals. The outcome names the model with the lower average loss; a small p-value means the difference is unlikely to be chance.',
-  comparisonOutcome: (better: ModelKind | null, available: boolean, reason: string | null) =>
+  comparisonOutcome: (better: TrendModelKind | null, available: boolean, reason: string | null) =>
     !available ? `not tested: ${reason ?? 'no reason recorded'}` : better === null ? 'equal average loss' : `${MODEL_NAME[better].toLowerCase()} lower`,
 
-  breakTest: (a: { model: ModelKind; rejects5: boolean; rejects10: boolean; period: string; stat: string; critical5: string; pBound: string }) => {
+  breakTest: (a: { model: TrendModelKind; rejects5: boolean; rejects10: boolean; period: string; stat: string; critical5: string; pBound: string }) => {
     const what = a.model === 'deterministic' ? 'the level or slope of the trend line' : 'the drift (the average change per period)';
     if (a.rejects5) return `${MODEL_NAME[a.model]}: a break is likely. ${capitalise(what)} appears to shift from ${a.period} (statistic ${a.stat} against a 5% critical value of ${a.critical5}; ${a.pBound}).`;
     if (a.rejects10) return `${MODEL_NAME[a.model]}: broadly stable, with weak signs of a shift in ${what} from ${a.period} (statistic ${a.stat} against a 5% critical value of ${a.critical5}; ${a.pBound}).`;
@@ -53,7 +53,7 @@ export const evidenceWording = {
   stabilitySettings: (a: { minWindow: number; step: number; windows: number }) =>
     `Both trends were re-estimated on ${a.windows} growing stretches of history, the first of ${a.minWindow} observations and each then longer by ${a.step}, with the ARMA orders held at their full-history choice.`,
 
-  recommendation: (model: ModelKind) => `We recommend the ${MODEL_IN_TEXT[model]}.`,
+  recommendation: (model: TrendModelKind) => `We recommend the ${MODEL_IN_TEXT[model]}.`,
   ruleApplied: (rule: string) => `Rule applied: ${rule}`,
   fixedByConfig: 'The model was fixed by the analyst in the configuration rather than chosen by the rule.',
   convergence: (converged: boolean) => (converged ? 'converged' : 'did not converge: treat its estimates with caution'),

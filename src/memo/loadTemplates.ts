@@ -5,7 +5,8 @@ import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import { basename, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import Handlebars from 'handlebars';
-import { InputError, templateMessages } from '../errors.js';
+import { InputError } from '../base/problem.js';
+import { templateMessages } from './messages.js';
 
 export interface MemoTemplates {
   main: string;

@@ -1,7 +1,7 @@
 // What the memo is rendered from: memo details, paper size, one entry per series (its
 // AnalysisRecord plus what the analyst wrote about it) and the reproducibility facts.
 // Plain data, independent of the config code: whoever runs the analysis fills it in.
-import type { MemoRecord } from './recordParts.js';
+import type { AnalysisRecord } from '../analysis/record.js';
 import type { Revisions } from './revisionsPart.js';
 
 export type Paper = 'A4' | 'Letter';
@@ -49,7 +49,7 @@ export interface HistoryPoint {
 }
 
 export interface MemoSeries {
-  record: MemoRecord;
+  record: AnalysisRecord;
   /** Observed values oldest first; the record does not carry them. Without it the history chart is left out with a note. */
   history?: HistoryPoint[];
   /** Unit of the values, e.g. "ML/day"; shown after numbers. */

@@ -1,7 +1,7 @@
 // What the memo's revisions section is rendered from: this memo compared with the most recent
 // earlier as-of memo of the same id. Plain data, filled in by whoever runs the analysis
 // (src/run/compareRecords.ts); the memo computes nothing from it but formatting.
-import type { ModelKind } from './recordParts.js';
+import type { TrendModelKind } from '../base/settings.js';
 
 export interface ArmaOrder {
   p: number;
@@ -14,11 +14,11 @@ export interface PathPoint {
   point: number | null;
 }
 
-export type ModelPaths = Record<ModelKind, PathPoint[]>;
+export type ModelPaths = Record<TrendModelKind, PathPoint[]>;
 
 /** The same target period forecast by both memos. */
 export interface ForecastRevision {
-  model: ModelKind;
+  model: TrendModelKind;
   period: string;
   /** Steps ahead in this memo and in the earlier one. */
   h: number;
@@ -50,9 +50,9 @@ export interface SeriesRevisions {
   forecasts: ForecastRevision[];
   paths: { now: ModelPaths; earlier: ModelPaths | null };
   /** Models whose ARMA order changed. */
-  orders: { model: ModelKind; now: ArmaOrder; earlier: ArmaOrder }[];
+  orders: { model: TrendModelKind; now: ArmaOrder; earlier: ArmaOrder }[];
   /** Null when the recommended model is the same in both (or neither has one). */
-  recommendation: { now: ModelKind | null; earlier: ModelKind | null } | null;
+  recommendation: { now: TrendModelKind | null; earlier: TrendModelKind | null } | null;
   /** Null when the earlier record carries no observed values to compare with. */
   data: DataRevision[] | null;
 }

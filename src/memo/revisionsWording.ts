@@ -1,6 +1,6 @@
 // Every word of the revisions section: this memo against the previous as-of memo. Kept apart
 // from wording.ts so the section can be read (and reworded) in one place.
-import type { ModelKind } from './recordParts.js';
+import type { TrendModelKind } from '../base/settings.js';
 import type { ArmaOrder } from './revisionsPart.js';
 import { MODEL_IN_TEXT, MODEL_NAME } from './wording.js';
 
@@ -14,11 +14,11 @@ export const revisionsWording = {
   dropped: (titles: string[]) => `No longer in this memo: ${titles.join('; ')}.`,
   newSeries: 'New in this memo: the previous memo has no such series.',
   lastObserved: (earlier: string, now: string) => (earlier === now ? `Latest observation: ${now}, as before.` : `Latest observation: ${now} (previously ${earlier}).`),
-  orderChanged: (model: ModelKind, earlier: ArmaOrder, now: ArmaOrder) => `${MODEL_NAME[model]}: order now ${order(now)}, previously ${order(earlier)}.`,
+  orderChanged: (model: TrendModelKind, earlier: ArmaOrder, now: ArmaOrder) => `${MODEL_NAME[model]}: order now ${order(now)}, previously ${order(earlier)}.`,
   ordersSame: 'Model orders: unchanged for both models.',
-  recommendationChanged: (earlier: ModelKind | null, now: ModelKind | null) =>
+  recommendationChanged: (earlier: TrendModelKind | null, now: TrendModelKind | null) =>
     `Recommendation: ${now === null ? 'none' : `the ${MODEL_IN_TEXT[now]}`} now, previously ${earlier === null ? 'none' : `the ${MODEL_IN_TEXT[earlier]}`}.`,
-  recommendationSame: (model: ModelKind | null) => (model === null ? 'Recommendation: none in either memo.' : `Recommendation: the ${MODEL_IN_TEXT[model]}, as before.`),
+  recommendationSame: (model: TrendModelKind | null) => (model === null ? 'Recommendation: none in either memo.' : `Recommendation: the ${MODEL_IN_TEXT[model]}, as before.`),
   noCommonPeriods: 'The two memos forecast no common period.',
   forecastCaption: (units: string) => `Point forecasts for the periods both memos forecast${units === '' ? '' : ` (${units})`}: previous memo, this memo and the change.`,
   dataCaption: (units: string) => `Revised observations${units === '' ? '' : ` (${units})`}: periods both memos hold with different values.`,
@@ -38,8 +38,8 @@ export const revisionsWording = {
   chart: {
     title: (series: string) => `${series}: this memo’s forecasts against the previous memo’s`,
     subtitle: (asOf: string, earlier: string) => [`Solid line, filled markers: this memo (as of ${asOf}).`, `Dashed grey line, open markers: the memo as of ${earlier}.`],
-    panel: (model: ModelKind) => MODEL_NAME[model],
-    description: (a: { series: string; asOf: string; earlier: string; largest: { model: ModelKind; period: string; change: string }[] }) =>
+    panel: (model: TrendModelKind) => MODEL_NAME[model],
+    description: (a: { series: string; asOf: string; earlier: string; largest: { model: TrendModelKind; period: string; change: string }[] }) =>
       `Two panels, one per model, of the point forecasts of ${a.series} in this memo (as of ${a.asOf}) and in the memo as of ${a.earlier}. ` +
       (a.largest.length === 0
         ? 'The two memos forecast no common period.'

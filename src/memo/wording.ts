@@ -1,30 +1,31 @@
 // The memo's fixed wording: headings, labels, model names, status and the standing cautions.
 // Sentences built from numbers live in evidenceWording.ts and caveats/caveatWording.ts, so
 // a reviewer can read every word the memo can say in these three modules.
-import type { Frequency } from '../data/period.js';
+import type { Frequency } from '../base/period.js';
 import type { SignOffDecision } from './memoInput.js';
-import type { BacktestMethod, ModelKind } from './recordParts.js';
+import type { ForecastMethod } from '../analysis/record.js';
+import type { TrendModelKind } from '../base/settings.js';
 
-export const MODEL_NAME: Record<ModelKind, string> = {
+export const MODEL_NAME: Record<TrendModelKind, string> = {
   deterministic: 'Deterministic trend',
   stochastic: 'Stochastic trend',
 };
 
 /** Lower-case model names for use inside sentences. */
-export const MODEL_IN_TEXT: Record<BacktestMethod, string> = {
+export const MODEL_IN_TEXT: Record<ForecastMethod, string> = {
   deterministic: 'deterministic-trend model',
   stochastic: 'stochastic-trend model',
   naive: 'no-change benchmark',
 };
 
-export const METHOD_NAME: Record<BacktestMethod, string> = {
+export const METHOD_NAME: Record<ForecastMethod, string> = {
   deterministic: 'Deterministic',
   stochastic: 'Stochastic',
   naive: 'No change',
 };
 
 /** What each model assumes, in one plain sentence. */
-export const MODEL_GLOSS: Record<ModelKind, string> = {
+export const MODEL_GLOSS: Record<TrendModelKind, string> = {
   deterministic: 'a fixed trend line that holds for the whole horizon, with passing swings around it',
   stochastic: 'a trend that can wander: each shock shifts the future path, so uncertainty grows with the horizon',
 };

@@ -7,7 +7,7 @@ import { minimizeBfgs } from './bfgs.js';
 import { unconstrainAr, unconstrainMa } from './constraints.js';
 import { hannanRissanen } from './hannanRissanen.js';
 import { createProfileLikelihood, type ProfileLikelihood } from './profileLikelihood.js';
-import type { WorkspaceOptions } from '../statespace/kalmanFilter.js';
+import { type WorkspaceOptions } from '../statespace/filterWorkspace.js';
 
 /** BFGS iterations every start gets before the starts are ranked. */
 const HEAT_ITERATIONS = 8;

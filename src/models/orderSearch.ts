@@ -5,7 +5,7 @@
 // model exactly, so a larger model never ends below a nested smaller one.
 import { unconstrainAr, unconstrainMa } from './constraints.js';
 import { countObserved, fitRegressionArma, type RegressionArmaFit } from './fitRegressionArma.js';
-import type { WorkspaceOptions } from '../statespace/kalmanFilter.js';
+import { type WorkspaceOptions } from '../statespace/filterWorkspace.js';
 
 /** Real roots of the common factor tried by `cancellingStart` from the (p−1, q−1) optimum. */
 const CANCELLING_ROOTS = [0.8, -0.8];

@@ -1,8 +1,9 @@
 // The profile log-likelihood of y = Xβ + η, η ~ ARMA(p,q), as a function of the ARMA
 // parameters alone (β and σ² concentrated out by the filter; see statespace/kalmanFilter).
-import { createWorkspace, profileLoglik, runFilter, setArma, type FilterWorkspace, type WorkspaceOptions } from '../statespace/kalmanFilter.js';
+import { createWorkspace, profileLoglik, runFilter, setArma } from '../statespace/kalmanFilter.js';
 import { stateDimension } from '../statespace/armaStateSpace.js';
 import { constrainAr, constrainMa } from './constraints.js';
+import { type FilterWorkspace, type WorkspaceOptions } from '../statespace/filterWorkspace.js';
 
 export interface ProfileLikelihood {
   readonly p: number;

@@ -4,15 +4,13 @@
 //   stochastic:    w_t − w_{t−1} = c + η_t on the first differences (difference-stationary,
 //                  ARIMA(p,1,q) with drift c).
 // η ~ stationary, invertible ARMA(p,q) in both. Only the design differs.
+import type { TrendModelKind } from '../base/settings.js';
 import { fitRegressionArma, olsFit, type RegressionArmaFit } from './fitRegressionArma.js';
 import { forecastRegressionArma, type ForecastMoments } from '../statespace/forecast.js';
 import { createProfileLikelihood } from './profileLikelihood.js';
 import { aicc, searchOrders, type Candidate } from './orderSearch.js';
 import { armaStandardErrors } from './standardErrors.js';
 
-export type TrendModelKind = 'deterministic' | 'stochastic';
-
-export const TREND_MODELS: readonly TrendModelKind[] = ['deterministic', 'stochastic'];
 
 export interface TrendDesign {
   response: Float64Array;

@@ -1,8 +1,10 @@
-// The assumptions register of one series: every modelling choice, its value as applied, its
-// basis, and who set it (the config, or the tool's default). Values the config leaves to the
-// data (the horizon, the backtest's training length) are read back from the record.
+// The assumptions register of one series: every modelling choice, its value as applied (from
+// the record's settings, or the backtest's own record of what it ran), its basis, and who set
+// it (the config, or the tool's default).
 import type { AnalysisRecord } from '../analysis/record.js';
-import { listSettings, type SeriesPlan, type Setting } from '../config/runPlan.js';
+import { TREND_MODELS } from '../base/settings.js';
+import type { SeriesPlan } from '../config/runPlan.js';
+import { SETTING_KEYS } from '../config/settingsSpec.js';
 import type { Assumption } from '../memo/memoInput.js';
 
 const CHOICES: Record<string, string> = {
@@ -21,6 +23,7 @@ const CHOICES: Record<string, string> = {
   'backtest.min_train': 'Shortest backtest training window',
   'recommendation.rule': 'Recommendation rule',
   'recommendation.significance': 'Significance level of the rule',
+  'recommendation.scored_level': 'Interval level the rule scores',
   'recommendation.model': 'Recommended model fixed',
   'recommendation.justification': 'Justification for the fixed model',
   missing: 'Missing observations',
@@ -28,17 +31,18 @@ const CHOICES: Record<string, string> = {
 
 export function assumptionsRegister(plan: SeriesPlan, record: AnalysisRecord, configName: string): Assumption[] {
   const rows: Assumption[] = [];
-  for (const setting of listSettings(plan.settings)) {
-    const value = appliedValue(setting, record);
+  for (const key of SETTING_KEYS) {
+    const value = appliedValue(key, record);
     if (value === undefined) continue;
+    const at = plan.settingPlaces.get(key);
     rows.push({
-      choice: CHOICES[setting.key] ?? setting.key,
+      choice: CHOICES[key] ?? key,
       value,
-      basis: setting.at === undefined ? 'built-in default of the tool' : `${configName}, line ${setting.at.line} (${setting.at.field})`,
-      set_by: setting.source,
+      basis: at === undefined ? 'built-in default of the tool' : `${configName}, line ${at.line} (${at.field})`,
+      set_by: at === undefined ? 'default' : 'config',
     });
   }
-  for (const kind of ['deterministic', 'stochastic'] as const) {
+  for (const kind of TREND_MODELS) {
     const model = record.models[kind];
     rows.push({
       choice: `ARMA order of the ${kind} trend`,
@@ -59,31 +63,51 @@ export function assumptionsRegister(plan: SeriesPlan, record: AnalysisRecord, co
 }
 
 /** The value a setting took in this analysis, as text; undefined for a setting that does not apply. */
-function appliedValue(setting: Setting<unknown>, record: AnalysisRecord): string | undefined {
+function appliedValue(key: string, record: AnalysisRecord): string | undefined {
+  const { settings } = record;
   const backtest = record.backtest ?? undefined;
-  switch (setting.key) {
+  switch (key) {
     case 'horizon':
-      return `${record.settings.horizon} periods`;
+      return `${settings.horizon} periods`;
     case 'backtest.horizon':
       return backtest === undefined ? 'not run' : `${backtest.settings.horizon} periods`;
     case 'backtest.min_train':
       return backtest === undefined ? 'not run' : `${backtest.settings.min_training_length} observations`;
     case 'backtest.origins':
-      return backtest === undefined ? `not run (${record.backtest_unavailable ?? 'no backtest'})` : `${backtest.origins.length} (asked: ${String(setting.value)})`;
+      return backtest === undefined ? `not run (${record.backtest_unavailable ?? 'no backtest'})` : `${backtest.origins.length} (asked: ${settings.backtest.origins})`;
+    case 'backtest.refit':
+      return settings.backtest.refit;
+    case 'backtest.window':
+      return settings.backtest.window;
+    case 'recommendation.rule':
+      return settings.recommendation.rule;
+    case 'recommendation.significance':
+      return String(settings.recommendation.significance);
+    case 'recommendation.scored_level':
+      return `${settings.recommendation.scored_level}%`;
     case 'recommendation.model':
+      return settings.recommendation.model ?? undefined;
     case 'recommendation.justification':
-      return setting.value === undefined ? undefined : String(setting.value);
+      return settings.recommendation.justification ?? undefined;
     case 'transform': {
-      const transform = record.series.transform;
+      const { transform } = settings;
       return transform.kind === 'box-cox' ? `Box-Cox, lambda ${transform.lambda}` : transform.kind === 'log' ? 'natural log' : 'none';
     }
     case 'levels':
-      return record.settings.levels.map((level) => `${level}%`).join(', ');
+      return settings.levels.map((level) => `${level}%`).join(', ');
     case 'coefficient_uncertainty':
-      return record.settings.coefficient_uncertainty ? 'included' : 'left out';
+      return settings.coefficient_uncertainty ? 'included' : 'left out';
     case 'point':
-      return record.settings.point === 'median' ? 'median (back-transformed)' : 'mean (bias-adjusted)';
+      return settings.point === 'median' ? 'median (back-transformed)' : 'mean (bias-adjusted)';
+    case 'max_p':
+      return String(settings.max_p);
+    case 'max_q':
+      return String(settings.max_q);
+    case 'significance':
+      return String(settings.significance);
+    case 'missing':
+      return settings.missing;
     default:
-      return typeof setting.value === 'object' ? JSON.stringify(setting.value) : String(setting.value);
+      throw new Error(`assumptionsRegister: no wording for the setting ${key}`);
   }
 }

@@ -5,9 +5,10 @@
 // minutes of fitting; failures while writing become the same kind of message.
 import { lstatSync, statSync, type Stats } from 'node:fs';
 import { dirname, join, resolve } from 'node:path';
-import type { RunPlan } from '../config/index.js';
-import { InputError, runMessages, type InputLocation, type InputProblem } from '../errors.js';
-import { shownPath } from './readPlannedSeries.js';
+import type { RunPlan } from '../config/runPlan.js';
+import { InputError, type InputLocation, type InputProblem } from '../base/problem.js';
+import { runMessages } from './messages.js';
+import { shownPath } from '../base/shownPath.js';
 
 export interface RunPaths {
   /** Absolute folder the memo's folder is written into. */

@@ -4,7 +4,7 @@
 // trusted.
 import { readFileSync } from 'node:fs';
 import { sha256 } from './manifest.js';
-import type { ModelKind } from '../memo/recordParts.js';
+import type { TrendModelKind } from '../base/settings.js';
 import { RECORD_DOCUMENT_SCHEMA, type SeriesHistory } from './recordDocument.js';
 
 export interface ComparableForecast {
@@ -15,9 +15,9 @@ export interface ComparableForecast {
 
 export interface ComparableRecord {
   series: { id: string; title: string; last: string };
-  models: Record<ModelKind, { p: number; q: number }>;
-  forecasts: Record<ModelKind, ComparableForecast[]>;
-  recommendation?: { model: ModelKind };
+  models: Record<TrendModelKind, { p: number; q: number }>;
+  forecasts: Record<TrendModelKind, ComparableForecast[]>;
+  recommendation?: { model: TrendModelKind };
 }
 
 export interface ComparableDocument {
@@ -28,7 +28,7 @@ export interface ComparableDocument {
   history?: SeriesHistory[];
 }
 
-const MODELS: readonly ModelKind[] = ['deterministic', 'stochastic'];
+const MODELS: readonly TrendModelKind[] = ['deterministic', 'stochastic'];
 
 type Check = (value: unknown) => boolean;
 

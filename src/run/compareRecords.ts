@@ -2,12 +2,12 @@
 // every target period both memos forecast, changed ARMA orders and recommendation, and data
 // revisions (observations both hold whose values differ). A pure function of two record
 // documents; series are matched by id.
-import type { ModelKind } from '../memo/recordParts.js';
+import type { TrendModelKind } from '../base/settings.js';
 import type { DataRevision, ForecastRevision, ModelPaths, Revisions, SeriesRevisions } from '../memo/revisionsPart.js';
 import type { ComparableDocument, ComparableForecast, ComparableRecord } from './comparableDocument.js';
 import type { SeriesHistory } from './recordDocument.js';
 
-const MODELS: readonly ModelKind[] = ['deterministic', 'stochastic'];
+const MODELS: readonly TrendModelKind[] = ['deterministic', 'stochastic'];
 
 export function compareRecords(now: ComparableDocument, earlier: ComparableDocument | null): Revisions {
   if (earlier === null) return { as_of: now.memo.as_of, earlier: null, series: [], dropped: [] };
@@ -54,7 +54,7 @@ function paths(record: ComparableRecord): ModelPaths {
   return { deterministic: path(record.forecasts.deterministic), stochastic: path(record.forecasts.stochastic) };
 }
 
-function forecastRevisions(model: ModelKind, now: ComparableForecast[], earlier: ComparableForecast[]): ForecastRevision[] {
+function forecastRevisions(model: TrendModelKind, now: ComparableForecast[], earlier: ComparableForecast[]): ForecastRevision[] {
   const byPeriod = new Map(earlier.map((row) => [row.period, row]));
   return now.flatMap((row) => {
     const before = byPeriod.get(row.period);

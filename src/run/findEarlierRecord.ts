@@ -4,7 +4,7 @@
 // order, never by file time, so a rerun of an old month compares with the same memo as before.
 import { readdirSync } from 'node:fs';
 import { join } from 'node:path';
-import { parsePeriod, periodsPerYear } from '../data/period.js';
+import { parsePeriod, periodsPerYear } from '../base/period.js';
 import { readComparableDocument, type ComparableDocument } from './comparableDocument.js';
 
 export interface EarlierRecord {

@@ -6,10 +6,10 @@
 //   ─compareRecords (earlier as-of record)─▶ MemoInput ─renderMemoHtml / printer─▶ OutputFile[]
 import { basename, resolve } from 'node:path';
 import type { AnalysisRecord } from '../analysis/record.js';
-import { toolVersion } from '../analysis/toolVersion.js';
-import type { OutputFormat, RunPlan, SeriesPlan } from '../config/index.js';
-import type { Series } from '../data/series.js';
-import { InputError, type InputProblem } from '../errors.js';
+import { toolVersion } from '../base/toolVersion.js';
+import type { OutputFormat, RunPlan, SeriesPlan } from '../config/runPlan.js';
+import type { Series } from '../base/series.js';
+import { InputError, type InputProblem } from '../base/problem.js';
 import type { MemoInput } from '../memo/memoInput.js';
 import type { PdfPrinter } from '../memo/print/pdfPrinter.js';
 import { renderMemoHtml } from '../memo/renderMemoHtml.js';
@@ -19,7 +19,7 @@ import { compareRecords } from './compareRecords.js';
 import type { EarlierRecord } from './findEarlierRecord.js';
 import { forecastsCsv } from './forecastsCsv.js';
 import { buildManifest, manifestText, posixRelative, type ManifestInput } from './manifest.js';
-import { readPlannedSeries } from './readPlannedSeries.js';
+import { readPlannedSeries, type PlannedSeries } from './readPlannedSeries.js';
 import { RECORD_DOCUMENT_SCHEMA, recordDocumentText, seriesHistory, type RecordDocument } from './recordDocument.js';
 import { stampPdfDates } from './stampPdfDates.js';
 import type { SeriesPool } from './seriesPool.js';
@@ -57,9 +57,9 @@ export async function prepareMemo(plan: RunPlan, options: PrepareMemoOptions): P
   // Series are independent: on a pool they run side by side, and their order is kept.
   const analyse = options.pool?.analyse ?? ((task: SeriesTask) => analysePlannedSeries({ ...task, threads: options.threads }));
   const records = await Promise.all(
-    loaded.map(async ({ plan: seriesPlan, series }) => {
-      const record = await analyse({ plan: seriesPlan, series });
-      options.onSeriesDone?.(plan.memo.id, seriesPlan.id);
+    loaded.map(async (planned) => {
+      const record = await analyse(planned);
+      options.onSeriesDone?.(plan.memo.id, planned.plan.id);
       return record;
     }),
   );
@@ -126,13 +126,13 @@ export async function prepareMemo(plan: RunPlan, options: PrepareMemoOptions): P
   return { files, records, document };
 }
 
-/** Reads every series file, collecting the problems of all of them before failing. */
-function readAllSeries(plan: RunPlan): { plan: SeriesPlan; series: Series }[] {
+/** Reads every series file and resolves its settings, collecting the problems of all of them before failing. */
+function readAllSeries(plan: RunPlan): PlannedSeries[] {
   const problems: InputProblem[] = [];
-  const loaded: { plan: SeriesPlan; series: Series }[] = [];
+  const loaded: PlannedSeries[] = [];
   for (const seriesPlan of plan.series) {
     try {
-      loaded.push({ plan: seriesPlan, series: readPlannedSeries(seriesPlan, plan.configFile) });
+      loaded.push(readPlannedSeries(seriesPlan, plan.configFile));
     } catch (error) {
       if (!(error instanceof InputError)) throw error;
       problems.push(...error.problems);

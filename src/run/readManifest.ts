@@ -1,7 +1,8 @@
 // manifest.json read back for verify: every field verify relies on is checked, and a manifest
 // from before inputs carried `from_output` is named as such rather than half-verified.
 import { readFileSync } from 'node:fs';
-import { InputError, verifyMessages, type InputProblem } from '../errors.js';
+import { InputError, type InputProblem } from '../base/problem.js';
+import { verifyMessages } from './messages.js';
 import { MANIFEST_SCHEMA, type InputRole, type Manifest, type ManifestInput, type ManifestOutput } from './manifest.js';
 
 const ROLES: readonly InputRole[] = ['config', 'data', 'earlier-record'];

@@ -1,33 +1,41 @@
-// A series named in a config, read with the checks a run makes: enough observations for the
-// order limits and values the transform accepts. Shared by `check` and `run`.
-import { isAbsolute, relative } from 'node:path';
+// A series named in a config, read with the checks a run makes (enough observations for the
+// order limits, values the transform accepts), and its settings resolved once its frequency is
+// known. Shared by `check` and `run`.
+import { InputError, type InputLocation } from '../base/problem.js';
+import type { Series } from '../base/series.js';
+import type { AnalysisSettings } from '../base/settings.js';
+import { shownPath } from '../base/shownPath.js';
 import { requiredObservations } from '../analysis/analyseSeries.js';
+import { readingSettings, resolveSettings } from '../config/resolveSettings.js';
 import type { SeriesPlan } from '../config/runPlan.js';
+import { dataMessages } from '../data/messages.js';
 import { readSeriesCsv } from '../data/readSeriesCsv.js';
-import type { Series } from '../data/series.js';
-import { dataMessages, InputError } from '../errors.js';
 
-/** A path under the working folder is shown relative to it, as the user would type it. */
-export function shownPath(file: string): string {
-  const shown = relative(process.cwd(), file);
-  return shown === '' || shown.startsWith('..') || isAbsolute(shown) ? file : shown;
+export interface PlannedSeries {
+  plan: SeriesPlan;
+  series: Series;
+  settings: AnalysisSettings;
 }
 
-/** `configFile`, when given, names the config in messages about the file as a whole (missing, too large), which then say where it is named. */
-export function readPlannedSeries(series: SeriesPlan, configFile?: string): Series {
-  const { settings } = series;
+/** `configFile` names the config in messages about the series file as a whole (missing, too large) and about its settings. */
+export function readPlannedSeries(plan: SeriesPlan, configFile: string): PlannedSeries {
+  const reading = readingSettings(plan.settings);
+  let series: Series;
   try {
-    return readSeriesCsv(shownPath(series.file), {
-      column: series.column,
-      periodColumn: series.periodColumn,
-      frequency: series.frequency,
-      minObservations: requiredObservations(settings.maxP.value, settings.maxQ.value),
-      transform: settings.transform.value,
-      missing: settings.missing.value,
+    series = readSeriesCsv(shownPath(plan.file), {
+      column: plan.column,
+      periodColumn: plan.periodColumn,
+      frequency: plan.frequency,
+      minObservations: requiredObservations(reading.max_p, reading.max_q),
+      transform: reading.transform,
+      missing: reading.missing,
     });
   } catch (error) {
-    if (!(error instanceof InputError) || configFile === undefined) throw error;
-    const named = { file: configFile, ...series.at };
+    if (!(error instanceof InputError)) throw error;
+    const named = { file: configFile, ...plan.at };
     throw new InputError(error.problems.map((problem) => (problem.line === undefined && problem.field === undefined ? dataMessages.namedBy(problem, named) : problem)));
   }
+  // A setting the config leaves out is reported at the series entry it applies to.
+  const placeOf = (key: string): InputLocation => ({ file: configFile, ...(plan.settingPlaces.get(key) ?? { ...plan.at, field: `${plan.at.field}.${key}` }) });
+  return { plan, series, settings: resolveSettings(plan.settings, series.frequency, placeOf) };
 }

@@ -4,7 +4,7 @@
 // AnalysisRecord describes an analysis and the data belong to the memo that used them.
 // Keys are a contract: add freely, rename none.
 import type { AnalysisRecord } from '../analysis/record.js';
-import type { Series } from '../data/series.js';
+import type { Series } from '../base/series.js';
 import type { HistoryPoint, MemoDetails } from '../memo/memoInput.js';
 
 export const RECORD_DOCUMENT_SCHEMA = 'trendbrief.memo/1';

@@ -2,7 +2,7 @@
 // in the config's own folder: the same whatever the working folder of the run, so reruns from
 // anywhere give the same bytes, and no machine path appears in an output.
 import { basename } from 'node:path';
-import type { OutputFormat, RunPlan } from '../config/index.js';
+import type { OutputFormat, RunPlan } from '../config/runPlan.js';
 import { posixRelative } from './manifest.js';
 
 /** A word as a POSIX shell reads it: quoted only when it holds anything beyond plain path characters. */

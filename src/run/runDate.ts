@@ -1,6 +1,7 @@
 // The run date shown in a memo: from SOURCE_DATE_EPOCH when set (reproducible builds
 // convention, reproducible-builds.org), otherwise today, as YYYY-MM-DD in UTC.
-import { InputError, runMessages } from '../errors.js';
+import { InputError } from '../base/problem.js';
+import { runMessages } from './messages.js';
 
 export function runDate(env: NodeJS.ProcessEnv = process.env, now: () => Date = () => new Date()): string {
   const epoch = env.SOURCE_DATE_EPOCH;

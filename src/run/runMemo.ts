@@ -2,17 +2,19 @@
 //   loadConfig ─▶ RunPlan ─checkRunPaths─▶ <output>/<memo id>/<as-of>/ (or <output>/<memo id>/)
 //   ─findEarlierRecord (the previous as-of memo beside it)─▶ prepareMemo ─▶ files
 //   ─writeOutputFolder─▶ the folder (complete, or the previous one left as it was)
-import { loadConfig, type OutputFormat } from '../config/index.js';
-import { InputError, monthlyMessages } from '../errors.js';
+import { loadConfig } from '../config/loadConfig.js';
+import type { OutputFormat } from '../config/runPlan.js';
+import { InputError } from '../base/problem.js';
+import { monthlyMessages } from './messages.js';
 import type { PdfPrinter } from '../memo/print/pdfPrinter.js';
 import { checkRunPaths, writeFailure } from './checkRunPaths.js';
 import { asOfFolders, findEarlierRecord } from './findEarlierRecord.js';
 import { prepareMemo } from './prepareMemo.js';
-import { shownPath } from './readPlannedSeries.js';
 import { recordedCommand } from './recordedCommand.js';
 import { runDate } from './runDate.js';
 import type { SeriesPool } from './seriesPool.js';
 import { recoverOutputFolder, writeOutputFolder } from './writeOutputFolder.js';
+import { shownPath } from '../base/shownPath.js';
 
 export interface RunMemoOptions {
   /** Replaces the config's output folder (already resolved by the caller). */

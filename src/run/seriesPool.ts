@@ -3,7 +3,7 @@
 // Results come back per task, so records do not depend on the thread count.
 import Tinypool from 'tinypool';
 import type { AnalysisRecord } from '../analysis/record.js';
-import { workerModule } from '../parallel/workerModule.js';
+import { workerModule } from '../base/workerModule.js';
 import type { SeriesTask } from './analysePlannedSeries.js';
 
 export interface SeriesPool {

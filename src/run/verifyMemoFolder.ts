@@ -7,16 +7,17 @@
 import { existsSync, readFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { parse } from 'csv-parse/sync';
-import { toolVersion } from '../analysis/toolVersion.js';
-import { loadConfig } from '../config/index.js';
-import { InputError, verifyMessages, verifyReport, type InputProblem } from '../errors.js';
+import { toolVersion } from '../base/toolVersion.js';
+import { loadConfig } from '../config/loadConfig.js';
+import { InputError, type InputProblem } from '../base/problem.js';
+import { verifyMessages, verifyReport } from './messages.js';
 import { readComparableDocument } from './comparableDocument.js';
 import { compareJson, TOLERANCE_TEXT, type Difference } from './compareJson.js';
 import { asOfFolders, type EarlierRecord } from './findEarlierRecord.js';
 import { sha256, type Manifest, type ManifestInput } from './manifest.js';
 import { prepareMemo } from './prepareMemo.js';
-import { shownPath } from './readPlannedSeries.js';
 import { readManifest } from './readManifest.js';
+import { shownPath } from '../base/shownPath.js';
 
 export interface VerifyResult {
   /** The report without its differences. */

@@ -1,8 +1,7 @@
 // The filter's workspace: every array a likelihood evaluation touches, allocated once per
-// (state dimension, columns, n), so an evaluation allocates nothing.
-import { firstColumnScratchSize, lyapunovScratchSize } from './armaStateSpace.js';
-import { createGapScratch, type GapScratch } from './gapFilter.js';
-import { SCALAR_STATE } from './filterRecursions.js';
+// (state dimension, columns, n) by `createWorkspace` (kalmanFilter.ts), so an evaluation
+// allocates nothing. Types only: the recursions, the gap filter and the filter that combines
+// them all read it.
 
 
 export interface FilterWorkspace {
@@ -45,6 +44,18 @@ export interface FilterWorkspace {
   nobs: number;
 }
 
+/** Scratch the gap filter needs beyond the workspace's own arrays, for state dimension r. */
+export interface GapScratch {
+  /** Augmented state covariance, (r+1)², row-major. */
+  cov: Float64Array;
+  /** Products and the transition, (r+1)² each. */
+  tmp: Float64Array;
+  transition: Float64Array;
+  /** Augmented state means, column c at [c·(r+1), (c+1)·(r+1)). */
+  means: Float64Array;
+  shock: Float64Array;
+}
+
 export interface WorkspaceOptions {
   /**
    * NaN in y marks a missing level of a differenced series: accumulate the differences over
@@ -52,42 +63,3 @@ export interface WorkspaceOptions {
    */
   accumulateGaps?: boolean;
 }
-
-/** A workspace for filtering `columns` (y first) with state dimension r. */
-export function createWorkspace(r: number, columns: readonly Float64Array[], options: WorkspaceOptions = {}): FilterWorkspace {
-  const ncol = columns.length;
-  const n = columns[0].length;
-  const k = ncol - 1;
-  const stride = Math.max(r, SCALAR_STATE);
-  return {
-    r,
-    stride,
-    ncol,
-    n,
-    phi: new Float64Array(stride),
-    rvec: new Float64Array(stride),
-    pmat: new Float64Array(r * r),
-    mmat: new Float64Array(Math.max(r * r, 3 * r)),
-    gains: new Float64Array((n + 1) * stride),
-    variances: new Float64Array(n),
-    weights: new Float64Array(n),
-    innovations: new Float64Array(Math.max(ncol, 3) * n),
-    state: new Float64Array(r * ncol),
-    cross: new Float64Array(ncol * ncol),
-    lyapunovScratch: new Float64Array(Math.max(lyapunovScratchSize(r), firstColumnScratchSize(r, r))),
-    zeros: new Float64Array(n),
-    gram: new Float64Array(Math.max(1, k * k)),
-    gramFactor: new Float64Array(Math.max(1, k * k)),
-    gramRhs: new Float64Array(Math.max(1, k)),
-    complete: !hasMissing(columns[0]),
-    gaps: options.accumulateGaps === true && hasMissing(columns[0]) ? createGapScratch(r, ncol) : undefined,
-    sumLogF: 0,
-    nobs: 0,
-  };
-}
-
-function hasMissing(y: Float64Array): boolean {
-  for (let t = 0; t < y.length; t++) if (Number.isNaN(y[t])) return true;
-  return false;
-}
-

@@ -11,19 +11,7 @@
 // temporal aggregation; Durbin & Koopman 2012, §4.10 on missing observations).
 //
 // Dense and general rather than fast: it runs only for series with gaps.
-import type { FilterWorkspace } from './filterWorkspace.js';
-
-/** Scratch the gap filter needs beyond the workspace's own arrays, for state dimension r. */
-export interface GapScratch {
-  /** Augmented state covariance, (r+1)², row-major. */
-  cov: Float64Array;
-  /** Products and the transition, (r+1)² each. */
-  tmp: Float64Array;
-  transition: Float64Array;
-  /** Augmented state means, column c at [c·(r+1), (c+1)·(r+1)). */
-  means: Float64Array;
-  shock: Float64Array;
-}
+import type { FilterWorkspace, GapScratch } from './filterWorkspace.js';
 
 export function createGapScratch(r: number, ncol: number): GapScratch {
   const d = r + 1;

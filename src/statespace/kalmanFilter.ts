@@ -6,18 +6,54 @@
 // used and the covariance update skipped (Harvey 1989, §3.3.4). Missing observations (NaN
 // in y) skip the update step (Durbin & Koopman 2012, §4.10).
 //
-// The pieces: filterWorkspace.ts (the arrays), filterRecursions.ts (F_t and K_t, then the
-// states and cross-products), gapFilter.ts (gaps in a differenced series).
+// The pieces: filterWorkspace.ts (the arrays, created here), filterRecursions.ts (F_t and K_t,
+// then the states and cross-products), gapFilter.ts (gaps in a differenced series).
 
-import { stationaryCovariance, stationaryFirstColumn } from './armaStateSpace.js';
 import { choleskyInto, choleskySolveInPlace } from '../linalg/smallSpd.js';
 import { accumulateCross, filterColumnGeneric, filterColumnsScalar, runChandrasekhar, runCovariance, SCALAR_STATE } from './filterRecursions.js';
-import type { FilterWorkspace } from './filterWorkspace.js';
-import { runGapFilter } from './gapFilter.js';
-
-export { createWorkspace, type FilterWorkspace, type WorkspaceOptions } from './filterWorkspace.js';
+import { firstColumnScratchSize, lyapunovScratchSize, stationaryCovariance, stationaryFirstColumn } from './armaStateSpace.js';
+import type { FilterWorkspace, WorkspaceOptions } from './filterWorkspace.js';
+import { createGapScratch, runGapFilter } from './gapFilter.js';
 
 const LOG_2PI = Math.log(2 * Math.PI);
+
+/** A workspace for filtering `columns` (y first) with state dimension r. */
+export function createWorkspace(r: number, columns: readonly Float64Array[], options: WorkspaceOptions = {}): FilterWorkspace {
+  const ncol = columns.length;
+  const n = columns[0].length;
+  const k = ncol - 1;
+  const stride = Math.max(r, SCALAR_STATE);
+  return {
+    r,
+    stride,
+    ncol,
+    n,
+    phi: new Float64Array(stride),
+    rvec: new Float64Array(stride),
+    pmat: new Float64Array(r * r),
+    mmat: new Float64Array(Math.max(r * r, 3 * r)),
+    gains: new Float64Array((n + 1) * stride),
+    variances: new Float64Array(n),
+    weights: new Float64Array(n),
+    innovations: new Float64Array(Math.max(ncol, 3) * n),
+    state: new Float64Array(r * ncol),
+    cross: new Float64Array(ncol * ncol),
+    lyapunovScratch: new Float64Array(Math.max(lyapunovScratchSize(r), firstColumnScratchSize(r, r))),
+    zeros: new Float64Array(n),
+    gram: new Float64Array(Math.max(1, k * k)),
+    gramFactor: new Float64Array(Math.max(1, k * k)),
+    gramRhs: new Float64Array(Math.max(1, k)),
+    complete: !hasMissing(columns[0]),
+    gaps: options.accumulateGaps === true && hasMissing(columns[0]) ? createGapScratch(r, ncol) : undefined,
+    sumLogF: 0,
+    nobs: 0,
+  };
+}
+
+function hasMissing(y: Float64Array): boolean {
+  for (let t = 0; t < y.length; t++) if (Number.isNaN(y[t])) return true;
+  return false;
+}
 
 /**
  * Installs ARMA coefficients and the stationary initial covariance. Returns false when

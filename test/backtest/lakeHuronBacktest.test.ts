@@ -9,6 +9,7 @@ import { runBacktest } from '../../src/backtest/runBacktest.js';
 import type { BacktestRecord } from '../../src/backtest/backtestRecord.js';
 import { readSeriesCsv } from '../../src/data/readSeriesCsv.js';
 import { expectRelative } from '../evidence/expectRelative.js';
+import { settingsFor } from '../support/settings.js';
 
 type Kind = 'deterministic' | 'stochastic';
 interface ReferenceFit {
@@ -32,13 +33,9 @@ const KINDS: Kind[] = ['deterministic', 'stochastic'];
 describe('Lake Huron backtest with orders fixed (statsmodels 0.13.5 reference)', () => {
   let record: BacktestRecord;
   beforeAll(async () => {
-    const series = readSeriesCsv(new URL('../fixtures/lake-huron.csv', import.meta.url).pathname);
-    record = await runBacktest(series, {
-      refit: 'reestimate',
+    const series = readSeriesCsv(new URL('../fixtures/lake-huron.csv', import.meta.url).pathname, { missing: 'error' });
+    record = await runBacktest(series, settingsFor({ coefficient_uncertainty: false, backtest: { refit: 'reestimate', origins: 20, horizon: 5 } }), {
       orders: { deterministic: { p: 1, q: 1 }, stochastic: { p: 1, q: 2 } },
-      origins: 20,
-      horizon: 5,
-      coefficientUncertainty: false,
       threads: 1,
     });
   });

@@ -3,12 +3,13 @@
 import { describe, expect, it } from 'vitest';
 import { runBacktest } from '../../src/backtest/runBacktest.js';
 import { readSeriesValues } from '../evidence/referenceFixtures.js';
+import { settingsFor } from '../support/settings.js';
 
 describe('backtest with gaps', () => {
   const values = readSeriesValues('lake-huron').map((v, i) => (i === 90 || i === 94 ? Number.NaN : v));
 
   it('skips the origin after a gap and the missing actuals', async () => {
-    const record = await runBacktest(values, { refit: 'reestimate', origins: 6, horizon: 2, maxP: 1, maxQ: 1, threads: 1 });
+    const record = await runBacktest(values, settingsFor({ max_p: 1, max_q: 1, backtest: { refit: 'reestimate', origins: 6, horizon: 2 } }), { threads: 1 });
     // Origins end at 91..96 observations; the one ending at 91 (index 90) and at 95 (index 94)
     // start from a missing value.
     expect(record.origins.map((origin) => origin.length)).toEqual([92, 93, 94, 96]);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { availableOrigins, defaultMinimumTraining, planOrigins } from '../../src/backtest/planOrigins.js';
+import { availableOrigins, planOrigins } from '../../src/backtest/planOrigins.js';
 
 // Expected origins from the definition in the issue: T = n − B − K + 1 .. n − B, step 1.
 describe('planOrigins', () => {
@@ -13,7 +13,7 @@ describe('planOrigins', () => {
 
   it('cuts origins at the minimum training length and says how many were possible', () => {
     // n = 40, B = 5, minimum 27: ends 27..35, 9 origins of the 20 asked for by default.
-    const plan = planOrigins(40, { horizon: 5, step: 1, window: 'expanding', minTrainingLength: 27 });
+    const plan = planOrigins(40, { horizon: 5, origins: 20, step: 1, window: 'expanding', minTrainingLength: 27 });
     expect(plan.origins.map((o) => o.end)).toEqual([27, 28, 29, 30, 31, 32, 33, 34, 35]);
     expect(plan).toMatchObject({ requested: 20, available: 9 });
     expect(availableOrigins(31, { horizon: 5, step: 1, minTrainingLength: 27 })).toBe(0);
@@ -27,11 +27,5 @@ describe('planOrigins', () => {
       { end: 53, start: 6 },
       { end: 56, start: 9 },
     ]);
-  });
-
-  it('defaults the minimum training length to max(20, 3 × parameters)', () => {
-    // maxP = maxQ = 3 for the deterministic model: 3 + 3 + 2 + 1 = 9 parameters.
-    expect(defaultMinimumTraining(9)).toBe(27);
-    expect(defaultMinimumTraining(5)).toBe(20);
   });
 });

@@ -5,6 +5,7 @@
 import { availableParallelism } from 'node:os';
 import { runBacktest } from '../../src/backtest/runBacktest.js';
 import { openOriginPool } from '../../src/backtest/runOriginTasks.js';
+import { resolveSettings } from '../../src/config/resolveSettings.js';
 import { readSeriesCsv } from '../../src/data/readSeriesCsv.js';
 import { median, type BenchRow } from './timing.js';
 
@@ -22,13 +23,13 @@ async function timeAsync(run: () => Promise<unknown>, repeats: number): Promise<
 }
 
 export async function backtestBench(): Promise<BenchRow[]> {
-  const nile = readSeriesCsv(new URL('../fixtures/nile.csv', import.meta.url).pathname);
-  const options = { refit: 'reselect', origins: 20, horizon: 5, maxP: 3, maxQ: 3 } as const;
-  const threads = Math.min(availableParallelism(), options.origins);
-  const pooled = await timeAsync(() => runBacktest(nile, options), REPEATS);
-  const inline = await timeAsync(() => runBacktest(nile, { ...options, threads: 1 }), REPEATS);
+  const nile = readSeriesCsv(new URL('../fixtures/nile.csv', import.meta.url).pathname, { missing: 'error' });
+  const settings = resolveSettings({ max_p: 3, max_q: 3, backtest: { refit: 'reselect', origins: 20, horizon: 5 } }, nile.frequency);
+  const threads = Math.min(availableParallelism(), settings.backtest.origins);
+  const pooled = await timeAsync(() => runBacktest(nile, settings), REPEATS);
+  const inline = await timeAsync(() => runBacktest(nile, settings, { threads: 1 }), REPEATS);
   const pool = openOriginPool(threads);
-  const warm = await timeAsync(() => runBacktest(nile, { ...options, pool }), REPEATS);
+  const warm = await timeAsync(() => runBacktest(nile, settings, { pool }), REPEATS);
   await pool.close();
   return [
     { name: `reselect, n = 100, K = 20, B = 5, both models, ${threads} threads started per run`, ms: median(pooled), target: 1000, extra: { threads } },

@@ -6,7 +6,7 @@ import { describe, expect, it } from 'vitest';
 import { parse } from 'yaml';
 import { parseConfig } from '../../src/config/parseConfig.js';
 import { configSchemaText } from '../../src/config/toJsonSchema.js';
-import { InputError } from '../../src/errors.js';
+import { InputError } from '../../src/base/problem.js';
 import { BASE, yaml } from './configText.js';
 
 const SCHEMA_FILE = 'schema/config.schema.json';
@@ -49,7 +49,9 @@ const INVALID: Record<string, string> = {
   'fractional horizon': withSeries('horizon: 2.5'),
   'horizon above range': withSeries('horizon: 1001'),
   'order above range': withSeries('max_p: 9'),
-  'level below range': withSeries('levels: [49]'),
+  'level below range': withSeries('levels: [0]'),
+  'level at the top of the range': withSeries('levels: [80, 100]'),
+  'five levels': withSeries('levels: [50, 60, 70, 80, 90]'),
   'significance above range': withSeries('significance: 0.11'),
   'lambda above range': withSeries('transform: {box_cox: 2.5}'),
   'origins above range': withSeries('backtest: {origins: 201}'),

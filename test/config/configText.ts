@@ -2,7 +2,7 @@
 // the list, and the problems parseConfig reports for it.
 import { parseConfig } from '../../src/config/parseConfig.js';
 import type { RunPlan } from '../../src/config/runPlan.js';
-import { formatProblem, type InputProblem } from '../../src/errors.js';
+import { formatProblem, type InputProblem } from '../../src/base/problem.js';
 import { problemsOf } from '../data/problemsOf.js';
 
 /** The smallest valid config: lines 1-6. */

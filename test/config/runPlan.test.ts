@@ -3,8 +3,8 @@
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { loadConfig } from '../../src/config/loadConfig.js';
-import { listSettings } from '../../src/config/runPlan.js';
-import { toAnalysisOptions } from '../../src/config/toAnalysisOptions.js';
+import { resolveSettings } from '../../src/config/resolveSettings.js';
+import { SETTING_KEYS } from '../../src/config/settingsSpec.js';
 import { BASE, BASE_DIR, planOf } from './configText.js';
 
 const FIXTURES = resolve('test/fixtures/config');
@@ -13,50 +13,62 @@ const FULL = join(FIXTURES, 'plans/full.yaml');
 describe('merging defaults and overrides', () => {
   const plan = loadConfig(FULL);
   const [inflow, reads] = plan.series;
+  const resolved = (series: typeof inflow) => resolveSettings(series.settings, 'annual');
 
-  it('takes the series value first, then defaults, then the built-in value, each with its source', () => {
+  it('takes the series value first, then defaults, each with the place that set it', () => {
     // test/fixtures/config/plans/full.yaml: horizon 8 under defaults (line 25), 12 on reservoir-inflow (line 52).
-    expect(inflow.settings.horizon).toEqual({ key: 'horizon', value: 12, source: 'config', at: { field: 'series[0].horizon', line: 52, column: 14 } });
-    expect(reads.settings.horizon).toEqual({ key: 'horizon', value: 8, source: 'config', at: { field: 'defaults.horizon', line: 25, column: 12 } });
-    expect(reads.settings.maxP).toMatchObject({ value: 1, source: 'config', at: { field: 'series[1].max_p', line: 61 } });
-    expect(inflow.settings.maxP).toMatchObject({ value: 2, at: { field: 'defaults.max_p', line: 30 } });
+    expect(inflow.settings.horizon).toBe(12);
+    expect(inflow.settingPlaces.get('horizon')).toEqual({ field: 'series[0].horizon', line: 52, column: 14 });
+    expect(reads.settings.horizon).toBe(8);
+    expect(reads.settingPlaces.get('horizon')).toEqual({ field: 'defaults.horizon', line: 25, column: 12 });
+    expect(reads.settings.max_p).toBe(1);
+    expect(reads.settingPlaces.get('max_p')).toMatchObject({ field: 'series[1].max_p', line: 61 });
+    expect(inflow.settings.max_p).toBe(2);
+    expect(inflow.settingPlaces.get('max_p')).toMatchObject({ field: 'defaults.max_p', line: 30 });
   });
 
   it('merges settings groups key by key', () => {
-    expect(inflow.settings.backtest.origins).toMatchObject({ value: 4, at: { field: 'series[0].backtest.origins', line: 55 } });
-    expect(inflow.settings.backtest.window).toMatchObject({ value: 'sliding', at: { field: 'defaults.backtest.window', line: 37 } });
-    expect(reads.settings.recommendation.model).toEqual({ key: 'recommendation.model', value: undefined, source: 'default' });
-    expect(inflow.settings.recommendation.justification.value).toBe('The board plans on a drifting demand path.');
+    expect(inflow.settings.backtest?.origins).toBe(4);
+    expect(inflow.settingPlaces.get('backtest.origins')).toMatchObject({ field: 'series[0].backtest.origins', line: 55 });
+    expect(inflow.settings.backtest?.window).toBe('sliding');
+    expect(inflow.settingPlaces.get('backtest.window')).toMatchObject({ field: 'defaults.backtest.window', line: 37 });
+    expect(reads.settings.recommendation?.model).toBeUndefined();
+    expect(reads.settingPlaces.has('recommendation.model')).toBe(false);
+    expect(inflow.settings.recommendation?.justification).toBe('The board plans on a drifting demand path.');
   });
 
-  it('turns the transform into the form the models take and sorts the levels', () => {
-    expect(inflow.settings.transform.value).toEqual({ kind: 'box-cox', lambda: 0.5 });
-    expect(reads.settings.transform.value).toEqual({ kind: 'log' });
-    expect(reads.settings.levels).toMatchObject({ value: [80, 95], at: { field: 'defaults.levels' } });
+  it('resolves the transform into the form the models take and sorts the levels', () => {
+    expect(resolved(inflow).transform).toEqual({ kind: 'box-cox', lambda: 0.5 });
+    expect(resolved(reads).transform).toEqual({ kind: 'log' });
+    expect(resolved(reads).levels).toEqual([80, 95]);
+    expect(reads.settingPlaces.get('levels')).toMatchObject({ field: 'defaults.levels' });
   });
 
-  it('uses the built-in value with source default when nothing sets a key', () => {
-    const bare = planOf(BASE).series[0].settings;
-    // Built-in values from our spec (src/config/builtInSettings.ts).
-    expect(listSettings(bare).map((s) => [s.key, s.value, s.source])).toEqual([
-      ['horizon', undefined, 'default'],
-      ['transform', { kind: 'none' }, 'default'],
-      ['levels', [80, 95], 'default'],
-      ['coefficient_uncertainty', true, 'default'],
-      ['point', 'median', 'default'],
-      ['max_p', 3, 'default'],
-      ['max_q', 3, 'default'],
-      ['significance', 0.05, 'default'],
-      ['backtest.origins', 20, 'default'],
-      ['backtest.horizon', undefined, 'default'],
-      ['backtest.refit', 'reselect', 'default'],
-      ['backtest.window', 'expanding', 'default'],
-      ['backtest.min_train', undefined, 'default'],
-      ['recommendation.rule', 'prefer-stochastic', 'default'],
-      ['recommendation.significance', 0.05, 'default'],
-      ['recommendation.model', undefined, 'default'],
-      ['recommendation.justification', undefined, 'default'],
-      ['missing', 'error', 'default'],
+  it('leaves out what nothing sets: resolveSettings gives the built-in value', () => {
+    const bare = planOf(BASE).series[0];
+    expect(bare.settings).toEqual({});
+    expect(bare.settingPlaces.size).toBe(0);
+    // Every setting, in the order of the spec (src/config/settingsSpec.ts), the order of the memo's register.
+    expect(SETTING_KEYS).toEqual([
+      'horizon',
+      'transform',
+      'levels',
+      'coefficient_uncertainty',
+      'point',
+      'max_p',
+      'max_q',
+      'significance',
+      'backtest.origins',
+      'backtest.horizon',
+      'backtest.refit',
+      'backtest.window',
+      'backtest.min_train',
+      'recommendation.rule',
+      'recommendation.significance',
+      'recommendation.scored_level',
+      'recommendation.model',
+      'recommendation.justification',
+      'missing',
     ]);
   });
 });
@@ -108,20 +120,19 @@ describe('memo details and analysis options', () => {
     expect(memo.signOff[0].comment).toBe('Widen the discussion of the 95% intervals.\nKeep the stochastic model as the headline.\n');
   });
 
-  it('passes every effective setting to the analysis', () => {
+  it('resolves every effective setting for the analysis', () => {
     const [inflow, reads] = loadConfig(FULL).series;
-    expect(toAnalysisOptions(inflow)).toEqual({
-      id: 'reservoir-inflow',
-      title: 'Reservoir inflow',
+    expect(resolveSettings(inflow.settings, 'annual')).toMatchObject({
       horizon: 12,
       levels: [80, 95],
-      maxP: 2,
-      maxQ: 2,
+      max_p: 2,
+      max_q: 2,
       transform: { kind: 'box-cox', lambda: 0.5 },
-      coefficientUncertainty: false,
+      coefficient_uncertainty: false,
       point: 'mean',
       significance: 0.1,
     });
-    expect(toAnalysisOptions(reads)).toMatchObject({ title: 'meter-reads', horizon: 8, maxP: 1, transform: { kind: 'log' } });
+    expect(resolveSettings(reads.settings, 'annual')).toMatchObject({ horizon: 8, max_p: 1, transform: { kind: 'log' } });
+    expect(reads.title).toBe('meter-reads');
   });
 });

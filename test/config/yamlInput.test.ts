@@ -7,9 +7,10 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { loadConfig, MAX_CONFIG_FILE_BYTES } from '../../src/config/loadConfig.js';
 import { parseConfig } from '../../src/config/parseConfig.js';
 import { MAX_ALIAS_COUNT } from '../../src/config/readYamlTree.js';
-import { formatProblem } from '../../src/errors.js';
+import { formatProblem } from '../../src/base/problem.js';
 import { problemsOf } from '../data/problemsOf.js';
 import { BASE, onlyProblem, planOf, yaml } from './configText.js';
+import { resolveSettings } from '../../src/config/resolveSettings.js';
 
 const DIR = mkdtempSync(join(tmpdir(), 'trendbrief-config-'));
 afterAll(() => rmSync(DIR, { recursive: true, force: true }));
@@ -55,11 +56,11 @@ describe('YAML syntax', () => {
 describe('aliases', () => {
   it('reads a value shared through an anchor and an alias', () => {
     const plan = planOf([...BASE, '    levels: &levels [90, 50]', '  - id: outflow', '    file: b.csv', '    levels: *levels']);
-    expect(plan.series.map((s) => s.settings.levels.value)).toEqual([
+    expect(plan.series.map((s) => resolveSettings(s.settings, 'annual').levels)).toEqual([
       [50, 90],
       [50, 90],
     ]);
-    expect(plan.series[1].settings.levels.at).toEqual({ field: 'series[1].levels', line: 10, column: 13 });
+    expect(plan.series[1].settingPlaces.get('levels')).toEqual({ field: 'series[1].levels', line: 10, column: 13 });
   });
 
   it('refuses YAML merge keys, which the YAML 1.2 core schema does not define', () => {

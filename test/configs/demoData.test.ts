@@ -18,7 +18,9 @@ afterAll(() => rmSync(OUT, { recursive: true, force: true }));
  * value the script drew the series with (common practice).
  */
 function expectNear(record: AnalysisRecord, kind: 'deterministic' | 'stochastic', name: string, generating: number, index = 0): void {
-  const { coefficients, stderr } = record.models[kind];
+  // Read by name across both models' coefficient sets.
+  const coefficients: Record<string, number | number[]> = { ...record.models[kind].coefficients };
+  const stderr: Record<string, number | null | (number | null)[]> = { ...record.models[kind].stderr };
   const value = coefficients[name];
   const error = stderr[name];
   const estimate = Array.isArray(value) ? value[index] : value;

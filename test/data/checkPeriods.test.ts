@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { checkPeriods, type DatedLine } from '../../src/data/checkPeriods.js';
-import { parsePeriod } from '../../src/data/period.js';
-import { parseSeriesCsv } from '../../src/data/parseSeriesCsv.js';
+import { parsePeriod } from '../../src/base/period.js';
+import { parseSeriesCsv, type SeriesOptions } from '../../src/data/parseSeriesCsv.js';
 import { codesAndLines, problemsOf } from './problemsOf.js';
 
-const problems = (text: string, options = {}) => problemsOf(() => parseSeriesCsv(text, 'p.csv', options));
+const problems = (text: string, options: Partial<SeriesOptions> = {}) => problemsOf(() => parseSeriesCsv(text, 'p.csv', { missing: 'error', ...options }));
 
 function dated(labels: readonly string[]): DatedLine[] {
   return labels.map((label, i) => {

@@ -36,7 +36,7 @@ describe('checkSeries', () => {
   });
 
   it('works without line numbers for values that did not come from a file', () => {
-    const [found] = checkSeries({ file: 'mem', column: 'x', values: [1, -1] }, { transform: { kind: 'box-cox' } });
-    expect(found).toMatchObject({ code: 'series.non-positive', line: undefined, message: 'value -1 is not positive, which the Box-Cox transform needs' });
+    const [found] = checkSeries({ file: 'mem', column: 'x', values: [1, -1] }, { transform: { kind: 'box-cox', lambda: 0.5 } });
+    expect(found).toMatchObject({ code: 'series.non-positive', line: undefined, message: 'value -1 is not positive, which the Box-Cox (lambda 0.5) transform needs' });
   });
 });

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { closestName, editDistance } from '../../src/data/closestName.js';
+import { closestName, editDistance } from '../../src/base/closestName.js';
 
 describe('editDistance', () => {
   it('matches textbook values', () => {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { limitProblems } from '../../src/data/limitProblems.js';
-import { problem } from '../../src/errors.js';
+import { limitProblems } from '../../src/base/limitProblems.js';
+import { problem } from '../../src/base/problem.js';
 import { codesAndLines } from './problemsOf.js';
 
 describe('limitProblems', () => {

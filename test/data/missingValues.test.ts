@@ -1,7 +1,7 @@
 // missing: allow — empty cells, markers and missing periods become NaN observations (our spec).
 import { describe, expect, it } from 'vitest';
 import { parseSeriesCsv } from '../../src/data/parseSeriesCsv.js';
-import { InputError } from '../../src/errors.js';
+import { InputError } from '../../src/base/problem.js';
 
 const TEXT = ['period,value', '2001,10', '2002,', '2003,NA', '2005,13', '2006,14.5'].join('\n');
 
@@ -16,7 +16,7 @@ describe('series with missing values allowed', () => {
 
   it('still reports each gap and empty cell by default, with the way out named', () => {
     try {
-      parseSeriesCsv(TEXT, 'gaps.csv');
+      parseSeriesCsv(TEXT, 'gaps.csv', { missing: 'error' });
       throw new Error('expected an InputError');
     } catch (error) {
       if (!(error instanceof InputError)) throw error;

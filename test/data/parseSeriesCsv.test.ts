@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { parseSeriesCsv } from '../../src/data/parseSeriesCsv.js';
+import { parseSeriesCsv, type SeriesOptions } from '../../src/data/parseSeriesCsv.js';
 import { codesAndLines, problemsOf } from './problemsOf.js';
 
-const parse = (text: string, options = {}) => parseSeriesCsv(text, 'in.csv', options);
+const parse = (text: string, options: Partial<SeriesOptions> = {}) => parseSeriesCsv(text, 'in.csv', { missing: 'error', ...options });
 const problems = (text: string, options = {}) => problemsOf(() => parse(text, options));
 
 describe('parseSeriesCsv on valid input', () => {

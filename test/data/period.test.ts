@@ -6,7 +6,7 @@ import {
   periodFromIndex,
   periodIndex,
   periodsPerYear,
-} from '../../src/data/period.js';
+} from '../../src/base/period.js';
 
 describe('parsePeriod', () => {
   it('reads the three label forms', () => {

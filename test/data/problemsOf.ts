@@ -1,6 +1,6 @@
 // Test helper: the problems an InputError carries, failing the test when nothing is thrown.
 
-import { InputError, type InputProblem } from '../../src/errors.js';
+import { InputError, type InputProblem } from '../../src/base/problem.js';
 
 export function problemsOf(run: () => unknown): readonly InputProblem[] {
   try {

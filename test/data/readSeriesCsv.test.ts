@@ -47,7 +47,7 @@ describe('readSeriesCsv on the open datasets', () => {
   for (const expected of cases) {
     it(`reads ${expected.name}`, () => {
       const file = fixture(expected.name);
-      const series = readSeriesCsv(file, { minObservations: 20, transform: { kind: 'log' } });
+      const series = readSeriesCsv(file, { minObservations: 20, transform: { kind: 'log' }, missing: 'error' });
       expect(series).toMatchObject({
         file,
         column: 'value',
@@ -68,14 +68,14 @@ describe('readSeriesCsv on the open datasets', () => {
   }
 
   it('says how many observations a too-demanding use would need', () => {
-    const found = problemsOf(() => readSeriesCsv(fixture('nile.csv'), { minObservations: 120 }));
+    const found = problemsOf(() => readSeriesCsv(fixture('nile.csv'), { minObservations: 120, missing: 'error' }));
     expect(found).toEqual([expect.objectContaining({ code: 'series.too-few', message: 'has 100 observations; at least 120 are needed' })]);
   });
 });
 
 describe('readSeriesCsv on hand-written bad files', () => {
   it('accepts a BOM, CRLF endings, padded and quoted cells and trailing blank lines', () => {
-    const series = readSeriesCsv(fixture('data/bom-crlf.csv'));
+    const series = readSeriesCsv(fixture('data/bom-crlf.csv'), { missing: 'error' });
     expect(series).toMatchObject({ periodColumn: 'period', column: 'value', frequency: 'quarterly', first: '2008-Q3', last: '2009-Q2', n: 4 });
     expect([...series.values]).toEqual([101.5, 99.25, 98, 97]);
     // sha256sum (GNU coreutils 9.1) of the file bytes, BOM included.
@@ -84,7 +84,7 @@ describe('readSeriesCsv on hand-written bad files', () => {
 
   it('reports every bad value line of a file in one error', () => {
     const file = fixture('data/bad-values.csv');
-    const found = problemsOf(() => readSeriesCsv(file));
+    const found = problemsOf(() => readSeriesCsv(file, { missing: 'error' }));
     expect(codesAndLines(found)).toEqual([
       'csv.bad-value@3',
       'csv.non-finite@4',
@@ -98,7 +98,7 @@ describe('readSeriesCsv on hand-written bad files', () => {
   });
 
   it('reports every period problem of a file in one error', () => {
-    const found = problemsOf(() => readSeriesCsv(fixture('data/bad-periods.csv')));
+    const found = problemsOf(() => readSeriesCsv(fixture('data/bad-periods.csv'), { missing: 'error' }));
     expect(codesAndLines(found)).toEqual([
       'csv.duplicate-period@4',
       'csv.unsorted@6',
@@ -113,25 +113,25 @@ describe('readSeriesCsv on hand-written bad files', () => {
   });
 
   it('refuses a file without a header and a semicolon-separated file', () => {
-    expect(problemsOf(() => readSeriesCsv(fixture('data/no-header.csv')))[0]).toMatchObject({ code: 'csv.no-header', line: 1 });
-    expect(problemsOf(() => readSeriesCsv(fixture('data/semicolon.csv')))[0]).toMatchObject({ code: 'csv.one-column', line: 1 });
+    expect(problemsOf(() => readSeriesCsv(fixture('data/no-header.csv'), { missing: 'error' }))[0]).toMatchObject({ code: 'csv.no-header', line: 1 });
+    expect(problemsOf(() => readSeriesCsv(fixture('data/semicolon.csv'), { missing: 'error' }))[0]).toMatchObject({ code: 'csv.one-column', line: 1 });
   });
 
   it('refuses text that is not UTF-8', () => {
     const file = fixture('data/latin1.csv');
-    expect(problemsOf(() => readSeriesCsv(file))).toEqual([expect.objectContaining({ code: 'csv.not-utf8', file })]);
+    expect(problemsOf(() => readSeriesCsv(file, { missing: 'error' }))).toEqual([expect.objectContaining({ code: 'csv.not-utf8', file })]);
   });
 });
 
 describe('readSeriesCsv file-system problems', () => {
   it('reports a missing file', () => {
     const file = join(scratch, 'absent.csv');
-    expect(problemsOf(() => readSeriesCsv(file))).toEqual([expect.objectContaining({ code: 'csv.file-missing', file })]);
-    expect(problemsOf(() => readSeriesCsv(join(fixture('nile.csv'), 'inner.csv')))[0].code).toBe('csv.file-missing');
+    expect(problemsOf(() => readSeriesCsv(file, { missing: 'error' }))).toEqual([expect.objectContaining({ code: 'csv.file-missing', file })]);
+    expect(problemsOf(() => readSeriesCsv(join(fixture('nile.csv'), 'inner.csv'), { missing: 'error' }))[0].code).toBe('csv.file-missing');
   });
 
   it('reports a directory given as a file', () => {
-    expect(problemsOf(() => readSeriesCsv(scratch))).toEqual([
+    expect(problemsOf(() => readSeriesCsv(scratch, { missing: 'error' }))).toEqual([
       expect.objectContaining({ code: 'csv.not-a-file', file: scratch, message: 'is a directory, not a regular file' }),
     ]);
   });
@@ -141,7 +141,7 @@ describe('readSeriesCsv file-system problems', () => {
     const file = join(scratch, 'huge.csv');
     writeFileSync(file, 'period,value\n');
     truncateSync(file, MAX_SERIES_FILE_BYTES + 1);
-    const [found] = problemsOf(() => readSeriesCsv(file));
+    const [found] = problemsOf(() => readSeriesCsv(file, { missing: 'error' }));
     expect(found).toMatchObject({ code: 'csv.too-large', file, message: 'is 20.1 MB, above the 20 MB limit for a series file' });
   });
 });

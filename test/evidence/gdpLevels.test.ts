@@ -1,7 +1,8 @@
 // US real GDP levels (test/fixtures/us-real-gdp.csv, n = 203, not logged): the values that
 // statsmodels' own test-suite takes from Stata for ADF and from R's tseries for KPSS.
 import { describe, expect, it } from 'vitest';
-import { adfTest, kpssTest } from '../../src/evidence/index.js';
+import { adfTest } from '../../src/evidence/adfTest.js';
+import { kpssTest } from '../../src/evidence/kpssTest.js';
 import { expectRelative } from './expectRelative.js';
 import { readSeriesValues } from './referenceFixtures.js';
 

@@ -1,6 +1,8 @@
 // The published tables behind the p-values and critical values.
 import { describe, expect, it } from 'vitest';
-import { kpssCritical, kpssPValue, mackinnonCritical, mackinnonPValue } from '../../src/evidence/index.js';
+import { kpssCritical, kpssPValue } from '../../src/evidence/kpssTable.js';
+import { mackinnonCritical } from '../../src/evidence/mackinnonCritical.js';
+import { mackinnonPValue } from '../../src/evidence/mackinnonPValue.js';
 import { expectRelative } from './expectRelative.js';
 
 describe('KPSS Table 1 (Kwiatkowski, Phillips, Schmidt & Shin 1992)', () => {

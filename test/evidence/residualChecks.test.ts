@@ -5,7 +5,9 @@
 //   acorr_ljungbox(x, lags=[m], model_df=p+q), acf(x, nlags=10, fft=False),
 //   statsmodels.stats.stattools.jarque_bera(x).
 import { describe, expect, it } from 'vitest';
-import { jarqueBera, ljungBox, residualAcf } from '../../src/evidence/index.js';
+import { jarqueBera } from '../../src/evidence/jarqueBera.js';
+import { ljungBox } from '../../src/evidence/ljungBox.js';
+import { residualAcf } from '../../src/evidence/residualAcf.js';
 import { expectRelative } from './expectRelative.js';
 import { readEvidenceFixture } from './referenceFixtures.js';
 

@@ -8,7 +8,10 @@
 // verdict is the most frequent one. Slope and drift do not affect either test (both regress
 // on a trend), so the processes have no free setting to tune.
 import { describe, expect, it } from 'vitest';
-import { adfTest, kpssTest, trendVerdict, type TrendVerdictKind } from '../../src/evidence/index.js';
+import { adfTest } from '../../src/evidence/adfTest.js';
+import { kpssTest } from '../../src/evidence/kpssTest.js';
+import { trendVerdict } from '../../src/evidence/trendVerdict.js';
+import type { TrendVerdictKind } from '../../src/evidence/types.js';
 import { seededNormals } from './seededNormals.js';
 import { randomWalkWithDrift, trendStationaryAr1 } from './simulatedSeries.js';
 

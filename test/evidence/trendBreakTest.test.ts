@@ -10,12 +10,13 @@
 import { describe, expect, it } from 'vitest';
 import { ols } from '../../src/linalg/ols.js';
 import { fitRegressionArma } from '../../src/models/fitRegressionArma.js';
-import { trendDesign, type TrendModelKind } from '../../src/models/trendModels.js';
+import { trendDesign } from '../../src/models/trendModels.js';
 import { trendBreakScan, trendBreakTest } from '../../src/evidence/trendBreakTest.js';
 import type { BreakTestResult } from '../../src/evidence/types.js';
 import { expectRelative } from './expectRelative.js';
 import { seededNormals } from './seededNormals.js';
 import { trendWithSlopeBreak, walkWithDriftShift } from './simulatedBreaks.js';
+import { type TrendModelKind } from '../../src/base/settings.js';
 
 function testAtOrder(kind: TrendModelKind, w: Float64Array, p: number, q: number): BreakTestResult {
   const design = trendDesign(kind, w);

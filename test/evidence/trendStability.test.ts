@@ -1,6 +1,7 @@
 // Trend stability as one record: expanding-window slope and drift, and the two break tests.
 import { describe, expect, it } from 'vitest';
-import { breakTestSummary, trendStability } from '../../src/evidence/index.js';
+import { breakTestSummary } from '../../src/evidence/messages.js';
+import { trendStability } from '../../src/evidence/trendStability.js';
 import { expandingWindowSchedule } from '../../src/evidence/expandingWindows.js';
 import { ols } from '../../src/linalg/ols.js';
 import { fitTrendModelAtOrder } from '../../src/models/trendModels.js';

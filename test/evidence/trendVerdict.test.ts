@@ -1,7 +1,9 @@
 // The four readings of KPSS-trend against ADF-trend (common practice: opposite nulls, see
 // Kwiatkowski et al. 1992, §1), on constructed p-values and on the reference datasets.
 import { describe, expect, it } from 'vitest';
-import { adfTest, kpssTest, trendVerdict } from '../../src/evidence/index.js';
+import { adfTest } from '../../src/evidence/adfTest.js';
+import { kpssTest } from '../../src/evidence/kpssTest.js';
+import { trendVerdict } from '../../src/evidence/trendVerdict.js';
 import { readSeriesValues } from './referenceFixtures.js';
 
 const kpss = (p_value: number, p_bound?: 'below' | 'above') => ({ p_value, p_bound, regression: 'trend' as const });

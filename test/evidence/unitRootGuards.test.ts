@@ -1,6 +1,7 @@
 // What the unit-root tests refuse, and that they leave their input alone.
 import { describe, expect, it } from 'vitest';
-import { adfTest, kpssTest } from '../../src/evidence/index.js';
+import { adfTest } from '../../src/evidence/adfTest.js';
+import { kpssTest } from '../../src/evidence/kpssTest.js';
 import { readSeriesValues } from './referenceFixtures.js';
 
 const nile = readSeriesValues('nile');

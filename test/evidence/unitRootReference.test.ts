@@ -3,7 +3,8 @@
 // `adfuller(x, regression, autolag='AIC')` / `adfuller(x, maxlag=k, regression, autolag=None)`),
 // and KPSS p-values from test/fixtures/evidence/statsmodels-checks.json (same library and calls).
 import { describe, expect, it } from 'vitest';
-import { adfTest, kpssTest } from '../../src/evidence/index.js';
+import { adfTest } from '../../src/evidence/adfTest.js';
+import { kpssTest } from '../../src/evidence/kpssTest.js';
 import { expectRelative } from './expectRelative.js';
 import { readEvidenceFixture, readSeriesValues, readUnitRootReferences, type ReferenceDataset } from './referenceFixtures.js';
 

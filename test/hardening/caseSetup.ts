@@ -4,7 +4,7 @@
 import { execFileSync } from 'node:child_process';
 import { mkdirSync, readFileSync, rmSync, symlinkSync, writeFileSync } from 'node:fs';
 import { dirname, join } from 'node:path';
-import { MAX_CONFIG_FILE_BYTES } from '../../src/config/index.js';
+import { MAX_CONFIG_FILE_BYTES } from '../../src/config/loadConfig.js';
 import { MAX_SERIES_FILE_BYTES } from '../../src/data/readSeriesCsv.js';
 
 export type SetupStep =

@@ -5,7 +5,8 @@ import { cpSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:f
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { MAX_ALIAS_COUNT, MAX_CONFIG_FILE_BYTES } from '../../src/config/index.js';
+import { MAX_ALIAS_COUNT } from '../../src/config/readYamlTree.js';
+import { MAX_CONFIG_FILE_BYTES } from '../../src/config/loadConfig.js';
 import { MAX_SERIES_FILE_BYTES } from '../../src/data/readSeriesCsv.js';
 import { runCli } from '../support/runCli.js';
 import { HARDENING_FIXTURES } from './refusedCases.js';

@@ -11,13 +11,18 @@ import { narrowLineIntervals } from '../../src/memo/caveats/narrowLineIntervals.
 import { residualPattern } from '../../src/memo/caveats/residualPattern.js';
 import { trendBreak } from '../../src/memo/caveats/trendBreak.js';
 import { unitRootEvidence } from '../../src/memo/caveats/unitRootEvidence.js';
-import type { MemoRecord } from '../../src/memo/recordParts.js';
+import type { AnalysisRecord } from '../../src/analysis/record.js';
 import { formatSignificant } from '../../src/memo/format/formatNumber.js';
 import { handMadeBacktest, handMadeRecommendation } from './handMadeParts.js';
 import { bareRecord, fullRecord } from './sampleInput.js';
 
+/** The record as if analysed at another horizon (the caveats read the horizon from the settings). */
+function atHorizon(record: AnalysisRecord, horizon: number): AnalysisRecord {
+  return { ...record, settings: { ...record.settings, horizon } };
+}
+
 /** Sets the last forecast's 95% intervals of both models around their points. */
-function withEndWidths(record: MemoRecord, deterministic: number, stochastic: number): MemoRecord {
+function withEndWidths(record: AnalysisRecord, deterministic: number, stochastic: number): AnalysisRecord {
   const copy = structuredClone(record);
   for (const [model, width] of [['deterministic', deterministic], ['stochastic', stochastic]] as const) {
     const last = copy.forecasts[model][copy.forecasts[model].length - 1];
@@ -28,22 +33,19 @@ function withEndWidths(record: MemoRecord, deterministic: number, stochastic: nu
 
 describe('horizon-long', () => {
   it('fires above a quarter of the history and is high above half', () => {
-    const record = bareRecord('lakeHuron'); // n = 98
-    record.settings.horizon = 30;
+    const record = atHorizon(bareRecord('lakeHuron'), 30); // n = 98
     const caveat = horizonLong.evaluate({ record });
     expect(caveat?.severity).toBe('medium');
     expect(caveat?.numbers.share).toBeCloseTo(30 / 98, 12);
     expect(caveat?.text).toContain('30 years ahead from a history of 98 observations');
     expect(caveat?.text).toContain('31% of the history');
-    record.settings.horizon = 50;
-    expect(horizonLong.evaluate({ record })?.severity).toBe('high');
+    expect(horizonLong.evaluate({ record: atHorizon(record, 50) })?.severity).toBe('high');
   });
   it('is silent at a quarter or less', () => {
     const record = bareRecord('lakeHuron');
     expect(record.settings.horizon).toBe(10);
     expect(horizonLong.evaluate({ record })).toBeNull();
-    record.settings.horizon = 24; // 24/98 < 0.25
-    expect(horizonLong.evaluate({ record })).toBeNull();
+    expect(horizonLong.evaluate({ record: atHorizon(record, 24) })).toBeNull(); // 24/98 < 0.25
   });
 });
 
@@ -185,8 +187,7 @@ describe('fixed-line-extrapolation', () => {
     expect(recommended.recommendation?.model).toBe('deterministic');
     expect(fixedLineExtrapolation.evaluate({ record: recommended })?.severity).toBe('high');
     expect(fixedLineExtrapolation.evaluate({ record: fullRecord('nile') })?.severity).toBe('low');
-    const short = bareRecord('gdp');
-    short.settings.horizon = 1;
+    const short = atHorizon(bareRecord('gdp'), 1);
     expect(fixedLineExtrapolation.evaluate({ record: short })?.text).toContain('1 quarter beyond the data');
   });
 });

@@ -4,7 +4,7 @@
 // and, for layout rules, from our spec (src/memo/charts/).
 import { describe, expect, it } from 'vitest';
 import type { TopLevelSpec } from 'vega-lite';
-import { addPeriods } from '../../src/data/period.js';
+import { addPeriods } from '../../src/base/period.js';
 import { backtestChart, backtestRows } from '../../src/memo/charts/backtestChart.js';
 import { forecastChart, recentLength } from '../../src/memo/charts/forecastChart.js';
 import { historyChart } from '../../src/memo/charts/historyChart.js';
@@ -14,10 +14,10 @@ import { residualAcfChart } from '../../src/memo/charts/residualAcfChart.js';
 import { stabilityChart } from '../../src/memo/charts/stabilityChart.js';
 import { widthRatioChart } from '../../src/memo/charts/widthRatioChart.js';
 import type { MemoSeries } from '../../src/memo/memoInput.js';
-import type { StabilityPart } from '../../src/memo/recordParts.js';
+import type { StabilityRecord } from '../../src/analysis/record.js';
 import { sampleSeries } from './sampleInput.js';
 
-function stabilityOf(entry: MemoSeries): StabilityPart {
+function stabilityOf(entry: MemoSeries): StabilityRecord {
   const stability = entry.record.evidence.stability;
   if (stability === undefined || stability === null) throw new Error('the sample record has no stability part');
   return stability;

@@ -2,20 +2,21 @@
 // record's BacktestRecord and RecommendationRecord. Their numbers are invented but scaled
 // from the record they are attached to (our spec: plausible magnitudes, not computed
 // statistics), so the memo has realistic input without the seconds a real backtest takes.
-import { addPeriods } from '../../src/data/period.js';
-import type { BacktestComparison, BacktestHorizonRow, BacktestPart, MemoRecord, ModelKind, RecommendationPart } from '../../src/memo/recordParts.js';
+import { addPeriods } from '../../src/base/period.js';
+import type { AnalysisRecord, BacktestRecord, ComparisonRow, HorizonScores, RecommendationRecord } from '../../src/analysis/record.js';
+import type { TrendModelKind } from '../../src/base/settings.js';
 
 /** z for a 95% interval, 1.959964 (scipy 1.10.1 norm.ppf(0.975)). */
 const Z95 = 1.959963984540054;
 const BACKTEST_HORIZON = 5;
 
 /** One-step forecast standard deviation in the series' units, read off the stochastic interval. */
-function unitScale(record: MemoRecord): number {
+function unitScale(record: AnalysisRecord): number {
   const [lo, hi] = record.forecasts.stochastic[0].intervals['95'];
   return (hi - lo) / (2 * Z95);
 }
 
-function horizonRow(h: number, n: number, scale: number, level: number, factor: number, coverage95: number | null): BacktestHorizonRow {
+function horizonRow(h: number, n: number, scale: number, level: number, factor: number, coverage95: number | null): HorizonScores {
   const rmse = scale * Math.sqrt(h) * factor;
   const intervals = coverage95 !== null;
   return {
@@ -32,20 +33,20 @@ function horizonRow(h: number, n: number, scale: number, level: number, factor: 
   };
 }
 
-function comparisonRow(h: number, loss: BacktestComparison['loss'], origins: number): BacktestComparison {
+function comparisonRow(h: number, loss: ComparisonRow['loss'], origins: number): ComparisonRow {
   if (h === BACKTEST_HORIZON) {
     return { h, loss, n: origins, mean_difference: null, statistic: null, p_value: null, better: null, available: false, reason: 'the long-run variance estimate of the loss differences is not positive' };
   }
   return { h, loss, n: origins - h + 1, mean_difference: 0.1 * h, statistic: 0.4 + 0.5 * h, p_value: Math.max(0.004, 0.6 - 0.16 * h), better: h > 2 ? 'stochastic' : 'deterministic', available: true, reason: null };
 }
 
-export function handMadeBacktest(record: MemoRecord, origins = 14): BacktestPart {
+export function handMadeBacktest(record: AnalysisRecord, origins = 14): BacktestRecord {
   const scale = unitScale(record);
   const level = record.forecasts.stochastic[0].point;
   const n = record.series.n;
   const firstLength = n - BACKTEST_HORIZON - origins + 1;
   const hs = Array.from({ length: BACKTEST_HORIZON }, (_, i) => i + 1);
-  const model = (kind: ModelKind) => ({ p: record.models[kind].p, q: record.models[kind].q, loglik: record.models[kind].loglik, converged: true });
+  const model = (kind: TrendModelKind) => ({ p: record.models[kind].p, q: record.models[kind].q, loglik: record.models[kind].loglik, converged: true });
   return {
     settings: {
       origins,
@@ -82,13 +83,14 @@ export function handMadeBacktest(record: MemoRecord, origins = 14): BacktestPart
   };
 }
 
-export function handMadeRecommendation(model: ModelKind): RecommendationPart {
+export function handMadeRecommendation(model: TrendModelKind): RecommendationRecord {
   return {
     model,
     rule: 'prefer-stochastic',
     rule_text: 'Recommend the stochastic trend unless the deterministic trend scores better on the backtest at the longer horizons and the unit-root evidence allows it.',
     fixed_by_config: false,
     significance: 0.05,
+    scored_level: 95,
     reasons:
       model === 'stochastic'
         ? ['Lower backtest interval scores at horizons 3 to 5.', 'Its wider intervals cover the backtest outcomes at close to the stated rate.']

@@ -2,51 +2,56 @@
 // by analyseSeries (provenance in test/fixtures/README.md), evidence and trend stability
 // included, each with hand-made backtest and recommendation parts, for an invented
 // consultancy and client.
-import { analyseSeries, type AnalysisOptions } from '../../src/analysis/analyseSeries.js';
+import { analyseSeries } from '../../src/analysis/analyseSeries.js';
+import type { WrittenSettings } from '../../src/config/resolveSettings.js';
 import { readSeriesCsv } from '../../src/data/readSeriesCsv.js';
 import type { MemoInput, MemoSeries } from '../../src/memo/memoInput.js';
-import type { MemoRecord } from '../../src/memo/recordParts.js';
+import type { AnalysisRecord } from '../../src/analysis/record.js';
+import { settingsFor } from '../support/settings.js';
 import { handMadeBacktest, handMadeRecommendation } from './handMadeParts.js';
 
 interface FixtureSpec {
   file: string;
-  options: AnalysisOptions;
+  id: string;
+  title: string;
+  settings: WrittenSettings;
   units: string;
 }
 
 const FIXTURES = {
-  lakeHuron: { file: 'test/fixtures/lake-huron.csv', options: { id: 'lake-huron', title: 'Lake Huron mean level' }, units: 'ft' },
-  nile: { file: 'test/fixtures/nile.csv', options: { id: 'nile', title: 'Nile flow at Aswan' }, units: '10⁸ m³' },
-  gdp: {
-    file: 'test/fixtures/us-real-gdp.csv',
-    options: { id: 'us-real-gdp', title: 'US real GDP', transform: { kind: 'log' }, horizon: 12 },
-    units: 'bn USD (2005)',
-  },
+  lakeHuron: { file: 'test/fixtures/lake-huron.csv', id: 'lake-huron', title: 'Lake Huron mean level', settings: {}, units: 'ft' },
+  nile: { file: 'test/fixtures/nile.csv', id: 'nile', title: 'Nile flow at Aswan', settings: {}, units: '10⁸ m³' },
+  gdp: { file: 'test/fixtures/us-real-gdp.csv', id: 'us-real-gdp', title: 'US real GDP', settings: { transform: 'log', horizon: 12 }, units: 'bn USD (2005)' },
 } satisfies Record<string, FixtureSpec>;
 
 export type FixtureName = keyof typeof FIXTURES;
 
-const analysed = new Map<FixtureName, { record: MemoRecord; history: MemoSeries['history'] }>();
+/** Each fixture analysed once per test file, without a backtest. */
+const analysed = new Map(
+  await Promise.all(
+    (Object.entries(FIXTURES) as [FixtureName, FixtureSpec][]).map(async ([name, spec]) => {
+      const series = readSeriesCsv(spec.file, { missing: 'error' });
+      const record = await analyseSeries(series, settingsFor(spec.settings, series.frequency), { id: spec.id, title: spec.title, file: spec.file }, { backtest: false });
+      const history = series.periods.map((period, i) => ({ period, value: series.values[i] }));
+      return [name, { record, history }] as const;
+    }),
+  ),
+);
 
-/** The fixture's AnalysisRecord, analysed once per test file. */
-function analysedFixture(name: FixtureName): { record: MemoRecord; history: MemoSeries['history'] } {
-  const cached = analysed.get(name);
-  if (cached !== undefined) return structuredClone(cached);
-  const spec: FixtureSpec = FIXTURES[name];
-  const series = readSeriesCsv(spec.file);
-  const record = analyseSeries(series, spec.options);
-  const history = series.periods.map((period, i) => ({ period, value: series.values[i] }));
-  analysed.set(name, { record, history });
-  return structuredClone({ record, history });
+/** A copy of the fixture's record and history, free to change. */
+function analysedFixture(name: FixtureName): { record: AnalysisRecord; history: MemoSeries['history'] } {
+  const found = analysed.get(name);
+  if (found === undefined) throw new Error(`no fixture ${name}`);
+  return structuredClone(found);
 }
 
 /** The fixture's record as analyseSeries writes it, without the backtest and recommendation parts. */
-export function bareRecord(name: FixtureName): MemoRecord {
+export function bareRecord(name: FixtureName): AnalysisRecord {
   return analysedFixture(name).record;
 }
 
 /** The fixture's record with the backtest and recommendation attached. */
-export function fullRecord(name: FixtureName): MemoRecord {
+export function fullRecord(name: FixtureName): AnalysisRecord {
   const record = bareRecord(name);
   record.backtest = handMadeBacktest(record);
   record.recommendation = handMadeRecommendation(name === 'lakeHuron' ? 'deterministic' : 'stochastic');

@@ -4,7 +4,7 @@ import { mkdtempSync, mkdirSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { InputError } from '../../src/errors.js';
+import { InputError } from '../../src/base/problem.js';
 import { loadTemplates } from '../../src/memo/loadTemplates.js';
 
 describe('own templates', () => {

@@ -3,8 +3,9 @@
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
-import { fitTrendModelAtOrder, type TrendModelKind } from '../../src/models/trendModels.js';
+import { fitTrendModelAtOrder } from '../../src/models/trendModels.js';
 import { readSeriesValues } from '../evidence/referenceFixtures.js';
+import { type TrendModelKind } from '../../src/base/settings.js';
 
 interface GapFit {
   model: TrendModelKind;

@@ -4,9 +4,10 @@
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
-import { fitTrendModel, forecastTrendModel, type TrendModelKind } from '../../src/models/trendModels.js';
+import { fitTrendModel, forecastTrendModel } from '../../src/models/trendModels.js';
 import { isStationary } from '../../src/models/constraints.js';
 import { readSeriesValues, type ReferenceDataset } from '../evidence/referenceFixtures.js';
+import { type TrendModelKind } from '../../src/base/settings.js';
 
 interface ReferenceCandidate {
   p: number;

@@ -2,8 +2,9 @@
 // Reference values from scipy in test/fixtures/transforms/ (provenance in test/fixtures/README.md).
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { biasAdjustedMean, inverseTransform, transformValue, type TransformSpec } from '../../src/models/transform.js';
+import { biasAdjustedMean, inverseTransform, transformValue } from '../../src/base/transform.js';
 import { expectRelative } from '../evidence/expectRelative.js';
+import { type Transform } from '../../src/base/settings.js';
 
 interface TransformReference {
   lognormal: { mu: number; sigma: number; mean: number; ppf: Record<string, number> }[];
@@ -22,8 +23,8 @@ const Z: Record<string, number> = {
   '0.975': 1.959963984540054,
 };
 
-const LOG: TransformSpec = { kind: 'log' };
-const boxCox = (lambda: number): TransformSpec => ({ kind: 'box-cox', lambda });
+const LOG: Transform = { kind: 'log' };
+const boxCox = (lambda: number): Transform => ({ kind: 'box-cox', lambda });
 const LAMBDAS = [-1, -0.5, 0.25, 0.5, 1, 2];
 
 describe('forward and inverse transforms', () => {

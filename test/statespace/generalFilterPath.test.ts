@@ -5,11 +5,12 @@
 // the same number; common practice).
 import { describe, expect, it } from 'vitest';
 import { createProfileLikelihood } from '../../src/models/profileLikelihood.js';
-import { trendDesign, type TrendModelKind } from '../../src/models/trendModels.js';
+import { trendDesign } from '../../src/models/trendModels.js';
 import { SCALAR_STATE } from '../../src/statespace/filterRecursions.js';
 import { expectRelative } from '../evidence/expectRelative.js';
 import { seededNormals } from '../evidence/seededNormals.js';
 import { armaAutocovariance, covarianceAtTimes, denseProfileLoglik } from '../support/denseLikelihood.js';
+import { type TrendModelKind } from '../../src/base/settings.js';
 
 /** A real root ρ, or a complex pair of modulus `modulus` at angles ±`angle`. */
 type Root = { real: number } | { modulus: number; angle: number };

@@ -1,5 +1,5 @@
 // A caveat is a warning the memo derives from the record's numbers by a small named rule.
-import type { MemoRecord } from '../recordParts.js';
+import type { AnalysisRecord } from '../../analysis/record.js';
 
 export type CaveatSeverity = 'high' | 'medium' | 'low';
 
@@ -16,7 +16,7 @@ export interface Caveat {
 }
 
 export interface CaveatContext {
-  record: MemoRecord;
+  record: AnalysisRecord;
   units?: string;
 }
 

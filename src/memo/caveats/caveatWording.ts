@@ -1,5 +1,5 @@
 // Every sentence a caveat rule can produce. The rules pass in numbers already formatted.
-import type { ModelKind } from '../recordParts.js';
+import type { TrendModelKind } from '../../base/settings.js';
 import { MODEL_IN_TEXT } from '../wording.js';
 
 export const caveatWording = {
@@ -12,7 +12,7 @@ export const caveatWording = {
     `(${a.deterministic} wide against ${a.stochastic}; ratio ${a.ratio}). ` +
     'That narrower range holds only if the trend line stays where the history puts it for the whole horizon. If the trend can shift, the wider range is the more honest one.',
 
-  unitRootEvidence: (a: { kpss: string; adf: string; level: string; recommended: ModelKind | null }) =>
+  unitRootEvidence: (a: { kpss: string; adf: string; level: string; recommended: TrendModelKind | null }) =>
     `The unit-root checks point to a trend that wanders: the check that assumes a steady line rejected it (${a.kpss}), ` +
     `while the check that assumes lasting shocks could not rule them out (${a.adf}), both at the ${a.level} level. ` +
     (a.recommended === 'deterministic'
@@ -27,20 +27,20 @@ export const caveatWording = {
     `The backtest rests on only ${a.origins} forecast origin${a.origins === 1 ? '' : 's'} (fewer than ${a.minimum}), ` +
     'so its accuracy figures and comparison tests are rough guides, not firm evidence for either model.',
 
-  residualPattern: (a: { models: { model: ModelKind; p: string; lags: number }[] }) =>
+  residualPattern: (a: { models: { model: TrendModelKind; p: string; lags: number }[] }) =>
     a.models
       .map(({ model, p, lags }) => `The ${MODEL_IN_TEXT[model]}'s one-step forecast errors still show a pattern over ${lags} lags (Ljung-Box ${p}).`)
       .join(' ') +
     ' A model that leaves a pattern behind has not captured all the structure in the series, so its intervals may be too narrow or too wide.',
 
-  backTransformed: (a: { scale: string; model: ModelKind; period: string; above: string; below: string; point: 'median' | 'mean' }) =>
+  backTransformed: (a: { scale: string; model: TrendModelKind; period: string; above: string; below: string; point: 'median' | 'mean' }) =>
     `Both models were fitted on the ${a.scale} scale and their forecasts turned back into the original units. ` +
     `The intervals are therefore lopsided: at ${a.period} the ${MODEL_IN_TEXT[a.model]}'s 95% interval reaches ${a.above} above the point forecast but only ${a.below} below it. ` +
     (a.point === 'median'
       ? 'The point forecast is the median of the forecast distribution (an even chance of the outcome falling above or below it), not its average.'
       : 'The point forecast is the average of the forecast distribution, adjusted for the change of scale, so it sits above the distribution\u2019s middle.'),
 
-  trendBreak: (a: { breaks: { model: ModelKind; period: string; stat: string; critical: string }[] }) =>
+  trendBreak: (a: { breaks: { model: TrendModelKind; period: string; stat: string; critical: string }[] }) =>
     a.breaks
       .map(({ model, period, stat, critical }) =>
         model === 'deterministic'

@@ -3,13 +3,13 @@
 // deterministic model is recommended (the memo leans on the assumption), medium when nothing
 // is recommended, low when the stochastic model is (its forecasts do not rest on the line).
 import { countPeriods } from '../wording.js';
-import type { ModelKind } from '../recordParts.js';
+import type { TrendModelKind } from '../../base/settings.js';
 import type { Caveat, CaveatRule, CaveatSeverity } from './caveat.js';
 import { caveatWording } from './caveatWording.js';
 
 const ID = 'fixed-line-extrapolation';
 
-function severityFor(recommended: ModelKind | undefined): CaveatSeverity {
+function severityFor(recommended: TrendModelKind | undefined): CaveatSeverity {
   if (recommended === 'deterministic') return 'high';
   return recommended === undefined ? 'medium' : 'low';
 }

@@ -1,6 +1,6 @@
 // Fires when the Ljung-Box check flags either model's one-step errors. High when the flagged
 // model is the recommended one, medium otherwise.
-import type { ModelKind } from '../recordParts.js';
+import type { TrendModelKind } from '../../base/settings.js';
 import { formatP } from '../format/formatNumber.js';
 import type { Caveat, CaveatRule } from './caveat.js';
 import { caveatWording } from './caveatWording.js';
@@ -17,7 +17,7 @@ export const residualPattern: CaveatRule = {
       return finding?.flagged === true && checks.ljung_box !== null ? [{ model, ljung: checks.ljung_box }] : [];
     });
     if (flagged.length === 0) return null;
-    const recommended: ModelKind | undefined = record.recommendation?.model;
+    const recommended: TrendModelKind | undefined = record.recommendation?.model;
     const numbers: Record<string, number> = {};
     for (const { model, ljung } of flagged) numbers[`${model}_p`] = ljung.p_value;
     return {

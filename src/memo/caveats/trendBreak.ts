@@ -1,9 +1,9 @@
 // Fires when the break test rejects "no break" at 5% for either model. High when the broken
 // model is the recommended one, medium when nothing is recommended, low when only the other
 // model is broken. Silent when the stability checks were not run (the stability section says so).
-import { addPeriods } from '../../data/period.js';
+import { addPeriods } from '../../base/period.js';
 import { formatSignificant } from '../format/formatNumber.js';
-import type { ModelKind } from '../recordParts.js';
+import type { TrendModelKind } from '../../base/settings.js';
 import type { Caveat, CaveatRule } from './caveat.js';
 import { caveatWording } from './caveatWording.js';
 
@@ -17,7 +17,7 @@ export const trendBreak: CaveatRule = {
     if (tests === undefined) return null;
     const broken = (['deterministic', 'stochastic'] as const).filter((model) => tests[model].reject['5']);
     if (broken.length === 0) return null;
-    const recommended: ModelKind | undefined = record.recommendation?.model;
+    const recommended: TrendModelKind | undefined = record.recommendation?.model;
     const breaks = broken.map((model) => ({
       model,
       period: addPeriods(record.series.first, tests[model].break_index),

@@ -2,10 +2,10 @@
 // reject lasting shocks. High when the memo nonetheless recommends the deterministic model,
 // medium when it recommends nothing, low when it recommends the stochastic one (the evidence
 // then supports the choice; the note stays for the reviewer).
-import { formatPValue } from '../../evidence/messages.js';
 import { formatPercent } from '../format/formatNumber.js';
 import type { Caveat, CaveatRule } from './caveat.js';
 import { caveatWording } from './caveatWording.js';
+import { formatPValue } from '../../base/pValueText.js';
 
 const ID = 'unit-root-evidence';
 

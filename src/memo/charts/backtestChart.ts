@@ -3,13 +3,13 @@
 import type { TopLevelSpec } from 'vega-lite';
 import { chartWording } from '../chartWording.js';
 import { formatNumber, formatPercent, withUnits } from '../format/formatNumber.js';
-import type { BacktestMethod, BacktestPart } from '../recordParts.js';
+import type { BacktestRecord, ForecastMethod } from '../../analysis/record.js';
 import { METHOD_NAME } from '../wording.js';
 import { CHART_CONFIG, PANEL_WIDTH } from './chartConfig.js';
 import type { LayerPart, PanelSpec } from './chartTypes.js';
 import { INK, MODEL_COLOUR, MODEL_DASH, MODEL_SHAPE } from './palette.js';
 
-const METHODS: readonly BacktestMethod[] = ['deterministic', 'stochastic', 'naive'];
+const METHODS: readonly ForecastMethod[] = ['deterministic', 'stochastic', 'naive'];
 
 export interface BacktestChartRow {
   method: string;
@@ -18,7 +18,7 @@ export interface BacktestChartRow {
   coverage95: number | null;
 }
 
-export function backtestRows(backtest: BacktestPart): BacktestChartRow[] {
+export function backtestRows(backtest: BacktestRecord): BacktestChartRow[] {
   return METHODS.flatMap((method) =>
     backtest.per_horizon[method].map((row) => ({ method: METHOD_NAME[method], h: row.h, rmse: row.rmse, coverage95: row.coverage?.['95'] ?? null })),
   );
@@ -34,7 +34,7 @@ function styleScales() {
   };
 }
 
-function linePanel(title: string, field: 'rmse' | 'coverage95', rows: BacktestChartRow[], methods: readonly BacktestMethod[], yTitle: string | null, extra: LayerPart[]): PanelSpec {
+function linePanel(title: string, field: 'rmse' | 'coverage95', rows: BacktestChartRow[], methods: readonly ForecastMethod[], yTitle: string | null, extra: LayerPart[]): PanelSpec {
   const { color, strokeDash } = styleScales();
   const x = { field: 'h', type: 'quantitative' as const, title: 'horizon (steps ahead)', axis: { tickMinStep: 1, format: 'd' } };
   const y = { field, type: 'quantitative' as const, title: yTitle, ...(field === 'coverage95' ? { axis: { format: '.0%' }, scale: { domain: [0, 1] } } : {}) };
@@ -58,7 +58,7 @@ function linePanel(title: string, field: 'rmse' | 'coverage95', rows: BacktestCh
   };
 }
 
-export function backtestChart({ series, units, decimals, backtest }: { series: string; units?: string; decimals: number; backtest: BacktestPart }): TopLevelSpec {
+export function backtestChart({ series, units, decimals, backtest }: { series: string; units?: string; decimals: number; backtest: BacktestRecord }): TopLevelSpec {
   const rows = backtestRows(backtest);
   const origins = backtest.origins.length;
   const endErrors = METHODS.map((m) => `${METHOD_NAME[m].toLowerCase()} ${withUnits(formatNumber(backtest.per_horizon[m].at(-1)?.rmse, decimals), units)}`).join(', ');

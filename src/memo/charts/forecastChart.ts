@@ -6,7 +6,8 @@ import type { ForecastRow } from '../../analysis/record.js';
 import { chartWording } from '../chartWording.js';
 import { formatNumber, withUnits } from '../format/formatNumber.js';
 import type { HistoryPoint } from '../memoInput.js';
-import type { MemoRecord, ModelKind } from '../recordParts.js';
+import type { AnalysisRecord } from '../../analysis/record.js';
+import type { TrendModelKind } from '../../base/settings.js';
 import { CHART_CONFIG, PANEL_WIDTH } from './chartConfig.js';
 import type { PanelSpec } from './chartTypes.js';
 import { BAND_OPACITY, INK, MODEL_COLOUR, MODEL_DASH, RULE } from './palette.js';
@@ -16,7 +17,7 @@ export interface ForecastChartInput {
   series: string;
   units?: string;
   decimals: number;
-  record: MemoRecord;
+  record: AnalysisRecord;
   history?: HistoryPoint[];
 }
 
@@ -42,7 +43,7 @@ function forecastRow(row: ForecastRow): ForecastChartRow {
   return { t: periodPosition(row.period), period: row.period, h: row.h, point: row.point, lo80, hi80, lo95, hi95 };
 }
 
-function panel(model: ModelKind, rows: ForecastChartRow[], recent: { t: number; period: string; value: number | null }[], units: string | undefined): PanelSpec {
+function panel(model: TrendModelKind, rows: ForecastChartRow[], recent: { t: number; period: string; value: number | null }[], units: string | undefined): PanelSpec {
   const x = timeAxis();
   const colour = MODEL_COLOUR[model];
   const y = (field: string) => ({ field, type: 'quantitative' as const, title: units ?? null, scale: { zero: false } });
@@ -70,7 +71,7 @@ export function forecastChart({ series, units, decimals, record, history }: Fore
     .map(({ period, value }) => ({ t: periodPosition(period), period, value }));
   const lastObserved = recent.at(-1);
   const models = ['deterministic', 'stochastic'] as const;
-  const rowsOf = (model: ModelKind): ForecastChartRow[] => {
+  const rowsOf = (model: TrendModelKind): ForecastChartRow[] => {
     const rows = record.forecasts[model].map(forecastRow);
     // The anchor (h = 0) joins the fan to the last observation; it is not a forecast.
     return lastObserved === undefined || lastObserved.value === null

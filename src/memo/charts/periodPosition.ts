@@ -1,7 +1,7 @@
 // Places a period label on a continuous time axis: the year plus the fraction of the year
 // before the period starts (2003-Q3 → 2003.5, 2003-04 → 2003.25), so series of any frequency
 // share one axis labelled in years.
-import { parsePeriod, periodsPerYear } from '../../data/period.js';
+import { parsePeriod, periodsPerYear } from '../../base/period.js';
 
 export function periodPosition(label: string): number {
   const period = parsePeriod(label);

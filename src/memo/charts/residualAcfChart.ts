@@ -2,12 +2,13 @@
 // with the ±1.96/√n bounds: bars beyond them point to structure the model left behind.
 import type { TopLevelSpec } from 'vega-lite';
 import { chartWording } from '../chartWording.js';
-import type { MemoRecord, ModelKind } from '../recordParts.js';
+import type { AnalysisRecord } from '../../analysis/record.js';
+import type { TrendModelKind } from '../../base/settings.js';
 import { CHART_CONFIG, PANEL_WIDTH } from './chartConfig.js';
 import type { PanelSpec } from './chartTypes.js';
 import { INK, MODEL_COLOUR } from './palette.js';
 
-const MODELS: readonly ModelKind[] = ['deterministic', 'stochastic'];
+const MODELS: readonly TrendModelKind[] = ['deterministic', 'stochastic'];
 
 export interface AcfRow {
   lag: number;
@@ -15,12 +16,12 @@ export interface AcfRow {
 }
 
 /** A symmetric vertical range that holds every bar and both bounds, in steps of 0.1. */
-function acfLimit(record: MemoRecord): number {
+function acfLimit(record: AnalysisRecord): number {
   const values = MODELS.flatMap((m) => [...record.evidence.residuals[m].acf.acf.map(Math.abs), record.evidence.residuals[m].acf.bound]);
   return Math.max(0.3, Math.ceil(Math.max(...values) * 11) / 10);
 }
 
-function panel(model: ModelKind, record: MemoRecord, limit: number): PanelSpec {
+function panel(model: TrendModelKind, record: AnalysisRecord, limit: number): PanelSpec {
   const { lag, acf, bound } = record.evidence.residuals[model].acf;
   const rows: AcfRow[] = lag.map((l, i) => ({ lag: l, acf: acf[i] }));
   const y = { field: 'acf', type: 'quantitative' as const, title: 'autocorrelation', scale: { domain: [-limit, limit] } };
@@ -44,7 +45,7 @@ function panel(model: ModelKind, record: MemoRecord, limit: number): PanelSpec {
   };
 }
 
-export function residualAcfChart({ series, record }: { series: string; record: MemoRecord }): TopLevelSpec {
+export function residualAcfChart({ series, record }: { series: string; record: AnalysisRecord }): TopLevelSpec {
   const limit = acfLimit(record);
   return {
     title: { text: chartWording.residualAcf.title(series), subtitle: chartWording.residualAcf.subtitle },

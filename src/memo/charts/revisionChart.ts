@@ -4,7 +4,7 @@
 // apart in greyscale print as well as in colour.
 import type { TopLevelSpec } from 'vega-lite';
 import { formatNumber, withUnits } from '../format/formatNumber.js';
-import type { ModelKind } from '../recordParts.js';
+import type { TrendModelKind } from '../../base/settings.js';
 import type { ForecastRevision, ModelPaths, PathPoint } from '../revisionsPart.js';
 import { revisionsWording } from '../revisionsWording.js';
 import { CHART_CONFIG, PANEL_WIDTH } from './chartConfig.js';
@@ -29,7 +29,7 @@ function rows(path: PathPoint[]): { t: number; period: string; point: number }[]
   return path.flatMap(({ period, point }) => (point === null ? [] : [{ t: periodPosition(period), period, point }]));
 }
 
-function panel(model: ModelKind, now: PathPoint[], earlier: PathPoint[], units: string | undefined): PanelSpec {
+function panel(model: TrendModelKind, now: PathPoint[], earlier: PathPoint[], units: string | undefined): PanelSpec {
   const x = timeAxis();
   const y = { field: 'point', type: 'quantitative' as const, title: units ?? null, scale: { zero: false } };
   const colour = MODEL_COLOUR[model];
@@ -47,7 +47,7 @@ function panel(model: ModelKind, now: PathPoint[], earlier: PathPoint[], units: 
 }
 
 /** Each model's largest revision in absolute size; ties go to the earlier period. */
-function largest(forecasts: ForecastRevision[], model: ModelKind): ForecastRevision | undefined {
+function largest(forecasts: ForecastRevision[], model: TrendModelKind): ForecastRevision | undefined {
   let best: ForecastRevision | undefined;
   for (const row of forecasts) {
     if (row.model !== model || row.change === null) continue;

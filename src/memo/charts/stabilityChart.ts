@@ -2,10 +2,11 @@
 // ±2 standard-error bands, plotted at the period each window ends, against the full-history
 // estimate: a trend that holds keeps its estimate inside the band as the window grows.
 import type { TopLevelSpec } from 'vega-lite';
-import { addPeriods } from '../../data/period.js';
+import { addPeriods } from '../../base/period.js';
 import { chartWording } from '../chartWording.js';
 import { formatSignificant } from '../format/formatNumber.js';
-import type { MemoRecord, ModelKind, StabilityPart } from '../recordParts.js';
+import type { AnalysisRecord, StabilityRecord } from '../../analysis/record.js';
+import type { TrendModelKind } from '../../base/settings.js';
 import { CHART_CONFIG, PANEL_WIDTH } from './chartConfig.js';
 import type { PanelSpec } from './chartTypes.js';
 import { BAND_OPACITY, INK, MODEL_COLOUR } from './palette.js';
@@ -21,7 +22,7 @@ export interface StabilityRow {
 }
 
 /** Window rows with an estimate and a standard error; the period is the window's last observation. */
-export function stabilityRows(first: string, stability: StabilityPart, model: ModelKind): StabilityRow[] {
+export function stabilityRows(first: string, stability: StabilityRecord, model: TrendModelKind): StabilityRow[] {
   const windows =
     model === 'deterministic'
       ? stability.windows.deterministic.map((w) => ({ end: w.end, estimate: w.slope, se: w.se }))
@@ -33,7 +34,7 @@ export function stabilityRows(first: string, stability: StabilityPart, model: Mo
   });
 }
 
-function panel(model: ModelKind, rows: StabilityRow[], full: number | undefined): PanelSpec {
+function panel(model: TrendModelKind, rows: StabilityRow[], full: number | undefined): PanelSpec {
   const x = timeAxis();
   const y = { field: 'estimate', type: 'quantitative' as const, title: null, scale: { zero: false } };
   const colour = MODEL_COLOUR[model];
@@ -51,7 +52,7 @@ function panel(model: ModelKind, rows: StabilityRow[], full: number | undefined)
   };
 }
 
-export function stabilityChart({ series, record, stability }: { series: string; record: MemoRecord; stability: StabilityPart }): TopLevelSpec {
+export function stabilityChart({ series, record, stability }: { series: string; record: AnalysisRecord; stability: StabilityRecord }): TopLevelSpec {
   const first = record.series.first;
   const rows = { deterministic: stabilityRows(first, stability, 'deterministic'), stochastic: stabilityRows(first, stability, 'stochastic') };
   const slope = record.models.deterministic.coefficients.slope;

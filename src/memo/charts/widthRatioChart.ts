@@ -3,7 +3,7 @@
 import type { TopLevelSpec } from 'vega-lite';
 import { chartWording } from '../chartWording.js';
 import { formatNumber } from '../format/formatNumber.js';
-import type { MemoRecord } from '../recordParts.js';
+import type { AnalysisRecord } from '../../analysis/record.js';
 import { CHART_CONFIG, FIT_WIDTH, FULL_WIDTH } from './chartConfig.js';
 import { INK, MODEL_COLOUR } from './palette.js';
 
@@ -14,7 +14,7 @@ export interface WidthRatioRow {
 }
 
 /** Deterministic ÷ stochastic 95% width per horizon, for the rows both models have. */
-export function widthRatios(record: Pick<MemoRecord, 'forecasts'>): WidthRatioRow[] {
+export function widthRatios(record: Pick<AnalysisRecord, 'forecasts'>): WidthRatioRow[] {
   return record.forecasts.deterministic.flatMap((row, i) => {
     const other = record.forecasts.stochastic[i];
     if (other === undefined) return [];
@@ -27,7 +27,7 @@ export function widthRatios(record: Pick<MemoRecord, 'forecasts'>): WidthRatioRo
 /** Above this many horizons the bars are too thin to carry their value as a label. */
 export const MAX_LABELLED_BARS = 12;
 
-export function widthRatioChart({ series, record }: { series: string; record: MemoRecord }): TopLevelSpec {
+export function widthRatioChart({ series, record }: { series: string; record: AnalysisRecord }): TopLevelSpec {
   const rows = widthRatios(record).map((r) => ({ ...r, label: formatNumber(r.ratio, 2) }));
   const top = Math.max(1.1, ...rows.map((r) => r.ratio * 1.12));
   return {

@@ -1,13 +1,13 @@
 // One precision for every level of a series (history, forecasts, interval ends, accuracy in
 // units), so numbers in its tables line up and compare at a glance.
-import type { MemoRecord } from '../recordParts.js';
+import type { AnalysisRecord } from '../../analysis/record.js';
 import { decimalsForScale } from './formatNumber.js';
 
 /**
  * Decimals from the narrowest one-step 95% interval of the two models: differences smaller
  * than a hundredth of that width carry no information for the reader.
  */
-export function seriesDecimals(record: Pick<MemoRecord, 'forecasts'>): number {
+export function seriesDecimals(record: Pick<AnalysisRecord, 'forecasts'>): number {
   const widths = [record.forecasts.deterministic[0], record.forecasts.stochastic[0]].flatMap((row) => {
     const interval = row?.intervals['95'];
     return interval === undefined ? [] : [interval[1] - interval[0]];

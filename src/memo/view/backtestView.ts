@@ -1,9 +1,9 @@
 // The backtest section: what was done in words, point and interval accuracy by horizon, and
 // the comparison tests. Null when the backtest was not run (the template shows the note).
-import type { Frequency } from '../../data/period.js';
+import type { Frequency } from '../../base/period.js';
 import { evidenceWording } from '../evidenceWording.js';
 import { formatNumber, formatPCell, formatPercent, formatPercentPoints, formatSignificant, MISSING } from '../format/formatNumber.js';
-import type { BacktestComparison, BacktestHorizonRow, BacktestMethod, BacktestPart } from '../recordParts.js';
+import type { BacktestRecord, ComparisonRow, ForecastMethod, HorizonScores } from '../../analysis/record.js';
 import { noLinks } from '../format/noLinks.js';
 
 export interface PointAccuracyCells {
@@ -27,9 +27,9 @@ export interface ComparisonCells {
   decided: boolean;
 }
 
-const LOSSES: readonly BacktestComparison['loss'][] = ['squared_error', 'interval_score_95'];
+const LOSSES: readonly ComparisonRow['loss'][] = ['squared_error', 'interval_score_95'];
 
-function comparisonCells(c: BacktestComparison | undefined, significance: number): ComparisonCells {
+function comparisonCells(c: ComparisonRow | undefined, significance: number): ComparisonCells {
   if (c === undefined) return { statistic: MISSING, p: MISSING, outcome: MISSING, decided: false };
   return {
     statistic: formatSignificant(c.statistic, 3),
@@ -48,14 +48,14 @@ export interface BacktestView {
   notes: string[];
 }
 
-const POINT_METHODS: readonly BacktestMethod[] = ['deterministic', 'stochastic', 'naive'];
-const INTERVAL_METHODS: readonly BacktestMethod[] = ['deterministic', 'stochastic'];
+const POINT_METHODS: readonly ForecastMethod[] = ['deterministic', 'stochastic', 'naive'];
+const INTERVAL_METHODS: readonly ForecastMethod[] = ['deterministic', 'stochastic'];
 
-function rowAt(backtest: BacktestPart, method: BacktestMethod, h: number): BacktestHorizonRow | undefined {
+function rowAt(backtest: BacktestRecord, method: ForecastMethod, h: number): HorizonScores | undefined {
   return backtest.per_horizon[method].find((r) => r.h === h);
 }
 
-export function backtestView(backtest: BacktestPart, frequency: Frequency, decimals: number): BacktestView {
+export function backtestView(backtest: BacktestRecord, frequency: Frequency, decimals: number): BacktestView {
   const first = backtest.origins[0];
   const last = backtest.origins.at(-1);
   const horizons = backtest.per_horizon.deterministic.map((r) => r.h);

@@ -1,10 +1,11 @@
 // The evidence section: the unit-root checks as a table with plain outcomes, the combined
 // reading as the evidence stage wrote it, and each model's residual findings.
-import type { AdfResult, KpssResult } from '../../evidence/types.js';
+import type { AdfResult, KpssResult } from '../../analysis/record.js';
 import { evidenceWording, UNIT_ROOT_ROWS } from '../evidenceWording.js';
 import { formatPCell, formatPercent, formatSignificant } from '../format/formatNumber.js';
 import { noLinks } from '../format/noLinks.js';
-import type { MemoRecord, ModelKind } from '../recordParts.js';
+import type { AnalysisRecord } from '../../analysis/record.js';
+import type { TrendModelKind } from '../../base/settings.js';
 import { MODEL_NAME } from '../wording.js';
 
 export interface UnitRootRow {
@@ -48,10 +49,10 @@ function row(words: RowWords, result: KpssResult | AdfResult | null, rejects: bo
   };
 }
 
-export function evidenceView(record: MemoRecord): EvidenceView {
+export function evidenceView(record: AnalysisRecord): EvidenceView {
   const { kpss, adf, reading, residuals, unavailable } = record.evidence;
   const level = reading.level;
-  const models: readonly ModelKind[] = ['deterministic', 'stochastic'];
+  const models: readonly TrendModelKind[] = ['deterministic', 'stochastic'];
   return {
     intro: evidenceWording.unitRootIntro(formatPercent(level)),
     reading: noLinks(reading.text),

@@ -1,6 +1,7 @@
 // The forecast table: both models side by side at every horizon, with the width ratio.
 import { formatNumber } from '../format/formatNumber.js';
-import type { MemoRecord, ModelKind } from '../recordParts.js';
+import type { AnalysisRecord } from '../../analysis/record.js';
+import type { TrendModelKind } from '../../base/settings.js';
 import { widthRatios } from '../charts/widthRatioChart.js';
 
 export interface ForecastCells {
@@ -23,7 +24,7 @@ export function intervalText(interval: [number, number] | undefined, decimals: n
   return `${formatNumber(interval[0], decimals)}\u2009\u2013\u2009${formatNumber(interval[1], decimals)}`;
 }
 
-export function forecastCells(record: MemoRecord, model: ModelKind, index: number, decimals: number): ForecastCells {
+export function forecastCells(record: AnalysisRecord, model: TrendModelKind, index: number, decimals: number): ForecastCells {
   const row = record.forecasts[model][index];
   return {
     point: formatNumber(row?.point, decimals),
@@ -32,7 +33,7 @@ export function forecastCells(record: MemoRecord, model: ModelKind, index: numbe
   };
 }
 
-export function forecastTableView(record: MemoRecord, decimals: number): ForecastTableRow[] {
+export function forecastTableView(record: AnalysisRecord, decimals: number): ForecastTableRow[] {
   const ratios = widthRatios(record);
   return record.forecasts.deterministic.map((row, i) => ({
     h: row.h,

@@ -2,7 +2,8 @@
 // errors, and the facts of the fit.
 import { evidenceWording } from '../evidenceWording.js';
 import { formatSignificant } from '../format/formatNumber.js';
-import type { MemoRecord, ModelKind } from '../recordParts.js';
+import type { AnalysisRecord } from '../../analysis/record.js';
+import type { TrendModelKind } from '../../base/settings.js';
 import { MODEL_GLOSS, MODEL_NAME, scaleName } from '../wording.js';
 
 export interface CoefficientRow {
@@ -13,7 +14,7 @@ export interface CoefficientRow {
 }
 
 export interface ModelView {
-  kind: ModelKind;
+  kind: TrendModelKind;
   name: string;
   gloss: string;
   equation: string;
@@ -32,26 +33,18 @@ function coefficientRow(name: string, estimate: number | undefined, stderr: numb
   return { name, estimate: formatSignificant(estimate), stderr: formatSignificant(stderr), ratio: formatSignificant(ratio, 3) };
 }
 
-function asList(value: number | number[] | undefined): number[] {
-  return Array.isArray(value) ? value : [];
-}
-
-function asErrors(value: number | null | (number | null)[] | undefined): (number | null)[] {
-  return Array.isArray(value) ? value : [];
-}
-
-export function modelView(record: MemoRecord, kind: ModelKind): ModelView {
+export function modelView(record: AnalysisRecord, kind: TrendModelKind): ModelView {
   const model = record.models[kind];
-  const names = kind === 'deterministic' ? ['intercept', 'slope'] : ['drift'];
-  const regression = names.map((key) => {
-    const estimate = model.coefficients[key];
-    const stderr = model.stderr[key];
-    return coefficientRow(REGRESSION_NAMES[key], typeof estimate === 'number' ? estimate : undefined, Array.isArray(stderr) ? null : stderr);
-  });
-  const arSe = asErrors(model.stderr.ar);
-  const maSe = asErrors(model.stderr.ma);
-  const ar = asList(model.coefficients.ar).map((v, i) => coefficientRow(`AR ${i + 1} (\u03c6${i + 1})`, v, arSe[i]));
-  const ma = asList(model.coefficients.ma).map((v, i) => coefficientRow(`MA ${i + 1} (\u03b8${i + 1})`, v, maSe[i]));
+  const { deterministic, stochastic } = record.models;
+  const regression =
+    kind === 'deterministic'
+      ? [
+          coefficientRow(REGRESSION_NAMES.intercept, deterministic.coefficients.intercept, deterministic.stderr.intercept),
+          coefficientRow(REGRESSION_NAMES.slope, deterministic.coefficients.slope, deterministic.stderr.slope),
+        ]
+      : [coefficientRow(REGRESSION_NAMES.drift, stochastic.coefficients.drift, stochastic.stderr.drift)];
+  const ar = model.coefficients.ar.map((v, i) => coefficientRow(`AR ${i + 1} (\u03c6${i + 1})`, v, model.stderr.ar[i]));
+  const ma = model.coefficients.ma.map((v, i) => coefficientRow(`MA ${i + 1} (\u03b8${i + 1})`, v, model.stderr.ma[i]));
   return {
     kind,
     name: MODEL_NAME[kind],
@@ -71,7 +64,7 @@ export function modelView(record: MemoRecord, kind: ModelKind): ModelView {
 }
 
 /** "Estimates are on the natural log scale of the series", or in its original units. */
-export function scaleNote(record: MemoRecord): string {
+export function scaleNote(record: AnalysisRecord): string {
   const { transform } = record.series;
   return evidenceWording.scaleNote(transform.kind === 'none' ? null : scaleName(transform));
 }

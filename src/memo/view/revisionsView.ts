@@ -6,7 +6,7 @@ import { noLinks } from '../format/noLinks.js';
 import { formatNumber, formatPercentPoints, MISSING } from '../format/formatNumber.js';
 import { seriesDecimals } from '../format/seriesDecimals.js';
 import type { MemoInput } from '../memoInput.js';
-import type { ModelKind } from '../recordParts.js';
+import type { TrendModelKind } from '../../base/settings.js';
 import type { ForecastRevision, Revisions, SeriesRevisions } from '../revisionsPart.js';
 import { revisionsWording } from '../revisionsWording.js';
 import { figureView, type FigureView } from './figureView.js';
@@ -64,9 +64,9 @@ const NO_ROW: Change = { earlier: MISSING, now: MISSING, change: MISSING, percen
 function forecastRows(forecasts: ForecastRevision[], decimals: number): RevisionSeriesView['forecastRows'] {
   const periods = [...new Set(forecasts.map((row) => row.period))];
   return periods.map((period) => {
-    const of = (model: ModelKind) => forecasts.find((row) => row.model === model && row.period === period);
+    const of = (model: TrendModelKind) => forecasts.find((row) => row.model === model && row.period === period);
     const first = of('deterministic') ?? of('stochastic');
-    const cells = (model: ModelKind) => {
+    const cells = (model: TrendModelKind) => {
       const row = of(model);
       return row === undefined ? NO_ROW : change(row.point_earlier, row.point, row.change, row.percent_change, decimals);
     };

@@ -1,10 +1,11 @@
 // The trend-stability section in words: how the windows were set up and what each break test
 // found, with the period the break would start from.
-import { addPeriods } from '../../data/period.js';
+import { addPeriods } from '../../base/period.js';
 import { evidenceWording } from '../evidenceWording.js';
 import { formatPercent, formatSignificant } from '../format/formatNumber.js';
 import { noLinks } from '../format/noLinks.js';
-import type { ModelKind, StabilityPart } from '../recordParts.js';
+import type { StabilityRecord } from '../../analysis/record.js';
+import type { TrendModelKind } from '../../base/settings.js';
 
 export interface StabilityView {
   settings: string;
@@ -12,9 +13,9 @@ export interface StabilityView {
   method: string[];
 }
 
-const MODELS: readonly ModelKind[] = ['deterministic', 'stochastic'];
+const MODELS: readonly TrendModelKind[] = ['deterministic', 'stochastic'];
 
-export function stabilityView(stability: StabilityPart, first: string): StabilityView {
+export function stabilityView(stability: StabilityRecord, first: string): StabilityView {
   const { windows, break_test } = stability;
   return {
     settings: evidenceWording.stabilitySettings({ minWindow: windows.min_window, step: windows.step, windows: windows.deterministic.length }),

@@ -1,7 +1,8 @@
 // One card per series for the client's summary page: the recommended model, the forecast at
 // the end of the horizon under both models with both intervals, and the top caveat.
 import type { Caveat } from '../caveats/caveat.js';
-import type { MemoRecord, ModelKind } from '../recordParts.js';
+import type { AnalysisRecord } from '../../analysis/record.js';
+import type { TrendModelKind } from '../../base/settings.js';
 import { LABELS, METHOD_NAME, MODEL_GLOSS, MODEL_NAME, NOT_RUN, TEMPLATE_TEXT } from '../wording.js';
 import { forecastCells, type ForecastCells } from './forecastTableView.js';
 
@@ -18,9 +19,9 @@ export interface SummaryCard {
   caveat: { label: string; severity: Caveat['severity']; text: string } | null;
 }
 
-export function summaryCard(a: { anchor: string; title: string; units?: string; record: MemoRecord; decimals: number; caveats: Caveat[] }): SummaryCard {
+export function summaryCard(a: { anchor: string; title: string; units?: string; record: AnalysisRecord; decimals: number; caveats: Caveat[] }): SummaryCard {
   const { record } = a;
-  const model: ModelKind | undefined = record.recommendation?.model;
+  const model: TrendModelKind | undefined = record.recommendation?.model;
   const last = record.forecasts.deterministic.length - 1;
   const top = a.caveats[0];
   const endPeriod = record.forecasts.deterministic[last]?.period ?? record.series.last;

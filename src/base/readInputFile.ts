@@ -2,7 +2,7 @@
 // an InputError in the caller's wording (series files and configs word them alike, but with
 // their own codes). Shared by the data and config stages.
 import { closeSync, constants, fstatSync, openSync, readFileSync } from 'node:fs';
-import { InputError, type InputProblem } from '../errors.js';
+import { InputError, type InputProblem } from './problem.js';
 
 export interface FileMessages {
   fileMissing(file: string): InputProblem;

@@ -1,8 +1,9 @@
 // The summary block read from a backtest record (wording: src/backtest/messages.ts; numbers
 // are the record's own, so the check is that each one lands in its place).
 import { beforeAll, describe, expect, it } from 'vitest';
-import { formatBacktest } from '../../src/backtest/formatBacktest.js';
-import { backtestNotes, comparisonReasons, describeRefit } from '../../src/backtest/messages.js';
+import { backtestNotes, comparisonReasons } from '../../src/backtest/messages.js';
+import { describeRefit, formatBacktest } from '../../src/cli/formatBacktest.js';
+import { settingsFor } from '../support/settings.js';
 import { runBacktest } from '../../src/backtest/runBacktest.js';
 import type { BacktestRecord } from '../../src/backtest/backtestRecord.js';
 import { readSeriesCsv } from '../../src/data/readSeriesCsv.js';
@@ -12,12 +13,9 @@ describe('formatBacktest', () => {
   let lines: string[];
   beforeAll(async () => {
     // Nile (test/fixtures/nile.csv, R datasets::Nile), 1871-1970.
-    const nile = readSeriesCsv(new URL('../fixtures/nile.csv', import.meta.url).pathname);
-    record = await runBacktest(nile, {
-      refit: 'fixed',
+    const nile = readSeriesCsv(new URL('../fixtures/nile.csv', import.meta.url).pathname, { missing: 'error' });
+    record = await runBacktest(nile, settingsFor({ backtest: { refit: 'fixed', origins: 6, horizon: 3 } }), {
       orders: { deterministic: { p: 1, q: 1 }, stochastic: { p: 0, q: 1 } },
-      origins: 6,
-      horizon: 3,
       threads: 1,
     });
     lines = formatBacktest(record);

@@ -1,10 +1,12 @@
 // The backtest block of the terminal summary: what was run, the notes, accuracy per horizon
 // for each method and the comparison tests. Plain text, fixed-width columns.
-import type { BacktestNumber, BacktestRecord, ComparisonRow, ForecastMethod } from './backtestRecord.js';
-import { describeRefit } from './messages.js';
+import type { BacktestRecord, ComparisonRow, ForecastMethod, JsonNumber } from '../analysis/record.js';
+import type { RefitPolicy } from '../base/settings.js';
 
 const METHOD_NAMES: Record<ForecastMethod, string> = { deterministic: 'deterministic', stochastic: 'stochastic', naive: 'no change' };
-const LOSS_NAMES: Record<ComparisonRow['loss'], string> = { squared_error: 'squared error', interval_score_95: '95% interval score' };
+function lossName(loss: ComparisonRow['loss']): string {
+  return loss === 'squared_error' ? 'squared error' : `${loss.slice('interval_score_'.length)}% interval score`;
+}
 
 export function formatBacktest(record: BacktestRecord): string[] {
   const { settings, origins } = record;
@@ -38,12 +40,12 @@ export function formatBacktest(record: BacktestRecord): string[] {
   lines.push('');
   lines.push(`Deterministic vs stochastic trend, Diebold-Mariano test with the small-sample correction (p-values; ${settings.significance * 100}% level):`);
   const losses = [...new Set(record.comparison.map((row) => row.loss))];
-  const table: string[][] = [['h', ...losses.map((loss) => LOSS_NAMES[loss])]];
+  const table: string[][] = [['h', ...losses.map((loss) => lossName(loss))]];
   for (let h = 1; h <= settings.horizon; h++) {
     table.push([String(h), ...losses.map((loss) => describeComparison(record.comparison.find((row) => row.h === h && row.loss === loss), settings.significance))]);
   }
   lines.push(...alignColumns(table, table[0].length).map((line) => `  ${line}`));
-  for (const row of record.comparison.filter((c) => !c.available)) lines.push(`  Not available at h = ${row.h} (${LOSS_NAMES[row.loss]}): ${row.reason ?? ''}`);
+  for (const row of record.comparison.filter((c) => !c.available)) lines.push(`  Not available at h = ${row.h} (${lossName(row.loss)}): ${row.reason ?? ''}`);
   return lines;
 }
 
@@ -53,7 +55,7 @@ function describeComparison(row: ComparisonRow | undefined, significance: number
   return `p = ${row.p_value.toFixed(3)}, ${lower}${row.p_value < significance ? ' (significant)' : ''}`;
 }
 
-function formatNumber(value: BacktestNumber | undefined, digits = 4): string {
+function formatNumber(value: JsonNumber | undefined, digits = 4): string {
   if (value === null || value === undefined) return 'n/a';
   const size = Math.abs(value);
   if (size !== 0 && (size >= 1e7 || size < 1e-4)) return value.toExponential(digits - 1);
@@ -69,4 +71,11 @@ function alignColumns(rows: readonly string[][], textColumns: number): string[] 
       .join('  ')
       .trimEnd(),
   );
+}
+
+/** One line on how each origin refits the models, for the summary. */
+export function describeRefit(refit: RefitPolicy): string {
+  if (refit === 'reselect') return 'orders re-selected by AICc and parameters re-estimated at every origin';
+  if (refit === 'reestimate') return 'orders fixed from the full sample, parameters re-estimated at every origin';
+  return 'orders and parameters fixed from the full sample';
 }

@@ -1,7 +1,7 @@
 // Orders problems by line and folds long runs of one kind into a summary, so a file with a
 // thousand bad lines still reads as a short list that names every line.
 
-import { dataMessages, type InputProblem } from '../errors.js';
+import { abbreviateList, plural, problem, type InputProblem } from './problem.js';
 
 /** Problems of one code listed in full before the rest are summarised. */
 export const MAX_PROBLEMS_PER_CODE = 20;
@@ -30,6 +30,15 @@ export function limitProblems(problems: readonly InputProblem[], max = MAX_PROBL
     if (extra === undefined) extraLines.set(item.code, { like: item, lines: [item.line] });
     else extra.lines.push(item.line);
   }
-  const summaries = [...extraLines.values()].map(({ like, lines }) => dataMessages.moreOfTheSame(like, lines));
+  const summaries = [...extraLines.values()].map(({ like, lines }) => moreOfTheSame(like, lines));
   return [...kept, ...summaries].sort(byLine);
+}
+
+/** The summary that stands for the problems of one kind beyond the limit. */
+function moreOfTheSame(like: InputProblem, lines: readonly number[]): InputProblem {
+  return problem(like.code, `and ${plural(lines.length, 'more line')} with this kind of problem: ${abbreviateList(lines.map(String))}`, like.hint, {
+    file: like.file,
+    line: lines[0],
+    field: like.field,
+  });
 }

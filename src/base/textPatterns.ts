@@ -1,6 +1,11 @@
 // Regular-expression sources shared by the validator and the JSON Schema (ECMA-262 syntax,
 // used with the `u` flag on both sides), so both accept exactly the same text.
-import type { TextForm } from './keySpec.js';
+
+/**
+ * Free text on one line, text that may span lines, an id that becomes a folder name, or a
+ * calendar date written YYYY-MM-DD.
+ */
+export type TextForm = 'line' | 'block' | 'slug' | 'date';
 
 /**
  * Characters refused in text: C0 and C1 controls, DEL, the Unicode line and paragraph separators,

@@ -1,0 +1,87 @@
+// Written settings → the one complete AnalysisSettings value (src/base/settings.ts). The config's
+// merged `defaults` and series keys, and `fit`'s options, both arrive here in the config's own
+// shape; this is the only place a setting takes its default, each default written once:
+// built-in values in builtInSettings.ts, and the rules below for the three that depend on
+// something else (the horizon on the frequency, the shortest backtest training window on the
+// order limits, the scored level on the levels).
+//
+// The series must be read before the horizon can be resolved (its frequency may come from the
+// data), yet reading it needs the transform, the missing-value policy and the order limits:
+// `readingSettings` resolves those four, and `resolveSettings` builds the rest on them.
+import type { Frequency } from '../base/period.js';
+import { InputError, type InputLocation } from '../base/problem.js';
+import type { AnalysisSettings, Transform } from '../base/settings.js';
+import { BUILT_IN_SETTINGS as BUILT_IN, HORIZON_BY_FREQUENCY, MIN_TRAIN_FLOOR, MIN_TRAIN_PER_PARAMETER } from './builtInSettings.js';
+import type { SettingsEntry } from './configSpec.js';
+import { configMessages } from './messages.js';
+
+/** Settings as a config or `fit` writes them: every key optional, snake_case, `transform` as written. */
+export type WrittenSettings = SettingsEntry;
+
+/** Where a setting was written, for a message about it: a config position, or a command-line option. */
+export type PlaceOf = (key: string) => InputLocation;
+
+const nowhere: PlaceOf = (key) => ({ field: key });
+
+/** The settings the data stage needs to read and check a series file. */
+export type ReadingSettings = Pick<AnalysisSettings, 'transform' | 'missing' | 'max_p' | 'max_q'>;
+
+export function readingSettings(written: WrittenSettings): ReadingSettings {
+  return {
+    transform: toTransform(written.transform ?? BUILT_IN.transform),
+    missing: written.missing ?? BUILT_IN.missing,
+    max_p: written.max_p ?? BUILT_IN.max_p,
+    max_q: written.max_q ?? BUILT_IN.max_q,
+  };
+}
+
+/**
+ * The complete settings of one series of the given frequency. Throws an InputError when the
+ * written values contradict each other (a scored level that is not among the levels).
+ */
+export function resolveSettings(written: WrittenSettings, frequency: Frequency, placeOf: PlaceOf = nowhere): AnalysisSettings {
+  const reading = readingSettings(written);
+  const levels = [...(written.levels ?? BUILT_IN.levels)].sort((a, b) => a - b);
+  const backtest = written.backtest ?? {};
+  const recommendation = written.recommendation ?? {};
+  const scoredLevel = recommendation.scored_level ?? levels[levels.length - 1];
+  if (!levels.includes(scoredLevel)) {
+    throw new InputError(configMessages.scoredLevelNotListed(placeOf('recommendation.scored_level'), scoredLevel, levels));
+  }
+  return deepFreeze({
+    horizon: written.horizon ?? HORIZON_BY_FREQUENCY[frequency],
+    transform: reading.transform,
+    levels,
+    coefficient_uncertainty: written.coefficient_uncertainty ?? BUILT_IN.coefficient_uncertainty,
+    point: written.point ?? BUILT_IN.point,
+    max_p: reading.max_p,
+    max_q: reading.max_q,
+    significance: written.significance ?? BUILT_IN.significance,
+    backtest: {
+      origins: backtest.origins ?? BUILT_IN.backtest.origins,
+      horizon: backtest.horizon ?? BUILT_IN.backtest.horizon,
+      refit: backtest.refit ?? BUILT_IN.backtest.refit,
+      window: backtest.window ?? BUILT_IN.backtest.window,
+      // The deterministic trend at the order limits has p + q + 3 parameters (intercept, slope, σ²).
+      min_train: backtest.min_train ?? Math.max(MIN_TRAIN_FLOOR, MIN_TRAIN_PER_PARAMETER * (reading.max_p + reading.max_q + 3)),
+    },
+    recommendation: {
+      rule: recommendation.rule ?? BUILT_IN.recommendation.rule,
+      significance: recommendation.significance ?? BUILT_IN.recommendation.significance,
+      scored_level: scoredLevel,
+      model: recommendation.model ?? null,
+      justification: recommendation.justification ?? null,
+    },
+    missing: reading.missing,
+  });
+}
+
+/** Frozen all the way down: the settings are shared by every stage and none may change them. */
+function deepFreeze<T extends object>(value: T): T {
+  for (const inner of Object.values(value)) if (typeof inner === 'object' && inner !== null) deepFreeze(inner);
+  return Object.freeze(value);
+}
+
+function toTransform(written: NonNullable<WrittenSettings['transform']>): Transform {
+  return typeof written === 'string' ? { kind: written } : { kind: 'box-cox', lambda: written.box_cox };
+}

@@ -1,0 +1,73 @@
+// Written settings → the complete AnalysisSettings: built-in values, the defaults that depend on
+// the data or on other settings, and the rule across keys (src/config/resolveSettings.ts; the
+// values are our own spec's, src/config/builtInSettings.ts).
+import { describe, expect, it } from 'vitest';
+import { InputError } from '../../src/base/problem.js';
+import { readingSettings, resolveSettings } from '../../src/config/resolveSettings.js';
+
+describe('resolveSettings', () => {
+  it('fills every setting a config leaves out with its built-in value', () => {
+    expect(resolveSettings({}, 'annual')).toEqual({
+      horizon: 10,
+      transform: { kind: 'none' },
+      levels: [80, 95],
+      coefficient_uncertainty: true,
+      point: 'median',
+      max_p: 3,
+      max_q: 3,
+      significance: 0.05,
+      backtest: { origins: 20, horizon: 5, refit: 'reselect', window: 'expanding', min_train: 27 },
+      recommendation: { rule: 'prefer-stochastic', significance: 0.05, scored_level: 95, model: null, justification: null },
+      missing: 'error',
+    });
+  });
+
+  it('takes the horizon from the frequency: ten years, three years of quarters, two years of months', () => {
+    expect([resolveSettings({}, 'annual').horizon, resolveSettings({}, 'quarterly').horizon, resolveSettings({}, 'monthly').horizon]).toEqual([10, 12, 24]);
+    expect(resolveSettings({ horizon: 7 }, 'monthly').horizon).toBe(7);
+  });
+
+  it('makes the shortest training window max(20, 3 × (max_p + max_q + 3))', () => {
+    // The deterministic trend at (3,3) has 3 + 3 + intercept, slope and σ² = 9 parameters: 27.
+    expect(resolveSettings({}, 'annual').backtest.min_train).toBe(27);
+    // At (1,1) it has 5, and 3 × 5 = 15 is below the floor of 20.
+    expect(resolveSettings({ max_p: 1, max_q: 1 }, 'annual').backtest.min_train).toBe(20);
+    expect(resolveSettings({ backtest: { min_train: 12 } }, 'annual').backtest.min_train).toBe(12);
+  });
+
+  it('sorts the levels and scores the widest unless told otherwise', () => {
+    const settings = resolveSettings({ levels: [90, 50] }, 'annual');
+    expect(settings.levels).toEqual([50, 90]);
+    expect(settings.recommendation.scored_level).toBe(90);
+    expect(resolveSettings({ levels: [68, 95, 99], recommendation: { scored_level: 68 } }, 'annual').recommendation.scored_level).toBe(68);
+  });
+
+  it('turns the transform as written into the form the models take', () => {
+    expect(resolveSettings({ transform: 'log' }, 'annual').transform).toEqual({ kind: 'log' });
+    expect(resolveSettings({ transform: { box_cox: 0.5 } }, 'annual').transform).toEqual({ kind: 'box-cox', lambda: 0.5 });
+  });
+
+  it('refuses a scored level that is not among the levels, at the place it was written', () => {
+    const error = (() => {
+      try {
+        resolveSettings({ levels: [50, 90], recommendation: { scored_level: 95 } }, 'annual', (key) => ({ file: 'memo.yaml', line: 9, column: 5, field: `defaults.${key}` }));
+      } catch (caught) {
+        return caught;
+      }
+      return undefined;
+    })();
+    expect(error).toBeInstanceOf(InputError);
+    expect((error as InputError).problems).toEqual([
+      expect.objectContaining({ code: 'config.scored-level', file: 'memo.yaml', line: 9, field: 'defaults.recommendation.scored_level', message: '95 is not one of the interval levels (50, 90)' }),
+    ]);
+  });
+
+  it('gives a value nothing may change', () => {
+    const settings = resolveSettings({}, 'annual');
+    expect(Object.isFrozen(settings) && Object.isFrozen(settings.levels) && Object.isFrozen(settings.backtest)).toBe(true);
+  });
+
+  it('resolves what reading a series needs with the same values', () => {
+    expect(readingSettings({ transform: 'log', max_q: 1 })).toEqual({ transform: { kind: 'log' }, missing: 'error', max_p: 3, max_q: 1 });
+  });
+});
