@@ -14,7 +14,7 @@ import { toolVersion } from '../base/toolVersion.js';
 import type { BacktestRecord } from '../backtest/backtestRecord.js';
 import { runBacktest, type BacktestRun } from '../backtest/runBacktest.js';
 import { collectEvidence, type EvidenceOptions } from '../evidence/collectEvidence.js';
-import { smallestMaRootModulus, smallestRootModulus } from '../models/rootModulus.js';
+import { smallestMaRootModulus, smallestRootModulus } from '../linalg/rootModulus.js';
 import { fitTrendModel, forecastTrendModel, minimumObservations, type TrendModelFit } from '../models/trendModels.js';
 import { describeEquation } from './describeEquation.js';
 import { RECORD_SCHEMA, type AnalysisRecord, type DeterministicCoefficients, type ForecastRow, type JsonNumber, type ModelRecord, type StochasticCoefficients } from './record.js';

@@ -1,7 +1,9 @@
-// Ordinary least squares by Householder QR, for the auxiliary regressions of the unit-root
-// tests. QR rather than the normal equations because those regressions mix a lagged level
-// in the thousands with a time index and small differences, and X'X would square that
-// conditioning. The inputs are copied into a fresh matrix, so nothing the caller owns changes.
+// Ordinary least squares by Householder QR, the one implementation every stage uses: the
+// auxiliary regressions of the unit-root tests, the trend regressions that start the ARMA
+// fits and the Hannan-Rissanen regressions. QR rather than the normal equations because
+// those regressions mix a lagged level in the thousands with a time index and small
+// differences, and X'X would square that conditioning. The inputs are copied into a fresh
+// matrix, so nothing the caller owns changes.
 import { Matrix, QrDecomposition, inverse } from 'ml-matrix';
 
 /** Result of an OLS fit; arrays are in the order of the regressor columns given. */
@@ -22,6 +24,13 @@ export interface OlsFit {
  * Throws when there are not more rows than columns or the columns are collinear.
  */
 export function ols(y: ArrayLike<number>, columns: readonly ArrayLike<number>[]): OlsFit {
+  const fit = leastSquares(y, columns);
+  if (fit === undefined) throw new Error('ols needs regressor columns of full rank');
+  return fit;
+}
+
+/** As `ols`, but undefined when the columns are collinear, for callers that have a way round it. */
+export function leastSquares(y: ArrayLike<number>, columns: readonly ArrayLike<number>[]): OlsFit | undefined {
   const nobs = y.length;
   const k = columns.length;
   if (k === 0) throw new Error('ols needs at least one regressor column');
@@ -39,9 +48,7 @@ export function ols(y: ArrayLike<number>, columns: readonly ArrayLike<number>[])
   // rounding-sized diagonals rather than zeros.
   const diagonal = Array.from({ length: k }, (_, j) => Math.abs(upper.get(j, j)));
   const rankTolerance = Math.max(...diagonal) * Math.max(nobs, k) * Number.EPSILON;
-  if (diagonal.some((value) => value <= rankTolerance)) {
-    throw new Error('ols needs regressor columns of full rank');
-  }
+  if (diagonal.some((value) => value <= rankTolerance)) return undefined;
   const beta = qr.solve(response);
 
   const coefficients = new Float64Array(k);

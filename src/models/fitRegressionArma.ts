@@ -2,7 +2,7 @@
 // unconstrained ARMA parameters from several starts (zeros, Hannan-Rissanen, and any the
 // caller passes, e.g. a neighbouring order's optimum), best log-likelihood kept.
 import { choleskyInverse } from '../linalg/smallSpd.js';
-import { leastSquares } from '../linalg/leastSquares.js';
+import { leastSquares } from '../linalg/ols.js';
 import { minimizeBfgs } from './bfgs.js';
 import { unconstrainAr, unconstrainMa } from './constraints.js';
 import { hannanRissanen } from './hannanRissanen.js';
@@ -160,7 +160,7 @@ export function olsFit(y: Float64Array, regressors: readonly Float64Array[]): Ol
   const k = regressors.length;
   const observed: number[] = [];
   for (let t = 0; t < y.length; t++) if (!Number.isNaN(y[t])) observed.push(t);
-  const fit = k > 0 ? leastSquares(observed.map((t) => regressors.map((column) => column[t])), observed.map((t) => y[t])) : undefined;
+  const fit = k > 0 ? leastSquares(observed.map((t) => y[t]), regressors.map((column) => observed.map((t) => column[t]))) : undefined;
   if (k > 0 && fit === undefined) throw new Error('fitRegressionArma: the regressors are collinear');
   const coefficients = fit?.coefficients ?? new Float64Array(0);
   const residuals = y.map((value, t) => {

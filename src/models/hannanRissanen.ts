@@ -2,7 +2,8 @@
 // a long autoregression (Yule-Walker, so it is always stationary) estimates the innovations,
 // then η_t is regressed on its own lags and the lagged innovation estimates.
 // Brockwell & Davis (2016), §5.1.4.
-import { leastSquares } from '../linalg/leastSquares.js';
+import { autocovariances, demean } from '../linalg/autocovariances.js';
+import { leastSquares } from '../linalg/ols.js';
 
 export interface ArmaStart {
   ar: Float64Array;
@@ -28,33 +29,21 @@ export function hannanRissanen(eta: Float64Array, p: number, q: number): ArmaSta
     skip = longOrder;
   }
   const first = skip + Math.max(p, q);
-  const rows: number[][] = [];
-  const target: number[] = [];
-  for (let t = first; t < n; t++) {
-    const row: number[] = [];
-    for (let i = 1; i <= p; i++) row.push(eta[t - i]);
-    for (let j = 1; j <= q; j++) row.push(innovations[t - j]);
-    rows.push(row);
-    target.push(eta[t]);
-  }
-  if (rows.length <= p + q + 1) return undefined;
-  const fit = leastSquares(rows, target);
+  const rows = n - first;
+  if (rows <= p + q + 1) return undefined;
+  // Column i < p: η lagged i + 1; column p + j: the innovation estimates lagged j + 1.
+  const columns = [
+    ...Array.from({ length: p }, (_, i) => eta.subarray(first - 1 - i, n - 1 - i)),
+    ...Array.from({ length: q }, (_, j) => innovations.subarray(first - 1 - j, n - 1 - j)),
+  ];
+  const fit = leastSquares(eta.subarray(first), columns);
   if (fit === undefined) return undefined;
   return { ar: fit.coefficients.slice(0, p), ma: fit.coefficients.slice(p, p + q) };
 }
 
 /** Yule-Walker AR(order) coefficients by the Durbin-Levinson recursion on the sample ACVF. */
 export function yuleWalker(x: Float64Array, order: number): Float64Array {
-  const n = x.length;
-  let mean = 0;
-  for (let t = 0; t < n; t++) mean += x[t];
-  mean /= n;
-  const acvf = new Float64Array(order + 1);
-  for (let lag = 0; lag <= order; lag++) {
-    let sum = 0;
-    for (let t = lag; t < n; t++) sum += (x[t] - mean) * (x[t - lag] - mean);
-    acvf[lag] = sum / n;
-  }
+  const acvf = autocovariances(demean(x), order);
   const phi = new Float64Array(order);
   const previous = new Float64Array(order);
   if (!(acvf[0] > 0)) return phi;

@@ -2,7 +2,7 @@
 // minus the numerical Hessian of the profile log-likelihood at the optimum. The profile
 // Hessian's inverse equals the ARMA block of the full inverse information, since β and σ²
 // are maximised out exactly (Pawitan 2001, §9.6). β's standard errors come from GLS.
-import { Matrix, inverse } from 'ml-matrix';
+import { invertSymmetric } from '../linalg/invertSymmetric.js';
 import type { ProfileLikelihood } from './profileLikelihood.js';
 
 /**
@@ -24,28 +24,22 @@ export function armaStandardErrors(likelihood: ProfileLikelihood, ar: Float64Arr
     for (const [index, sign] of moves) point[index] += sign * steps[index];
     return at(point);
   };
-  const hessian = Matrix.zeros(k, k);
+  // Minus the Hessian: the observed information, row-major.
+  const information = new Float64Array(k * k);
   for (let i = 0; i < k; i++) {
-    const value = (shifted([[i, 1]]) - 2 * centre + shifted([[i, -1]])) / (steps[i] * steps[i]);
-    hessian.set(i, i, value);
+    information[i * k + i] = -(shifted([[i, 1]]) - 2 * centre + shifted([[i, -1]])) / (steps[i] * steps[i]);
     for (let j = 0; j < i; j++) {
       const cross =
         (shifted([[i, 1], [j, 1]]) - shifted([[i, 1], [j, -1]]) - shifted([[i, -1], [j, 1]]) + shifted([[i, -1], [j, -1]])) /
         (4 * steps[i] * steps[j]);
-      hessian.set(i, j, cross);
-      hessian.set(j, i, cross);
+      information[i * k + j] = -cross;
+      information[j * k + i] = -cross;
     }
   }
-  if (!hessian.to1DArray().every(Number.isFinite)) return out;
-  const information = hessian.clone().mul(-1);
-  let covariance: Matrix;
-  try {
-    covariance = inverse(information);
-  } catch {
-    return out;
-  }
+  const covariance = invertSymmetric(information, k);
+  if (covariance === undefined) return out;
   for (let i = 0; i < k; i++) {
-    const variance = covariance.get(i, i);
+    const variance = covariance[i * k + i];
     out[i] = variance > 0 ? Math.sqrt(variance) : Number.NaN;
   }
   return out;

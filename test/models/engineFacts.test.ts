@@ -7,7 +7,7 @@ import { fitTrendModelAtOrder, forecastTrendModel } from '../../src/models/trend
 import { createProfileLikelihood } from '../../src/models/profileLikelihood.js';
 import { firstColumnScratchSize, stationaryFirstColumn, toStateSpace } from '../../src/statespace/armaStateSpace.js';
 import { constrainAr, constrainMa, unconstrainAr, unconstrainMa, isStationary } from '../../src/models/constraints.js';
-import { smallestMaRootModulus, smallestRootModulus } from '../../src/models/rootModulus.js';
+import { smallestMaRootModulus, smallestRootModulus } from '../../src/linalg/rootModulus.js';
 import { readSeriesValues } from '../evidence/referenceFixtures.js';
 import { seededNormals } from '../evidence/seededNormals.js';
 import { simulateTrendArma as simulate } from '../support/simulateTrendArma.js';
