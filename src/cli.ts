@@ -1,6 +1,5 @@
-// The command line as a function: cli(argv, io) → exit code, so it is tested without
-// spawning processes. Exit codes: 0 success, 1 internal failure, 2 bad input or usage,
-// 3 a memo that verify finds different from what its inputs give.
+// The command line as a function: cli(argv, io) → exit code (cli/exitCodes.ts), so it is
+// tested without spawning processes.
 import { closestName } from './base/closestName.js';
 import { formatProblem, InputError } from './base/problem.js';
 import { cliMessages } from './cli/messages.js';
@@ -10,6 +9,7 @@ import { runInit } from './cli/initCommand.js';
 import { runRun } from './cli/runCommand.js';
 import { runVerify } from './cli/verifyCommand.js';
 import { toolVersion } from './base/toolVersion.js';
+import { EXIT } from './cli/exitCodes.js';
 
 export interface CliIo {
   stdout(text: string): void;
@@ -21,7 +21,6 @@ export interface CliIo {
 const COMMANDS = ['run', 'check', 'fit', 'verify', 'init'] as const;
 const GLOBAL_OPTIONS = ['--help', '--version'] as const;
 
-export const EXIT = { ok: 0, internal: 1, input: 2, mismatch: 3 } as const;
 
 const MAIN_HELP = `trendbrief: compare deterministic and stochastic trend extrapolation for forecast memos
 

@@ -8,6 +8,7 @@ import { readPlannedSeries } from '../run/readPlannedSeries.js';
 import { formatProblem, InputError, type InputProblem } from '../base/problem.js';
 import { configCommandMessages } from './messages.js';
 import { splitOptions } from './splitOptions.js';
+import { EXIT } from './exitCodes.js';
 
 export const CHECK_HELP = `Usage: trendbrief check CONFIG.yaml...
 
@@ -56,7 +57,7 @@ export async function runCheck(args: readonly string[], io: Io): Promise<number>
   const { values, positionals, problems } = splitOptions(args, { help: { type: 'boolean', short: 'h' } }, 'check');
   if (values.get('help') === true) {
     io.stdout(CHECK_HELP);
-    return 0;
+    return EXIT.ok;
   }
   if (positionals.length === 0) problems.push(configCommandMessages.noConfigs());
   if (problems.length > 0) throw new InputError(problems);
@@ -70,5 +71,5 @@ export async function runCheck(args: readonly string[], io: Io): Promise<number>
     failed = true;
     for (const problem of result.problems) io.stderr(`${formatProblem(problem)}\n`);
   }
-  return failed ? 2 : 0;
+  return failed ? EXIT.input : EXIT.ok;
 }

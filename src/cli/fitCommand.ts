@@ -6,6 +6,7 @@ import { BACKTEST_FIELDS, LEVEL, SETTINGS_FIELDS } from '../config/settingsSpec.
 import { readSeriesCsv } from '../data/readSeriesCsv.js';
 import { formatSummary } from './formatSummary.js';
 import { fitOptionPlace, parseFitOptions } from './parseFitOptions.js';
+import { EXIT } from './exitCodes.js';
 
 const H = HORIZON_BY_FREQUENCY;
 
@@ -57,5 +58,5 @@ export async function runFit(args: readonly string[], io: { stdout(text: string)
   const identity = { id: series.column, title: series.column, file: series.file };
   const record = await analyseSeries(series, settings, identity, { backtest: request.backtest });
   io.stdout(request.json ? `${JSON.stringify(record, null, 2)}\n` : formatSummary(record));
-  return 0;
+  return EXIT.ok;
 }

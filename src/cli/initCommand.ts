@@ -6,6 +6,7 @@ import { STARTER_CONFIG, STARTER_SCHEMA, STARTER_SERIES, starterFiles } from '..
 import { InputError } from '../base/problem.js';
 import { configCommandMessages } from './messages.js';
 import { splitOptions } from './splitOptions.js';
+import { EXIT } from './exitCodes.js';
 
 export const INIT_HELP = `Usage: trendbrief init [DIR]
 
@@ -44,7 +45,7 @@ export async function runInit(args: readonly string[], io: { stdout(text: string
   const { values, positionals, problems } = splitOptions(args, { help: { type: 'boolean', short: 'h' } }, 'init');
   if (values.get('help') === true) {
     io.stdout(INIT_HELP);
-    return 0;
+    return EXIT.ok;
   }
   if (positionals.length > 1) problems.push(configCommandMessages.extraFolders(positionals.slice(1)));
   if (problems.length > 0) throw new InputError(problems);
@@ -56,5 +57,5 @@ export async function runInit(args: readonly string[], io: { stdout(text: string
   writeAll(files);
   const lines = files.map((file) => `wrote ${file.target}`);
   io.stdout(`${lines.join('\n')}\nnext: trendbrief check ${join(folder, STARTER_CONFIG)}\n`);
-  return 0;
+  return EXIT.ok;
 }

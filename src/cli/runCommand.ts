@@ -15,6 +15,7 @@ import { openSeriesPool } from '../run/seriesPool.js';
 import { progressReporter } from './progressReporter.js';
 import { splitOptions } from './splitOptions.js';
 import { shownPath } from '../base/shownPath.js';
+import { EXIT } from './exitCodes.js';
 
 export const RUN_HELP = `Usage: trendbrief run CONFIG.yaml... [options]
 
@@ -61,7 +62,7 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
   );
   if (values.get('help') === true) {
     io.stdout(RUN_HELP);
-    return 0;
+    return EXIT.ok;
   }
   if (positionals.length === 0) problems.push(configCommandMessages.noConfigsToRun());
   const formats = parseFormats(values.get('formats'), problems);
@@ -84,7 +85,7 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
   const sharedPrinter = (): Promise<PdfPrinter> => (printer ??= openPdfPrinter());
   const pool = threads > 1 && totalSeries > 1 ? openSeriesPool(Math.min(threads, totalSeries)) : undefined;
   const outcomes: MemoOutcome[] = [];
-  let exitCode = 0;
+  let exitCode: number = EXIT.ok;
   const runOne = async (index: number): Promise<MemoRunResult> => {
     const config = positionals[index];
     // Two configs of one batch writing the same memo folder would silently replace each other.
@@ -126,14 +127,14 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
       progress.finish();
       if (!(error instanceof InputError)) {
         io.stderr(`${config}: internal error: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}\n`);
-        exitCode = Math.max(exitCode, 1);
+        exitCode = Math.max(exitCode, EXIT.internal);
         outcomes.push({ config, memo: '-', series: null, result: 'failed: internal error (see above)', folder: '-' });
         progress.memoDone(config, false);
         continue;
       }
       for (const problem of error.problems) io.stderr(`${formatProblem(problem)}\n`);
       progress.memoDone(config, false);
-      exitCode = 2;
+      exitCode = EXIT.input;
       const count = error.problems.length;
       outcomes.push({ config, memo: '-', series: null, result: `failed: ${count} input problem${count === 1 ? '' : 's'} (see above)`, folder: '-' });
     }

@@ -6,6 +6,7 @@ import { verifyMessages, verifyReport } from '../run/messages.js';
 import { TOLERANCE_TEXT } from '../run/compareJson.js';
 import { verifyMemoFolder } from '../run/verifyMemoFolder.js';
 import { splitOptions } from './splitOptions.js';
+import { EXIT } from './exitCodes.js';
 
 export const VERIFY_HELP = `Usage: trendbrief verify MEMO_FOLDER
 
@@ -33,7 +34,7 @@ export async function runVerify(args: readonly string[], io: Io): Promise<number
   const { values, positionals, problems } = splitOptions(args, { help: { type: 'boolean', short: 'h' } }, 'verify');
   if (values.get('help') === true) {
     io.stdout(VERIFY_HELP);
-    return 0;
+    return EXIT.ok;
   }
   if (positionals.length === 0) problems.push(verifyMessages.noFolderGiven());
   if (positionals.length > 1) problems.push(verifyMessages.extraArguments(positionals.slice(1)));
@@ -48,5 +49,5 @@ export async function runVerify(args: readonly string[], io: Io): Promise<number
     report.push(verifyReport.match(positionals[0]));
   }
   io.stdout(`${report.join('\n')}\n`);
-  return differences.length > 0 ? 3 : 0;
+  return differences.length > 0 ? EXIT.mismatch : EXIT.ok;
 }
