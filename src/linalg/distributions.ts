@@ -3,7 +3,6 @@
 import normalQuantile from '@stdlib/stats-base-dists-normal-quantile';
 import normalCdfFn from '@stdlib/stats-base-dists-normal-cdf';
 import tCdfFn from '@stdlib/stats-base-dists-t-cdf';
-import tQuantileFn from '@stdlib/stats-base-dists-t-quantile';
 import chisquareCdfFn from '@stdlib/stats-base-dists-chisquare-cdf';
 
 /** Standard normal quantile Φ⁻¹(p). */
@@ -19,11 +18,6 @@ export function normalCdf(x: number): number {
 /** Student t CDF with `df` degrees of freedom. */
 export function studentTCdf(x: number, df: number): number {
   return tCdfFn(x, df);
-}
-
-/** Student t quantile with `df` degrees of freedom. */
-export function studentTInv(p: number, df: number): number {
-  return tQuantileFn(p, df);
 }
 
 /** Chi-square CDF with `df` degrees of freedom. */

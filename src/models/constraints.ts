@@ -55,8 +55,3 @@ export function unconstrainMa(coefficients: ArrayLike<number>): Float64Array | u
 export function isStationary(coefficients: ArrayLike<number>): boolean {
   return unconstrainAr(coefficients) !== undefined;
 }
-
-/** True when 1 + θ₁z + … + θ_q z^q has every root outside the unit circle. */
-export function isInvertible(coefficients: ArrayLike<number>): boolean {
-  return unconstrainMa(coefficients) !== undefined;
-}
