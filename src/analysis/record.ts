@@ -10,6 +10,8 @@ import type { BacktestRecord } from '../backtest/backtestRecord.js';
 import type { EvidenceRecord } from '../evidence/collectEvidence.js';
 
 export type { ArmaOrder, BacktestForecast, BacktestRecord, ComparisonRow, ForecastMethod, HorizonScores, OriginRecord } from '../backtest/backtestRecord.js';
+/** The comparison rows' loss name at an interval level, for readers that look rows up by level. */
+export { intervalScoreLoss } from '../backtest/backtestRecord.js';
 export type { EvidenceRecord } from '../evidence/collectEvidence.js';
 export type { ResidualChecks } from '../evidence/residualChecks.js';
 export type { AdfResult, KpssResult, StabilityRecord, SupWaldPBound, TrendVerdictKind } from '../evidence/types.js';

@@ -1,7 +1,7 @@
 // Titles, panel names and text descriptions of the charts. Descriptions say in words what the
 // chart shows, with its key numbers, for readers who cannot see it.
 import type { TrendModelKind } from '../base/settings.js';
-import { MODEL_NAME } from './wording.js';
+import { levelPercent, MODEL_NAME, predictionIntervals } from './wording.js';
 
 export const chartWording = {
   history: {
@@ -12,27 +12,27 @@ export const chartWording = {
   },
   forecast: {
     title: (series: string, end: string) => `${series}: forecasts to ${end}`,
-    subtitle: ['Solid line: observed. Dashed line: point forecast.', 'Shading: 80% (darker) and 95% prediction intervals.'],
+    /** Levels ascending; the narrowest band is the darkest. */
+    subtitle: (levels: readonly number[]) => ['Solid line: observed. Dashed line: point forecast.', bandKey(levels)],
     panel: (model: TrendModelKind) => MODEL_NAME[model],
-    description: (a: { series: string; recent: number; end: string; models: { model: TrendModelKind; point: string; low: string; high: string }[] }) =>
-      `Two panels on one vertical scale, one per model. Each shows the last ${a.recent} observations of ${a.series}, then the model's point forecast to ${a.end} with its 80% and 95% prediction intervals. ` +
-      a.models.map((m) => `At ${a.end} the ${MODEL_NAME[m.model].toLowerCase()} model gives ${m.point} (95% interval ${m.low} to ${m.high}).`).join(' '),
+    description: (a: { series: string; recent: number; end: string; levels: readonly number[]; level: number; models: { model: TrendModelKind; point: string; low: string; high: string }[] }) =>
+      `Two panels on one vertical scale, one per model. Each shows the last ${a.recent} observations of ${a.series}, then the model's point forecast to ${a.end} with its ${predictionIntervals(a.levels)}. ` +
+      a.models.map((m) => `At ${a.end} the ${MODEL_NAME[m.model].toLowerCase()} model gives ${m.point} (${levelPercent(a.level)} interval ${m.low} to ${m.high}).`).join(' '),
   },
   widthRatio: {
-    title: (series: string) => `${series}: deterministic \u00f7 stochastic 95% interval width`,
+    title: (series: string, level: number) => `${series}: deterministic \u00f7 stochastic ${levelPercent(level)} interval width`,
     subtitle: 'Below 1: the deterministic interval is narrower. The line marks equal widths.',
-    description: (a: { first: string; last: string; horizon: number }) =>
-      `Bar chart of the ratio of the deterministic to the stochastic 95% interval width at each of ${a.horizon} horizons, from ${a.first} at the first step to ${a.last} at the last.`,
+    description: (a: { first: string; last: string; horizon: number; level: number }) =>
+      `Bar chart of the ratio of the deterministic to the stochastic ${levelPercent(a.level)} interval width at each of ${a.horizon} horizons, from ${a.first} at the first step to ${a.last} at the last.`,
   },
   backtest: {
     title: (series: string) => `${series}: backtest accuracy by horizon`,
     subtitle: (origins: number) => `Forecasts made from ${origins} past origins and compared with what happened.`,
     errorPanel: 'Root mean squared error',
-    coveragePanel: 'Outcomes inside the 95% interval',
-    targetLabel: '95% target',
-    description: (a: { origins: number; horizon: number; endErrors: string; endCoverage: string }) =>
+    coveragePanel: (level: number) => `Outcomes inside the ${levelPercent(level)} interval`,
+    description: (a: { origins: number; horizon: number; endErrors: string; endCoverage: string; level: number }) =>
       `Two panels by forecast horizon 1 to ${a.horizon}, from ${a.origins} backtest origins. Left: root mean squared error of the deterministic, stochastic and no-change forecasts; at the last horizon ${a.endErrors}. ` +
-      `Right: share of outcomes inside each model's 95% interval, against the 95% target; at the last horizon ${a.endCoverage}.`,
+      `Right: share of outcomes inside each model's ${levelPercent(a.level)} interval, against the ${levelPercent(a.level)} target; at the last horizon ${a.endCoverage}.`,
   },
   residualAcf: {
     title: (series: string) => `${series}: autocorrelation of one-step forecast errors`,
@@ -53,3 +53,10 @@ export const chartWording = {
       `Full-history slope ${a.slope}; full-history drift ${a.drift}.`,
   },
 } as const;
+
+/** Which shading is which level: one band, two (the narrower darker), or darkest to lightest. */
+function bandKey(levels: readonly number[]): string {
+  if (levels.length === 1) return `Shading: ${predictionIntervals(levels)}.`;
+  if (levels.length === 2) return `Shading: ${levelPercent(levels[0])} (darker) and ${levelPercent(levels[1])} prediction intervals.`;
+  return `Shading, darkest to lightest: ${predictionIntervals(levels)}.`;
+}

@@ -3,7 +3,7 @@
 // numbers arrive formatted; these functions only choose the words.
 import type { Frequency } from '../base/period.js';
 import type { TrendModelKind } from '../base/settings.js';
-import { countPeriods, MODEL_IN_TEXT, MODEL_NAME } from './wording.js';
+import { countPeriods, levelPercent, MODEL_IN_TEXT, MODEL_NAME } from './wording.js';
 import { type RefitPolicy, type WindowKind } from '../base/settings.js';
 
 export const UNIT_ROOT_ROWS = {
@@ -38,8 +38,9 @@ export const evidenceWording = {
     `${REFIT_WORDS[a.refit]} ${a.window === 'expanding' ? 'Each fit used all the history up to its origin.' : `Each fit used a sliding window of at least ${a.minTraining} observations.`} ` +
     'The no-change benchmark forecasts the last observed value at every horizon; a MASE below 1 beats the in-sample one-step error of that benchmark.',
   backtestUnavailable: (reason: string) => `Why: ${reason}`,
-  comparisonIntro:
-    'At each horizon a Diebold-Mariano test of equal accuracy compares the two models\u2019 backtest losses: squared error for the point forecasts and the 95% interval score for the intervals. The outcome names the model with the lower average loss; a small p-value means the difference is unlikely to be chance.',
+  /** `level`: the one the recommendation rule scores, the only level the comparison tests run at. */
+  comparisonIntro: (level: number) =>
+    `At each horizon a Diebold-Mariano test of equal accuracy compares the two models\u2019 backtest losses: squared error for the point forecasts and the ${levelPercent(level)} interval score for the intervals. The outcome names the model with the lower average loss; a small p-value means the difference is unlikely to be chance.`,
   comparisonOutcome: (better: TrendModelKind | null, available: boolean, reason: string | null) =>
     !available ? `not tested: ${reason ?? 'no reason recorded'}` : better === null ? 'equal average loss' : `${MODEL_NAME[better].toLowerCase()} lower`,
 

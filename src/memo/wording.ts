@@ -102,8 +102,6 @@ export const LABELS = {
   memoId: 'Memo',
   recommended: 'Recommended',
   point: 'Point',
-  interval80: '80% interval',
-  interval95: '95% interval',
   ratio: 'Width ratio',
   units: 'Units',
   span: 'History',
@@ -152,7 +150,9 @@ export const TEMPLATE_TEXT = {
   atPeriod: (period: string) => `At ${period}`,
   recommendedMarker: 'recommended',
   assumes: 'It assumes',
-  lossNames: { squared_error: 'Squared error', interval_score_95: '95% interval score' },
+  squaredErrorLoss: 'Squared error',
+  intervalScoreLoss: (level: number) => `${levelPercent(level)} interval score`,
+  intervalHead: (level: number) => `${levelPercent(level)} interval`,
   noAssumptions: 'No assumptions were recorded for this series.',
   forecastCaption: (units: string) => (units === '' ? 'Forecasts by period' : `Forecasts by period (${units})`),
   pointCaption: (units: string) => (units === '' ? 'Point accuracy by horizon' : `Point accuracy by horizon (RMSE in ${units})`),
@@ -162,7 +162,13 @@ export const TEMPLATE_TEXT = {
       : `Interval accuracy by horizon (width and score in ${units}; CRPS ${transformed ? 'on the modelling scale' : `in ${units}`})`,
   comparisonCaption: 'Comparison tests by horizon',
   pointColumns: ['RMSE', 'MAPE', 'MASE'],
-  intervalColumns: ['80% cover', '95% cover', '95% width', '95% score', 'CRPS'],
+  /** Coverage at every level; width and score at the level the recommendation rule scores. */
+  intervalColumns: (levels: readonly number[], scored: number) => [
+    ...levels.map((level) => `${levelPercent(level)} cover`),
+    `${levelPercent(scored)} width`,
+    `${levelPercent(scored)} score`,
+    'CRPS',
+  ],
   accuracyNote:
     'RMSE: root mean squared error. MAPE: mean absolute percentage error. MASE: mean absolute error divided by the one-step error of the no-change forecast. ' +
     'Cover: share of outcomes inside the interval. Score: interval score, the width plus a penalty for outcomes outside it (lower is better). CRPS: continuous ranked probability score (lower is better).',
@@ -178,8 +184,12 @@ export const CAUTIONS = [
   'Decisions that rest on these figures, including financial, capacity and regulatory decisions, remain with qualified professionals and the rules that apply to them.',
 ] as const;
 
-export const SUMMARY_INTRO =
-  'For each series: the model we recommend, the forecast at the end of the horizon under both models with 80% and 95% prediction intervals, and the caveat that matters most. The sections that follow give the evidence behind each choice.';
+/** The summary's opening; `levels` is null when the series do not share one set of levels. */
+export function summaryIntro(levels: readonly number[] | null): string {
+  // Plural at one level too: each of the two models has its interval.
+  const intervals = levels === null ? 'the prediction intervals set for each series' : `${levelList(levels)} prediction intervals`;
+  return `For each series: the model we recommend, the forecast at the end of the horizon under both models with ${intervals}, and the caveat that matters most. The sections that follow give the evidence behind each choice.`;
+}
 
 export const NOT_RUN = {
   backtest: 'The backtest was not run for this series, so there is no out-of-sample check of either model.',
@@ -193,6 +203,21 @@ export const SIGN_OFF_NOTE =
 
 export const AICC_NOTE =
   'Each model\u2019s ARMA orders were chosen by AICc among its own candidates. AICc values of the two models are not compared with each other: one describes the levels, the other their changes.';
+
+/** An interval level as the reader sees it: 95 → "95%", 99.5 → "99.5%". */
+export function levelPercent(level: number): string {
+  return `${level}%`;
+}
+
+/** "90%", "80% and 95%", "68%, 95% and 99%". */
+export function levelList(levels: readonly number[]): string {
+  return listInWords(levels.map(levelPercent));
+}
+
+/** "90% prediction interval", "80% and 95% prediction intervals". */
+export function predictionIntervals(levels: readonly number[]): string {
+  return `${levelList(levels)} prediction interval${levels.length === 1 ? '' : 's'}`;
+}
 
 /** "A", "A and B", "A, B and C". */
 export function listInWords(items: readonly string[]): string {

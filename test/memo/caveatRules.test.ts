@@ -13,6 +13,7 @@ import { trendBreak } from '../../src/memo/caveats/trendBreak.js';
 import { unitRootEvidence } from '../../src/memo/caveats/unitRootEvidence.js';
 import type { AnalysisRecord } from '../../src/analysis/record.js';
 import { formatSignificant } from '../../src/memo/format/formatNumber.js';
+import { fitRecord } from '../support/runCli.js';
 import { handMadeBacktest, handMadeRecommendation } from './handMadeParts.js';
 import { bareRecord, fullRecord } from './sampleInput.js';
 
@@ -21,14 +22,19 @@ function atHorizon(record: AnalysisRecord, horizon: number): AnalysisRecord {
   return { ...record, settings: { ...record.settings, horizon } };
 }
 
-/** Sets the last forecast's 95% intervals of both models around their points. */
-function withEndWidths(record: AnalysisRecord, deterministic: number, stochastic: number): AnalysisRecord {
+/** Sets the last forecast's intervals at `level` (95 unless given) of both models around their points. */
+function withEndWidths(record: AnalysisRecord, deterministic: number, stochastic: number, level = '95'): AnalysisRecord {
   const copy = structuredClone(record);
   for (const [model, width] of [['deterministic', deterministic], ['stochastic', stochastic]] as const) {
     const last = copy.forecasts[model][copy.forecasts[model].length - 1];
-    last.intervals['95'] = [last.point - width / 2, last.point + width / 2];
+    last.intervals[level] = [last.point - width / 2, last.point + width / 2];
   }
   return copy;
+}
+
+/** Lake Huron fitted at other interval levels, orders up to (1, 1), by `fit` (its record as the memo reads it). */
+function lakeAt(levels: string, ...options: string[]): Promise<AnalysisRecord> {
+  return fitRecord('test/fixtures/lake-huron.csv', ['--max-p', '1', '--max-q', '1', '--levels', levels, ...options]);
 }
 
 describe('horizon-long', () => {
@@ -63,6 +69,14 @@ describe('narrow-line-intervals', () => {
   it('is silent when the widths are close, as in the Lake Huron fit itself', () => {
     expect(narrowLineIntervals.evaluate({ record: bareRecord('lakeHuron') })).toBeNull(); // ratio 0.987 from analyseSeries
     expect(narrowLineIntervals.evaluate({ record: withEndWidths(bareRecord('lakeHuron'), 7.5, 10) })).toBeNull();
+  });
+  it('reads the widest level and names it, whatever the others say', async () => {
+    const record = withEndWidths(withEndWidths(await lakeAt('68,95,99'), 3, 10, '99'), 10, 10, '68');
+    const caveat = narrowLineIntervals.evaluate({ record, units: 'ft' });
+    expect(caveat?.numbers.level).toBe(99);
+    expect(caveat?.numbers.ratio).toBeCloseTo(0.3, 12);
+    expect(caveat?.text).toContain("deterministic-trend model's 99% interval is 70% narrower");
+    expect(narrowLineIntervals.evaluate({ record: withEndWidths(record, 10, 10, '99') })).toBeNull();
   });
 });
 
@@ -143,6 +157,14 @@ describe('back-transformed', () => {
   });
   it('is silent without a transform', () => {
     expect(backTransformed.evaluate({ record: bareRecord('nile') })).toBeNull();
+  });
+  it('measures and names the widest level', async () => {
+    const record = await lakeAt('50,90', '--transform', 'log');
+    const caveat = backTransformed.evaluate({ record, units: 'ft' });
+    const last = record.forecasts.stochastic[record.forecasts.stochastic.length - 1];
+    expect(caveat?.numbers.level).toBe(90);
+    expect(caveat?.numbers.above).toBe(last.intervals['90'][1] - last.point);
+    expect(caveat?.text).toContain("stochastic-trend model's 90% interval reaches");
   });
 });
 

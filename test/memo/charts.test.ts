@@ -1,12 +1,13 @@
 // Chart specs tested as data: each compiles with vega-lite without a warning, carries a title
 // and a description, carries exactly the record's numbers, and leaves its input untouched.
 // Expected values come from the records analyseSeries writes for the fixtures (sampleInput.ts)
-// and, for layout rules, from our spec (src/memo/charts/).
-import { describe, expect, it } from 'vitest';
+// or `fit` writes at other interval levels, and, for layout rules, from our spec
+// (src/memo/charts/).
+import { beforeAll, describe, expect, it } from 'vitest';
 import type { TopLevelSpec } from 'vega-lite';
 import { addPeriods } from '../../src/base/period.js';
 import { backtestChart, backtestRows } from '../../src/memo/charts/backtestChart.js';
-import { forecastChart, recentLength } from '../../src/memo/charts/forecastChart.js';
+import { bandFields, forecastChart, recentLength } from '../../src/memo/charts/forecastChart.js';
 import { historyChart } from '../../src/memo/charts/historyChart.js';
 import { periodPosition } from '../../src/memo/charts/periodPosition.js';
 import { compileChart, renderChartSvg } from '../../src/memo/charts/renderChart.js';
@@ -14,7 +15,8 @@ import { residualAcfChart } from '../../src/memo/charts/residualAcfChart.js';
 import { stabilityChart } from '../../src/memo/charts/stabilityChart.js';
 import { widthRatioChart } from '../../src/memo/charts/widthRatioChart.js';
 import type { MemoSeries } from '../../src/memo/memoInput.js';
-import type { StabilityRecord } from '../../src/analysis/record.js';
+import type { AnalysisRecord, BacktestRecord, ForecastRow, StabilityRecord } from '../../src/analysis/record.js';
+import { fitRecord, QUICK_BACKTEST } from '../support/runCli.js';
 import { sampleSeries } from './sampleInput.js';
 
 function stabilityOf(entry: MemoSeries): StabilityRecord {
@@ -36,6 +38,17 @@ function allCharts(entry: MemoSeries): Record<string, TopLevelSpec> {
     residualAcf: residualAcfChart(input),
     stability: stabilityChart({ ...input, stability: stabilityOf(entry) }),
   };
+}
+
+/** Chart rows as our spec has them: the record's point, and each level's ends as lo<level> and hi<level>. */
+function expectedRows(forecasts: ForecastRow[], levels: string[]): Record<string, unknown>[] {
+  return forecasts.map((f) => ({
+    t: Number(f.period),
+    period: f.period,
+    h: f.h,
+    point: f.point,
+    ...Object.fromEntries(levels.flatMap((level) => [[`lo${level}`, f.intervals[level][0]], [`hi${level}`, f.intervals[level][1]]])),
+  }));
 }
 
 /** The `values` of a panel's layer. */
@@ -71,18 +84,7 @@ describe('chart data match the record', () => {
     for (const [panel, model] of [[0, 'deterministic'], [1, 'stochastic']] as const) {
       const rows = layerValues(charts.forecast, panel, 0);
       expect(rows[0]).toMatchObject({ h: 0, period: '1972', point: entry.history?.at(-1)?.value });
-      expect(rows.slice(1)).toEqual(
-        record.forecasts[model].map((f) => ({
-          t: Number(f.period),
-          period: f.period,
-          h: f.h,
-          point: f.point,
-          lo80: f.intervals['80'][0],
-          hi80: f.intervals['80'][1],
-          lo95: f.intervals['95'][0],
-          hi95: f.intervals['95'][1],
-        })),
-      );
+      expect(rows.slice(1)).toEqual(expectedRows(record.forecasts[model], ['80', '95']));
     }
   });
 
@@ -114,7 +116,7 @@ describe('chart data match the record', () => {
     if (backtest === undefined || backtest === null) throw new Error('no backtest');
     const rows = backtestRows(backtest);
     expect(rows.filter((r) => r.method === 'Stochastic').map((r) => r.rmse)).toEqual(backtest.per_horizon.stochastic.map((r) => r.rmse));
-    expect(rows.filter((r) => r.method === 'No change').map((r) => r.coverage95)).toEqual(backtest.per_horizon.naive.map(() => null));
+    expect(rows.filter((r) => r.method === 'No change').map((r) => r.coverage)).toEqual(backtest.per_horizon.naive.map(() => null));
     expect(layerValues(charts.backtest, 1, 1).every((r) => r.method !== 'No change')).toBe(true);
   });
 
@@ -138,6 +140,98 @@ describe('chart data match the record', () => {
       high: windows[0].slope + 2 * windows[0].se,
     });
     expect(layerValues(charts.stability, 0, 2)).toEqual([{ estimate: record.models.deterministic.coefficients.slope }]);
+  });
+});
+
+interface LayerData {
+  mark: { type: string; opacity?: number };
+  encoding: { y?: { field: string }; y2?: { field: string } };
+  data?: { values: Record<string, unknown>[] };
+}
+
+/** The layers of a panel, as plain data. */
+function layersOf(spec: TopLevelSpec, panel: number): LayerData[] {
+  return (JSON.parse(JSON.stringify(spec)) as { hconcat: { layer: LayerData[] }[] }).hconcat[panel].layer;
+}
+
+function backtestOf(record: AnalysisRecord): BacktestRecord {
+  if (record.backtest === undefined || record.backtest === null) throw new Error('the record has no backtest');
+  return record.backtest;
+}
+
+describe('charts at other interval levels', () => {
+  const lake = sampleSeries('lakeHuron');
+  const records = new Map<string, AnalysisRecord>();
+  beforeAll(async () => {
+    for (const levels of ['68,95,99', '90', '80,99.5']) records.set(levels, await fitRecord('test/fixtures/lake-huron.csv', [...QUICK_BACKTEST, '--levels', levels]));
+  });
+  /** The record fitted at `levels` with the fixture's history, as the memo gets it. */
+  const entryAt = (levels: string): MemoSeries => {
+    const record = records.get(levels);
+    if (record === undefined) throw new Error(`no record at ${levels}`);
+    return { record, history: lake.history, units: 'ft', assumptions: [] };
+  };
+
+  it('compile without warnings at one, two with a decimal, and three levels', () => {
+    for (const levels of records.keys()) {
+      for (const [chart, spec] of Object.entries(allCharts(entryAt(levels)))) expect(compileChart(spec).warnings, `${chart} at ${levels}`).toEqual([]);
+    }
+  });
+
+  it('shade one band per level, widest first and darker as they narrow, each carrying its interval', () => {
+    const { record } = entryAt('68,95,99');
+    const chart = allCharts(entryAt('68,95,99')).forecast;
+    for (const [panel, model] of [[0, 'deterministic'], [1, 'stochastic']] as const) {
+      const bands = layersOf(chart, panel).slice(0, 3);
+      expect(bands.map((band) => band.mark.type)).toEqual(['area', 'area', 'area']);
+      expect(bands.map((band) => [band.encoding.y?.field, band.encoding.y2?.field])).toEqual([['lo99', 'hi99'], ['lo95', 'hi95'], ['lo68', 'hi68']]);
+      const opacities = bands.map((band) => band.mark.opacity ?? 0);
+      expect(opacities[0]).toBeLessThan(opacities[1]);
+      expect(opacities[1]).toBeLessThan(opacities[2]);
+      // After the h = 0 anchor at the last observation, every level's ends are the record's.
+      const rows = bands[0].data?.values ?? [];
+      expect(rows[0]).toMatchObject({ h: 0, lo68: lake.history?.at(-1)?.value, hi99: lake.history?.at(-1)?.value });
+      expect(rows.slice(1)).toEqual(expectedRows(record.forecasts[model], ['68', '95', '99']));
+      expect(layersOf(chart, panel)[3].mark.type).toBe('line');
+    }
+    const title = JSON.parse(JSON.stringify(chart.title)) as { subtitle: string[] };
+    expect(title.subtitle[1]).toBe('Shading, darkest to lightest: 68%, 95% and 99% prediction intervals.');
+    expect(chart.description).toContain('with its 68%, 95% and 99% prediction intervals.');
+    expect(chart.description).toContain('(99% interval ');
+  });
+
+  it('shade a single level with one band and name it', () => {
+    const chart = allCharts(entryAt('90')).forecast;
+    expect(layersOf(chart, 0).map((layer) => layer.mark.type).slice(0, 2)).toEqual(['area', 'line']);
+    expect(layersOf(chart, 0)[0].encoding.y?.field).toBe('lo90');
+    expect((JSON.parse(JSON.stringify(chart.title)) as { subtitle: string[] }).subtitle[1]).toBe('Shading: 90% prediction interval.');
+    expect(chart.description).toContain('with its 90% prediction interval. ');
+  });
+
+  it('name a level with a decimal in fields Vega-Lite reads as flat', () => {
+    expect(bandFields(99.5)).toEqual({ lo: 'lo99_5', hi: 'hi99_5' });
+    const { record } = entryAt('80,99.5');
+    const rows = layersOf(allCharts(entryAt('80,99.5')).forecast, 1)[0].data?.values ?? [];
+    expect(rows.slice(1).map((row) => [row.lo99_5, row.hi99_5])).toEqual(record.forecasts.stochastic.map((f) => f.intervals['99.5']));
+  });
+
+  it('take the width ratio and the backtest coverage at the widest level', () => {
+    const entry = entryAt('68,95,99');
+    const { record } = entry;
+    const charts = allCharts(entry);
+    const ratios = (JSON.parse(JSON.stringify(charts.widthRatio)) as { layer: { data: { values: { ratio: number }[] } }[] }).layer[0].data.values.map((v) => v.ratio);
+    expect(ratios).toEqual(
+      record.forecasts.deterministic.map((d, i) => {
+        const s = record.forecasts.stochastic[i];
+        return (d.intervals['99'][1] - d.intervals['99'][0]) / (s.intervals['99'][1] - s.intervals['99'][0]);
+      }),
+    );
+    expect(charts.widthRatio.description).toContain('stochastic 99% interval width');
+    const backtest = backtestOf(record);
+    expect(backtestRows(backtest).filter((r) => r.method === 'Deterministic').map((r) => r.coverage)).toEqual(backtest.per_horizon.deterministic.map((r) => r.coverage['99']));
+    const coveragePanel = layersOf(charts.backtest, 1);
+    expect(coveragePanel[0].data?.values).toEqual([{ coverage: 0.99 }]);
+    expect(charts.backtest.description).toContain("each model's 99% interval, against the 99% target");
   });
 });
 

@@ -9,6 +9,7 @@ import Handlebars from 'handlebars';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { assertSelfContained, renderMemoHtml } from '../../src/memo/renderMemoHtml.js';
 import type { MemoInput } from '../../src/memo/memoInput.js';
+import { fitRecord, QUICK_BACKTEST } from '../support/runCli.js';
 import { bareRecord, sampleInput } from './sampleInput.js';
 
 const HOSTILE = '<img src=x onerror=alert(1)>';
@@ -139,6 +140,27 @@ describe('a record without the later parts', () => {
     expect(section).toContain('data-caveat="backtest-thin"');
     expect(section.match(/<figure class="chart"/g)).toHaveLength(3);
     expect(html).toContain('No assumptions were recorded for this series.');
+  });
+});
+
+describe('series at other interval levels', () => {
+  it('stacks the two models when a row of both would be wider than the page, and names no one set of levels for series that differ', async () => {
+    const input = sampleInput(['nile']);
+    const record = await fitRecord('test/fixtures/lake-huron.csv', [...QUICK_BACKTEST, '--levels', '68,95,99']);
+    input.series.push({ record, assumptions: [] });
+    const html = await renderMemoHtml(input);
+    expect(html).toContain('under both models with the prediction intervals set for each series,');
+    // Built-in levels: the models side by side, as before.
+    expect(sectionOf(html, 'series-1')).toContain('<table class="numbers forecast-table">');
+    expect(sectionOf(html, 'series-1')).toContain('<table class="numbers backtest-interval">');
+    const section = sectionOf(html, 'series-2');
+    // Three levels: each model its own rows under one set of columns, the row head spanning them
+    // all (forecasts: h, period, point, three intervals, ratio; backtest: h, three covers, width, score, CRPS).
+    expect(section).toContain('<table class="numbers forecast-table by-model">');
+    expect(section.match(/<th scope="rowgroup" colspan="7" class="model-(deterministic|stochastic)">/g)).toHaveLength(4);
+    expect(section).toContain('<table class="numbers backtest-interval by-model">');
+    const summary = html.slice(html.indexOf('<section class="summary"'), html.indexOf('<section class="series"'));
+    expect(summary.match(/<article class="summary-card( table-below)?">/g)).toEqual(['<article class="summary-card">', '<article class="summary-card table-below">']);
   });
 });
 

@@ -31,3 +31,6 @@ export async function fitRecord(file: string, options: readonly string[] = []): 
   if (run.code !== 0 || run.stderr !== '') throw new Error(`fit ${file} exited ${run.code}: ${run.stderr}`);
   return JSON.parse(run.stdout) as AnalysisRecord;
 }
+
+/** `fit` options for a quick backtest: orders up to (1, 1), four origins, three steps ahead. */
+export const QUICK_BACKTEST = ['--backtest', '--max-p', '1', '--max-q', '1', '--origins', '4', '--backtest-horizon', '3'] as const;

@@ -3,6 +3,7 @@
 // nothing is wrong, but a reader should not expect a symmetric range.
 import { formatNumber, withUnits } from '../format/formatNumber.js';
 import { seriesDecimals } from '../format/seriesDecimals.js';
+import { atLevel, widestLevel } from '../intervalLevels.js';
 import { scaleName } from '../wording.js';
 import type { Caveat, CaveatRule } from './caveat.js';
 import { caveatWording } from './caveatWording.js';
@@ -17,7 +18,8 @@ export const backTransformed: CaveatRule = {
     if (transform.kind === 'none') return null;
     const model = record.recommendation?.model ?? 'stochastic';
     const last = record.forecasts[model].at(-1);
-    const interval = last?.intervals['95'];
+    const level = widestLevel(record.settings);
+    const interval = atLevel(last?.intervals, level);
     if (last === undefined || interval === undefined) return null;
     const above = interval[1] - last.point;
     const below = last.point - interval[0];
@@ -28,12 +30,13 @@ export const backTransformed: CaveatRule = {
       text: caveatWording.backTransformed({
         scale: scaleName(transform),
         model,
+        level,
         period: last.period,
         above: withUnits(formatNumber(above, decimals), units),
         below: withUnits(formatNumber(below, decimals), units),
         point: record.settings.point,
       }),
-      numbers: { transform: transform.kind, period: last.period, above, below },
+      numbers: { transform: transform.kind, level, period: last.period, above, below },
     };
   },
 };

@@ -1,14 +1,14 @@
 // Every sentence a caveat rule can produce. The rules pass in numbers already formatted.
 import type { TrendModelKind } from '../../base/settings.js';
-import { MODEL_IN_TEXT } from '../wording.js';
+import { levelPercent, MODEL_IN_TEXT } from '../wording.js';
 
 export const caveatWording = {
   horizonLong: (a: { horizon: string; history: string; share: string }) =>
     `The forecast runs ${a.horizon} ahead from a history of ${a.history}: the horizon is ${a.share} of the history's length. ` +
     'Over a horizon that long both models extend patterns the data have shown only a few times, so read the later periods as a range of plausible paths rather than an estimate.',
 
-  narrowLineIntervals: (a: { period: string; narrower: string; deterministic: string; stochastic: string; ratio: string }) =>
-    `At ${a.period} the deterministic-trend model's 95% interval is ${a.narrower} narrower than the stochastic-trend model's ` +
+  narrowLineIntervals: (a: { level: number; period: string; narrower: string; deterministic: string; stochastic: string; ratio: string }) =>
+    `At ${a.period} the deterministic-trend model's ${levelPercent(a.level)} interval is ${a.narrower} narrower than the stochastic-trend model's ` +
     `(${a.deterministic} wide against ${a.stochastic}; ratio ${a.ratio}). ` +
     'That narrower range holds only if the trend line stays where the history puts it for the whole horizon. If the trend can shift, the wider range is the more honest one.',
 
@@ -33,9 +33,9 @@ export const caveatWording = {
       .join(' ') +
     ' A model that leaves a pattern behind has not captured all the structure in the series, so its intervals may be too narrow or too wide.',
 
-  backTransformed: (a: { scale: string; model: TrendModelKind; period: string; above: string; below: string; point: 'median' | 'mean' }) =>
+  backTransformed: (a: { scale: string; model: TrendModelKind; level: number; period: string; above: string; below: string; point: 'median' | 'mean' }) =>
     `Both models were fitted on the ${a.scale} scale and their forecasts turned back into the original units. ` +
-    `The intervals are therefore lopsided: at ${a.period} the ${MODEL_IN_TEXT[a.model]}'s 95% interval reaches ${a.above} above the point forecast but only ${a.below} below it. ` +
+    `The intervals are therefore lopsided: at ${a.period} the ${MODEL_IN_TEXT[a.model]}'s ${levelPercent(a.level)} interval reaches ${a.above} above the point forecast but only ${a.below} below it. ` +
     (a.point === 'median'
       ? 'The point forecast is the median of the forecast distribution (an even chance of the outcome falling above or below it), not its average.'
       : 'The point forecast is the average of the forecast distribution, adjusted for the change of scale, so it sits above the distribution\u2019s middle.'),

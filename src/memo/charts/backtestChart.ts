@@ -1,8 +1,10 @@
 // Backtest accuracy by horizon: root mean squared error of the two models and the no-change
-// benchmark, and the share of outcomes inside each model's 95% interval against the target.
+// benchmark, and the share of outcomes inside each model's interval at the widest level
+// against that level as the target.
 import type { TopLevelSpec } from 'vega-lite';
 import { chartWording } from '../chartWording.js';
 import { formatNumber, formatPercent, withUnits } from '../format/formatNumber.js';
+import { atLevel, widestLevel } from '../intervalLevels.js';
 import type { BacktestRecord, ForecastMethod } from '../../analysis/record.js';
 import { METHOD_NAME } from '../wording.js';
 import { CHART_CONFIG, PANEL_WIDTH } from './chartConfig.js';
@@ -15,12 +17,14 @@ export interface BacktestChartRow {
   method: string;
   h: number;
   rmse: number | null;
-  coverage95: number | null;
+  /** Share of outcomes inside the interval at the widest level. */
+  coverage: number | null;
 }
 
 export function backtestRows(backtest: BacktestRecord): BacktestChartRow[] {
+  const level = widestLevel(backtest.settings);
   return METHODS.flatMap((method) =>
-    backtest.per_horizon[method].map((row) => ({ method: METHOD_NAME[method], h: row.h, rmse: row.rmse, coverage95: row.coverage?.['95'] ?? null })),
+    backtest.per_horizon[method].map((row) => ({ method: METHOD_NAME[method], h: row.h, rmse: row.rmse, coverage: atLevel(row.coverage, level) ?? null })),
   );
 }
 
@@ -34,10 +38,10 @@ function styleScales() {
   };
 }
 
-function linePanel(title: string, field: 'rmse' | 'coverage95', rows: BacktestChartRow[], methods: readonly ForecastMethod[], yTitle: string | null, extra: LayerPart[]): PanelSpec {
+function linePanel(title: string, field: 'rmse' | 'coverage', rows: BacktestChartRow[], methods: readonly ForecastMethod[], yTitle: string | null, extra: LayerPart[]): PanelSpec {
   const { color, strokeDash } = styleScales();
   const x = { field: 'h', type: 'quantitative' as const, title: 'horizon (steps ahead)', axis: { tickMinStep: 1, format: 'd' } };
-  const y = { field, type: 'quantitative' as const, title: yTitle, ...(field === 'coverage95' ? { axis: { format: '.0%' }, scale: { domain: [0, 1] } } : {}) };
+  const y = { field, type: 'quantitative' as const, title: yTitle, ...(field === 'coverage' ? { axis: { format: '.0%' }, scale: { domain: [0, 1] } } : {}) };
   const shown = rows.filter((r) => r[field] !== null && methods.some((m) => METHOD_NAME[m] === r.method));
   return {
     title: { text: title, fontSize: 11 },
@@ -62,22 +66,23 @@ export function backtestChart({ series, units, decimals, backtest }: { series: s
   const rows = backtestRows(backtest);
   const origins = backtest.origins.length;
   const endErrors = METHODS.map((m) => `${METHOD_NAME[m].toLowerCase()} ${withUnits(formatNumber(backtest.per_horizon[m].at(-1)?.rmse, decimals), units)}`).join(', ');
+  const level = widestLevel(backtest.settings);
   const endCoverage = (['deterministic', 'stochastic'] as const)
-    .map((m) => `${METHOD_NAME[m].toLowerCase()} ${formatPercent(backtest.per_horizon[m].at(-1)?.coverage?.['95'])}`)
+    .map((m) => `${METHOD_NAME[m].toLowerCase()} ${formatPercent(atLevel(backtest.per_horizon[m].at(-1)?.coverage, level))}`)
     .join(', ');
   const target: LayerPart = {
-    data: { values: [{ coverage95: 0.95 }] },
+    data: { values: [{ coverage: level / 100 }] },
     mark: { type: 'rule', color: INK, strokeDash: [4, 2], strokeWidth: 1 },
-    encoding: { y: { field: 'coverage95', type: 'quantitative' } },
+    encoding: { y: { field: 'coverage', type: 'quantitative' } },
   };
   return {
     title: { text: chartWording.backtest.title(series), subtitle: chartWording.backtest.subtitle(origins) },
-    description: chartWording.backtest.description({ origins, horizon: backtest.settings.horizon, endErrors, endCoverage }),
+    description: chartWording.backtest.description({ origins, horizon: backtest.settings.horizon, endErrors, endCoverage, level }),
     config: CHART_CONFIG,
     spacing: 24,
     hconcat: [
       linePanel(chartWording.backtest.errorPanel, 'rmse', rows, METHODS, units ?? null, []),
-      linePanel(chartWording.backtest.coveragePanel, 'coverage95', rows, ['deterministic', 'stochastic'], null, [target]),
+      linePanel(chartWording.backtest.coveragePanel(level), 'coverage', rows, ['deterministic', 'stochastic'], null, [target]),
     ],
   };
 }

@@ -1,16 +1,17 @@
-// Recent history and each model's forecast with its 80% and 95% bands, one panel per model on
-// a shared vertical scale so the band widths compare at a glance. Each band starts from the
-// last observation so the fan visibly opens from where the data end.
+// Recent history and each model's forecast with one band per interval level, nested and darker
+// towards the point forecast, one panel per model on a shared vertical scale so the band
+// widths compare at a glance. Each band starts from the last observation so the fan visibly
+// opens from where the data end.
 import type { TopLevelSpec } from 'vega-lite';
-import type { ForecastRow } from '../../analysis/record.js';
 import { chartWording } from '../chartWording.js';
 import { formatNumber, withUnits } from '../format/formatNumber.js';
+import { atLevel, widestLevel } from '../intervalLevels.js';
 import type { HistoryPoint } from '../memoInput.js';
 import type { AnalysisRecord } from '../../analysis/record.js';
-import type { TrendModelKind } from '../../base/settings.js';
+import { levelKey, type TrendModelKind } from '../../base/settings.js';
 import { CHART_CONFIG, PANEL_WIDTH } from './chartConfig.js';
-import type { PanelSpec } from './chartTypes.js';
-import { BAND_OPACITY, INK, MODEL_COLOUR, MODEL_DASH, RULE } from './palette.js';
+import type { LayerPart, PanelSpec } from './chartTypes.js';
+import { bandOpacity, INK, MODEL_COLOUR, MODEL_DASH, RULE } from './palette.js';
 import { periodPosition, timeAxis } from './periodPosition.js';
 
 export interface ForecastChartInput {
@@ -26,24 +27,29 @@ export function recentLength(horizon: number, n: number): number {
   return Math.min(n, Math.max(24, 4 * horizon));
 }
 
-export interface ForecastChartRow {
-  t: number;
-  period: string;
-  h: number;
-  point: number;
-  lo80: number;
-  hi80: number;
-  lo95: number;
-  hi95: number;
+/** A forecast row with the ends of each level's interval in fields of its own (`bandFields`). */
+export type ForecastChartRow = { t: number; period: string; h: number; point: number } & Record<string, number | string>;
+
+/**
+ * The row fields of a level's band ends: 80 → lo80 and hi80. A point in a field name would
+ * read as a nested field in Vega-Lite, so 99.5 → lo99_5.
+ */
+export function bandFields(level: number): { lo: string; hi: string } {
+  const name = levelKey(level).replace('.', '_');
+  return { lo: `lo${name}`, hi: `hi${name}` };
 }
 
-function forecastRow(row: ForecastRow): ForecastChartRow {
-  const [lo80, hi80] = row.intervals['80'];
-  const [lo95, hi95] = row.intervals['95'];
-  return { t: periodPosition(row.period), period: row.period, h: row.h, point: row.point, lo80, hi80, lo95, hi95 };
+/** A chart row: `base` with the ends of each level's interval, `interval(level)`. */
+function chartRow(base: { t: number; period: string; h: number; point: number }, levels: readonly number[], interval: (level: number) => [number, number]): ForecastChartRow {
+  const row: ForecastChartRow = { ...base };
+  for (const level of levels) {
+    const { lo, hi } = bandFields(level);
+    [row[lo], row[hi]] = interval(level);
+  }
+  return row;
 }
 
-function panel(model: TrendModelKind, rows: ForecastChartRow[], recent: { t: number; period: string; value: number | null }[], units: string | undefined): PanelSpec {
+function panel(model: TrendModelKind, levels: readonly number[], rows: ForecastChartRow[], recent: { t: number; period: string; value: number | null }[], units: string | undefined): PanelSpec {
   const x = timeAxis();
   const colour = MODEL_COLOUR[model];
   const y = (field: string) => ({ field, type: 'quantitative' as const, title: units ?? null, scale: { zero: false } });
@@ -53,8 +59,11 @@ function panel(model: TrendModelKind, rows: ForecastChartRow[], recent: { t: num
     width: PANEL_WIDTH,
     height: 210,
     layer: [
-      { data: { values: rows }, mark: { type: 'area', color: colour, opacity: BAND_OPACITY.outer }, encoding: { x, y: y('lo95'), y2: { field: 'hi95' } } },
-      { data: { values: rows }, mark: { type: 'area', color: colour, opacity: BAND_OPACITY.inner }, encoding: { x, y: y('lo80'), y2: { field: 'hi80' } } },
+      // Widest first, so each narrower band is drawn over the wider ones.
+      ...[...levels].reverse().map((level): LayerPart => {
+        const { lo, hi } = bandFields(level);
+        return { data: { values: rows }, mark: { type: 'area', color: colour, opacity: bandOpacity(levels.indexOf(level), levels.length) }, encoding: { x, y: y(lo), y2: { field: hi } } };
+      }),
       { data: { values: recent }, mark: { type: 'line', color: INK, strokeWidth: 1.3 }, encoding: { x, y: y('value') } },
       { data: { values: rows }, mark: { type: 'line', color: colour, strokeWidth: 1.8, strokeDash: MODEL_DASH[model] }, encoding: { x, y: y('point') } },
       ...(lastObserved === undefined
@@ -71,29 +80,35 @@ export function forecastChart({ series, units, decimals, record, history }: Fore
     .map(({ period, value }) => ({ t: periodPosition(period), period, value }));
   const lastObserved = recent.at(-1);
   const models = ['deterministic', 'stochastic'] as const;
+  const { levels } = record.settings;
   const rowsOf = (model: TrendModelKind): ForecastChartRow[] => {
-    const rows = record.forecasts[model].map(forecastRow);
+    const rows = record.forecasts[model].map((row) =>
+      chartRow({ t: periodPosition(row.period), period: row.period, h: row.h, point: row.point }, levels, (level) => atLevel(row.intervals, level) ?? [Number.NaN, Number.NaN]),
+    );
+    const value = lastObserved?.value;
     // The anchor (h = 0) joins the fan to the last observation; it is not a forecast.
-    return lastObserved === undefined || lastObserved.value === null
-      ? rows
-      : [{ t: lastObserved.t, period: lastObserved.period, h: 0, point: lastObserved.value, lo80: lastObserved.value, hi80: lastObserved.value, lo95: lastObserved.value, hi95: lastObserved.value }, ...rows];
+    return lastObserved === undefined || value === null || value === undefined ? rows : [chartRow({ t: lastObserved.t, period: lastObserved.period, h: 0, point: value }, levels, () => [value, value]), ...rows];
   };
   const end = record.forecasts.deterministic.at(-1)?.period ?? record.series.last;
   const format = (v: number) => withUnits(formatNumber(v, decimals), units);
+  const widest = widestLevel(record.settings);
   return {
-    title: { text: chartWording.forecast.title(series, end), subtitle: [...chartWording.forecast.subtitle] },
+    title: { text: chartWording.forecast.title(series, end), subtitle: chartWording.forecast.subtitle(levels) },
     description: chartWording.forecast.description({
       series,
       recent: recent.length,
       end,
+      levels,
+      level: widest,
       models: models.flatMap((model) => {
         const last = record.forecasts[model].at(-1);
-        return last === undefined ? [] : [{ model, point: format(last.point), low: format(last.intervals['95'][0]), high: format(last.intervals['95'][1]) }];
+        const interval = atLevel(last?.intervals, widest);
+        return last === undefined || interval === undefined ? [] : [{ model, point: format(last.point), low: format(interval[0]), high: format(interval[1]) }];
       }),
     }),
     config: CHART_CONFIG,
     resolve: { scale: { y: 'shared' } },
     spacing: 24,
-    hconcat: models.map((model) => panel(model, rowsOf(model), recent, units)),
+    hconcat: models.map((model) => panel(model, levels, rowsOf(model), recent, units)),
   };
 }

@@ -27,8 +27,18 @@ export const MODEL_SHAPE: Record<ForecastMethod, string> = {
   naive: 'triangle-up',
 };
 
-/** Opacity of the inner (80%) and outer (95%) prediction bands. */
+/** Opacity of the narrowest (inner) and the widest (outer) prediction band. */
 export const BAND_OPACITY = { inner: 0.34, outer: 0.16 } as const;
+
+/**
+ * Opacity of band `rank` of `count`, 0 the narrowest: evenly spaced from inner to outer, so the
+ * nested bands, drawn over each other, darken towards the point forecast in colour and in
+ * greyscale alike. A lone band takes the middle.
+ */
+export function bandOpacity(rank: number, count: number): number {
+  const share = count === 1 ? 0.5 : rank / (count - 1);
+  return BAND_OPACITY.inner * (1 - share) + BAND_OPACITY.outer * share;
+}
 
 /** A system font stack: no font is downloaded. */
 export const CHART_FONT = '"Helvetica Neue", Helvetica, Arial, "Liberation Sans", "DejaVu Sans", sans-serif';

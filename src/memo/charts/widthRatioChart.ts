@@ -1,8 +1,9 @@
-// The 95% interval width of the deterministic model divided by that of the stochastic model,
-// at every horizon, against a line at 1 (equal widths).
+// The width of the deterministic model's interval divided by that of the stochastic model at
+// the widest level, at every horizon, against a line at 1 (equal widths).
 import type { TopLevelSpec } from 'vega-lite';
 import { chartWording } from '../chartWording.js';
 import { formatNumber } from '../format/formatNumber.js';
+import { atLevel, widestLevel } from '../intervalLevels.js';
 import type { AnalysisRecord } from '../../analysis/record.js';
 import { CHART_CONFIG, FIT_WIDTH, FULL_WIDTH } from './chartConfig.js';
 import { INK, MODEL_COLOUR } from './palette.js';
@@ -13,14 +14,14 @@ export interface WidthRatioRow {
   ratio: number;
 }
 
-/** Deterministic ÷ stochastic 95% width per horizon, for the rows both models have. */
-export function widthRatios(record: Pick<AnalysisRecord, 'forecasts'>): WidthRatioRow[] {
+/** Deterministic ÷ stochastic interval width at the widest level per horizon, for the rows both models have. */
+export function widthRatios(record: Pick<AnalysisRecord, 'forecasts' | 'settings'>): WidthRatioRow[] {
+  const level = widestLevel(record.settings);
   return record.forecasts.deterministic.flatMap((row, i) => {
-    const other = record.forecasts.stochastic[i];
-    if (other === undefined) return [];
-    const [lo, hi] = row.intervals['95'];
-    const [otherLo, otherHi] = other.intervals['95'];
-    return [{ h: row.h, period: row.period, ratio: (hi - lo) / (otherHi - otherLo) }];
+    const interval = atLevel(row.intervals, level);
+    const other = atLevel(record.forecasts.stochastic[i]?.intervals, level);
+    if (interval === undefined || other === undefined) return [];
+    return [{ h: row.h, period: row.period, ratio: (interval[1] - interval[0]) / (other[1] - other[0]) }];
   });
 }
 
@@ -30,9 +31,11 @@ export const MAX_LABELLED_BARS = 12;
 export function widthRatioChart({ series, record }: { series: string; record: AnalysisRecord }): TopLevelSpec {
   const rows = widthRatios(record).map((r) => ({ ...r, label: formatNumber(r.ratio, 2) }));
   const top = Math.max(1.1, ...rows.map((r) => r.ratio * 1.12));
+  const level = widestLevel(record.settings);
   return {
-    title: { text: chartWording.widthRatio.title(series), subtitle: chartWording.widthRatio.subtitle },
+    title: { text: chartWording.widthRatio.title(series, level), subtitle: chartWording.widthRatio.subtitle },
     description: chartWording.widthRatio.description({
+      level,
       horizon: rows.length,
       first: rows[0]?.label ?? '',
       last: rows.at(-1)?.label ?? '',

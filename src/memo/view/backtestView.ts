@@ -1,9 +1,14 @@
 // The backtest section: what was done in words, point and interval accuracy by horizon, and
 // the comparison tests. Null when the backtest was not run (the template shows the note).
+// Coverage is shown at every level; width, interval score and the comparison tests at the
+// level the recommendation rule scores, the only one the comparison tests run at.
 import type { Frequency } from '../../base/period.js';
 import { evidenceWording } from '../evidenceWording.js';
 import { formatNumber, formatPCell, formatPercent, formatPercentPoints, formatSignificant, MISSING } from '../format/formatNumber.js';
-import type { BacktestRecord, ComparisonRow, ForecastMethod, HorizonScores } from '../../analysis/record.js';
+import { intervalScoreLoss, type BacktestRecord, type ComparisonRow, type ForecastMethod, type HorizonScores } from '../../analysis/record.js';
+import { atLevel } from '../intervalLevels.js';
+import { METHOD_NAME, TEMPLATE_TEXT } from '../wording.js';
+import { modelTable, type ModelTable } from './modelTable.js';
 import { noLinks } from '../format/noLinks.js';
 
 export interface PointAccuracyCells {
@@ -12,22 +17,12 @@ export interface PointAccuracyCells {
   mase: string;
 }
 
-export interface IntervalAccuracyCells {
-  coverage80: string;
-  coverage95: string;
-  width95: string;
-  score95: string;
-  crps: string;
-}
-
 export interface ComparisonCells {
   statistic: string;
   p: string;
   outcome: string;
   decided: boolean;
 }
-
-const LOSSES: readonly ComparisonRow['loss'][] = ['squared_error', 'interval_score_95'];
 
 function comparisonCells(c: ComparisonRow | undefined, significance: number): ComparisonCells {
   if (c === undefined) return { statistic: MISSING, p: MISSING, outcome: MISSING, decided: false };
@@ -42,20 +37,23 @@ function comparisonCells(c: ComparisonRow | undefined, significance: number): Co
 export interface BacktestView {
   settings: string;
   point: { h: number; n: number; methods: PointAccuracyCells[] }[];
-  interval: { h: number; methods: IntervalAccuracyCells[] }[];
+  interval: ModelTable<{ h: number; cells: string[] }>;
   comparisonIntro: string;
+  /** Names of the losses compared, one column group each. */
+  losses: string[];
   comparison: { h: number; tests: ComparisonCells[] }[];
   notes: string[];
 }
 
 const POINT_METHODS: readonly ForecastMethod[] = ['deterministic', 'stochastic', 'naive'];
-const INTERVAL_METHODS: readonly ForecastMethod[] = ['deterministic', 'stochastic'];
 
 function rowAt(backtest: BacktestRecord, method: ForecastMethod, h: number): HorizonScores | undefined {
   return backtest.per_horizon[method].find((r) => r.h === h);
 }
 
-export function backtestView(backtest: BacktestRecord, frequency: Frequency, decimals: number): BacktestView {
+export function backtestView(backtest: BacktestRecord, frequency: Frequency, decimals: number, scoredLevel: number): BacktestView {
+  const { levels } = backtest.settings;
+  const comparedLosses: readonly ComparisonRow['loss'][] = ['squared_error', intervalScoreLoss(scoredLevel)];
   const first = backtest.origins[0];
   const last = backtest.origins.at(-1);
   const horizons = backtest.per_horizon.deterministic.map((r) => r.h);
@@ -81,25 +79,33 @@ export function backtestView(backtest: BacktestRecord, frequency: Frequency, dec
         return { rmse: formatNumber(row?.rmse, decimals), mape: formatPercentPoints(row?.mape), mase: formatNumber(row?.mase, 2) };
       }),
     })),
-    interval: horizons.map((h) => ({
-      h,
-      methods: INTERVAL_METHODS.map((m) => {
-        const row = rowAt(backtest, m, h);
-        return {
-          coverage80: formatPercent(row?.coverage?.['80']),
-          coverage95: formatPercent(row?.coverage?.['95']),
-          width95: formatNumber(row?.width?.['95'], decimals),
-          score95: formatNumber(row?.interval_score?.['95'], decimals),
-          // CRPS is on the modelling scale, which the series' decimals do not fit after a transform.
-          crps: formatSignificant(row?.crps, 3),
-        };
-      }),
-    })),
-    comparisonIntro: evidenceWording.comparisonIntro,
+    interval: modelTable({
+      levels,
+      names: METHOD_NAME,
+      leading: 1,
+      modelHeads: TEMPLATE_TEXT.intervalColumns(levels, scoredLevel),
+      trailingHeads: [],
+      rows: (models) =>
+        horizons.map((h) => ({
+          h,
+          cells: models.flatMap((m) => {
+            const row = rowAt(backtest, m, h);
+            return [
+              ...levels.map((level) => formatPercent(atLevel(row?.coverage, level))),
+              formatNumber(atLevel(row?.width, scoredLevel), decimals),
+              formatNumber(atLevel(row?.interval_score, scoredLevel), decimals),
+              // CRPS is on the modelling scale, which the series' decimals do not fit after a transform.
+              formatSignificant(row?.crps, 3),
+            ];
+          }),
+        })),
+    }),
+    comparisonIntro: evidenceWording.comparisonIntro(scoredLevel),
+    losses: [TEMPLATE_TEXT.squaredErrorLoss, TEMPLATE_TEXT.intervalScoreLoss(scoredLevel)],
     // The p-value alone decides significance; the outcome only names the lower mean loss.
     comparison: [...new Set(backtest.comparison.map((c) => c.h))]
       .sort((a, b) => a - b)
-      .map((h) => ({ h, tests: LOSSES.map((loss) => comparisonCells(backtest.comparison.find((c) => c.h === h && c.loss === loss), backtest.settings.significance)) })),
+      .map((h) => ({ h, tests: comparedLosses.map((loss) => comparisonCells(backtest.comparison.find((c) => c.h === h && c.loss === loss), backtest.settings.significance)) })),
     notes: backtest.notes.map(noLinks),
   };
 }

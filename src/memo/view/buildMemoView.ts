@@ -3,7 +3,7 @@
 import { noLinks } from '../format/noLinks.js';
 import type { MemoInput } from '../memoInput.js';
 import { cssMargin, PAPER_SIZES } from '../print/paperSize.js';
-import { CAUTIONS, HEADINGS, LABELS, METHOD_NAME, MODEL_NAME, SIGN_OFF_NOTE, SUMMARY_INTRO, TEMPLATE_TEXT } from '../wording.js';
+import { CAUTIONS, HEADINGS, LABELS, METHOD_NAME, MODEL_NAME, SIGN_OFF_NOTE, summaryIntro, TEMPLATE_TEXT } from '../wording.js';
 import { memoStatus, type MemoStatus } from './memoStatus.js';
 import { revisionsView, type RevisionsView } from './revisionsView.js';
 import { seriesView, type SeriesView } from './seriesView.js';
@@ -41,12 +41,10 @@ const TEMPLATE_STRINGS = {
   memoKind: TEMPLATE_TEXT.memoKind,
   recommendedMarker: TEMPLATE_TEXT.recommendedMarker,
   assumes: TEMPLATE_TEXT.assumes,
-  lossNames: TEMPLATE_TEXT.lossNames,
   noAssumptions: TEMPLATE_TEXT.noAssumptions,
   comparisonCaption: TEMPLATE_TEXT.comparisonCaption,
   accuracyNote: TEMPLATE_TEXT.accuracyNote,
   pointColumns: [...TEMPLATE_TEXT.pointColumns, ...TEMPLATE_TEXT.pointColumns, ...TEMPLATE_TEXT.pointColumns],
-  intervalColumns: [...TEMPLATE_TEXT.intervalColumns, ...TEMPLATE_TEXT.intervalColumns],
 };
 
 export async function buildMemoView(input: MemoInput): Promise<MemoView> {
@@ -69,7 +67,7 @@ export async function buildMemoView(input: MemoInput): Promise<MemoView> {
       reviewers: memo.reviewers.map((r) => ({ name: noLinks(r.name), role: noLinks(r.role) })),
     },
     status: { ...status, detail: noLinks(status.detail), draft: status.state === 'draft' },
-    summary: { intro: SUMMARY_INTRO, cards: series.map((s) => s.summary) },
+    summary: { intro: summaryIntro(sharedLevels(input)), cards: series.map((s) => s.summary) },
     series,
     revisions: await revisionsView(input),
     assumptions: input.series.map((entry, i) => ({
@@ -99,4 +97,11 @@ export async function buildMemoView(input: MemoInput): Promise<MemoView> {
     methodNames: METHOD_NAME,
     text: TEMPLATE_STRINGS,
   };
+}
+
+/** The interval levels every series of the memo was analysed at; null when they differ. */
+function sharedLevels(input: MemoInput): readonly number[] | null {
+  const [first, ...rest] = input.series.map(({ record }) => record.settings.levels);
+  if (first === undefined) return null;
+  return rest.every((levels) => levels.join() === first.join()) ? first : null;
 }

@@ -1,22 +1,20 @@
-// The forecast table: both models side by side at every horizon, with the width ratio.
+// The forecast table: both models at every horizon with an interval per level, and the width
+// ratio at the widest level (named in the width-ratio chart that follows the table).
 import { formatNumber } from '../format/formatNumber.js';
+import { atLevel } from '../intervalLevels.js';
 import type { AnalysisRecord } from '../../analysis/record.js';
 import type { TrendModelKind } from '../../base/settings.js';
 import { widthRatios } from '../charts/widthRatioChart.js';
+import { LABELS, MODEL_NAME, TEMPLATE_TEXT } from '../wording.js';
+import { modelTable, type ModelTable } from './modelTable.js';
 
 export interface ForecastCells {
   point: string;
-  interval80: string;
-  interval95: string;
+  /** One per level, ascending. */
+  intervals: string[];
 }
 
-export interface ForecastTableRow {
-  h: number;
-  period: string;
-  deterministic: ForecastCells;
-  stochastic: ForecastCells;
-  ratio: string;
-}
+export type ForecastTable = ModelTable<{ h: number; period: string; cells: string[] }> & { caption: string };
 
 /** "575.36 – 580.31". */
 export function intervalText(interval: [number, number] | undefined, decimals: number): string {
@@ -28,18 +26,33 @@ export function forecastCells(record: AnalysisRecord, model: TrendModelKind, ind
   const row = record.forecasts[model][index];
   return {
     point: formatNumber(row?.point, decimals),
-    interval80: intervalText(row?.intervals['80'], decimals),
-    interval95: intervalText(row?.intervals['95'], decimals),
+    intervals: record.settings.levels.map((level) => intervalText(atLevel(row?.intervals, level), decimals)),
   };
 }
 
-export function forecastTableView(record: AnalysisRecord, decimals: number): ForecastTableRow[] {
+/** The column heads of one model's point and intervals. */
+export function forecastHeads(record: AnalysisRecord): string[] {
+  return [LABELS.point, ...record.settings.levels.map(TEMPLATE_TEXT.intervalHead)];
+}
+
+export function forecastTableView(record: AnalysisRecord, decimals: number, units: string): ForecastTable {
   const ratios = widthRatios(record);
-  return record.forecasts.deterministic.map((row, i) => ({
-    h: row.h,
-    period: row.period,
-    deterministic: forecastCells(record, 'deterministic', i, decimals),
-    stochastic: forecastCells(record, 'stochastic', i, decimals),
-    ratio: formatNumber(ratios[i]?.ratio, 2),
-  }));
+  const cells = (model: TrendModelKind, i: number): string[] => {
+    const { point, intervals } = forecastCells(record, model, i, decimals);
+    return [point, ...intervals];
+  };
+  const table = modelTable({
+    levels: record.settings.levels,
+    names: MODEL_NAME,
+    leading: 2,
+    modelHeads: forecastHeads(record),
+    trailingHeads: [LABELS.ratio],
+    rows: (models) =>
+      record.forecasts.deterministic.map((row, i) => ({
+        h: row.h,
+        period: row.period,
+        cells: [...models.flatMap((model) => cells(model, i)), formatNumber(ratios[i]?.ratio, 2)],
+      })),
+  });
+  return { caption: TEMPLATE_TEXT.forecastCaption(units), ...table };
 }

@@ -10,12 +10,13 @@ import { widthRatioChart } from '../charts/widthRatioChart.js';
 import { evidenceWording } from '../evidenceWording.js';
 import { noLinks } from '../format/noLinks.js';
 import { seriesDecimals } from '../format/seriesDecimals.js';
+import { scoredLevel } from '../intervalLevels.js';
 import type { MemoSeries } from '../memoInput.js';
 import { AICC_NOTE, FREQUENCY_NAME, LABELS, MODEL_GLOSS, NOT_RUN, scaleName, TEMPLATE_TEXT } from '../wording.js';
 import { backtestView, type BacktestView } from './backtestView.js';
 import { evidenceView, type EvidenceView } from './evidenceView.js';
 import { figureView, type FigureView } from './figureView.js';
-import { forecastTableView, type ForecastTableRow } from './forecastTableView.js';
+import { forecastTableView, type ForecastTable } from './forecastTableView.js';
 import { modelView, scaleNote, type ModelView } from './modelsView.js';
 import { stabilityView, type StabilityView } from './stabilityView.js';
 import { summaryCard, type SummaryCard } from './summaryView.js';
@@ -30,7 +31,7 @@ export interface SeriesView {
   recommendation: { model: string; gloss: string; rule: string; fixedByConfig: string; justification: string; reasons: string[] } | null;
   notRun: typeof NOT_RUN;
   backtestUnavailable: string;
-  captions: { forecast: string; point: string; interval: string };
+  captions: { point: string; interval: string };
   figures: {
     history: FigureView | null;
     forecast: FigureView;
@@ -39,7 +40,7 @@ export interface SeriesView {
     residualAcf: FigureView;
     stability: FigureView | null;
   };
-  forecastTable: ForecastTableRow[];
+  forecastTable: ForecastTable;
   backtest: BacktestView | null;
   evidence: EvidenceView;
   models: ModelView[];
@@ -83,7 +84,6 @@ export async function seriesView(entry: MemoSeries, index: number): Promise<Seri
     notRun: NOT_RUN,
     backtestUnavailable: record.backtest_unavailable === undefined ? '' : noLinks(evidenceWording.backtestUnavailable(record.backtest_unavailable)),
     captions: {
-      forecast: TEMPLATE_TEXT.forecastCaption(units ?? ''),
       point: TEMPLATE_TEXT.pointCaption(units ?? ''),
       interval: TEMPLATE_TEXT.intervalCaption(units ?? '', record.series.transform.kind !== 'none'),
     },
@@ -95,8 +95,8 @@ export async function seriesView(entry: MemoSeries, index: number): Promise<Seri
       residualAcf: await figureView(`${anchor}-acf`, residualAcfChart(chartInput)),
       stability: stability === undefined ? null : await figureView(`${anchor}-stability`, stabilityChart({ ...chartInput, stability })),
     },
-    forecastTable: forecastTableView(record, decimals),
-    backtest: backtest === undefined ? null : backtestView(backtest, record.series.frequency, decimals),
+    forecastTable: forecastTableView(record, decimals, units ?? ''),
+    backtest: backtest === undefined ? null : backtestView(backtest, record.series.frequency, decimals, scoredLevel(record)),
     evidence: evidenceView(record),
     models: [modelView(record, 'deterministic'), modelView(record, 'stochastic')],
     modelScale: scaleNote(record),

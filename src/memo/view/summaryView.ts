@@ -1,10 +1,10 @@
 // One card per series for the client's summary page: the recommended model, the forecast at
-// the end of the horizon under both models with both intervals, and the top caveat.
+// the end of the horizon under both models with an interval per level, and the top caveat.
 import type { Caveat } from '../caveats/caveat.js';
 import type { AnalysisRecord } from '../../analysis/record.js';
 import type { TrendModelKind } from '../../base/settings.js';
 import { LABELS, METHOD_NAME, MODEL_GLOSS, MODEL_NAME, NOT_RUN, TEMPLATE_TEXT } from '../wording.js';
-import { forecastCells, type ForecastCells } from './forecastTableView.js';
+import { forecastCells, forecastHeads, type ForecastCells } from './forecastTableView.js';
 
 export interface SummaryCard {
   anchor: string;
@@ -15,9 +15,16 @@ export interface SummaryCard {
   noRecommendation: string;
   endPeriod: string;
   atEnd: string;
+  /** Heads of the point and interval columns. */
+  heads: string[];
+  /** True when the table has too many columns to sit beside the text. */
+  tableBelow: boolean;
   models: (ForecastCells & { name: string; recommended: boolean })[];
   caveat: { label: string; severity: Caveat['severity']; text: string } | null;
 }
+
+/** Most levels whose intervals fit in the half of the card beside its text. */
+const LEVELS_BESIDE_TEXT = 2;
 
 export function summaryCard(a: { anchor: string; title: string; units?: string; record: AnalysisRecord; decimals: number; caveats: Caveat[] }): SummaryCard {
   const { record } = a;
@@ -34,6 +41,8 @@ export function summaryCard(a: { anchor: string; title: string; units?: string; 
     noRecommendation: NOT_RUN.recommendation,
     endPeriod,
     atEnd: TEMPLATE_TEXT.atPeriod(endPeriod),
+    heads: forecastHeads(record),
+    tableBelow: record.settings.levels.length > LEVELS_BESIDE_TEXT,
     models: (['deterministic', 'stochastic'] as const).map((kind) => ({
       name: METHOD_NAME[kind],
       recommended: kind === model,
