@@ -1,7 +1,7 @@
 // The backtest block of the terminal summary: what was run, the notes, accuracy per horizon
 // for each method and the comparison tests. Plain text, fixed-width columns.
 import type { BacktestRecord, ComparisonRow, ForecastMethod, JsonNumber } from '../analysis/record.js';
-import type { RefitPolicy } from '../base/settings.js';
+import { levelKey, type RefitPolicy } from '../base/settings.js';
 
 const METHOD_NAMES: Record<ForecastMethod, string> = { deterministic: 'deterministic', stochastic: 'stochastic', naive: 'no change' };
 function lossName(loss: ComparisonRow['loss']): string {
@@ -20,7 +20,7 @@ export function formatBacktest(record: BacktestRecord): string[] {
   for (const note of record.notes) lines.push(`  Note: ${note}`);
   lines.push('');
   lines.push('Accuracy by horizon (data scale, CRPS on the model scale; lower is better, coverage should match its level):');
-  const levels = settings.levels.map(String);
+  const levels = settings.levels.map(levelKey);
   const header = ['h', 'method', 'MAE', 'RMSE', 'MASE', 'MAPE %', ...levels.map((l) => `cover ${l}%`), ...levels.map((l) => `IS ${l}%`), 'CRPS'];
   const rows: string[][] = [header];
   for (let h = 1; h <= settings.horizon; h++) {

@@ -1,6 +1,7 @@
 // The readable terminal summary of an AnalysisRecord: both models side by side, then the
 // forecast table. Plain text, fixed-width columns.
 import type { AnalysisRecord, ModelRecord } from '../analysis/record.js';
+import { levelKey } from '../base/settings.js';
 import { formatEvidence } from './formatEvidence.js';
 import { formatBacktest } from './formatBacktest.js';
 
@@ -47,7 +48,7 @@ function modelTable(det: AnalysisRecord['models']['deterministic'], sto: Analysi
 }
 
 function forecastTable(record: AnalysisRecord): string[] {
-  const levels = record.settings.levels.map(String);
+  const levels = record.settings.levels.map(levelKey);
   const header = ['period', 'h'];
   for (const kind of ['deterministic', 'stochastic'] as const) {
     const short = kind === 'deterministic' ? 'det.' : 'stoch.';
