@@ -7,15 +7,21 @@ import { join, resolve } from 'node:path';
 
 export { EPOCH_2026_01_01, fixRunDate } from '../support/fixRunDate.js';
 
-export function memoConfig(asOf: string | undefined, formats = '[html, json, csv]', title = 'Lake outlook'): string {
+/** Another memo id, or interval levels other than the built-in ones, for tests that need them. */
+export interface MemoVariant {
+  id?: string;
+  levels?: readonly number[];
+}
+
+export function memoConfig(asOf: string | undefined, formats = '[html, json, csv]', title = 'Lake outlook', variant: MemoVariant = {}): string {
   return `memo:
-  id: lake-outlook
+  id: ${variant.id ?? 'lake-outlook'}
   title: ${title}
   client: Invented Shoreline Trust
 ${asOf === undefined ? '' : `  as_of: ${asOf}\n`}  reviewers:
     - name: A. Reviewer
 defaults:
-  max_p: 1
+${variant.levels === undefined ? '' : `  levels: [${variant.levels.join(', ')}]\n`}  max_p: 1
   max_q: 1
   backtest: {origins: 4, horizon: 2, refit: reestimate}
 series:
