@@ -1,15 +1,12 @@
 // The command line as a function: cli(argv, io) → exit code (cli/exitCodes.ts), so it is
-// tested without spawning processes.
+// tested without spawning processes. Each command's module is loaded only when that command
+// runs, so `--version` loads next to nothing and `fit` never loads the memo renderer or the
+// browser driver.
 import { closestName } from './base/closestName.js';
 import { formatProblem, InputError } from './base/problem.js';
-import { cliMessages } from './cli/messages.js';
-import { runFit, FIT_HELP } from './cli/fitCommand.js';
-import { runCheck } from './cli/checkCommand.js';
-import { runInit } from './cli/initCommand.js';
-import { runRun } from './cli/runCommand.js';
-import { runVerify } from './cli/verifyCommand.js';
 import { toolVersion } from './base/toolVersion.js';
 import { EXIT } from './cli/exitCodes.js';
+import { cliMessages } from './cli/messages.js';
 
 export interface CliIo {
   stdout(text: string): void;
@@ -18,9 +15,16 @@ export interface CliIo {
   isTTY?: boolean;
 }
 
-const COMMANDS = ['run', 'check', 'fit', 'verify', 'init'] as const;
-const GLOBAL_OPTIONS = ['--help', '--version'] as const;
+type Command = (args: readonly string[], io: CliIo) => Promise<number>;
 
+const COMMANDS: Readonly<Record<string, () => Promise<Command>>> = {
+  run: async () => (await import('./cli/runCommand.js')).runRun,
+  check: async () => (await import('./cli/checkCommand.js')).runCheck,
+  fit: async () => (await import('./cli/fitCommand.js')).runFit,
+  verify: async () => (await import('./cli/verifyCommand.js')).runVerify,
+  init: async () => (await import('./cli/initCommand.js')).runInit,
+};
+const GLOBAL_OPTIONS = ['--help', '--version'] as const;
 
 const MAIN_HELP = `trendbrief: compare deterministic and stochastic trend extrapolation for forecast memos
 
@@ -51,19 +55,10 @@ export async function cli(argv: readonly string[], io: CliIo): Promise<number> {
       io.stdout(`${toolVersion().version}\n`);
       return EXIT.ok;
     }
-    if (command === 'fit') {
-      if (rest.includes('--help') || rest.includes('-h')) {
-        io.stdout(FIT_HELP);
-        return EXIT.ok;
-      }
-      return await runFit(rest, io);
-    }
-    if (command === 'run') return await runRun(rest, io);
-    if (command === 'check') return await runCheck(rest, io);
-    if (command === 'verify') return await runVerify(rest, io);
-    if (command === 'init') return await runInit(rest, io);
+    const load = Object.hasOwn(COMMANDS, command) ? COMMANDS[command] : undefined;
+    if (load !== undefined) return await (await load())(rest, io);
     if (command.startsWith('-')) throw new InputError(cliMessages.unknownOption(command, closestName(command, GLOBAL_OPTIONS), ''));
-    throw new InputError(cliMessages.unknownCommand(command, closestName(command, COMMANDS)));
+    throw new InputError(cliMessages.unknownCommand(command, closestName(command, Object.keys(COMMANDS))));
   } catch (error) {
     if (error instanceof InputError) {
       for (const problem of error.problems) io.stderr(`${formatProblem(problem)}\n`);

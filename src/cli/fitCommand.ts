@@ -44,6 +44,11 @@ Options:
 `;
 
 export async function runFit(args: readonly string[], io: { stdout(text: string): void }): Promise<number> {
+  // Help comes before the options are checked, so `fit --help` works whatever else is written.
+  if (args.includes('--help') || args.includes('-h')) {
+    io.stdout(FIT_HELP);
+    return EXIT.ok;
+  }
   const request = parseFitOptions(args);
   const reading = readingSettings(request.settings);
   const series = readSeriesCsv(request.file, {

@@ -9,7 +9,7 @@ import type { OutputFormat } from '../config/runPlan.js';
 import { formatProblem, InputError, type InputProblem } from '../base/problem.js';
 import { cliMessages, configCommandMessages } from './messages.js';
 import { runMessages } from '../run/messages.js';
-import { openPdfPrinter, type PdfPrinter } from '../memo/print/pdfPrinter.js';
+import type { PdfPrinter } from '../memo/print/pdfPrinter.js';
 import { runMemo, type MemoRunResult } from '../run/runMemo.js';
 import { openSeriesPool } from '../run/seriesPool.js';
 import { progressReporter } from './progressReporter.js';
@@ -82,7 +82,8 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
     quiet ? undefined : { write: (text) => (io.isTTY === true ? io.stderr(text) : io.stdout(text)), isTTY: io.isTTY === true },
   );
   let printer: Promise<PdfPrinter> | undefined;
-  const sharedPrinter = (): Promise<PdfPrinter> => (printer ??= openPdfPrinter());
+  // The browser driver loads, and Chromium starts, only when the first PDF is printed.
+  const sharedPrinter = (): Promise<PdfPrinter> => (printer ??= import('../memo/print/pdfPrinter.js').then(({ openPdfPrinter }) => openPdfPrinter()));
   const pool = threads > 1 && totalSeries > 1 ? openSeriesPool(Math.min(threads, totalSeries)) : undefined;
   const outcomes: MemoOutcome[] = [];
   let exitCode: number = EXIT.ok;

@@ -12,7 +12,6 @@ import type { Series } from '../base/series.js';
 import { InputError, type InputProblem } from '../base/problem.js';
 import type { MemoInput } from '../memo/memoInput.js';
 import type { PdfPrinter } from '../memo/print/pdfPrinter.js';
-import { renderMemoHtml } from '../memo/renderMemoHtml.js';
 import { analysePlannedSeries, type SeriesTask } from './analysePlannedSeries.js';
 import { assumptionsRegister } from './assumptionsRegister.js';
 import { compareRecords } from './compareRecords.js';
@@ -105,13 +104,17 @@ export async function prepareMemo(plan: RunPlan, options: PrepareMemoOptions): P
     revisions: plan.memo.asOf === undefined ? undefined : compareRecords(document, earlier?.document ?? null),
   };
   const files: OutputFile[] = [];
-  const html = await renderMemoHtml(input, { templatesDir: plan.output.templates?.folder });
-  if (formats.includes('html')) files.push({ name: 'memo.html', content: html });
-  if (formats.includes('pdf')) {
-    if (options.printer === undefined) throw new Error('prepareMemo: pdf output needs a printer');
-    const printer = await options.printer();
-    const pdf = await printer.print(html, { paper: plan.output.paper, footer: plan.memo.reference ?? plan.memo.title });
-    files.push({ name: 'memo.pdf', content: stampPdfDates(pdf, date) });
+  if (formats.includes('html') || formats.includes('pdf')) {
+    // The renderer (Handlebars, Vega) loads only for a run that renders.
+    const { renderMemoHtml } = await import('../memo/renderMemoHtml.js');
+    const html = await renderMemoHtml(input, { templatesDir: plan.output.templates?.folder });
+    if (formats.includes('html')) files.push({ name: 'memo.html', content: html });
+    if (formats.includes('pdf')) {
+      if (options.printer === undefined) throw new Error('prepareMemo: pdf output needs a printer');
+      const printer = await options.printer();
+      const pdf = await printer.print(html, { paper: plan.output.paper, footer: plan.memo.reference ?? plan.memo.title });
+      files.push({ name: 'memo.pdf', content: stampPdfDates(pdf, date) });
+    }
   }
   if (formats.includes('json')) files.push({ name: 'record.json', content: recordDocumentText(document) });
   if (formats.includes('csv')) files.push({ name: 'forecasts.csv', content: forecastsCsv(records) });
