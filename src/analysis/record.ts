@@ -1,8 +1,9 @@
 // The AnalysisRecord: one series' complete analysis as plain JSON, the hinge between the
 // statistics and everything that shows it (../../DEVELOPERS.md, "The AnalysisRecord").
 // Keys are a contract: add freely, rename none. Numbers that do not exist (a standard
-// error at a singular Hessian, say) are null, never NaN. The memo reads this module's types
-// and nothing else of the analysis stages, so the parts the stages define are named here too.
+// error at a singular Hessian, say) are null, never NaN. The memo reads this module (the
+// record's types and the names of its keys) and nothing else of the analysis stages, so the
+// parts the stages define are named here too.
 import type { Frequency } from '../base/period.js';
 import type { AnalysisSettings, RecommendationRule, Transform, TrendModelKind } from '../base/settings.js';
 import type { IntervalsByLevel } from '../base/transform.js';
