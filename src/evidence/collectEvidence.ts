@@ -9,8 +9,8 @@ import { trendVerdict } from './trendVerdict.js';
 import type { AdfResult, KpssLagRule, KpssResult, StabilityRecord, TrendVerdictKind } from './types.js';
 
 export interface EvidenceOptions {
-  /** Significance level of every test and of the reading, 0.01 to 0.10 (default 0.05). */
-  significance?: number;
+  /** Significance level of every test and of the reading (the `significance` setting). */
+  significance: number;
   /** KPSS lag truncation: data-dependent (default) or ceil(12(n/100)^{1/4}). */
   kpssLagRule?: KpssLagRule;
   /** Period label of observation `index` (0-based), so break dates read as periods. */
@@ -39,9 +39,9 @@ export interface FittedResiduals {
 export function collectEvidence(
   w: Float64Array,
   fits: { deterministic: FittedResiduals; stochastic: FittedResiduals },
-  options: EvidenceOptions = {},
+  options: EvidenceOptions,
 ): EvidenceRecord {
-  const significance = options.significance ?? 0.05;
+  const { significance } = options;
   const lagRule = options.kpssLagRule ?? 'auto';
   const unavailable: EvidenceRecord['unavailable'] = [];
   const attempt = <T>(test: string, run: () => T): T | null => {

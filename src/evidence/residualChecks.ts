@@ -33,7 +33,7 @@ export interface ResidualChecks {
  * Checks the one-step prediction errors of an ARMA(p, q) fit. Ljung-Box uses
  * min(10, n/5) lags, raised to p + q + 1 where that is fewer (so df ≥ 1) if n allows.
  */
-export function residualChecks(residuals: ArrayLike<number>, p: number, q: number, significance = 0.05): ResidualChecks {
+export function residualChecks(residuals: ArrayLike<number>, p: number, q: number, significance: number): ResidualChecks {
   const observed = Array.from(residuals).filter((v) => Number.isFinite(v));
   const n = observed.length;
   const lags = Math.max(defaultAcfLags(n), Math.min(p + q + 1, n - 1));

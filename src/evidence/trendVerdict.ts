@@ -9,11 +9,11 @@ type KpssEvidence = Pick<KpssResult, 'p_value' | 'p_bound' | 'regression'>;
 type AdfEvidence = Pick<AdfResult, 'p_value' | 'regression'>;
 
 /**
- * Verdict from the trend versions of the two tests at `significance` (default 0.05), which
+ * Verdict from the trend versions of the two tests at `significance`, which
  * must lie within KPSS Table 1 (0.01 to 0.10) so that a p-value at the table's edge still
  * decides whether KPSS rejects.
  */
-export function trendVerdict(kpss: KpssEvidence, adf: AdfEvidence, significance = 0.05): TrendVerdict {
+export function trendVerdict(kpss: KpssEvidence, adf: AdfEvidence, significance: number): TrendVerdict {
   if (kpss.regression !== 'trend') throw new Error("trendVerdict needs the KPSS test with regression 'trend'");
   if (adf.regression !== 'trend') throw new Error("trendVerdict needs the ADF test with regression 'trend'");
   if (!(significance >= 0.01 && significance <= 0.1)) {

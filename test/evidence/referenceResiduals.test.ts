@@ -8,6 +8,9 @@ import { residualChecks } from '../../src/evidence/residualChecks.js';
 import { readSeriesValues, type ReferenceDataset } from './referenceFixtures.js';
 import { expectRelative } from './expectRelative.js';
 
+/** The conventional 5% level, the settings' built-in significance (common practice). */
+const FIVE_PERCENT = 0.05;
+
 interface LjungBoxReference {
   lags: number;
   model_df: number;
@@ -29,7 +32,7 @@ describe.each(['lake-huron', 'nile', 'us-real-gdp'] as ReferenceDataset[])('Ljun
     ['stochastic', 'drift'],
   ] as const)('%s model', (kind, refName) => {
     const model = fitTrendModel(kind, w, 3, 3);
-    const checks = residualChecks(model.fit.residuals, model.fit.p, model.fit.q);
+    const checks = residualChecks(model.fit.residuals, model.fit.p, model.fit.q, FIVE_PERCENT);
     const reference = file.ljung_box[refName];
     expect(checks.ljung_box?.lags).toBe(reference.lags);
     expect(checks.ljung_box?.df).toBe(reference.lags - reference.model_df);
@@ -49,8 +52,8 @@ describe('residual findings (common practice: a check that fails is flagged in w
     };
     const white = Array.from({ length: 200 }, uniform);
     const smooth = white.map((_, t) => white.slice(Math.max(0, t - 4), t + 1).reduce((a, b) => a + b, 0));
-    const flaggedWhite = residualChecks(white, 0, 0).findings.find((f) => f.check === 'ljung_box');
-    const flaggedSmooth = residualChecks(smooth, 0, 0).findings.find((f) => f.check === 'ljung_box');
+    const flaggedWhite = residualChecks(white, 0, 0, FIVE_PERCENT).findings.find((f) => f.check === 'ljung_box');
+    const flaggedSmooth = residualChecks(smooth, 0, 0, FIVE_PERCENT).findings.find((f) => f.check === 'ljung_box');
     expect(flaggedWhite?.flagged).toBe(false);
     expect(flaggedSmooth?.flagged).toBe(true);
     expect(flaggedSmooth?.text).toMatch(/still show a pattern/);

@@ -15,6 +15,9 @@ import type { TrendVerdictKind } from '../../src/evidence/types.js';
 import { seededNormals } from './seededNormals.js';
 import { randomWalkWithDrift, trendStationaryAr1 } from './simulatedSeries.js';
 
+/** The conventional 5% level, the settings' built-in significance (common practice). */
+const FIVE_PERCENT = 0.05;
+
 const REPLICATIONS = 200;
 const N = 200;
 
@@ -22,7 +25,7 @@ function verdictCounts(draw: () => Float64Array): Record<TrendVerdictKind, numbe
   const counts: Record<TrendVerdictKind, number> = { deterministic: 0, stochastic: 0, conflicting: 0, inconclusive: 0 };
   for (let r = 0; r < REPLICATIONS; r++) {
     const y = draw();
-    counts[trendVerdict(kpssTest(y), adfTest(y)).verdict] += 1;
+    counts[trendVerdict(kpssTest(y), adfTest(y), FIVE_PERCENT).verdict] += 1;
   }
   return counts;
 }

@@ -6,12 +6,15 @@ import { kpssTest } from '../../src/evidence/kpssTest.js';
 import { trendVerdict } from '../../src/evidence/trendVerdict.js';
 import { readSeriesValues } from './referenceFixtures.js';
 
+/** The conventional 5% level, the settings' built-in significance (common practice). */
+const FIVE_PERCENT = 0.05;
+
 const kpss = (p_value: number, p_bound?: 'below' | 'above') => ({ p_value, p_bound, regression: 'trend' as const });
 const adf = (p_value: number) => ({ p_value, regression: 'trend' as const });
 
 describe('trendVerdict', () => {
   it('deterministic when KPSS does not reject and ADF rejects', () => {
-    const reading = trendVerdict(kpss(0.1, 'above'), adf(0.003));
+    const reading = trendVerdict(kpss(0.1, 'above'), adf(0.003), FIVE_PERCENT);
     expect(reading).toMatchObject({ verdict: 'deterministic', kpss_rejects: false, adf_rejects: true, significance: 0.05 });
     expect(reading.summary).toContain('p above 0.10');
     expect(reading.summary).toContain('p = 0.003');
@@ -19,14 +22,14 @@ describe('trendVerdict', () => {
   });
 
   it('stochastic when KPSS rejects and ADF does not', () => {
-    const reading = trendVerdict(kpss(0.01, 'below'), adf(0.389));
+    const reading = trendVerdict(kpss(0.01, 'below'), adf(0.389), FIVE_PERCENT);
     expect(reading).toMatchObject({ verdict: 'stochastic', kpss_rejects: true, adf_rejects: false });
     expect(reading.summary).toContain('p below 0.01');
     expect(reading.summary).toContain('p = 0.389');
   });
 
   it('conflicting when both reject', () => {
-    const reading = trendVerdict(kpss(0.032), adf(0.0052));
+    const reading = trendVerdict(kpss(0.032), adf(0.0052), FIVE_PERCENT);
     expect(reading.verdict).toBe('conflicting');
     expect(reading.summary).toContain('p = 0.032');
   });
@@ -48,10 +51,10 @@ describe('trendVerdict', () => {
     expect(() => trendVerdict(kpss(0.1, 'above'), adf(0.01), 0.2)).toThrow(
       'trendVerdict needs a significance level from 0.01 to 0.10',
     );
-    expect(() => trendVerdict({ ...kpss(0.05), regression: 'level' }, adf(0.01))).toThrow(
+    expect(() => trendVerdict({ ...kpss(0.05), regression: 'level' }, adf(0.01), FIVE_PERCENT)).toThrow(
       "trendVerdict needs the KPSS test with regression 'trend'",
     );
-    expect(() => trendVerdict(kpss(0.05), { p_value: 0.01, regression: 'constant' })).toThrow(
+    expect(() => trendVerdict(kpss(0.05), { p_value: 0.01, regression: 'constant' }, FIVE_PERCENT)).toThrow(
       "trendVerdict needs the ADF test with regression 'trend'",
     );
   });
@@ -63,11 +66,11 @@ describe('trendVerdict on the reference datasets (default tests)', () => {
   // log US real GDP KPSS-trend auto p = 0.0132, ADF-trend AIC p = 0.389.
   it('Lake Huron: both tests reject, so the reading is conflicting', () => {
     const y = readSeriesValues('lake-huron');
-    expect(trendVerdict(kpssTest(y), adfTest(y)).verdict).toBe('conflicting');
+    expect(trendVerdict(kpssTest(y), adfTest(y), FIVE_PERCENT).verdict).toBe('conflicting');
   });
 
   it('log US real GDP: stochastic', () => {
     const y = readSeriesValues('us-real-gdp').map(Math.log);
-    expect(trendVerdict(kpssTest(y), adfTest(y)).verdict).toBe('stochastic');
+    expect(trendVerdict(kpssTest(y), adfTest(y), FIVE_PERCENT).verdict).toBe('stochastic');
   });
 });
