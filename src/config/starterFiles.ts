@@ -37,9 +37,10 @@ memo:
 #   horizon (10 annual, 12 quarterly, 24 monthly), transform (none | log | {box_cox: 0.5}),
 #   levels ([80, 95]), coefficient_uncertainty (true), point (median | mean),
 #   max_p and max_q (3), significance (0.05), missing (error | allow),
-#   backtest: {origins (20), horizon, refit (reselect | reestimate | fixed),
-#              window (expanding | sliding), min_train}
-#   recommendation: {rule, significance (0.05), model (deterministic | stochastic),
+#   backtest: {origins (20), horizon (5), refit (reselect | reestimate | fixed),
+#              window (expanding | sliding), min_train (max(20, 3 × (max_p + max_q + 3)))}
+#   recommendation: {rule, significance (0.05), scored_level (the widest of levels),
+#                    model (deterministic | stochastic),
 #                    justification (required when model is given)}
 defaults:
   horizon: 10
