@@ -12,7 +12,7 @@ import { TREND_MODELS, type AnalysisSettings, type TrendModelKind } from '../bas
 import { backTransformForecast, transformValue } from '../base/transform.js';
 import { toolVersion } from '../base/toolVersion.js';
 import type { BacktestRecord } from '../backtest/backtestRecord.js';
-import { runBacktest, type BacktestRun } from '../backtest/runBacktest.js';
+import type { BacktestRun } from '../backtest/runBacktest.js';
 import { collectEvidence, type EvidenceOptions } from '../evidence/collectEvidence.js';
 import { smallestMaRootModulus, smallestRootModulus } from '../linalg/rootModulus.js';
 import { fitTrendModel, forecastTrendModel, minimumObservations, type TrendModelFit } from '../models/trendModels.js';
@@ -97,6 +97,8 @@ async function backtestOrReason(
 ): Promise<{ record: BacktestRecord | null; reason?: string }> {
   // Orders chosen on the full sample, for the policies that keep them (a look-ahead the record notes).
   const orders = settings.backtest.refit === 'reselect' ? undefined : { deterministic: orderOf(fitted.deterministic), stochastic: orderOf(fitted.stochastic) };
+  // The backtest (and its thread pool) loads only for an analysis that runs one.
+  const { runBacktest } = await import('../backtest/runBacktest.js');
   try {
     return { record: await runBacktest({ values: series.values, periods: series.periods }, settings, { orders, threads: run.threads, pool: run.pool }) };
   } catch (error) {

@@ -10,7 +10,7 @@ import { join, resolve } from 'node:path';
 import { seededNormals } from '../evidence/seededNormals.js';
 import type { BenchRow } from './timing.js';
 
-const CLI = resolve('dist/cli.js');
+const CLI = resolve('dist/bundle/cli.js');
 
 /** Runs `trendbrief ARGS` in a child process; returns wall time and peak RSS in MB. */
 function timeChild(args: readonly string[], cwd: string): { ms: number; peakMb: number } {

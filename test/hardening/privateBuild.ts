@@ -18,5 +18,8 @@ export function buildPrivateCopy(): string {
   // writes the JavaScript, and that is what the child processes run.
   const build = spawnSync('npx', ['tsc', '-p', 'tsconfig.build.json', '--outDir', join(folder, 'dist')], { cwd: REPOSITORY, encoding: 'utf8' });
   if (!existsSync(join(folder, 'dist/cli.js'))) throw new Error(`the build wrote no dist/cli.js (exit ${build.status}): ${build.stdout}${build.stderr}`);
+  // bin/trendbrief.js runs the bundle of dist/, as npm run build makes it.
+  const bundle = spawnSync(process.execPath, [join(REPOSITORY, 'scripts/bundleCli.mjs'), join(folder, 'dist')], { cwd: REPOSITORY, encoding: 'utf8' });
+  if (!existsSync(join(folder, 'dist/bundle/cli.js'))) throw new Error(`the bundle step wrote no dist/bundle/cli.js (exit ${bundle.status}): ${bundle.stdout}${bundle.stderr}`);
   return folder;
 }
