@@ -99,6 +99,7 @@ export function backtestView(backtest: BacktestRecord, frequency: Frequency, dec
             ];
           }),
         })),
+      cellsOf: (row) => [String(row.h), ...row.cells],
     }),
     comparisonIntro: evidenceWording.comparisonIntro(scoredLevel),
     losses: [TEMPLATE_TEXT.squaredErrorLoss, TEMPLATE_TEXT.intervalScoreLoss(scoredLevel)],

@@ -53,6 +53,7 @@ export function forecastTableView(record: AnalysisRecord, decimals: number, unit
         period: row.period,
         cells: [...models.flatMap((model) => cells(model, i)), formatNumber(ratios[i]?.ratio, 2)],
       })),
+    cellsOf: (row) => [String(row.h), row.period, ...row.cells],
   });
   return { caption: TEMPLATE_TEXT.forecastCaption(units), ...table };
 }

@@ -1,9 +1,10 @@
-// A table of both trend models by horizon. With few interval levels the models stand side by
-// side, each a group of columns; with more a row of both is wider than the page, so the
+// A table of both trend models by horizon. When a row of both fits the page the models stand
+// side by side, each a group of columns; otherwise (more interval levels, or wide numbers) the
 // models are stacked, each a group of rows under one set of columns.
 import { TREND_MODELS, type TrendModelKind } from '../../base/settings.js';
+import { rowsFit, SHEET_WIDTH } from './tableWidth.js';
 
-/** Most interval levels whose columns fit both models side by side in the text column. */
+/** Most interval levels whose columns are ever set side by side. */
 export const SIDE_BY_SIDE_LEVELS = 2;
 
 /** Columns under one head in the heading's first row: a model's, or (unnamed) one after them. */
@@ -43,8 +44,15 @@ export function modelTable<Row>(a: {
   trailingHeads: readonly string[];
   /** The rows of one group, for the models it shows. */
   rows: (models: readonly TrendModelKind[]) => Row[];
+  /** Every cell of a row as printed, leading ones included, to measure its width. */
+  cellsOf: (row: Row) => readonly string[];
 }): ModelTable<Row> {
-  const byModel = a.levels.length > SIDE_BY_SIDE_LEVELS;
+  const sideBySide = (): boolean => {
+    // The heads are set smaller than the cells (templates/memo.css), which offsets their weight.
+    const heads = { cells: [...Array.from({ length: a.leading }, () => ''), ...TREND_MODELS.flatMap(() => a.modelHeads), ...a.trailingHeads] };
+    return rowsFit([heads, ...a.rows(TREND_MODELS).map((row) => ({ cells: a.cellsOf(row) }))], SHEET_WIDTH);
+  };
+  const byModel = a.levels.length > SIDE_BY_SIDE_LEVELS || !sideBySide();
   const groups: { name: string; kind: string; models: readonly TrendModelKind[] }[] = byModel
     ? TREND_MODELS.map((model) => ({ name: a.names[model], kind: model, models: [model] }))
     : [{ name: '', kind: '', models: TREND_MODELS }];

@@ -5,6 +5,7 @@ import type { AnalysisRecord } from '../../analysis/record.js';
 import type { TrendModelKind } from '../../base/settings.js';
 import { LABELS, METHOD_NAME, MODEL_GLOSS, MODEL_NAME, NOT_RUN, TEMPLATE_TEXT } from '../wording.js';
 import { forecastCells, forecastHeads, type ForecastCells } from './forecastTableView.js';
+import { rowsFit, SHEET_WIDTH } from './tableWidth.js';
 
 export interface SummaryCard {
   anchor: string;
@@ -17,14 +18,14 @@ export interface SummaryCard {
   atEnd: string;
   /** Heads of the point and interval columns. */
   heads: string[];
-  /** True when the table has too many columns to sit beside the text. */
+  /** True when the table is too wide to sit beside the text. */
   tableBelow: boolean;
   models: (ForecastCells & { name: string; recommended: boolean })[];
   caveat: { label: string; severity: Caveat['severity']; text: string } | null;
 }
 
-/** Most levels whose intervals fit in the half of the card beside its text. */
-const LEVELS_BESIDE_TEXT = 2;
+/** The room beside the card's text (templates/memo.css): the sheet less the text's 62 mm and a 5 mm gap. */
+const BESIDE_TEXT = SHEET_WIDTH - 62 - 5;
 
 export function summaryCard(a: { anchor: string; title: string; units?: string; record: AnalysisRecord; decimals: number; caveats: Caveat[] }): SummaryCard {
   const { record } = a;
@@ -32,6 +33,18 @@ export function summaryCard(a: { anchor: string; title: string; units?: string; 
   const last = record.forecasts.deterministic.length - 1;
   const top = a.caveats[0];
   const endPeriod = record.forecasts.deterministic[last]?.period ?? record.series.last;
+  const atEnd = TEMPLATE_TEXT.atPeriod(endPeriod);
+  const heads = forecastHeads(record);
+  const models = (['deterministic', 'stochastic'] as const).map((kind) => ({
+    name: METHOD_NAME[kind],
+    recommended: kind === model,
+    ...forecastCells(record, kind, last, a.decimals),
+  }));
+  const rows = [
+    { cells: [atEnd, ...heads], bold: true },
+    // The recommended row carries a marker after its name.
+    ...models.map((row) => ({ cells: [row.recommended ? `${row.name} \u25C6` : row.name, row.point, ...row.intervals], bold: row.recommended })),
+  ];
   return {
     anchor: a.anchor,
     title: a.title,
@@ -40,14 +53,10 @@ export function summaryCard(a: { anchor: string; title: string; units?: string; 
     gloss: model === undefined ? '' : MODEL_GLOSS[model],
     noRecommendation: NOT_RUN.recommendation,
     endPeriod,
-    atEnd: TEMPLATE_TEXT.atPeriod(endPeriod),
-    heads: forecastHeads(record),
-    tableBelow: record.settings.levels.length > LEVELS_BESIDE_TEXT,
-    models: (['deterministic', 'stochastic'] as const).map((kind) => ({
-      name: METHOD_NAME[kind],
-      recommended: kind === model,
-      ...forecastCells(record, kind, last, a.decimals),
-    })),
+    atEnd,
+    heads,
+    tableBelow: !rowsFit(rows, BESIDE_TEXT),
+    models,
     caveat: top === undefined ? null : { label: LABELS.severity[top.severity], severity: top.severity, text: top.text },
   };
 }

@@ -1,0 +1,46 @@
+// Tables that fit the page: the summary card's table sits beside its text and the forecast
+// table sets the two models side by side only when their rows fit (widths estimated from the
+// memo's table font, src/memo/view/tableWidth.ts; our own layout rules). Wide numbers, as in
+// a series in the hundred thousands, move them under the text and stack the models.
+import { describe, expect, it } from 'vitest';
+import type { AnalysisRecord } from '../../src/analysis/record.js';
+import { forecastTableView } from '../../src/memo/view/forecastTableView.js';
+import { summaryCard } from '../../src/memo/view/summaryView.js';
+import { rowsFit, SHEET_WIDTH } from '../../src/memo/view/tableWidth.js';
+import { bareRecord } from './sampleInput.js';
+
+/** The record as if the series were measured in units `factor` times smaller: every forecast figure scaled. */
+function scaled(record: AnalysisRecord, factor: number): AnalysisRecord {
+  const scale = (rows: AnalysisRecord['forecasts']['deterministic']) =>
+    rows.map((row) => ({
+      ...row,
+      point: row.point * factor,
+      intervals: Object.fromEntries(Object.entries(row.intervals).map(([level, [lo, hi]]) => [level, [lo * factor, hi * factor] as [number, number]])),
+    }));
+  return { ...record, forecasts: { deterministic: scale(record.forecasts.deterministic), stochastic: scale(record.forecasts.stochastic) } };
+}
+
+describe('rowsFit', () => {
+  it('measures rows against a width in millimetres', () => {
+    const interval = '108,617\u2009\u2013\u2009115,280';
+    // Two models' point and two intervals with the period and a ratio: wider than the sheet.
+    expect(rowsFit([{ cells: ['15', '2039', '111,899', interval, interval, '111,916', interval, interval, '0.99'] }], SHEET_WIDTH)).toBe(false);
+    expect(rowsFit([{ cells: ['15', '2039', '580.1', '575.4\u2009\u2013\u2009580.3'] }], SHEET_WIDTH)).toBe(true);
+  });
+});
+
+describe('layouts chosen by width', () => {
+  const lake = bareRecord('lakeHuron'); // levels near 580 ft, two decimals
+  const wide = scaled(lake, 200); // near 116,000
+
+  it('sets the models side by side when their rows fit, and stacks them when they do not', () => {
+    expect(forecastTableView(lake, 2, 'ft').byModel).toBe(false);
+    expect(forecastTableView(wide, 0, 'ft').byModel).toBe(true);
+  });
+
+  it('puts the summary table beside the text when it fits, under it otherwise', () => {
+    const card = (record: AnalysisRecord, decimals: number) => summaryCard({ anchor: 'x', title: 'X', record, decimals, caveats: [] });
+    expect(card(lake, 2).tableBelow).toBe(false);
+    expect(card(scaled(lake, 2e6), 0).tableBelow).toBe(true);
+  });
+});
