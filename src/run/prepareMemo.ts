@@ -7,8 +7,7 @@
 import { basename, resolve } from 'node:path';
 import type { AnalysisRecord } from '../analysis/record.js';
 import { toolVersion } from '../base/toolVersion.js';
-import type { OutputFormat, RunPlan, SeriesPlan } from '../config/runPlan.js';
-import type { Series } from '../base/series.js';
+import type { OutputFormat, RunPlan } from '../config/runPlan.js';
 import { InputError, type InputProblem } from '../base/problem.js';
 import type { MemoInput } from '../memo/memoInput.js';
 import type { PdfPrinter } from '../memo/print/pdfPrinter.js';

@@ -42,7 +42,7 @@ function changed(before: TreeSnapshot, after: TreeSnapshot): string[] {
 
 describe('where a run writes', () => {
   it('writes only the memo folder inside the config\'s output folder', async () => {
-    const { folder, outside } = workspace('config-folder');
+    const { folder } = workspace('config-folder');
     const before = treeSnapshot(join(root, 'config-folder'));
     const run = await runCli(['run', join(folder, 'memo.yaml'), '--quiet']);
     expect(run.code, run.stderr).toBe(0);
