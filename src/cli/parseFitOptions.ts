@@ -20,7 +20,6 @@ export interface FitRequest {
   /** Run the backtest and the recommendation rule (--backtest, or one of its options). */
   backtest: boolean;
   json: boolean;
-  help: boolean;
 }
 
 /** The option that sets each setting, for messages about the settings fit resolves. */
@@ -62,6 +61,7 @@ const FIT_OPTIONS: Readonly<Record<string, OptionSpec>> = {
   'backtest-horizon': { type: 'string' },
   refit: { type: 'string' },
   'scored-level': { type: 'string' },
+  // Read by runFit before the options are parsed; known here so `--help=x` is refused as a switch with a value.
   help: { type: 'boolean', short: 'h' },
 };
 
@@ -71,8 +71,7 @@ export function parseFitOptions(args: readonly string[]): FitRequest {
     const value = given.get(name);
     return typeof value === 'string' ? value : undefined;
   };
-  const help = given.get('help') === true;
-  if (!help && positionals.length === 0) problems.push(cliMessages.missingFile('fit'));
+  if (positionals.length === 0) problems.push(cliMessages.missingFile('fit'));
   if (positionals.length > 1) problems.push(cliMessages.extraArguments(positionals.slice(1)));
   const integer = (option: string, spec: NumericSpec): number | undefined => {
     const value = text(option);
@@ -113,9 +112,8 @@ export function parseFitOptions(args: readonly string[]): FitRequest {
     settings,
     backtest: given.get('backtest') === true || origins !== undefined || backtestHorizon !== undefined || refit !== undefined || scoredLevel !== undefined,
     json: given.get('json') === true,
-    help,
   };
-  if (problems.length > 0 && !help) throw new InputError(problems);
+  if (problems.length > 0) throw new InputError(problems);
   return request;
 }
 
