@@ -4,7 +4,7 @@
 import { loadConfig } from '../config/loadConfig.js';
 import type { RunPlan } from '../config/runPlan.js';
 import type { Series } from '../base/series.js';
-import { readPlannedSeries } from '../run/readPlannedSeries.js';
+import { readAllSeries } from '../run/readPlannedSeries.js';
 import { formatProblem, InputError, type InputProblem } from '../base/problem.js';
 import { configCommandMessages } from './messages.js';
 import { splitOptions } from './splitOptions.js';
@@ -38,17 +38,13 @@ function checkOne(file: string): { ok: string } | { problems: readonly InputProb
     if (error instanceof InputError) return { problems: error.problems };
     throw error;
   }
-  const problems: InputProblem[] = [];
-  const described: string[] = [];
-  for (const series of plan.series) {
-    try {
-      described.push(describeSeries(series.id, readPlannedSeries(series, file).series));
-    } catch (error) {
-      if (!(error instanceof InputError)) throw error;
-      problems.push(...error.problems);
-    }
+  let described: string[];
+  try {
+    described = readAllSeries(plan).map(({ plan: series, series: read }) => describeSeries(series.id, read));
+  } catch (error) {
+    if (error instanceof InputError) return { problems: error.problems };
+    throw error;
   }
-  if (problems.length > 0) return { problems };
   const count = plan.series.length === 1 ? '1 series' : `${plan.series.length} series`;
   return { ok: `${file}: ok, memo ${plan.memo.id}, ${count}: ${described.join('; ')}` };
 }

@@ -8,7 +8,6 @@ import { basename, resolve } from 'node:path';
 import type { AnalysisRecord } from '../analysis/record.js';
 import { toolVersion } from '../base/toolVersion.js';
 import type { OutputFormat, RunPlan } from '../config/runPlan.js';
-import { InputError, type InputProblem } from '../base/problem.js';
 import type { MemoInput } from '../memo/memoInput.js';
 import type { PdfPrinter } from '../memo/print/pdfPrinter.js';
 import { analysePlannedSeries, type SeriesTask } from './analysePlannedSeries.js';
@@ -17,7 +16,7 @@ import { compareRecords } from './compareRecords.js';
 import type { EarlierRecord } from './findEarlierRecord.js';
 import { forecastsCsv } from './forecastsCsv.js';
 import { buildManifest, manifestText, posixRelative, type ManifestInput } from './manifest.js';
-import { readPlannedSeries, type PlannedSeries } from './readPlannedSeries.js';
+import { readAllSeries } from './readPlannedSeries.js';
 import { RECORD_DOCUMENT_SCHEMA, recordDocumentText, seriesHistory, type RecordDocument } from './recordDocument.js';
 import { stampPdfDates } from './stampPdfDates.js';
 import type { SeriesPool } from './seriesPool.js';
@@ -126,20 +125,4 @@ export async function prepareMemo(plan: RunPlan, options: PrepareMemoOptions): P
   const manifest = buildManifest({ tool: toolVersion(), run_date: date, command: options.command, inputs }, files);
   files.push({ name: 'manifest.json', content: manifestText(manifest) });
   return { files, records, document };
-}
-
-/** Reads every series file and resolves its settings, collecting the problems of all of them before failing. */
-function readAllSeries(plan: RunPlan): PlannedSeries[] {
-  const problems: InputProblem[] = [];
-  const loaded: PlannedSeries[] = [];
-  for (const seriesPlan of plan.series) {
-    try {
-      loaded.push(readPlannedSeries(seriesPlan, plan.configFile));
-    } catch (error) {
-      if (!(error instanceof InputError)) throw error;
-      problems.push(...error.problems);
-    }
-  }
-  if (problems.length > 0) throw new InputError(problems);
-  return loaded;
 }

@@ -1,13 +1,13 @@
 // A series named in a config, read with the checks a run makes (enough observations for the
 // order limits, values the transform accepts), and its settings resolved once its frequency is
 // known. Shared by `check` and `run`.
-import { InputError, type InputLocation } from '../base/problem.js';
+import { formatProblem, InputError, type InputLocation, type InputProblem } from '../base/problem.js';
 import type { Series } from '../base/series.js';
 import type { AnalysisSettings } from '../base/settings.js';
 import { shownPath } from '../base/shownPath.js';
 import { requiredObservations } from '../analysis/analyseSeries.js';
 import { readingSettings, resolveSettings } from '../config/resolveSettings.js';
-import type { SeriesPlan } from '../config/runPlan.js';
+import type { RunPlan, SeriesPlan } from '../config/runPlan.js';
 import { dataMessages } from '../data/messages.js';
 import { readSeriesCsv } from '../data/readSeriesCsv.js';
 
@@ -38,4 +38,21 @@ export function readPlannedSeries(plan: SeriesPlan, configFile: string): Planned
   // A setting the config leaves out is reported at the series entry it applies to.
   const placeOf = (key: string): InputLocation => ({ file: configFile, ...(plan.settingPlaces.get(key) ?? { ...plan.at, field: `${plan.at.field}.${key}` }) });
   return { plan, series, settings: resolveSettings(plan.settings, series.frequency, placeOf) };
+}
+
+/** Every series of a config read and its settings resolved, the problems of all of them collected before failing. */
+export function readAllSeries(plan: RunPlan): PlannedSeries[] {
+  const problems: InputProblem[] = [];
+  const loaded: PlannedSeries[] = [];
+  for (const seriesPlan of plan.series) {
+    try {
+      loaded.push(readPlannedSeries(seriesPlan, plan.configFile));
+    } catch (error) {
+      if (!(error instanceof InputError)) throw error;
+      problems.push(...error.problems);
+    }
+  }
+  // A setting written once under defaults and wrong for every series is reported once.
+  if (problems.length > 0) throw new InputError([...new Map(problems.map((problem) => [formatProblem(problem), problem])).values()]);
+  return loaded;
 }

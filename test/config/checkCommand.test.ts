@@ -82,4 +82,30 @@ describe('trendbrief check', () => {
     expect(run.code).toBe(0);
     expect(run.stdout.startsWith('Usage: trendbrief check CONFIG.yaml...\n')).toBe(true);
   });
+
+  it('reports a scored level outside the levels once, at the line that sets it, however many series it applies to', async () => {
+    const file = written('scored.yaml', [
+      'memo:',
+      '  id: scored-memo',
+      '  title: Scored',
+      'defaults:',
+      '  max_p: 0',
+      '  max_q: 0',
+      '  recommendation: {scored_level: 90}',
+      'series:',
+      '  - id: first',
+      '    file: short.csv',
+      '    transform: none',
+      '  - id: second',
+      '    file: short.csv',
+      '    transform: none',
+    ]);
+    const run = await runCli(['check', file]);
+    expect(run.code).toBe(2);
+    // Built-in levels [80, 95] (src/config/builtInSettings.ts); the rule is ours (src/config/resolveSettings.ts).
+    expect(run.errorLines).toEqual([
+      `${file}:7:34: defaults.recommendation.scored_level: 90 is not one of the interval levels (80, 95); give one of 80, 95, or add 90 to levels`,
+    ]);
+  });
 });
+
