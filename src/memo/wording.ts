@@ -56,7 +56,7 @@ export const TRANSFORM_NAME = {
 
 /** The modelling scale in words: "natural log", "Box-Cox (λ = 0.5)". */
 export function scaleName(transform: { kind: keyof typeof TRANSFORM_NAME; lambda?: number }): string {
-  return transform.kind === 'box-cox' ? `Box-Cox (\u03bb = ${transform.lambda ?? 'n/a'})` : TRANSFORM_NAME[transform.kind];
+  return transform.kind === 'box-cox' ? `Box-Cox (\u03bb = ${transform.lambda})` : TRANSFORM_NAME[transform.kind];
 }
 
 export const DECISION_NAME: Record<SignOffDecision, string> = {
