@@ -4,7 +4,7 @@
 import type { Frequency } from '../base/period.js';
 import type { SignOffDecision } from './memoInput.js';
 import type { ForecastMethod } from '../analysis/record.js';
-import type { TrendModelKind } from '../base/settings.js';
+import type { Transform, TrendModelKind } from '../base/settings.js';
 
 export const MODEL_NAME: Record<TrendModelKind, string> = {
   deterministic: 'Deterministic trend',
@@ -55,7 +55,7 @@ export const TRANSFORM_NAME = {
 } as const;
 
 /** The modelling scale in words: "natural log", "Box-Cox (λ = 0.5)". */
-export function scaleName(transform: { kind: keyof typeof TRANSFORM_NAME; lambda?: number }): string {
+export function scaleName(transform: Transform): string {
   return transform.kind === 'box-cox' ? `Box-Cox (\u03bb = ${transform.lambda})` : TRANSFORM_NAME[transform.kind];
 }
 
