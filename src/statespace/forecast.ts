@@ -1,13 +1,23 @@
-// h-step forecasts of y = Xβ + η, η ~ ARMA, from the filter's last predicted state
-// (Durbin & Koopman 2012, §4.11; Harvey 1989, §3.5). The mean squared error has two parts:
-// the process part σ² Z P_{n+h} Z' and the coefficient part g_h' Var(β̂) g_h, where
-// g_h = x_{n+h} − (Z T^{h−1} A_{n+1})' carries the regressors through the same filter, so the
-// dependence of the predicted noise on β̂ is counted (Harvey 1989, §3.4.3).
+// h-step forecasts of y = Xβ + η, η ~ ARMA, from the filter's state at the forecast origin:
+// a_{n+1|n} and P_{n+1|n}, the last prediction of the filter (Durbin & Koopman 2012, §4.11,
+// forecasting as filtering with the future observations missing; Harvey 1989, §3.5). From
+// there the state moves on by a_{n+j+1} = T a_{n+j} and P_{n+j+1} = T P_{n+j} T' + R R', so
+// the variances are exact given the data and the parameters at every horizon. The mean
+// squared error has two parts: the process part and the coefficient part g_h' Var(β̂) g_h,
+// where g_h = x_{n+h} − (Z T^{h−1} A_{n+1})' carries the regressors through the same filter,
+// so the dependence of the predicted noise on β̂ is counted (Harvey 1989, §3.4.3). Without
+// `integrate` the process part is σ² Z P_{n+h} Z'.
 // With `integrate`, the model is for first differences and levels are forecast: the mean
-// cumulates the difference forecasts and the process variance is σ² Σ_{j<h} (Σ_{i≤j} ψ_i)²
-// from the integrated ψ-weights (Box, Jenkins & Reinsel 2008, §5.1.1). That is the
-// steady-state value; it ignores the small extra uncertainty of the state at the origin,
-// which matters only when an MA root sits near the unit circle.
+// cumulates the difference forecasts, and the process variance is that of the sum
+// S_h = Σ_{j≤h} Z α_{n+j}, carried as one more state element (the level in the state of an
+// ARIMA model, Durbin & Koopman 2012, §3.4): x_j = (α_{n+j}, S_{j−1}) with transition
+// [[T, 0], [Z, 1]], started at (a_{n+1}, 0) with covariance blockdiag(P_{n+1|n}, 0). Its
+// covariance is kept as three blocks, P_{n+j}, c_j = Cov(α_{n+j}, S_{j−1}) and
+// s_j = Var(S_{j−1}), which step as
+//   s_{j+1} = s_j + 2 Z c_j + Z P_{n+j} Z',   c_{j+1} = T (c_j + P_{n+j} Z'),
+// so Var(S_h | data) = σ² s_{h+1}, the origin's uncertainty included. The same state serves a
+// series with missing levels: the gap filter leaves the α part of its last prediction, and the
+// last level is observed, so the running sum starts afresh at the origin (gapFilter.ts).
 
 export interface ForecastInput {
   ar: ArrayLike<number>;
@@ -53,14 +63,11 @@ export function forecastRegressionArma(
   const regressorStates = input.finalState.slice(1).map((s) => s.slice());
   for (let c = 0; c < k; c++) for (let i = 0; i < r; i++) noise[i] -= input.beta[c] * regressorStates[c][i];
 
-  const transition = new Float64Array(r * r);
-  for (let i = 0; i < r; i++) {
-    transition[i * r] = phi[i];
-    if (i + 1 < r) transition[i * r + i + 1] = 1;
-  }
-  let cov: Float64Array = input.finalCovariance.slice();
-  const integratedPsi = integrate ? cumulativeSums(psiWeights(input.ar, input.ma, horizon)) : undefined;
-  let integratedVariance = 0;
+  // P_{n+j} / σ², and for `integrate` c_j and s_j (also / σ²), updated in place.
+  const cov = input.finalCovariance.slice();
+  const product = new Float64Array(r * r);
+  const sumCross = new Float64Array(r);
+  let sumVariance = 0;
 
   const mean = new Float64Array(horizon);
   const seProcess = new Float64Array(horizon);
@@ -77,36 +84,23 @@ export function forecastRegressionArma(
     }
     level = integrate ? level + step : step;
     mean[h] = level;
-    let processVariance = input.sigma2 * cov[0];
-    if (integratedPsi !== undefined) {
-      integratedVariance += integratedPsi[h] * integratedPsi[h];
-      processVariance = input.sigma2 * integratedVariance;
+    let processVariance = cov[0];
+    if (integrate) {
+      sumVariance += 2 * sumCross[0] + cov[0];
+      processVariance = sumVariance;
+      for (let i = 0; i < r; i++) sumCross[i] += cov[i * r];
+      advance(sumCross, phi, r);
     }
+    processVariance *= input.sigma2;
     let coefficientVariance = 0;
     for (let a = 0; a < k; a++) for (let b = 0; b < k; b++) coefficientVariance += g[a] * input.covBeta[a * k + b] * g[b];
     seProcess[h] = Math.sqrt(processVariance);
     seTotal[h] = Math.sqrt(processVariance + coefficientVariance);
     advance(noise, phi, r);
     for (const state of regressorStates) advance(state, phi, r);
-    if (integratedPsi === undefined) cov = propagate(cov, transition, rvec, r);
+    propagate(cov, product, phi, rvec, r);
   }
   return { mean, seProcess, seTotal };
-}
-
-/** ψ-weights of the MA(∞) form: ψ₀ = 1, ψ_j = θ_j + Σ_{i=1}^{min(j,p)} φ_i ψ_{j−i}. */
-export function psiWeights(ar: ArrayLike<number>, ma: ArrayLike<number>, count: number): Float64Array {
-  const psi = new Float64Array(count);
-  for (let j = 0; j < count; j++) {
-    let value = j === 0 ? 1 : j <= ma.length ? ma[j - 1] : 0;
-    for (let i = 1; i <= Math.min(j, ar.length); i++) value += ar[i - 1] * psi[j - i];
-    psi[j] = value;
-  }
-  return psi;
-}
-
-function cumulativeSums(values: Float64Array): Float64Array {
-  let sum = 0;
-  return values.map((v) => (sum += v));
 }
 
 /** s ← T s for the companion-form T. */
@@ -115,23 +109,17 @@ function advance(state: Float64Array, phi: Float64Array, r: number): void {
   for (let i = 0; i < r; i++) state[i] = phi[i] * s0 + (i + 1 < r ? state[i + 1] : 0);
 }
 
-/** A P A' + b b', dense. */
-function propagate(cov: Float64Array, a: Float64Array, b: Float64Array, dim: number): Float64Array {
-  const ap = new Float64Array(dim * dim);
-  for (let i = 0; i < dim; i++) {
-    for (let j = 0; j < dim; j++) {
-      let sum = 0;
-      for (let m = 0; m < dim; m++) sum += a[i * dim + m] * cov[m * dim + j];
-      ap[i * dim + j] = sum;
+/**
+ * P ← T P T' + R R' in place for the companion-form T, O(r²): (T P)_{ij} = φ_i P_{1j} + P_{i+1,j}
+ * and (M T')_{ij} = M_{i1} φ_j + M_{i,j+1}. `product` (r² numbers) holds M = T P.
+ */
+function propagate(cov: Float64Array, product: Float64Array, phi: Float64Array, rvec: Float64Array, r: number): void {
+  for (let i = 0; i < r; i++) {
+    for (let j = 0; j < r; j++) product[i * r + j] = phi[i] * cov[j] + (i + 1 < r ? cov[(i + 1) * r + j] : 0);
+  }
+  for (let i = 0; i < r; i++) {
+    for (let j = 0; j < r; j++) {
+      cov[i * r + j] = product[i * r] * phi[j] + (j + 1 < r ? product[i * r + j + 1] : 0) + rvec[i] * rvec[j];
     }
   }
-  const out = new Float64Array(dim * dim);
-  for (let i = 0; i < dim; i++) {
-    for (let j = 0; j < dim; j++) {
-      let sum = b[i] * b[j];
-      for (let m = 0; m < dim; m++) sum += ap[i * dim + m] * a[j * dim + m];
-      out[i * dim + j] = sum;
-    }
-  }
-  return out;
 }
