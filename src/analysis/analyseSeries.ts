@@ -129,7 +129,9 @@ function modelRecord(kind: TrendModelKind, model: TrendModelFit): ModelRecord {
     // The design names the regression coefficients (intercept and slope, or drift), so the shape follows the kind.
     coefficients: { ...model.coefficients, ar: Array.from(fit.ar), ma: Array.from(fit.ma) } as DeterministicCoefficients | StochasticCoefficients,
     stderr: { ...regressionSe, ar: model.stderr.ar.map(jsonNumber), ma: model.stderr.ma.map(jsonNumber) } as DeterministicCoefficients<JsonNumber> | StochasticCoefficients<JsonNumber>,
-    candidates: model.candidates.map((c) => ({ p: c.p, q: c.q, loglik: jsonNumber(c.loglik), aicc: jsonNumber(c.aicc), converged: c.converged })),
+    stderr_method: model.stderr.method,
+    set_aside: model.setAside === undefined ? null : { ...model.setAside, aicc: jsonNumber(model.setAside.aicc) },
+    candidates: model.candidates.map((c) => ({ p: c.p, q: c.q, loglik: jsonNumber(c.loglik), aicc: jsonNumber(c.aicc), converged: c.converged, admissible: c.admissible, reason: c.reason })),
     equation: describeEquation(kind, model),
     roots: {
       ar_min_modulus: jsonNumber(smallestRootModulus(fit.ar) ?? Number.NaN),

@@ -9,6 +9,8 @@ import type { AnalysisSettings, RecommendationRule, Transform, TrendModelKind } 
 import type { IntervalsByLevel } from '../base/transform.js';
 import type { BacktestRecord } from '../backtest/backtestRecord.js';
 import type { EvidenceRecord } from '../evidence/collectEvidence.js';
+import type { InadmissibleReason } from '../models/admissibility.js';
+import type { StandardErrorMethod } from '../models/standardErrors.js';
 
 export type { ArmaOrder, BacktestForecast, BacktestRecord, ComparisonRow, ForecastMethod, HorizonScores, OriginRecord } from '../backtest/backtestRecord.js';
 /** The comparison rows' loss name at an interval level, for readers that look rows up by level. */
@@ -28,6 +30,20 @@ export interface CandidateRecord {
   loglik: JsonNumber;
   aicc: JsonNumber;
   converged: boolean;
+  /** Whether the order search may select it (src/models/admissibility.ts). */
+  admissible: boolean;
+  /** Why it may not: not-converged, ar-unit-root, ma-unit-root, cancelling-factors or undoes-differencing; null when it may. */
+  reason: InadmissibleReason | null;
+}
+
+/** The candidate of lower AICc than the selected one that the search set aside, and why. */
+export interface SetAsideRecord {
+  p: number;
+  q: number;
+  aicc: JsonNumber;
+  reason: InadmissibleReason;
+  ar: number[];
+  ma: number[];
 }
 
 /** The deterministic trend's estimates: w_t = intercept + slope·t + η_t. */
@@ -56,6 +72,10 @@ export interface ModelRecord<C extends DeterministicCoefficients | StochasticCoe
   coefficients: C;
   /** The same keys as `coefficients`; null where the standard error does not exist. */
   stderr: C extends DeterministicCoefficients ? DeterministicCoefficients<JsonNumber> : StochasticCoefficients<JsonNumber>;
+  /** How the AR and MA standard errors were obtained; null without AR or MA terms, or when no method gave them. */
+  stderr_method: StandardErrorMethod;
+  /** The fit of lower AICc the search did not select, when there is one. */
+  set_aside: SetAsideRecord | null;
   candidates: CandidateRecord[];
   /** The model in one line of algebra, with its estimates. */
   equation: string;

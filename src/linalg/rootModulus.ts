@@ -4,18 +4,30 @@
 // root near 1 in the differenced model is the classic sign of over-differencing.
 import { EigenvalueDecomposition, Matrix } from 'ml-matrix';
 
-/** Smallest root modulus of 1 − Σ a_i z^i, or null for an empty polynomial. */
-export function smallestRootModulus(coefficients: ArrayLike<number>): number | null {
+/** A complex number, for roots. */
+export interface Complex {
+  re: number;
+  im: number;
+}
+
+/**
+ * The inverse roots 1/z of 1 − a₁z − … − a_p z^p: the eigenvalues of the companion matrix.
+ * A stationary (or invertible) polynomial has every inverse root inside the unit circle.
+ */
+export function inverseRoots(coefficients: ArrayLike<number>): Complex[] {
   const p = coefficients.length;
-  if (p === 0) return null;
+  if (p === 0) return [];
   const companion = Matrix.zeros(p, p);
   for (let j = 0; j < p; j++) companion.set(0, j, coefficients[j]);
   for (let i = 1; i < p; i++) companion.set(i, i - 1, 1);
   const eigen = new EigenvalueDecomposition(companion);
-  const real = eigen.realEigenvalues;
-  const imaginary = eigen.imaginaryEigenvalues;
-  let largest = 0;
-  for (let i = 0; i < p; i++) largest = Math.max(largest, Math.hypot(real[i], imaginary[i]));
+  return eigen.realEigenvalues.map((re, i) => ({ re, im: eigen.imaginaryEigenvalues[i] }));
+}
+
+/** Smallest root modulus of 1 − Σ a_i z^i, or null for an empty polynomial. */
+export function smallestRootModulus(coefficients: ArrayLike<number>): number | null {
+  if (coefficients.length === 0) return null;
+  const largest = Math.max(...inverseRoots(coefficients).map(({ re, im }) => Math.hypot(re, im)));
   return largest === 0 ? Number.POSITIVE_INFINITY : 1 / largest;
 }
 

@@ -1,8 +1,11 @@
 // Order selection over every (p, q) with p ≤ maxP, q ≤ maxQ by AICc, one model at a time
-// (AICc of the two trend models are never compared: they describe different data).
+// (AICc of the two trend models are never compared: they describe different data), among
+// the admissible fits only (admissibility.ts); every candidate stays in the list with its
+// log-likelihood and, when it may not be selected, the reason.
 // Each order is started, besides zeros and Hannan-Rissanen, from the optima of its smaller
 // neighbours padded with a zero partial autocorrelation, which reproduces the smaller
 // model exactly, so a larger model never ends below a nested smaller one.
+import { admissibility, type InadmissibleReason } from './admissibility.js';
 import { unconstrainAr, unconstrainMa } from './constraints.js';
 import { countObserved, fitRegressionArma, type RegressionArmaFit } from './fitRegressionArma.js';
 import { type WorkspaceOptions } from '../statespace/filterWorkspace.js';
@@ -18,12 +21,23 @@ export interface Candidate {
   loglik: number;
   aicc: number;
   converged: boolean;
+  admissible: boolean;
+  /** Why the candidate may not be selected; null when it may. */
+  reason: InadmissibleReason | null;
 }
 
 export interface OrderSearchResult {
+  /** The admissible fit of lowest AICc. */
   best: RegressionArmaFit;
   bestAicc: number;
   candidates: Candidate[];
+  /** The converged fit of lowest AICc when it is not admissible (it would have been selected without the rule), else null. */
+  setAside: { fit: RegressionArmaFit; aicc: number; reason: InadmissibleReason } | null;
+}
+
+export interface SearchOptions extends WorkspaceOptions {
+  /** The model is for first differences: a fit that undoes the differencing is not admissible. */
+  differenced?: boolean;
 }
 
 /**
@@ -40,12 +54,14 @@ export function searchOrders(
   regressors: readonly Float64Array[],
   maxP: number,
   maxQ: number,
-  options: WorkspaceOptions = {},
+  options: SearchOptions = {},
 ): OrderSearchResult {
+  const { differenced = false, ...workspace } = options;
   const fits = new Map<string, RegressionArmaFit>();
   const candidates: Candidate[] = [];
   let best: RegressionArmaFit | undefined;
   let bestAicc = Number.POSITIVE_INFINITY;
+  let bestSetAside: OrderSearchResult['setAside'] = null;
   const nobs = countObserved(y);
   for (let p = 0; p <= maxP; p++) {
     for (let q = 0; q <= maxQ; q++) {
@@ -64,18 +80,23 @@ export function searchOrders(
         const { modulus, angle } = CANCELLING_PAIR;
         starts.push(...cancellingStart(second, [-2 * modulus * Math.cos(angle), modulus * modulus]));
       }
-      const fit = fitRegressionArma(y, regressors, p, q, { ...options, starts });
+      const fit = fitRegressionArma(y, regressors, p, q, { ...workspace, starts });
       fits.set(key(p, q), fit);
       const value = aicc(fit.loglik, parameters, fit.nobs);
-      candidates.push({ p, q, loglik: fit.loglik, aicc: value, converged: fit.converged });
-      if (value < bestAicc) {
+      const { admissible, reason } = admissibility(fit, differenced);
+      candidates.push({ p, q, loglik: fit.loglik, aicc: value, converged: fit.converged, admissible, reason });
+      if (admissible && value < bestAicc) {
         bestAicc = value;
         best = fit;
       }
+      if (reason !== null && reason !== 'not-converged' && value < (bestSetAside?.aicc ?? Number.POSITIVE_INFINITY)) {
+        bestSetAside = { fit, aicc: value, reason };
+      }
     }
   }
+  // (0, 0) has nothing to be inadmissible about, so an admissible fit exists whenever any fits.
   if (best === undefined) throw new Error('searchOrders: no order fits this many observations');
-  return { best, bestAicc, candidates };
+  return { best, bestAicc, candidates, setAside: bestSetAside !== null && bestSetAside.aicc < bestAicc ? bestSetAside : null };
 }
 
 /**

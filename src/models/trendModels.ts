@@ -8,8 +8,9 @@ import type { TrendModelKind } from '../base/settings.js';
 import { fitRegressionArma, olsFit, type RegressionArmaFit } from './fitRegressionArma.js';
 import { forecastRegressionArma, type ForecastMoments } from '../statespace/forecast.js';
 import { createProfileLikelihood } from './profileLikelihood.js';
+import { admissibility, type InadmissibleReason } from './admissibility.js';
 import { aicc, searchOrders, type Candidate } from './orderSearch.js';
-import { armaStandardErrors } from './standardErrors.js';
+import { armaStandardErrors, type StandardErrorMethod } from './standardErrors.js';
 
 
 export interface TrendDesign {
@@ -79,15 +80,22 @@ export interface TrendModelFit {
   aicc: number;
   candidates: Candidate[];
   coefficients: Record<string, number>;
+  /**
+   * The fit of lower AICc that the search set aside as not admissible (admissibility.ts),
+   * absent when the selected fit is also the AICc best.
+   */
+  setAside?: { p: number; q: number; ar: number[]; ma: number[]; aicc: number; reason: InadmissibleReason };
   /** Standard errors for the regression coefficients (GLS) and AR/MA (observed information). */
-  stderr: { regression: Record<string, number>; ar: number[]; ma: number[] };
+  stderr: { regression: Record<string, number>; ar: number[]; ma: number[]; method: StandardErrorMethod };
 }
 
 /** Order search for one model, then standard errors for the chosen order. */
 export function fitTrendModel(kind: TrendModelKind, w: Float64Array, maxP: number, maxQ: number): TrendModelFit {
   const design = trendDesign(kind, w);
-  const search = searchOrders(design.response, design.regressors, maxP, maxQ, { accumulateGaps: design.accumulateGaps });
-  return describeFit(kind, design, search.best, search.bestAicc, search.candidates);
+  const search = searchOrders(design.response, design.regressors, maxP, maxQ, { accumulateGaps: design.accumulateGaps, differenced: kind === 'stochastic' });
+  const model = describeFit(kind, design, search.best, search.bestAicc, search.candidates);
+  const { setAside } = search;
+  return setAside === null ? model : { ...model, setAside: { p: setAside.fit.p, q: setAside.fit.q, ar: Array.from(setAside.fit.ar), ma: Array.from(setAside.fit.ma), aicc: setAside.aicc, reason: setAside.reason } };
 }
 
 /** A model at a fixed order (no search), e.g. for a backtest that keeps orders fixed. */
@@ -96,7 +104,7 @@ export function fitTrendModelAtOrder(kind: TrendModelKind, w: Float64Array, p: n
   const fit = fitRegressionArma(design.response, design.regressors, p, q, { accumulateGaps: design.accumulateGaps });
   const k = p + q + design.regressors.length + 1;
   const value = aicc(fit.loglik, k, fit.nobs);
-  return describeFit(kind, design, fit, value, [{ p, q, loglik: fit.loglik, aicc: value, converged: fit.converged }]);
+  return describeFit(kind, design, fit, value, [{ p, q, loglik: fit.loglik, aicc: value, converged: fit.converged, ...admissibility(fit, kind === 'stochastic') }]);
 }
 
 function describeFit(
@@ -123,7 +131,7 @@ function describeFit(
     aicc,
     candidates,
     coefficients,
-    stderr: { regression, ar: Array.from(armaSe.subarray(0, fit.p)), ma: Array.from(armaSe.subarray(fit.p)) },
+    stderr: { regression, ar: Array.from(armaSe.values.subarray(0, fit.p)), ma: Array.from(armaSe.values.subarray(fit.p)), method: armaSe.method },
   };
 }
 
