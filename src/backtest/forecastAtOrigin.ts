@@ -62,7 +62,7 @@ function forecastWithFixedParameters(task: OriginTask): OriginForecast {
   const parameters = task.parameters;
   if (parameters === undefined) throw new Error('forecastAtOrigin: the fixed policy needs the full-sample parameters');
   const design = trendDesign(task.kind, task.w);
-  const likelihood = createProfileLikelihood(design.response, design.regressors, p, q);
+  const likelihood = createProfileLikelihood(design.response, design.regressors, p, q, { accumulateGaps: design.accumulateGaps });
   const loglik = likelihood.atCoefficients(parameters.ar, parameters.ma, true);
   if (Number.isNaN(loglik)) throw new Error('forecastAtOrigin: the fixed ARMA parameters are not stationary and invertible');
   const { state, pmat, r, ncol } = likelihood.workspace;
