@@ -1,6 +1,6 @@
 // `trendbrief fit FILE.csv`: read, analyse, print the record (--json) or a summary.
 import { analyseSeries, requiredObservations } from '../analysis/analyseSeries.js';
-import { BUILT_IN_SETTINGS as BUILT_IN, HORIZON_BY_FREQUENCY } from '../config/builtInSettings.js';
+import { BUILT_IN_SETTINGS as BUILT_IN, HORIZON_BY_FREQUENCY, MIN_BACKTEST_ORIGINS } from '../config/builtInSettings.js';
 import { readingSettings, resolveSettings } from '../config/resolveSettings.js';
 import { BACKTEST_FIELDS, LEVEL, SETTINGS_FIELDS } from '../config/settingsSpec.js';
 import { readSeriesCsv } from '../data/readSeriesCsv.js';
@@ -31,7 +31,8 @@ Options:
   --backtest                re-run the whole method at past origins and score both models,
                             then apply the recommendation rule
   --origins K               backtest origins, 1 to ${BACKTEST_FIELDS.origins.max} (default: ${BUILT_IN.backtest.origins}, fewer when the series is short)
-  --backtest-horizon B      horizons scored in the backtest, 1 to ${BACKTEST_FIELDS.horizon.max} (default: ${BUILT_IN.backtest.horizon})
+  --backtest-horizon B      horizons scored in the backtest, 1 to ${BACKTEST_FIELDS.horizon.max} (default: the forecast
+                            horizon, shorter when the series cannot spare ${MIN_BACKTEST_ORIGINS} origins for it)
   --refit P                 at each origin: reselect the orders (default), reestimate at the
                             full-sample orders, or keep the full-sample fit (fixed)
   --scored-level L          the interval level whose backtest scores the recommendation rule
@@ -59,7 +60,7 @@ export async function runFit(args: readonly string[], io: { stdout(text: string)
     transform: reading.transform,
     missing: reading.missing,
   });
-  const settings = resolveSettings(request.settings, series.frequency, fitOptionPlace);
+  const settings = resolveSettings(request.settings, series, fitOptionPlace);
   const identity = { id: series.column, title: series.column, file: series.file };
   const record = await analyseSeries(series, settings, identity, { backtest: request.backtest });
   io.stdout(request.json ? `${JSON.stringify(record, null, 2)}\n` : formatSummary(record));

@@ -13,13 +13,20 @@ export const BUILT_IN_SETTINGS = {
   max_p: 3,
   max_q: 3,
   significance: 0.05,
-  backtest: { origins: 20, horizon: 5, refit: 'reselect', window: 'expanding' },
+  backtest: { origins: 20, refit: 'reselect', window: 'expanding' },
   recommendation: { rule: RECOMMENDATION_RULES[0], significance: 0.05 },
   missing: 'error',
 } as const;
 
 /** Forecast steps by frequency when no horizon is set: ten years, three years of quarters, two years of months. */
 export const HORIZON_BY_FREQUENCY = { annual: 10, quarterly: 12, monthly: 24 } as const;
+
+/**
+ * Fewest backtest origins for a comparison of the two models to count as evidence: with fewer,
+ * a single unusual period moves the averages and the comparison tests have little power (our
+ * threshold). The default backtest horizon is shortened to leave this many.
+ */
+export const MIN_BACKTEST_ORIGINS = 10;
 
 /** The shortest backtest training window when none is set: at least this many observations ... */
 export const MIN_TRAIN_FLOOR = 20;

@@ -1,9 +1,10 @@
 // Written settings → the one complete AnalysisSettings value (src/base/settings.ts). The config's
 // merged `defaults` and series keys, and `fit`'s options, both arrive here in the config's own
 // shape; this is the only place a setting takes its default, each default written once:
-// built-in values in builtInSettings.ts, and the rules below for the three that depend on
+// built-in values in builtInSettings.ts, and the rules below for the four that depend on
 // something else (the horizon on the frequency, the shortest backtest training window on the
-// order limits, the scored level on the levels).
+// order limits, the backtest horizon on the forecast horizon and the series' length, the
+// scored level on the levels).
 //
 // The series must be read before the horizon can be resolved (its frequency may come from the
 // data), yet reading it needs the transform, the missing-value policy and the order limits:
@@ -11,7 +12,8 @@
 import type { Frequency } from '../base/period.js';
 import { InputError, type InputLocation } from '../base/problem.js';
 import type { AnalysisSettings, Transform } from '../base/settings.js';
-import { BUILT_IN_SETTINGS as BUILT_IN, HORIZON_BY_FREQUENCY, MIN_TRAIN_FLOOR, MIN_TRAIN_PER_PARAMETER } from './builtInSettings.js';
+import { BUILT_IN_SETTINGS as BUILT_IN, HORIZON_BY_FREQUENCY, MIN_BACKTEST_ORIGINS, MIN_TRAIN_FLOOR, MIN_TRAIN_PER_PARAMETER } from './builtInSettings.js';
+import { BACKTEST_FIELDS } from './settingsSpec.js';
 import type { SettingsEntry } from './configSpec.js';
 import { configMessages } from './messages.js';
 
@@ -35,12 +37,22 @@ export function readingSettings(written: WrittenSettings): ReadingSettings {
   };
 }
 
+/** What the defaults need to know of the series: its frequency and its length (a Series will do). */
+export interface SeriesFacts {
+  frequency: Frequency;
+  /** Periods from first to last. */
+  n: number;
+}
+
 /**
- * The complete settings of one series of the given frequency. Throws an InputError when the
- * written values contradict each other (a scored level that is not among the levels).
+ * The complete settings of one series. Throws an InputError when the written values contradict
+ * each other (a scored level that is not among the levels).
  */
-export function resolveSettings(written: WrittenSettings, frequency: Frequency, placeOf: PlaceOf = nowhere): AnalysisSettings {
+export function resolveSettings(written: WrittenSettings, series: SeriesFacts, placeOf: PlaceOf = nowhere): AnalysisSettings {
   const reading = readingSettings(written);
+  const horizon = written.horizon ?? HORIZON_BY_FREQUENCY[series.frequency];
+  // The deterministic trend at the order limits has p + q + 3 parameters (intercept, slope, σ²).
+  const minTrain = written.backtest?.min_train ?? Math.max(MIN_TRAIN_FLOOR, MIN_TRAIN_PER_PARAMETER * (reading.max_p + reading.max_q + 3));
   const levels = [...(written.levels ?? BUILT_IN.levels)].sort((a, b) => a - b);
   const backtest = written.backtest ?? {};
   const recommendation = written.recommendation ?? {};
@@ -49,7 +61,7 @@ export function resolveSettings(written: WrittenSettings, frequency: Frequency, 
     throw new InputError(configMessages.scoredLevelNotListed(placeOf('recommendation.scored_level'), scoredLevel, levels));
   }
   return deepFreeze({
-    horizon: written.horizon ?? HORIZON_BY_FREQUENCY[frequency],
+    horizon,
     transform: reading.transform,
     levels,
     coefficient_uncertainty: written.coefficient_uncertainty ?? BUILT_IN.coefficient_uncertainty,
@@ -59,11 +71,10 @@ export function resolveSettings(written: WrittenSettings, frequency: Frequency, 
     significance: written.significance ?? BUILT_IN.significance,
     backtest: {
       origins: backtest.origins ?? BUILT_IN.backtest.origins,
-      horizon: backtest.horizon ?? BUILT_IN.backtest.horizon,
+      horizon: backtest.horizon ?? backtestHorizon(horizon, series.n, minTrain),
       refit: backtest.refit ?? BUILT_IN.backtest.refit,
       window: backtest.window ?? BUILT_IN.backtest.window,
-      // The deterministic trend at the order limits has p + q + 3 parameters (intercept, slope, σ²).
-      min_train: backtest.min_train ?? Math.max(MIN_TRAIN_FLOOR, MIN_TRAIN_PER_PARAMETER * (reading.max_p + reading.max_q + 3)),
+      min_train: minTrain,
     },
     recommendation: {
       rule: recommendation.rule ?? BUILT_IN.recommendation.rule,
@@ -80,6 +91,16 @@ export function resolveSettings(written: WrittenSettings, frequency: Frequency, 
 function deepFreeze<T extends object>(value: T): T {
   for (const inner of Object.values(value)) if (typeof inner === 'object' && inner !== null) deepFreeze(inner);
   return Object.freeze(value);
+}
+
+/**
+ * The backtest checks forecasts as far ahead as the memo makes them, where the series is long
+ * enough to leave MIN_BACKTEST_ORIGINS origins after the shortest training window; a shorter
+ * series gets a shorter backtest horizon (the memo says so on its first page).
+ */
+function backtestHorizon(horizon: number, n: number, minTrain: number): number {
+  const longest = n - minTrain - (MIN_BACKTEST_ORIGINS - 1);
+  return Math.max(1, Math.min(horizon, longest, BACKTEST_FIELDS.horizon.max));
 }
 
 function toTransform(written: NonNullable<WrittenSettings['transform']>): Transform {

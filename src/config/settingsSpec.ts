@@ -1,6 +1,6 @@
 // The settings a config may give once under `defaults` and override per series.
 import { MISSING_POLICIES, POINT_FORECASTS, RECOMMENDATION_RULES, REFIT_POLICIES, TREND_MODELS, WINDOW_KINDS } from '../base/settings.js';
-import { BUILT_IN_SETTINGS as BUILT_IN, HORIZON_BY_FREQUENCY, MIN_TRAIN_FLOOR, MIN_TRAIN_PER_PARAMETER } from './builtInSettings.js';
+import { BUILT_IN_SETTINGS as BUILT_IN, HORIZON_BY_FREQUENCY, MIN_BACKTEST_ORIGINS, MIN_TRAIN_FLOOR, MIN_TRAIN_PER_PARAMETER } from './builtInSettings.js';
 import { choice, decimal, flag, list, object, shapes, text, whole } from './keySpec.js';
 
 const MAX_ORDER = 8;
@@ -29,7 +29,9 @@ const transform = shapes(
 /** The keys of `backtest`, each spec node kept by name for the command line's options. */
 export const BACKTEST_FIELDS = {
   origins: whole('Number of forecast origins, the latest ones in the series; fewer when the series is too short for them.', 1, 200, { default: BUILT_IN.backtest.origins }),
-  horizon: whole('Steps forecast from each origin.', 1, 100, { default: BUILT_IN.backtest.horizon }),
+  horizon: whole('Steps forecast from each origin.', 1, 100, {
+    defaultText: `the forecast horizon, shortened where the series is too short to leave ${MIN_BACKTEST_ORIGINS} origins after the shortest training window`,
+  }),
   refit: choice(
     'At each origin: search the orders again (reselect), re-estimate the orders chosen on the full series (reestimate), or keep the full-series fit (fixed).',
     REFIT_POLICIES,

@@ -37,7 +37,8 @@ memo:
 #   horizon (10 annual, 12 quarterly, 24 monthly), transform (none | log | {box_cox: 0.5}),
 #   levels ([80, 95]), coefficient_uncertainty (true), point (median | mean),
 #   max_p and max_q (3), significance (0.05), missing (error | allow),
-#   backtest: {origins (20), horizon (5), refit (reselect | reestimate | fixed),
+#   backtest: {origins (20), horizon (the forecast horizon where the series allows),
+#              refit (reselect | reestimate | fixed),
 #              window (expanding | sliding), min_train (max(20, 3 × (max_p + max_q + 3)))}
 #   recommendation: {rule, significance (0.05), scored_level (the widest of levels),
 #                    model (deterministic | stochastic),

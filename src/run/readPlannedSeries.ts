@@ -37,7 +37,7 @@ export function readPlannedSeries(plan: SeriesPlan, configFile: string): Planned
   }
   // A setting the config leaves out is reported at the series entry it applies to.
   const placeOf = (key: string): InputLocation => ({ file: configFile, ...(plan.settingPlaces.get(key) ?? { ...plan.at, field: `${plan.at.field}.${key}` }) });
-  return { plan, series, settings: resolveSettings(plan.settings, series.frequency, placeOf) };
+  return { plan, series, settings: resolveSettings(plan.settings, series, placeOf) };
 }
 
 /** Every series of a config read and its settings resolved, the problems of all of them collected before failing. */

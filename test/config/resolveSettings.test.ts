@@ -7,7 +7,7 @@ import { readingSettings, resolveSettings } from '../../src/config/resolveSettin
 
 describe('resolveSettings', () => {
   it('fills every setting a config leaves out with its built-in value', () => {
-    expect(resolveSettings({}, 'annual')).toEqual({
+    expect(resolveSettings({}, { frequency: 'annual', n: 100 })).toEqual({
       horizon: 10,
       transform: { kind: 'none' },
       levels: [80, 95],
@@ -16,41 +16,51 @@ describe('resolveSettings', () => {
       max_p: 3,
       max_q: 3,
       significance: 0.05,
-      backtest: { origins: 20, horizon: 5, refit: 'reselect', window: 'expanding', min_train: 27 },
+      backtest: { origins: 20, horizon: 10, refit: 'reselect', window: 'expanding', min_train: 27 },
       recommendation: { rule: 'prefer-stochastic', significance: 0.05, scored_level: 95, model: null, justification: null },
       missing: 'error',
     });
   });
 
   it('takes the horizon from the frequency: ten years, three years of quarters, two years of months', () => {
-    expect([resolveSettings({}, 'annual').horizon, resolveSettings({}, 'quarterly').horizon, resolveSettings({}, 'monthly').horizon]).toEqual([10, 12, 24]);
-    expect(resolveSettings({ horizon: 7 }, 'monthly').horizon).toBe(7);
+    expect([resolveSettings({}, { frequency: 'annual', n: 100 }).horizon, resolveSettings({}, { frequency: 'quarterly', n: 100 }).horizon, resolveSettings({}, { frequency: 'monthly', n: 100 }).horizon]).toEqual([10, 12, 24]);
+    expect(resolveSettings({ horizon: 7 }, { frequency: 'monthly', n: 100 }).horizon).toBe(7);
   });
 
   it('makes the shortest training window max(20, 3 × (max_p + max_q + 3))', () => {
     // The deterministic trend at (3,3) has 3 + 3 + intercept, slope and σ² = 9 parameters: 27.
-    expect(resolveSettings({}, 'annual').backtest.min_train).toBe(27);
+    expect(resolveSettings({}, { frequency: 'annual', n: 100 }).backtest.min_train).toBe(27);
     // At (1,1) it has 5, and 3 × 5 = 15 is below the floor of 20.
-    expect(resolveSettings({ max_p: 1, max_q: 1 }, 'annual').backtest.min_train).toBe(20);
-    expect(resolveSettings({ backtest: { min_train: 12 } }, 'annual').backtest.min_train).toBe(12);
+    expect(resolveSettings({ max_p: 1, max_q: 1 }, { frequency: 'annual', n: 100 }).backtest.min_train).toBe(20);
+    expect(resolveSettings({ backtest: { min_train: 12 } }, { frequency: 'annual', n: 100 }).backtest.min_train).toBe(12);
+  });
+
+  it('backtests as far ahead as the memo forecasts, shortened to leave ten origins on a short series', () => {
+    // n = 100: 100 − 27 − 9 = 64 steps are possible, so the backtest covers the horizon of 10.
+    expect(resolveSettings({}, { frequency: 'annual', n: 100 }).backtest.horizon).toBe(10);
+    // n = 40: 40 − 27 − (10 − 1) = 4, the longest horizon that leaves ten origins after 27 to train on.
+    expect(resolveSettings({}, { frequency: 'annual', n: 40 }).backtest.horizon).toBe(4);
+    expect(resolveSettings({}, { frequency: 'annual', n: 30 }).backtest.horizon).toBe(1);
+    expect(resolveSettings({ horizon: 200 }, { frequency: 'monthly', n: 2000 }).backtest.horizon).toBe(100);
+    expect(resolveSettings({ backtest: { horizon: 3 } }, { frequency: 'annual', n: 100 }).backtest.horizon).toBe(3);
   });
 
   it('sorts the levels and scores the widest unless told otherwise', () => {
-    const settings = resolveSettings({ levels: [90, 50] }, 'annual');
+    const settings = resolveSettings({ levels: [90, 50] }, { frequency: 'annual', n: 100 });
     expect(settings.levels).toEqual([50, 90]);
     expect(settings.recommendation.scored_level).toBe(90);
-    expect(resolveSettings({ levels: [68, 95, 99], recommendation: { scored_level: 68 } }, 'annual').recommendation.scored_level).toBe(68);
+    expect(resolveSettings({ levels: [68, 95, 99], recommendation: { scored_level: 68 } }, { frequency: 'annual', n: 100 }).recommendation.scored_level).toBe(68);
   });
 
   it('turns the transform as written into the form the models take', () => {
-    expect(resolveSettings({ transform: 'log' }, 'annual').transform).toEqual({ kind: 'log' });
-    expect(resolveSettings({ transform: { box_cox: 0.5 } }, 'annual').transform).toEqual({ kind: 'box-cox', lambda: 0.5 });
+    expect(resolveSettings({ transform: 'log' }, { frequency: 'annual', n: 100 }).transform).toEqual({ kind: 'log' });
+    expect(resolveSettings({ transform: { box_cox: 0.5 } }, { frequency: 'annual', n: 100 }).transform).toEqual({ kind: 'box-cox', lambda: 0.5 });
   });
 
   it('refuses a scored level that is not among the levels, at the place it was written', () => {
     const error = (() => {
       try {
-        resolveSettings({ levels: [50, 90], recommendation: { scored_level: 95 } }, 'annual', (key) => ({ file: 'memo.yaml', line: 9, column: 5, field: `defaults.${key}` }));
+        resolveSettings({ levels: [50, 90], recommendation: { scored_level: 95 } }, { frequency: 'annual', n: 100 }, (key) => ({ file: 'memo.yaml', line: 9, column: 5, field: `defaults.${key}` }));
       } catch (caught) {
         return caught;
       }
@@ -63,7 +73,7 @@ describe('resolveSettings', () => {
   });
 
   it('gives a value nothing may change', () => {
-    const settings = resolveSettings({}, 'annual');
+    const settings = resolveSettings({}, { frequency: 'annual', n: 100 });
     expect(Object.isFrozen(settings) && Object.isFrozen(settings.levels) && Object.isFrozen(settings.backtest)).toBe(true);
   });
 

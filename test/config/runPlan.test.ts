@@ -13,7 +13,7 @@ const FULL = join(FIXTURES, 'plans/full.yaml');
 describe('merging defaults and overrides', () => {
   const plan = loadConfig(FULL);
   const [inflow, reads] = plan.series;
-  const resolved = (series: typeof inflow) => resolveSettings(series.settings, 'annual');
+  const resolved = (series: typeof inflow) => resolveSettings(series.settings, { frequency: 'annual', n: 100 });
 
   it('takes the series value first, then defaults, each with the place that set it', () => {
     // test/fixtures/config/plans/full.yaml: horizon 8 under defaults (line 25), 12 on reservoir-inflow (line 52).
@@ -122,7 +122,7 @@ describe('memo details and analysis options', () => {
 
   it('resolves every effective setting for the analysis', () => {
     const [inflow, reads] = loadConfig(FULL).series;
-    expect(resolveSettings(inflow.settings, 'annual')).toMatchObject({
+    expect(resolveSettings(inflow.settings, { frequency: 'annual', n: 100 })).toMatchObject({
       horizon: 12,
       levels: [80, 95],
       max_p: 2,
@@ -132,7 +132,7 @@ describe('memo details and analysis options', () => {
       point: 'mean',
       significance: 0.1,
     });
-    expect(resolveSettings(reads.settings, 'annual')).toMatchObject({ horizon: 8, max_p: 1, transform: { kind: 'log' } });
+    expect(resolveSettings(reads.settings, { frequency: 'annual', n: 100 })).toMatchObject({ horizon: 8, max_p: 1, transform: { kind: 'log' } });
     expect(reads.title).toBe('meter-reads');
   });
 });

@@ -56,7 +56,7 @@ describe('YAML syntax', () => {
 describe('aliases', () => {
   it('reads a value shared through an anchor and an alias', () => {
     const plan = planOf([...BASE, '    levels: &levels [90, 50]', '  - id: outflow', '    file: b.csv', '    levels: *levels']);
-    expect(plan.series.map((s) => resolveSettings(s.settings, 'annual').levels)).toEqual([
+    expect(plan.series.map((s) => resolveSettings(s.settings, { frequency: 'annual', n: 100 }).levels)).toEqual([
       [50, 90],
       [50, 90],
     ]);

@@ -22,7 +22,7 @@ const USE_SCRIPT = `
 import { analyseSeries, parseSeriesCsv, resolveSettings, levelKey } from 'trendbrief';
 import { readFileSync } from 'node:fs';
 const series = parseSeriesCsv(readFileSync('series.csv', 'utf8'), 'series.csv', { missing: 'error' });
-const settings = resolveSettings(${JSON.stringify(SETTINGS)}, series.frequency);
+const settings = resolveSettings(${JSON.stringify(SETTINGS)}, series);
 const record = await analyseSeries(series, settings, { id: 'boardings', title: 'Boardings', file: 'series.csv' }, { backtest: false });
 process.stdout.write(JSON.stringify({ record, key: levelKey(90) }));
 `;
@@ -30,7 +30,7 @@ process.stdout.write(JSON.stringify({ record, key: levelKey(90) }));
 const USE_TYPES = `
 import { analyseSeries, parseSeriesCsv, resolveSettings, type AnalysisRecord, type AnalysisSettings } from 'trendbrief';
 const series = parseSeriesCsv('year,v\\n2000,1\\n2001,2', 'x.csv', { missing: 'error' });
-const settings: AnalysisSettings = resolveSettings({ horizon: 3 }, series.frequency);
+const settings: AnalysisSettings = resolveSettings({ horizon: 3 }, series);
 const record: Promise<AnalysisRecord> = analyseSeries(series, settings, { id: 'x', title: 'X', file: 'x.csv' }, { backtest: false });
 export { record };
 `;
@@ -63,7 +63,7 @@ describe('the packed package', () => {
 
   it('is imported by its name and analyses a series exactly as the sources do', async () => {
     const series = parseSeriesCsv(SERIES_CSV, 'series.csv', { missing: 'error' });
-    const expected = await analyseSeries(series, settingsFor(SETTINGS, series.frequency), { id: 'boardings', title: 'Boardings', file: 'series.csv' }, { backtest: false });
+    const expected = await analyseSeries(series, settingsFor(SETTINGS, series.frequency, series.n), { id: 'boardings', title: 'Boardings', file: 'series.csv' }, { backtest: false });
     const { tool, ...rest } = packed.record;
     const { tool: expectedTool, ...expectedRest } = JSON.parse(JSON.stringify(expected)) as AnalysisRecord;
     expect(tool).toEqual(expectedTool);

@@ -31,7 +31,7 @@ const analysed = new Map(
   await Promise.all(
     (Object.entries(FIXTURES) as [FixtureName, FixtureSpec][]).map(async ([name, spec]) => {
       const series = readSeriesCsv(spec.file, { missing: 'error' });
-      const record = await analyseSeries(series, settingsFor(spec.settings, series.frequency), { id: spec.id, title: spec.title, file: spec.file }, { backtest: false });
+      const record = await analyseSeries(series, settingsFor(spec.settings, series.frequency, series.n), { id: spec.id, title: spec.title, file: spec.file }, { backtest: false });
       const history = series.periods.map((period, i) => ({ period, value: series.values[i] }));
       return [name, { record, history }] as const;
     }),

@@ -4,6 +4,7 @@ import type { Frequency } from '../../src/base/period.js';
 import type { AnalysisSettings } from '../../src/base/settings.js';
 import { resolveSettings, type WrittenSettings } from '../../src/config/resolveSettings.js';
 
-export function settingsFor(written: WrittenSettings = {}, frequency: Frequency = 'annual'): AnalysisSettings {
-  return resolveSettings(written, frequency);
+/** `n` only matters to the default backtest horizon, which shortens for a short series. */
+export function settingsFor(written: WrittenSettings = {}, frequency: Frequency = 'annual', n = 100): AnalysisSettings {
+  return resolveSettings(written, { frequency, n });
 }

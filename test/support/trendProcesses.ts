@@ -39,3 +39,8 @@ export function simulateProcess(process: TrendProcess, length: number, seed: num
   }
   return y;
 }
+
+/** The seed of replicate `rep` of a process at length n, so every study and test draws the same series. */
+export function processSeed(process: TrendProcess, n: number, rep: number): number {
+  return 100_000 * (TREND_PROCESSES.indexOf(process) + 1) + 1000 * n + rep;
+}
