@@ -18,7 +18,7 @@ import { smallestMaRootModulus, smallestRootModulus } from '../linalg/rootModulu
 import { fitTrendModel, forecastTrendModel, minimumObservations, type TrendModelFit } from '../models/trendModels.js';
 import { describeEquation } from './describeEquation.js';
 import { RECORD_SCHEMA, type AnalysisRecord, type DeterministicCoefficients, type ForecastRow, type JsonNumber, type ModelRecord, type StochasticCoefficients } from './record.js';
-import { recommendModel } from './recommendModel.js';
+import { recommendationInput, recommendModel } from './recommendModel.js';
 
 /** Who the series is, as the record names it. */
 export interface SeriesIdentity {
@@ -55,6 +55,8 @@ export async function analyseSeries(series: Series, settings: AnalysisSettings, 
     { significance: settings.significance, kpssLagRule: run.kpssLagRule, periodOf: (index) => series.periods[index] ?? addPeriods(series.first, index) },
   );
   const backtest = run.backtest ? await backtestOrReason(series, settings, fitted, run) : undefined;
+  const deterministic = modelRecord('deterministic', fitted.deterministic) as ModelRecord<DeterministicCoefficients>;
+  const stochastic = modelRecord('stochastic', fitted.stochastic) as ModelRecord<StochasticCoefficients>;
   return {
     schema: RECORD_SCHEMA,
     tool: toolVersion(),
@@ -69,10 +71,7 @@ export async function analyseSeries(series: Series, settings: AnalysisSettings, 
       source: { file: identity.file, sha256: series.sha256, column: series.column },
     },
     settings,
-    models: {
-      deterministic: modelRecord('deterministic', fitted.deterministic) as ModelRecord<DeterministicCoefficients>,
-      stochastic: modelRecord('stochastic', fitted.stochastic) as ModelRecord<StochasticCoefficients>,
-    },
+    models: { deterministic, stochastic },
     forecasts: {
       deterministic: forecastRows(fitted.deterministic, series.last, settings),
       stochastic: forecastRows(fitted.stochastic, series.last, settings),
@@ -83,7 +82,7 @@ export async function analyseSeries(series: Series, settings: AnalysisSettings, 
       : {
           backtest: backtest.record,
           ...(backtest.reason === undefined ? {} : { backtest_unavailable: backtest.reason }),
-          recommendation: recommendModel({ verdict: evidence.reading.verdict, backtest: backtest.record ?? undefined }, settings.recommendation),
+          recommendation: recommendModel(recommendationInput({ evidence, backtest: backtest.record, stochastic }), settings),
         }),
   };
 }

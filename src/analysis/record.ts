@@ -95,11 +95,26 @@ export interface ForecastRow {
   model_scale: { mean: number; se_process: number; se_total: number };
 }
 
+/** One thing the data showed about the choice, in a sentence, and the model it speaks for (null: neither). */
+export interface EvidenceItem {
+  check: 'backtest-scores' | 'comparison-test' | 'origins' | 'backtest-reach' | 'unit-root' | 'trend-break' | 'differencing';
+  finding: string;
+  favours: TrendModelKind | null;
+}
+
 export interface RecommendationRecord {
   model: TrendModelKind;
   rule: RecommendationRule | 'fixed-by-config';
-  /** The rule in one plain sentence. */
+  /** The rule, a policy, in one plain sentence. */
   rule_text: string;
+  /**
+   * What settled the choice: the evidence (it met the policy's conditions, or spoke for the
+   * model on its own), the policy (the evidence did not settle it, so the rule's default
+   * applies), or the config.
+   */
+  decided_by: 'evidence' | 'policy' | 'config';
+  /** What the data showed, item by item, whatever the rule made of it. */
+  evidence: EvidenceItem[];
   fixed_by_config: boolean;
   justification?: string;
   significance: number;

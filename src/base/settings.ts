@@ -69,6 +69,14 @@ export interface AnalysisSettings {
   readonly missing: MissingPolicy;
 }
 
+/**
+ * Fewest backtest origins for a comparison of the two models to count as evidence: with fewer,
+ * a single unusual period moves the averages and the comparison tests have little power (our
+ * threshold). The recommendation rule, the default backtest horizon (shortened to leave this
+ * many) and the memo's thin-backtest caveat all read it.
+ */
+export const MIN_BACKTEST_ORIGINS = 10;
+
 /** The key of a level in the record's interval tables: 95 → "95", 99.5 → "99.5". */
 export function levelKey(level: number): string {
   return String(level);

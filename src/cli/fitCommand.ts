@@ -1,12 +1,13 @@
 // `trendbrief fit FILE.csv`: read, analyse, print the record (--json) or a summary.
 import { analyseSeries, requiredObservations } from '../analysis/analyseSeries.js';
-import { BUILT_IN_SETTINGS as BUILT_IN, HORIZON_BY_FREQUENCY, MIN_BACKTEST_ORIGINS } from '../config/builtInSettings.js';
+import { BUILT_IN_SETTINGS as BUILT_IN, HORIZON_BY_FREQUENCY } from '../config/builtInSettings.js';
 import { readingSettings, resolveSettings } from '../config/resolveSettings.js';
 import { BACKTEST_FIELDS, LEVEL, SETTINGS_FIELDS } from '../config/settingsSpec.js';
 import { readSeriesCsv } from '../data/readSeriesCsv.js';
 import { formatSummary } from './formatSummary.js';
 import { fitOptionPlace, parseFitOptions } from './parseFitOptions.js';
 import { EXIT } from './exitCodes.js';
+import { MIN_BACKTEST_ORIGINS } from '../base/settings.js';
 
 const H = HORIZON_BY_FREQUENCY;
 

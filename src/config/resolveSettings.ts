@@ -11,8 +11,8 @@
 // `readingSettings` resolves those four, and `resolveSettings` builds the rest on them.
 import type { Frequency } from '../base/period.js';
 import { InputError, type InputLocation } from '../base/problem.js';
-import type { AnalysisSettings, Transform } from '../base/settings.js';
-import { BUILT_IN_SETTINGS as BUILT_IN, HORIZON_BY_FREQUENCY, MIN_BACKTEST_ORIGINS, MIN_TRAIN_FLOOR, MIN_TRAIN_PER_PARAMETER } from './builtInSettings.js';
+import { MIN_BACKTEST_ORIGINS, type AnalysisSettings, type Transform } from '../base/settings.js';
+import { BUILT_IN_SETTINGS as BUILT_IN, HORIZON_BY_FREQUENCY, MIN_TRAIN_FLOOR, MIN_TRAIN_PER_PARAMETER } from './builtInSettings.js';
 import { BACKTEST_FIELDS } from './settingsSpec.js';
 import type { SettingsEntry } from './configSpec.js';
 import { configMessages } from './messages.js';

@@ -1,6 +1,6 @@
 // The settings a config may give once under `defaults` and override per series.
-import { MISSING_POLICIES, POINT_FORECASTS, RECOMMENDATION_RULES, REFIT_POLICIES, TREND_MODELS, WINDOW_KINDS } from '../base/settings.js';
-import { BUILT_IN_SETTINGS as BUILT_IN, HORIZON_BY_FREQUENCY, MIN_BACKTEST_ORIGINS, MIN_TRAIN_FLOOR, MIN_TRAIN_PER_PARAMETER } from './builtInSettings.js';
+import { MIN_BACKTEST_ORIGINS, MISSING_POLICIES, POINT_FORECASTS, RECOMMENDATION_RULES, REFIT_POLICIES, TREND_MODELS, WINDOW_KINDS } from '../base/settings.js';
+import { BUILT_IN_SETTINGS as BUILT_IN, HORIZON_BY_FREQUENCY, MIN_TRAIN_FLOOR, MIN_TRAIN_PER_PARAMETER } from './builtInSettings.js';
 import { choice, decimal, flag, list, object, shapes, text, whole } from './keySpec.js';
 
 const MAX_ORDER = 8;

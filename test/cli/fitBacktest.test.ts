@@ -24,7 +24,7 @@ describe('fit with a backtest', () => {
     expect(record.backtest).toBeNull();
     expect(record.backtest_unavailable.length).toBeGreaterThan(10);
     expect(record.recommendation.model).toBe('stochastic');
-    expect(record.recommendation.reasons[0]).toContain('No backtest');
+    expect(record.recommendation.reasons[0]).toBe('There are no backtest 95% interval scores to compare.');
   });
 
   it('rejects a bad refit policy with the field named', async () => {

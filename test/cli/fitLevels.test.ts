@@ -44,8 +44,8 @@ describe('fit --backtest at other levels', () => {
       expect(recommendation.scored_level).toBe(c.scored);
       expect(recommendation.rule_text).toContain(`${c.scored}% interval scores`);
       // h = 2, 3: the upper half of a three-step backtest, h > 3/2 (src/analysis/recommendModel.ts).
-      expect(recommendation.reasons[0]).toContain(`Average ${c.scored}% interval score at h = 2, 3`);
-      expect(recommendation.reasons.join(' ')).not.toContain('No backtest');
+      expect(recommendation.reasons[0]).toContain(`at h = 2, 3 the average ${c.scored}% interval score`);
+      expect(recommendation.reasons.join(' ')).not.toContain("There are no backtest");
     });
 
     it(`${c.options.join(' ')}: prints a column per level`, async () => {
@@ -59,7 +59,7 @@ describe('fit --backtest at other levels', () => {
       expect(levelsIn(accuracyHeader, 'cover')).toEqual(c.levels);
       expect(levelsIn(accuracyHeader, 'IS')).toEqual(c.levels);
       expect(lineStarting(run.stdout, /^h\s+squared error\s/)).toContain(`${c.scored}% interval score`);
-      expect(run.stdout).toContain(`Average ${c.scored}% interval score at h = 2, 3`);
+      expect(run.stdout).toContain(`at h = 2, 3 the average ${c.scored}% interval score`);
     });
   }
 });

@@ -91,6 +91,14 @@ export function handMadeRecommendation(model: TrendModelKind): RecommendationRec
     fixed_by_config: false,
     significance: 0.05,
     scored_level: 95,
+    decided_by: model === 'stochastic' ? 'policy' : 'evidence',
+    evidence:
+      model === 'stochastic'
+        ? [{ check: 'backtest-scores', finding: 'Lower backtest interval scores at horizons 3 to 5 for the stochastic trend.', favours: 'stochastic' }]
+        : [
+            { check: 'backtest-scores', finding: 'Lower backtest interval scores at every horizon for the deterministic trend.', favours: 'deterministic' },
+            { check: 'unit-root', finding: 'The unit-root checks point to a fixed trend line.', favours: 'deterministic' },
+          ],
     reasons:
       model === 'stochastic'
         ? ['Lower backtest interval scores at horizons 3 to 5.', 'Its wider intervals cover the backtest outcomes at close to the stated rate.']

@@ -103,7 +103,7 @@ describe('run at other interval levels', () => {
         expect(html).toContain(c.shading);
         expect(elementOf(html, '<figure class="chart" id="series-1-ratio">', 'figure')).toContain(`deterministic to the stochastic ${c.widest}% interval width`);
         expect(elementOf(html, '<figure class="chart" id="series-1-backtest">', 'figure')).toContain(`${c.widest}% interval, against the ${c.widest}% target`);
-        expect(html).toContain(`Average ${c.widest}% interval score`);
+        expect(html).toContain(`the average ${c.widest}% interval score`);
         // Outside the charts' SVG, where 80% may be an axis tick of the coverage panel.
         if (!c.levels.includes(80)) expect(html.replace(/<svg[\s\S]*?<\/svg>/g, '')).not.toMatch(/\b80%/);
       });

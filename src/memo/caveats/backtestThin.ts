@@ -1,10 +1,10 @@
-// Fires when the backtest was not run or could not be (high) or used fewer than ten forecast origins
-// (medium; our threshold: with fewer, a single unusual period moves the averages and the
-// comparison tests have little power).
+// Fires when the backtest was not run or could not be (high) or used fewer than
+// MIN_BACKTEST_ORIGINS forecast origins (medium): the threshold below which the recommendation
+// rule does not count the comparison as evidence either.
+import { MIN_BACKTEST_ORIGINS } from '../../base/settings.js';
 import type { Caveat, CaveatRule } from './caveat.js';
 import { caveatWording } from './caveatWording.js';
 
-export const MIN_BACKTEST_ORIGINS = 10;
 
 const ID = 'backtest-thin';
 
