@@ -121,7 +121,7 @@ export function recommendModel(input: RecommendationInput, settings: Pick<Analys
       rule_text: ruleText,
       fixed_by_config: false,
       decided_by: decidedBy,
-      reasons: [...evidence.map((e) => e.finding), ...against, w.conclusion(model, decidedBy)],
+      reasons: [...evidence.map((e) => e.finding), ...against, w.conclusion(model, decidedBy, false)],
     };
   }
   const conditions = {
@@ -131,9 +131,11 @@ export function recommendModel(input: RecommendationInput, settings: Pick<Analys
     noBreak: !broken,
     reach: reach >= settings.horizon,
   };
-  const model: TrendModelKind = Object.values(conditions).every(Boolean) ? 'deterministic' : 'stochastic';
-  const favoursStochastic = evidence.some((e) => e.favours === 'stochastic' && e.check !== 'backtest-scores');
-  const decidedBy = model === 'deterministic' || favoursStochastic ? 'evidence' : 'policy';
+  const unmet = (Object.keys(conditions) as (keyof typeof conditions)[]).filter((condition) => !conditions[condition]);
+  const model: TrendModelKind = unmet.length === 0 ? 'deterministic' : 'stochastic';
+  // The evidence decides the stochastic trend only when something speaks for it and nothing for the fixed line.
+  const speaksFor = (side: TrendModelKind): boolean => evidence.some((e) => e.favours === side);
+  const decidedBy = model === 'deterministic' || (speaksFor('stochastic') && !speaksFor('deterministic')) ? 'evidence' : 'policy';
   return {
     ...base,
     model,
@@ -141,7 +143,7 @@ export function recommendModel(input: RecommendationInput, settings: Pick<Analys
     rule_text: ruleText,
     fixed_by_config: false,
     decided_by: decidedBy,
-    reasons: [...evidence.map((e) => e.finding), w.conclusion(model, decidedBy)],
+    reasons: [...evidence.map((e) => e.finding), ...(model === 'stochastic' ? [w.unmet(unmet)] : []), w.conclusion(model, decidedBy, speaksFor('deterministic') && speaksFor('stochastic'))],
   };
 }
 

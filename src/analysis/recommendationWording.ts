@@ -9,7 +9,12 @@ function percent(fraction: number): string {
 }
 
 function hList(hs: readonly number[]): string {
-  return hs.join(', ');
+  return hs.length > 3 ? `${hs[0]} to ${hs[hs.length - 1]}` : hs.join(', ');
+}
+
+/** Four significant digits, never in exponent form: 10330, 5.346. */
+function fourDigits(value: number): string {
+  return String(Number(value.toPrecision(4)));
 }
 
 export const recommendationWording = {
@@ -27,7 +32,7 @@ export const recommendationWording = {
   },
   scores(level: number, hs: readonly number[], deterministic: number, stochastic: number, everyHorizon: boolean): string {
     const which = deterministic < stochastic ? `the deterministic trend scored lower${everyHorizon ? ', at every one of them' : ', though not at every one of them'}` : deterministic > stochastic ? 'the stochastic trend scored lower' : 'the two scored the same';
-    return `Backtest: at h = ${hList(hs)} the average ${level}% interval score was ${deterministic.toPrecision(4)} for the deterministic trend and ${stochastic.toPrecision(4)} for the stochastic trend (lower is better): ${which}.`;
+    return `Backtest: at h = ${hList(hs)} the average ${level}% interval score was ${fourDigits(deterministic)} for the deterministic trend and ${fourDigits(stochastic)} for the stochastic trend (lower is better): ${which}.`;
   },
   testUnavailable(h: number): string {
     return `The comparison test at h = ${h} could not be computed.`;
@@ -57,10 +62,17 @@ export const recommendationWording = {
   despiteBreak: 'A break was found in the fixed trend line; this rule weighs the backtest scores alone, so the break did not enter the choice.',
   despiteFewOrigins: 'The backtest has few origins; this rule takes its scores as they are.',
   despiteShortReach: 'The backtest did not reach the memo\u2019s horizon; this rule takes the scores over the horizons it did reach.',
-  conclusion(model: TrendModelKind, decidedBy: 'evidence' | 'policy'): string {
+  /** The policy's conditions the fixed line did not meet. */
+  unmet(conditions: readonly ('scores' | 'test' | 'unitRoot' | 'noBreak' | 'reach')[]): string {
+    const words = { scores: 'better scores at every longer horizon', test: 'a significant comparison test over enough origins', unitRoot: 'no unit-root evidence for a stochastic trend', noBreak: 'no break in its trend line', reach: 'a backtest that reaches the memo\u2019s horizon' };
+    const list = conditions.map((c) => words[c]);
+    const joined = list.length <= 1 ? list.join('') : `${list.slice(0, -1).join(', ')} and ${list[list.length - 1]}`;
+    return `The fixed line falls short of the policy on ${joined}.`;
+  },
+  /** `mixed`: some evidence speaks for each model. */
+  conclusion(model: TrendModelKind, decidedBy: 'evidence' | 'policy', mixed: boolean): string {
     if (model === 'deterministic') return 'So the deterministic trend is recommended; its narrower intervals rest on the trend line continuing unchanged.';
-    return decidedBy === 'evidence'
-      ? 'So the stochastic trend is recommended, as the evidence above points to it.'
-      : 'The evidence does not settle the choice, so the policy\u2019s default applies: the stochastic trend is recommended.';
+    if (decidedBy === 'evidence') return 'So the stochastic trend is recommended: the evidence that speaks at all speaks for it.';
+    return `${mixed ? 'The evidence is mixed' : 'The evidence does not settle the choice'}, so the policy\u2019s default applies: the stochastic trend is recommended.`;
   },
 };

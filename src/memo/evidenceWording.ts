@@ -13,6 +13,14 @@ export const UNIT_ROOT_ROWS = {
   adfTrend: { name: 'ADF: lasting shocks, around a trend line', holds: 'cannot rule out lasting shocks', rejects: 'rules out lasting shocks' },
 } as const;
 
+/** Why a fit may not be selected, in words (the reasons of src/models/admissibility.ts). */
+const SET_ASIDE_REASONS: Readonly<Record<string, string>> = {
+  'not-converged': 'its optimisation did not converge',
+  'ar-unit-root': 'an autoregressive root lies within 0.01 of the unit circle',
+  'ma-unit-root': 'a moving-average root lies within 0.01 of the unit circle',
+  'cancelling-factors': 'its autoregressive and moving-average factors nearly cancel',
+};
+
 export const evidenceWording = {
   unitRootIntro: (level: string) =>
     `Two kinds of check read the series from opposite starting points. KPSS starts from a steady line and looks for evidence against it; ADF starts from shocks that never fade (a unit root) and looks for evidence against those. Outcomes are judged at the ${level} level.`,
@@ -55,7 +63,20 @@ export const evidenceWording = {
     `Both trends were re-estimated on ${a.windows} growing stretches of history, the first of ${a.minWindow} observations and each then longer by ${a.step}, with the ARMA orders held at their full-history choice.`,
 
   recommendation: (model: TrendModelKind) => `We recommend the ${MODEL_IN_TEXT[model]}.`,
+  /** Who settled the choice, in one short sentence for page 1 and the series section. */
+  decidedBy: { evidence: 'The evidence decided it.', policy: 'The policy decided it: the evidence alone does not settle the choice.', config: 'Fixed in the configuration.' },
+  evidenceHeading: 'What the data showed',
+  shortBacktest: (reach: number, horizon: number) =>
+    `The backtest checked forecasts only up to ${reach} step${reach === 1 ? '' : 's'} ahead, against ${horizon} in this memo: beyond that neither model has a track record here.`,
+  favours: (favours: TrendModelKind | null) => (favours === null ? 'neither way' : favours === 'deterministic' ? 'for the fixed line' : 'for a wandering trend'),
   ruleApplied: (rule: string) => `Rule applied: ${rule}`,
+  /** A fit of lower AICc the search did not select, and why (src/models/admissibility.ts). */
+  setAside: (a: { model: TrendModelKind; order: string; reason: string }) =>
+    a.reason === 'undoes-differencing'
+      ? `The best-fitting stochastic model, ${a.order}, has a moving-average root so close to 1 that it nearly undoes its own differencing: the data do not support a wandering trend, which is evidence for the fixed line. The stochastic trend shown is the best fit that does wander, so that its assumption (each shock moves the trend for good) can be weighed.`
+      : `A fit of lower AICc, ${a.order}, was not selected: ${SET_ASIDE_REASONS[a.reason] ?? a.reason}; its standard errors and intervals would not be reliable.`,
+  stderrMethod: (method: string | null, hasTerms: boolean) =>
+    !hasTerms ? '' : method === 'outer-product' ? 'The AR and MA standard errors come from the outer product of the scores, as the likelihood’s curvature could not be measured at this optimum.' : method === null ? 'The AR and MA standard errors could not be computed at this optimum.' : '',
   fixedByConfig: 'The model was fixed by the analyst in the configuration rather than chosen by the rule.',
   convergence: (converged: boolean) => (converged ? 'converged' : 'did not converge: treat its estimates with caution'),
   fitFacts: (a: { p: number; q: number; nobs: number; loglik: string; aicc: string; sigma2: string; converged: string }) =>

@@ -61,10 +61,12 @@ describe('prefer-stochastic (default)', () => {
     expect(recommendModel(input({ ...EARNS_IT, det: [3, 3, 3, 5, 3] }), settings()).model).toBe('stochastic');
   });
 
-  it('keeps the stochastic trend when the unit-root evidence points to it, and says the evidence decided', () => {
+  it('keeps the stochastic trend when the unit-root evidence points to it, and calls mixed evidence the policy\'s call', () => {
     const result = recommendModel(input({ ...EARNS_IT, verdict: 'stochastic' }), settings());
     expect(result.model).toBe('stochastic');
-    expect(result.decided_by).toBe('evidence');
+    // The backtest speaks for the fixed line, the unit-root checks against it: mixed.
+    expect(result.decided_by).toBe('policy');
+    expect(result.reasons).toContain('The fixed line falls short of the policy on no unit-root evidence for a stochastic trend.');
     expect(result.evidence.find((e) => e.check === 'unit-root')).toEqual({ check: 'unit-root', finding: 'The unit-root checks point to a stochastic trend.', favours: 'stochastic' });
   });
 
@@ -90,7 +92,7 @@ describe('prefer-stochastic (default)', () => {
   });
 
   it('calls a significant result for the stochastic side significant', () => {
-    const result = recommendModel(input({ det: [4, 4, 4], sto: [3, 3, 3], pValue: 0.003, better: 'stochastic' }), settings({}, 3));
+    const result = recommendModel(input({ det: [4, 4, 4], sto: [3, 3, 3], pValue: 0.003, better: 'stochastic', verdict: 'stochastic' }), settings({}, 3));
     expect(result.reasons.join(' ')).toContain('p = 0.003 in favour of the stochastic trend: significant at 5%.');
     expect(result.model).toBe('stochastic');
     expect(result.decided_by).toBe('evidence');

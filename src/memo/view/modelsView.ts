@@ -20,6 +20,8 @@ export interface ModelView {
   equation: string;
   coefficients: CoefficientRow[];
   facts: string;
+  /** Sentences on a fit set aside and on how the standard errors were had; empty when there is nothing to say. */
+  notes: string[];
 }
 
 const REGRESSION_NAMES: Record<string, string> = {
@@ -51,6 +53,10 @@ export function modelView(record: AnalysisRecord, kind: TrendModelKind): ModelVi
     gloss: MODEL_GLOSS[kind],
     equation: model.equation,
     coefficients: [...regression, ...ar, ...ma],
+    notes: [
+      ...(model.set_aside === null ? [] : [evidenceWording.setAside({ model: kind, order: armaOrder(kind, model.set_aside), reason: model.set_aside.reason })]),
+      evidenceWording.stderrMethod(model.stderr_method, model.p + model.q > 0),
+    ].filter((note) => note !== ''),
     facts: evidenceWording.fitFacts({
       p: model.p,
       q: model.q,
@@ -61,6 +67,11 @@ export function modelView(record: AnalysisRecord, kind: TrendModelKind): ModelVi
       converged: evidenceWording.convergence(model.converged),
     }),
   };
+}
+
+/** "ARMA(2, 3) errors" for the deterministic trend, "ARIMA(1, 1, 1)" for the stochastic. */
+function armaOrder(kind: TrendModelKind, order: { p: number; q: number }): string {
+  return kind === 'deterministic' ? `the trend line with ARMA(${order.p}, ${order.q}) errors` : `ARIMA(${order.p}, 1, ${order.q})`;
 }
 
 /** "Estimates are on the natural log scale of the series", or in its original units. */

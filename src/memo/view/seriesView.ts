@@ -28,7 +28,18 @@ export interface SeriesView {
   notes: string;
   span: string;
   scale: string;
-  recommendation: { model: string; gloss: string; rule: string; fixedByConfig: string; justification: string; reasons: string[] } | null;
+  recommendation: {
+    model: string;
+    gloss: string;
+    decidedBy: string;
+    rule: string;
+    fixedByConfig: string;
+    justification: string;
+    evidenceHeading: string;
+    evidence: { finding: string; favours: string }[];
+    /** What the rule concluded from the evidence (the reasons that are not findings). */
+    conclusions: string[];
+  } | null;
   notRun: typeof NOT_RUN;
   backtestUnavailable: string;
   captions: { point: string; interval: string };
@@ -76,10 +87,13 @@ export async function seriesView(entry: MemoSeries, index: number): Promise<Seri
         : {
             model: evidenceWording.recommendation(recommendation.model),
             gloss: MODEL_GLOSS[recommendation.model],
-            rule: noLinks(evidenceWording.ruleApplied(recommendation.rule_text)),
+            decidedBy: evidenceWording.decidedBy[recommendation.decided_by],
+            rule: noLinks(recommendation.rule_text),
             fixedByConfig: recommendation.fixed_by_config ? evidenceWording.fixedByConfig : '',
             justification: noLinks(recommendation.justification ?? ''),
-            reasons: recommendation.reasons.map(noLinks),
+            evidenceHeading: evidenceWording.evidenceHeading,
+            evidence: recommendation.evidence.map((item) => ({ finding: noLinks(item.finding), favours: evidenceWording.favours(item.favours) })),
+            conclusions: recommendation.reasons.filter((reason) => !recommendation.evidence.some((item) => item.finding === reason)).map(noLinks),
           },
     notRun: NOT_RUN,
     backtestUnavailable: record.backtest_unavailable === undefined ? '' : noLinks(evidenceWording.backtestUnavailable(record.backtest_unavailable)),

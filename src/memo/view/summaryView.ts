@@ -3,6 +3,7 @@
 import type { Caveat } from '../caveats/caveat.js';
 import type { AnalysisRecord } from '../../analysis/record.js';
 import type { TrendModelKind } from '../../base/settings.js';
+import { evidenceWording } from '../evidenceWording.js';
 import { LABELS, METHOD_NAME, MODEL_GLOSS, MODEL_NAME, NOT_RUN, TEMPLATE_TEXT } from '../wording.js';
 import { forecastCells, forecastHeads, type ForecastCells } from './forecastTableView.js';
 import { rowsFit, SHEET_WIDTH } from './tableWidth.js';
@@ -14,6 +15,8 @@ export interface SummaryCard {
   recommended: string | null;
   gloss: string;
   noRecommendation: string;
+  /** Who settled the choice, and, when the backtest stopped short of the horizon, how far it reached. */
+  decided: string;
   endPeriod: string;
   atEnd: string;
   /** Heads of the point and interval columns. */
@@ -52,6 +55,10 @@ export function summaryCard(a: { anchor: string; title: string; units?: string; 
     recommended: model === undefined ? null : MODEL_NAME[model],
     gloss: model === undefined ? '' : MODEL_GLOSS[model],
     noRecommendation: NOT_RUN.recommendation,
+    decided: [
+      ...(record.recommendation === undefined ? [] : [evidenceWording.decidedBy[record.recommendation.decided_by]]),
+      ...backtestReach(record),
+    ].join(' '),
     endPeriod,
     atEnd,
     heads,
@@ -59,4 +66,10 @@ export function summaryCard(a: { anchor: string; title: string; units?: string; 
     models,
     caveat: top === undefined ? null : { label: LABELS.severity[top.severity], severity: top.severity, text: top.text },
   };
+}
+
+/** The sentence on page 1 when the backtest did not reach the memo's horizon (none when it did, or did not run). */
+function backtestReach(record: AnalysisRecord): string[] {
+  const reach = record.backtest?.settings.horizon;
+  return reach === undefined || reach >= record.settings.horizon ? [] : [evidenceWording.shortBacktest(reach, record.settings.horizon)];
 }
