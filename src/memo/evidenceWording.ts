@@ -66,6 +66,9 @@ export const evidenceWording = {
   /** Who settled the choice, in one short sentence for page 1 and the series section. */
   decidedBy: { evidence: 'The evidence decided it.', policy: 'The policy decided it: the evidence alone does not settle the choice.', config: 'Fixed in the configuration.' },
   evidenceHeading: 'What the data showed',
+  /** Said wherever the two models' intervals at the end of the horizon are about the same (memo/consistency). */
+  modelsAgree: (ratio: string) =>
+    `Here the two models give nearly the same interval at the end of the horizon (width ratio ${ratio}): for these numbers the choice between them matters little.`,
   shortBacktest: (reach: number, horizon: number) =>
     `The backtest checked forecasts only up to ${reach} step${reach === 1 ? '' : 's'} ahead, against ${horizon} in this memo: beyond that neither model has a track record here.`,
   favours: (favours: TrendModelKind | null) => (favours === null ? 'neither way' : favours === 'deterministic' ? 'for the fixed line' : 'for a wandering trend'),

@@ -1,10 +1,12 @@
 // MemoInput → one self-contained HTML document:
 //   buildMemoView (format numbers, apply caveat rules, render charts to SVG)
-//     → Handlebars (templates/memo.hbs and partials, CSS inlined) → checked for scripts and URLs.
+//     → Handlebars (templates/memo.hbs and partials, CSS inlined) → checked for scripts and URLs,
+//     and every statement checked against the records it speaks for (consistency/).
 // Handlebars' {{ }} escapes every string; only the rendered SVG and the CSS are placed raw.
 import Handlebars from 'handlebars';
 import type { MemoInput } from './memoInput.js';
 import { loadTemplates } from './loadTemplates.js';
+import { memoContradictions } from './consistency/memoContradictions.js';
 import { buildMemoView } from './view/buildMemoView.js';
 
 export interface RenderMemoOptions {
@@ -33,5 +35,7 @@ export async function renderMemoHtml(input: MemoInput, options: RenderMemoOption
   const view = await buildMemoView(input);
   const html = template({ ...view, css: templates.css });
   assertSelfContained(html);
+  const contradictions = memoContradictions(input.series.map((entry) => entry.record), html);
+  if (contradictions.length > 0) throw new Error(`renderMemoHtml: the memo contradicts its records (${contradictions.join('; ')})`);
   return html;
 }

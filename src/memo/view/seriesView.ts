@@ -19,6 +19,7 @@ import { figureView, type FigureView } from './figureView.js';
 import { forecastTableView, type ForecastTable } from './forecastTableView.js';
 import { modelView, scaleNote, type ModelView } from './modelsView.js';
 import { stabilityView, type StabilityView } from './stabilityView.js';
+import { agreement } from './agreement.js';
 import { summaryCard, type SummaryCard } from './summaryView.js';
 
 export interface SeriesView {
@@ -93,7 +94,10 @@ export async function seriesView(entry: MemoSeries, index: number): Promise<Seri
             justification: noLinks(recommendation.justification ?? ''),
             evidenceHeading: evidenceWording.evidenceHeading,
             evidence: recommendation.evidence.map((item) => ({ finding: noLinks(item.finding), favours: evidenceWording.favours(item.favours) })),
-            conclusions: recommendation.reasons.filter((reason) => !recommendation.evidence.some((item) => item.finding === reason)).map(noLinks),
+            conclusions: [
+              ...recommendation.reasons.filter((reason) => !recommendation.evidence.some((item) => item.finding === reason)).map(noLinks),
+              ...agreement(record),
+            ],
           },
     notRun: NOT_RUN,
     backtestUnavailable: record.backtest_unavailable === undefined ? '' : noLinks(evidenceWording.backtestUnavailable(record.backtest_unavailable)),

@@ -6,6 +6,7 @@ import type { TrendModelKind } from '../../base/settings.js';
 import { evidenceWording } from '../evidenceWording.js';
 import { LABELS, METHOD_NAME, MODEL_GLOSS, MODEL_NAME, NOT_RUN, TEMPLATE_TEXT } from '../wording.js';
 import { forecastCells, forecastHeads, type ForecastCells } from './forecastTableView.js';
+import { agreement } from './agreement.js';
 import { rowsFit, SHEET_WIDTH } from './tableWidth.js';
 
 export interface SummaryCard {
@@ -57,6 +58,7 @@ export function summaryCard(a: { anchor: string; title: string; units?: string; 
     noRecommendation: NOT_RUN.recommendation,
     decided: [
       ...(record.recommendation === undefined ? [] : [evidenceWording.decidedBy[record.recommendation.decided_by]]),
+      ...agreement(record),
       ...backtestReach(record),
     ].join(' '),
     endPeriod,
