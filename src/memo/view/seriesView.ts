@@ -34,6 +34,8 @@ export interface SeriesView {
     gloss: string;
     decidedBy: string;
     rule: string;
+    /** How the rule behaved in the simulation study; empty when the config fixed the model. */
+    ruleStudy: string;
     fixedByConfig: string;
     justification: string;
     evidenceHeading: string;
@@ -90,6 +92,7 @@ export async function seriesView(entry: MemoSeries, index: number): Promise<Seri
             gloss: MODEL_GLOSS[recommendation.model],
             decidedBy: evidenceWording.decidedBy[recommendation.decided_by],
             rule: noLinks(recommendation.rule_text),
+            ruleStudy: evidenceWording.ruleStudy(recommendation.rule),
             fixedByConfig: recommendation.fixed_by_config ? evidenceWording.fixedByConfig : '',
             justification: noLinks(recommendation.justification ?? ''),
             evidenceHeading: evidenceWording.evidenceHeading,
