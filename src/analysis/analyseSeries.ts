@@ -46,8 +46,8 @@ export function requiredObservations(maxP: number, maxQ: number): number {
 export async function analyseSeries(series: Series, settings: AnalysisSettings, identity: SeriesIdentity, run: AnalysisRun): Promise<AnalysisRecord> {
   const w = series.values.map((y) => transformValue(settings.transform, y));
   const fitted = {
-    deterministic: fitTrendModel('deterministic', w, settings.max_p, settings.max_q),
-    stochastic: fitTrendModel('stochastic', w, settings.max_p, settings.max_q),
+    deterministic: fitTrendModel('deterministic', w, settings.max_p, settings.max_q, { estimation: settings.estimation }),
+    stochastic: fitTrendModel('stochastic', w, settings.max_p, settings.max_q, { estimation: settings.estimation }),
   };
   const evidence = collectEvidence(
     w,
@@ -121,8 +121,11 @@ function modelRecord(kind: TrendModelKind, model: TrendModelFit): ModelRecord {
     p: fit.p,
     q: fit.q,
     nobs: fit.nobs,
-    loglik: fit.loglik,
+    loglik: model.loglik,
     aicc: jsonNumber(model.aicc),
+    estimation: fit.estimation,
+    restricted_loglik: fit.estimation === 'reml' ? jsonNumber(fit.loglik) : null,
+    restricted_fallback: model.restrictedFallback ?? null,
     sigma2: fit.sigma2,
     converged: fit.converged,
     // The design names the regression coefficients (intercept and slope, or drift), so the shape follows the kind.

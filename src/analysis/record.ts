@@ -11,6 +11,8 @@ import type { BacktestRecord } from '../backtest/backtestRecord.js';
 import type { EvidenceRecord } from '../evidence/collectEvidence.js';
 import type { InadmissibleReason } from '../models/admissibility.js';
 import type { StandardErrorMethod } from '../models/standardErrors.js';
+import type { Estimation } from '../base/settings.js';
+import type { RestrictedFallback } from '../models/trendModels.js';
 
 export type { ArmaOrder, BacktestForecast, BacktestRecord, ComparisonRow, ForecastMethod, HorizonScores, OriginRecord } from '../backtest/backtestRecord.js';
 /** The comparison rows' loss name at an interval level, for readers that look rows up by level. */
@@ -65,8 +67,16 @@ export interface ModelRecord<C extends DeterministicCoefficients | StochasticCoe
   p: number;
   q: number;
   nobs: number;
+  /** The full log-likelihood and AICc of the chosen order at its exact-ML optimum: the figures the order was chosen by. */
   loglik: number;
   aicc: JsonNumber;
+  /** How the coefficients, σ², standard errors and forecasts were estimated: REML ('reml') or exact ML ('ml'). */
+  estimation: Estimation;
+  /** The maximised restricted log-likelihood; null for exact ML. */
+  restricted_loglik: JsonNumber;
+  /** Why REML was asked for and not used (its fit did not converge or is not admissible); null otherwise. */
+  restricted_fallback: RestrictedFallback | null;
+  /** SSR/m for exact ML, SSR/(m − k) for REML (k regression coefficients). */
   sigma2: number;
   converged: boolean;
   coefficients: C;

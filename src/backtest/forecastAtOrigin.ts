@@ -3,7 +3,7 @@
 // inline or on a worker thread (the pool calls this module's `forecastAtOrigin` export),
 // and the results do not depend on which thread ran it.
 import { createProfileLikelihood } from '../models/profileLikelihood.js';
-import type { RefitPolicy, TrendModelKind } from '../base/settings.js';
+import type { Estimation, RefitPolicy, TrendModelKind } from '../base/settings.js';
 import { fitTrendModel, fitTrendModelAtOrder, forecastTrendModel, trendDesign } from '../models/trendModels.js';
 import { forecastRegressionArma, type ForecastMoments } from '../statespace/forecast.js';
 import type { ArmaOrder } from './backtestRecord.js';
@@ -26,6 +26,8 @@ export interface OriginTask {
   refit: RefitPolicy;
   maxP: number;
   maxQ: number;
+  /** How the coefficients are estimated at each refit. */
+  estimation: Estimation;
   /** The order under `reestimate` and `fixed`. */
   order?: ArmaOrder;
   /** The parameters under `fixed`. */
@@ -47,8 +49,8 @@ export function forecastAtOrigin(task: OriginTask): OriginForecast {
   if (task.refit === 'fixed') return forecastWithFixedParameters(task);
   const model =
     task.refit === 'reselect'
-      ? fitTrendModel(task.kind, task.w, task.maxP, task.maxQ)
-      : fitTrendModelAtOrder(task.kind, task.w, requireOrder(task).p, requireOrder(task).q);
+      ? fitTrendModel(task.kind, task.w, task.maxP, task.maxQ, { estimation: task.estimation })
+      : fitTrendModelAtOrder(task.kind, task.w, requireOrder(task).p, requireOrder(task).q, { estimation: task.estimation });
   return originForecast(model.fit, forecastTrendModel(model, task.horizon));
 }
 

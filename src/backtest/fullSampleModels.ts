@@ -1,7 +1,7 @@
 // What the `reestimate` and `fixed` policies take from the full sample: the orders (searched
 // by AICc unless given) and, under `fixed`, every parameter. Using them at past origins is a
 // look-ahead, which the record notes.
-import { TREND_MODELS, type RefitPolicy, type TrendModelKind } from '../base/settings.js';
+import { TREND_MODELS, type Estimation, type RefitPolicy, type TrendModelKind } from '../base/settings.js';
 import { fitTrendModel, fitTrendModelAtOrder } from '../models/trendModels.js';
 import type { ArmaOrder } from './backtestRecord.js';
 import type { FixedParameters } from './forecastAtOrigin.js';
@@ -17,6 +17,7 @@ export function fullSampleModels(
   refit: Exclude<RefitPolicy, 'reselect'>,
   maxP: number,
   maxQ: number,
+  estimation: Estimation,
   orders?: Record<TrendModelKind, ArmaOrder>,
 ): FullSampleModels {
   if (refit === 'reestimate' && orders !== undefined) return { orders };
@@ -24,7 +25,7 @@ export function fullSampleModels(
   const parameters = {} as Record<TrendModelKind, FixedParameters>;
   for (const kind of TREND_MODELS) {
     const given = orders?.[kind];
-    const { fit } = given === undefined ? fitTrendModel(kind, w, maxP, maxQ) : fitTrendModelAtOrder(kind, w, given.p, given.q);
+    const { fit } = given === undefined ? fitTrendModel(kind, w, maxP, maxQ, { estimation }) : fitTrendModelAtOrder(kind, w, given.p, given.q, { estimation });
     chosen[kind] = { p: fit.p, q: fit.q };
     parameters[kind] = { ar: Array.from(fit.ar), ma: Array.from(fit.ma), beta: Array.from(fit.beta), covBeta: Array.from(fit.covBeta), sigma2: fit.sigma2 };
   }

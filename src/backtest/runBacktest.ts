@@ -40,7 +40,7 @@ export async function runBacktest(input: BacktestInput, settings: AnalysisSettin
   const n = data.y.length;
   if (n - horizon < minTrainingLength) throw new InputError(backtestMessages.seriesTooShort(n, horizon, minTrainingLength));
 
-  const full = refit === 'reselect' ? undefined : fullSampleModels(data.w, refit, maxP, maxQ, run.orders);
+  const full = refit === 'reselect' ? undefined : fullSampleModels(data.w, refit, maxP, maxQ, settings.estimation, run.orders);
   // The largest order each model is fitted at: the fixed one, or the top of the search grid.
   const largestOrder = (kind: TrendModelKind): ArmaOrder => full?.orders[kind] ?? { p: maxP, q: maxQ };
   const needed = Math.max(...TREND_MODELS.map((kind) => minimumObservations(kind, largestOrder(kind).p, largestOrder(kind).q)));
@@ -60,6 +60,7 @@ export async function runBacktest(input: BacktestInput, settings: AnalysisSettin
       refit,
       maxP,
       maxQ,
+      estimation: settings.estimation,
       order: full?.orders[kind],
       parameters: full?.parameters === undefined ? undefined : parametersForWindow(kind, full.parameters[kind], start),
     })),

@@ -20,6 +20,9 @@ export const RECOMMENDATION_RULES = ['prefer-stochastic', 'lowest-interval-score
 export type RecommendationRule = (typeof RECOMMENDATION_RULES)[number];
 
 export const POINT_FORECASTS = ['median', 'mean'] as const;
+/** How a chosen order's coefficients are estimated: restricted maximum likelihood (REML) or exact maximum likelihood. */
+export const ESTIMATION_METHODS = ['reml', 'ml'] as const;
+export type Estimation = (typeof ESTIMATION_METHODS)[number];
 /** The back-transformed median, or the bias-adjusted mean. */
 export type PointForecast = (typeof POINT_FORECASTS)[number];
 
@@ -60,6 +63,8 @@ export interface AnalysisSettings {
   /** Whether the intervals include the uncertainty of the estimated trend coefficients. */
   readonly coefficient_uncertainty: boolean;
   readonly point: PointForecast;
+  /** How the chosen order's coefficients are estimated; the order is chosen by AICc on the exact likelihood either way. */
+  readonly estimation: Estimation;
   readonly max_p: number;
   readonly max_q: number;
   /** Significance level of the unit-root and residual tests. */

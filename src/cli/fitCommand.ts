@@ -29,6 +29,9 @@ Options:
                             (default: ${BUILT_IN.levels.join(',')})
   --no-coef-uncertainty     intervals from the ARMA process alone, without coefficient uncertainty
   --point median|mean       back-transformed median (default) or bias-adjusted mean
+  --estimation reml|ml      the chosen order's coefficients by restricted maximum likelihood
+                            (default) or exact maximum likelihood; orders are chosen by AICc
+                            on the exact likelihood either way
   --backtest                re-run the whole method at past origins and score both models,
                             then apply the recommendation rule
   --origins K               backtest origins, 1 to ${BACKTEST_FIELDS.origins.max} (default: ${BUILT_IN.backtest.origins}, fewer when the series is short)

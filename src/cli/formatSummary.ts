@@ -39,7 +39,10 @@ function modelTable(det: AnalysisRecord['models']['deterministic'], sto: Analysi
   for (let i = 0; i < arOrder; i++) rows.push([`ar${i + 1}`, lagged(det, 'ar', i), lagged(sto, 'ar', i)]);
   const maOrder = Math.max(det.q, sto.q);
   for (let j = 0; j < maOrder; j++) rows.push([`ma${j + 1}`, lagged(det, 'ma', j), lagged(sto, 'ma', j)]);
+  const method = (model: typeof det | typeof sto): string => (model.estimation === 'reml' ? 'REML' : 'exact ML') + (model.restricted_fallback === null ? '' : ' (REML not usable)');
+  rows.push(['estimated by', method(det), method(sto)]);
   rows.push(['sigma2', num(det.sigma2), num(sto.sigma2)]);
+  // The exact log-likelihood and AICc the order was chosen by.
   rows.push(['loglik', num(det.loglik, 7), num(sto.loglik, 7)]);
   rows.push(['AICc', num(det.aicc, 7), num(sto.aicc, 7)]);
   rows.push(['observations', String(det.nobs), String(sto.nobs)]);

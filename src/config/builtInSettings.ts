@@ -11,6 +11,7 @@ export const BUILT_IN_SETTINGS = {
   levels: [80, 95],
   coefficient_uncertainty: true,
   point: 'median',
+  estimation: 'reml',
   max_p: 3,
   max_q: 3,
   significance: 0.05,

@@ -66,6 +66,7 @@ export function resolveSettings(written: WrittenSettings, series: SeriesFacts, p
     levels,
     coefficient_uncertainty: written.coefficient_uncertainty ?? BUILT_IN.coefficient_uncertainty,
     point: written.point ?? BUILT_IN.point,
+    estimation: written.estimation ?? BUILT_IN.estimation,
     max_p: reading.max_p,
     max_q: reading.max_q,
     significance: written.significance ?? BUILT_IN.significance,

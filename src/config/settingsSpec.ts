@@ -1,5 +1,5 @@
 // The settings a config may give once under `defaults` and override per series.
-import { MIN_BACKTEST_ORIGINS, MISSING_POLICIES, POINT_FORECASTS, RECOMMENDATION_RULES, REFIT_POLICIES, TREND_MODELS, WINDOW_KINDS } from '../base/settings.js';
+import { ESTIMATION_METHODS, MIN_BACKTEST_ORIGINS, MISSING_POLICIES, POINT_FORECASTS, RECOMMENDATION_RULES, REFIT_POLICIES, TREND_MODELS, WINDOW_KINDS } from '../base/settings.js';
 import { BUILT_IN_SETTINGS as BUILT_IN, HORIZON_BY_FREQUENCY, MIN_TRAIN_FLOOR, MIN_TRAIN_PER_PARAMETER } from './builtInSettings.js';
 import { choice, decimal, flag, list, object, shapes, text, whole } from './keySpec.js';
 
@@ -85,6 +85,11 @@ export const SETTINGS_FIELDS = {
     default: BUILT_IN.coefficient_uncertainty,
   }),
   point: choice('Point forecast: the back-transformed median, or the bias-adjusted mean.', POINT_FORECASTS, { default: BUILT_IN.point }),
+  estimation: choice(
+    "How the chosen order's coefficients are estimated: restricted maximum likelihood (reml), less biased when a trend is estimated from a short series, or exact maximum likelihood (ml). The order is chosen by AICc on the exact likelihood either way.",
+    ESTIMATION_METHODS,
+    { default: BUILT_IN.estimation },
+  ),
   max_p: whole('Largest autoregressive order searched.', 0, MAX_ORDER, { default: BUILT_IN.max_p }),
   max_q: whole('Largest moving-average order searched.', 0, MAX_ORDER, { default: BUILT_IN.max_q }),
   significance: significance('Significance level of the unit-root and residual tests.', BUILT_IN.significance),

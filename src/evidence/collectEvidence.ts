@@ -1,5 +1,6 @@
 // The `evidence` part of an AnalysisRecord: unit-root tests on the model-scale levels, their
 // combined reading, residual checks of both fitted models, and the stability of the trend.
+import type { Estimation } from '../base/settings.js';
 import { adfTest } from './adfTest.js';
 import { kpssTest } from './kpssTest.js';
 import { residualChecks, type ResidualChecks } from './residualChecks.js';
@@ -34,6 +35,8 @@ export interface FittedResiduals {
   residuals: ArrayLike<number>;
   p: number;
   q: number;
+  /** How the fit was estimated; the stability windows are estimated the same way. */
+  estimation?: Estimation;
 }
 
 export function collectEvidence(
@@ -83,8 +86,8 @@ export function collectEvidence(
     },
     stability: missing > 0 ? skipStability(unavailable) : attempt('stability', () => {
       const stability = trendStability(w, {
-        deterministic: { p: fits.deterministic.p, q: fits.deterministic.q },
-        stochastic: { p: fits.stochastic.p, q: fits.stochastic.q },
+        deterministic: { p: fits.deterministic.p, q: fits.deterministic.q, estimation: fits.deterministic.estimation },
+        stochastic: { p: fits.stochastic.p, q: fits.stochastic.q, estimation: fits.stochastic.estimation },
       });
       const periodOf = options.periodOf;
       if (periodOf === undefined) return stability;

@@ -57,7 +57,7 @@ export function expandingEstimates(
       throw new Error(`expandingEstimates needs window ends from 1 to ${w.length}, not ${end}`);
     }
     const design = trendDesign(kind, w.slice(0, end));
-    const fit = end === w.length ? fullFit : fitRegressionArma(design.response, design.regressors, fullFit.p, fullFit.q);
+    const fit = end === w.length ? fullFit : fitRegressionArma(design.response, design.regressors, fullFit.p, fullFit.q, { estimation: fullFit.estimation });
     const index = design.coefficientNames.indexOf(name);
     const k = design.coefficientNames.length;
     return { end, estimate: fit.beta[index], se: Math.sqrt(fit.covBeta[index * k + index]) };

@@ -7,11 +7,13 @@ import { expandingEstimates, expandingWindowSchedule } from './expandingWindows.
 import { finiteSeries } from './finiteSeries.js';
 import { trendBreakTest } from './trendBreakTest.js';
 import type { BreakTestResult, StabilityRecord } from './types.js';
-import { type TrendModelKind } from '../base/settings.js';
+import { type Estimation, type TrendModelKind } from '../base/settings.js';
 
 export interface ArmaOrder {
   p: number;
   q: number;
+  /** Exact ML when absent. */
+  estimation?: Estimation;
 }
 
 /** The ARMA orders of the errors, chosen on the full sample, for each model. */
@@ -20,7 +22,10 @@ export interface StabilityOrders {
   stochastic: ArmaOrder;
 }
 
-/** Expanding-window slope and drift, and a break test for each model, at fixed ARMA orders. */
+/**
+ * Expanding-window slope and drift, and a break test for each model, at fixed ARMA orders,
+ * estimated as the models were (exact ML unless an order says REML).
+ */
 export function trendStability(w: ArrayLike<number>, orders: StabilityOrders): StabilityRecord {
   const series = finiteSeries(w, 'trendStability');
   const n = series.length;
@@ -37,7 +42,7 @@ export function trendStability(w: ArrayLike<number>, orders: StabilityOrders): S
   const schedule = expandingWindowSchedule(n, fewest);
   const fitted = (kind: TrendModelKind): { fit: RegressionArmaFit; test: BreakTestResult } => {
     const design = trendDesign(kind, series);
-    const fit = fitRegressionArma(design.response, design.regressors, orders[kind].p, orders[kind].q);
+    const fit = fitRegressionArma(design.response, design.regressors, orders[kind].p, orders[kind].q, { estimation: orders[kind].estimation });
     return { fit, test: trendBreakTest(kind, design, fit) };
   };
   const deterministic = fitted('deterministic');

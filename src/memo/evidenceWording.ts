@@ -2,7 +2,7 @@
 // table, the backtest, the comparison tests, the break tests and the recommendation. The
 // numbers arrive formatted; these functions only choose the words.
 import type { Frequency } from '../base/period.js';
-import type { TrendModelKind } from '../base/settings.js';
+import type { Estimation, TrendModelKind } from '../base/settings.js';
 import { countPeriods, levelPercent, MODEL_IN_TEXT, MODEL_NAME } from './wording.js';
 import { type RefitPolicy, type WindowKind } from '../base/settings.js';
 
@@ -95,8 +95,14 @@ export const evidenceWording = {
     !hasTerms ? '' : method === 'outer-product' ? 'The AR and MA standard errors come from the outer product of the scores, as the likelihood’s curvature could not be measured at this optimum.' : method === null ? 'The AR and MA standard errors could not be computed at this optimum.' : '',
   fixedByConfig: 'The model was fixed by the analyst in the configuration rather than chosen by the rule.',
   convergence: (converged: boolean) => (converged ? 'converged' : 'did not converge: treat its estimates with caution'),
-  fitFacts: (a: { p: number; q: number; nobs: number; loglik: string; aicc: string; sigma2: string; converged: string }) =>
-    `ARMA(${a.p}, ${a.q}) errors; ${a.nobs} observations in the likelihood; log-likelihood ${a.loglik}; AICc ${a.aicc}; innovation variance ${a.sigma2}; the fit ${a.converged}.`,
+  fitFacts: (a: { p: number; q: number; nobs: number; loglik: string; aicc: string; sigma2: string; converged: string; estimation: Estimation }) =>
+    `ARMA(${a.p}, ${a.q}) errors, the order chosen by AICc on the exact likelihood (${a.nobs} observations; log-likelihood ${a.loglik}; AICc ${a.aicc}). ` +
+    (a.estimation === 'reml'
+      ? `Coefficients, innovation variance (${a.sigma2}) and standard errors by restricted maximum likelihood (REML), which removes most of the downward bias that exact maximum likelihood gives autoregressive coefficients, and the standard errors with them, when a trend is estimated from a short series. The fit ${a.converged}.`
+      : `Coefficients, innovation variance (${a.sigma2}) and standard errors by exact maximum likelihood. The fit ${a.converged}.`),
+  /** REML was asked for, but its fit was not used. */
+  restrictedFallback: (reason: string) =>
+    `The restricted-likelihood (REML) estimates ${reason === 'not-converged' ? 'did not converge' : `were not admissible (${reason === 'undoes-differencing' ? 'a moving-average root so close to 1 that it undoes the differencing' : (SET_ASIDE_REASONS[reason] ?? reason)})`}, so the exact maximum-likelihood estimates are shown instead.`,
   scaleNote: (scale: string | null) => (scale === null ? 'Estimates are in the original units of the series.' : `Estimates are on the ${scale} scale of the series.`),
 } as const;
 

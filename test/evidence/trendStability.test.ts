@@ -40,8 +40,8 @@ describe('trendStability on a seeded trend-stationary AR(1) series, n = 120', ()
   });
 
   it('the full-sample window is the full-sample fit at the same orders', () => {
-    const deterministic = fitTrendModelAtOrder('deterministic', w, 1, 0);
-    const stochastic = fitTrendModelAtOrder('stochastic', w, 1, 0);
+    const deterministic = fitTrendModelAtOrder('deterministic', w, 1, 0, { estimation: 'ml' });
+    const stochastic = fitTrendModelAtOrder('stochastic', w, 1, 0, { estimation: 'ml' });
     const lastSlope = record.windows.deterministic.at(-1);
     const lastDrift = record.windows.stochastic.at(-1);
     expectRelative(lastSlope?.slope ?? Number.NaN, deterministic.coefficients.slope, 1e-12);
@@ -52,7 +52,7 @@ describe('trendStability on a seeded trend-stationary AR(1) series, n = 120', ()
 
   it('each window agrees with a fit at the same orders on the first `end` observations', () => {
     const window = record.windows.deterministic[5];
-    const fit = fitTrendModelAtOrder('deterministic', w.slice(0, window.end), 1, 0);
+    const fit = fitTrendModelAtOrder('deterministic', w.slice(0, window.end), 1, 0, { estimation: 'ml' });
     expectRelative(window.slope, fit.coefficients.slope, 1e-6);
     expectRelative(window.se, fit.stderr.regression.slope, 1e-4);
   });

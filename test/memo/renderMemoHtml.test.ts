@@ -49,9 +49,9 @@ describe('the full memo', () => {
     const summary = html.slice(html.indexOf('<section class="summary"'), html.indexOf('<section class="series"'));
     expect(summary.match(/<article class="summary-card">/g)).toHaveLength(3);
     const lake = input.series[0].record;
-    // 577.83 and 575.36 – 580.31: the Lake Huron deterministic forecast for 1982 to two decimals.
-    expect(lake.forecasts.deterministic[9].point.toFixed(2)).toBe('577.83');
-    expect(summary).toContain('<td class="num">577.83</td><td class="num">576.21\u2009\u2013\u2009579.45</td><td class="num">575.36\u2009\u2013\u2009580.31</td>');
+    // 577.89 and 575.23 – 580.56: the Lake Huron deterministic forecast for 1982 (REML estimates) to two decimals.
+    expect(lake.forecasts.deterministic[9].point.toFixed(2)).toBe('577.89');
+    expect(summary).toContain('<td class="num">577.89</td><td class="num">576.15\u2009\u2013\u2009579.64</td><td class="num">575.23\u2009\u2013\u2009580.56</td>');
     expect(summary).toContain('<span class="tag">Recommended</span> <strong>Deterministic trend</strong>');
     expect(summary.match(/class="summary-caveat severity-/g)).toHaveLength(3);
     expect(summary).toContain('A forecast is an estimate, not a guarantee.');
@@ -87,8 +87,9 @@ describe('the full memo', () => {
     const equation = Handlebars.Utils.escapeExpression(input.series[0].record.models.stochastic.equation);
     expect(equation).toContain('(1 - B) w_t &#x3D; ');
     expect(section).toContain(equation);
-    // Lake Huron slope −0.02111 (s.e. 0.008838), analyseSeries on lake-huron.csv.
-    expect(section).toContain('<th scope="row">Slope per period</th><td class="num">\u22120.02111</td><td class="num">0.008838</td>');
+    // Lake Huron slope −0.02061 (s.e. 0.009997), analyseSeries on lake-huron.csv with REML
+    // (exact ML: −0.02111, s.e. 0.008838).
+    expect(section).toContain('<th scope="row">Slope per period</th><td class="num">\u22120.02061</td><td class="num">0.009997</td>');
   });
 
   it('has the assumptions register, the sign-off block with blank lines, and the appendix', () => {

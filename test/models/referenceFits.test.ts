@@ -96,7 +96,7 @@ describe.each(DATASETS)('reference fits: %s', (dataset) => {
     it('matches the reference coefficients and forecasts at the reference order', () => {
       const selected = ref.selected[refName];
       expect(selected.forecast_valid).toBe(1);
-      const model = fitTrendModelAtOrder(kind, w, selected.p, selected.q);
+      const model = fitTrendModelAtOrder(kind, w, selected.p, selected.q, { estimation: 'ml' });
       const fits = (JSON.parse(readFileSync(`${FIXTURES}${dataset}.json`, 'utf8')) as { fits: Record<string, ReferenceParams[]> }).fits[refName];
       const row = fits.find((r) => r.p === selected.p && r.q === selected.q);
       if (row === undefined) throw new Error('reference row missing');

@@ -61,7 +61,7 @@ function referenceFor(file: ReferenceFile, id: string): { mean: number[]; se: nu
 
 /** Our forecast at the given parameters: the window filtered at fixed ARMA coefficients, as the backtest's fixed policy does. */
 function forecastAt(kind: TrendModelKind, w: Float64Array, p: number, q: number, parameters: FixedParameters, horizon: number): ReturnType<typeof forecastAtOrigin> {
-  return forecastAtOrigin({ kind, w, horizon, refit: 'fixed', maxP: p, maxQ: q, order: { p, q }, parameters });
+  return forecastAtOrigin({ kind, w, horizon, refit: 'fixed', maxP: p, maxQ: q, estimation: 'ml', order: { p, q }, parameters });
 }
 
 function forecastAtCase(c: ForecastCase): ReturnType<typeof forecastAtOrigin> {

@@ -55,6 +55,7 @@ export function modelView(record: AnalysisRecord, kind: TrendModelKind): ModelVi
     coefficients: [...regression, ...ar, ...ma],
     notes: [
       ...(model.set_aside === null ? [] : [evidenceWording.setAside({ model: kind, order: armaOrder(kind, model.set_aside), reason: model.set_aside.reason })]),
+      model.restricted_fallback === null ? '' : evidenceWording.restrictedFallback(model.restricted_fallback),
       evidenceWording.stderrMethod(model.stderr_method, model.p + model.q > 0),
     ].filter((note) => note !== ''),
     facts: evidenceWording.fitFacts({
@@ -65,6 +66,7 @@ export function modelView(record: AnalysisRecord, kind: TrendModelKind): ModelVi
       aicc: formatSignificant(model.aicc, 6),
       sigma2: formatSignificant(model.sigma2, 4),
       converged: evidenceWording.convergence(model.converged),
+      estimation: model.estimation,
     }),
   };
 }
