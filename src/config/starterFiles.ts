@@ -36,6 +36,7 @@ memo:
 # built-in default, and the memo's assumptions register says which is which.
 #   horizon (10 annual, 12 quarterly, 24 monthly), transform (none | log | {box_cox: 0.5}),
 #   levels ([80, 95]), coefficient_uncertainty (true), point (median | mean),
+#   estimation (reml | ml: how the chosen order's coefficients are estimated),
 #   max_p and max_q (3), significance (0.05), missing (error | allow),
 #   backtest: {origins (20), horizon (the forecast horizon where the series allows),
 #              refit (reselect | reestimate | fixed),
