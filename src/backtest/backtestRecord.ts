@@ -1,14 +1,21 @@
 // The backtest block of the AnalysisRecord: rolling-origin forecasts of both trend models and
-// the no-change yardstick, their scores per horizon and the comparison tests. Plain JSON;
-// numbers that do not exist are null. Keys are a contract: add freely, rename none.
+// the no-change yardstick (and, for seasonal data, the seasonal naive one), their scores per
+// horizon and the comparison tests. Plain JSON; numbers that do not exist are null. Keys are
+// a contract: add freely, rename none.
 import type { PointForecast, RefitPolicy, Transform, TrendModelKind, WindowKind } from '../base/settings.js';
 import type { IntervalsByLevel } from '../base/transform.js';
 
 export type BacktestNumber = number | null;
 
-/** The two trend models and the no-change forecast. */
+/** The two trend models and the no-change forecast: scored in every backtest. */
 export type ForecastMethod = TrendModelKind | 'naive';
 export const FORECAST_METHODS: readonly ForecastMethod[] = ['deterministic', 'stochastic', 'naive'];
+
+/** The naive yardsticks: no change, and for a seasonal period s > 1 the seasonal naive forecast (the same season's last value). */
+export type YardstickMethod = 'naive' | 'seasonal_naive';
+
+/** Every method a backtest may score: the seasonal naive one only when the period is above 1. */
+export type BacktestMethod = ForecastMethod | 'seasonal_naive';
 
 /** The squared error of the point forecast, or the interval score at a level, e.g. `interval_score_95`. */
 export type ComparisonLoss = 'squared_error' | `interval_score_${number}`;
@@ -45,6 +52,14 @@ export interface BacktestSettings {
   /** Orders from the full sample under `reestimate` and `fixed`; null under `reselect`. */
   orders: Record<TrendModelKind, ArmaOrder> | null;
   significance: number;
+  /** Seasonal period s the backtest ran at: 1 not seasonal, 4 quarterly, 12 monthly. */
+  period: number;
+  /** The yardstick the models are measured against: `seasonal_naive` when the period is above 1, else `naive`. */
+  benchmark: YardstickMethod;
+  /** Whose in-sample mean absolute error scales MASE: the one-step no-change forecast (`naive`) or, when the period is above 1, the seasonal naive forecast. */
+  mase_scaling: YardstickMethod;
+  /** How many of the `period` seasons the scored origins end in (all of them unless the notes say otherwise). */
+  seasons_covered: number;
 }
 
 export interface OriginModel {
@@ -62,7 +77,7 @@ export interface OriginRecord {
   period: string | null;
   /** Observations in the training window (smaller than `origin` for a sliding window). */
   training_length: number;
-  /** In-sample mean absolute one-step no-change error of the window: the MASE scale. */
+  /** The MASE scale: the window's in-sample mean absolute error of the yardstick named by `settings.mase_scaling` (one-step no change, or lag-s seasonal naive). */
   mase_scale: BacktestNumber;
   models: Record<TrendModelKind, OriginModel>;
 }
@@ -100,7 +115,7 @@ export interface ComparisonRow {
 export interface BacktestForecast {
   origin: number;
   origin_period: string | null;
-  model: ForecastMethod;
+  model: BacktestMethod;
   h: number;
   /** Period label of the forecast target; null for a bare array of values. */
   period: string | null;
@@ -115,7 +130,8 @@ export interface BacktestRecord {
   settings: BacktestSettings;
   notes: string[];
   origins: OriginRecord[];
-  per_horizon: Record<ForecastMethod, HorizonScores[]>;
+  /** `seasonal_naive` is present when the period is above 1. */
+  per_horizon: Record<ForecastMethod, HorizonScores[]> & { seasonal_naive?: HorizonScores[] };
   comparison: ComparisonRow[];
   forecasts: BacktestForecast[];
 }

@@ -24,6 +24,17 @@ export const backtestNotes = {
     return `${count} of the ${fits} origin fits stopped before the optimiser converged; their forecasts are scored as they are.`;
   },
   mapeUnavailable: 'MAPE is not given where an actual value is zero or negative.',
+  originsRaised(requested: number, planned: number, period: number): string {
+    const reach = planned >= period ? `one ending in each of the ${period} seasons` : `as many of the ${period} seasons as the series allows`;
+    return `${requested} origin${requested === 1 ? ' was' : 's were'} asked for; ${planned} are used so that the origins cover the seasonal cycle (${reach}).`;
+  },
+  seasonsMissed(covered: number, period: number): string {
+    const missed = period - covered;
+    return (
+      `The origins end in only ${covered} of the ${period} seasons, so ${missed === 1 ? 'one season is' : `${missed} seasons are`} never forecast from and the scores speak for the others only. ` +
+      `Every season needs ${period} consecutive origins whose last value is observed: a longer series, a shorter backtest.horizon or a lower backtest.min_train gives them.`
+    );
+  },
   missingOrigins(count: number): string {
     return `${count} origin${count === 1 ? ' was' : 's were'} left out because the last value before ${count === 1 ? 'it is' : 'them is'} missing; missing actual values are not scored.`;
   },
@@ -31,10 +42,15 @@ export const backtestNotes = {
 
 // Problems with what a caller handed the backtest. Settings were checked when they were
 // resolved; these name the settings as a config writes them (`backtest.min_train`) and the
-// library's own arguments (`orders`, `threads`, `values`) as a caller writes those.
+// library's own arguments (`orders`, `threads`, `period`, `values`) as a caller writes those.
 export const backtestMessages = {
   badOrder(name: string, value: number): InputProblem {
     return problem('backtest.bad-value', `${value} is not a whole number of at least 0`, 'give each order a whole number from 0 up', { field: `orders.${name}` });
+  },
+  badPeriod(value: number): InputProblem {
+    return problem('backtest.bad-value', `${value} is not a whole number of at least 1`, 'give period a whole number from 1 up: 1 for a series without seasons, 4 for quarterly and 12 for monthly data', {
+      field: 'period',
+    });
   },
   badThreads(value: number): InputProblem {
     return problem('backtest.bad-value', `${value} is not a whole number of at least 1`, 'give threads a whole number from 1 up', { field: 'threads' });
@@ -52,6 +68,14 @@ export const backtestMessages = {
       'backtest.training-too-short',
       `a shortest training window of ${value} observations leaves too few for the largest model`,
       `give at least ${needed}, or lower max_p and max_q`,
+      { field: 'backtest.min_train' },
+    );
+  },
+  trainingShorterThanCycle(value: number, period: number): InputProblem {
+    return problem(
+      'backtest.training-too-short',
+      `a shortest training window of ${value} observations holds no seasonal change: the seasonal naive yardstick and the MASE scale at period ${period} need at least ${period + 1}`,
+      `give at least ${period + 1}`,
       { field: 'backtest.min_train' },
     );
   },

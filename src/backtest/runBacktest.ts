@@ -1,7 +1,9 @@
 // Rolling-origin backtest of the whole method: at every origin each trend model is refitted
 // on the data up to that origin alone (order search included under `reselect`), forecast
-// B steps, and scored against what happened, beside the no-change yardstick. Everything it
-// does is set by the analysis settings; how many threads run it is the caller's choice.
+// B steps, and scored against what happened, beside the no-change yardstick and, for a
+// seasonal period s > 1, the seasonal naive one, which is then also the benchmark and whose
+// in-sample error scales MASE. Everything it does is set by the analysis settings and the
+// series' seasonal period; how many threads run it is the caller's choice.
 //
 //   values ─readBacktestInput─▶ y, w ─planOrigins─▶ origins ─runOriginTasks (threads)─▶
 //   model-scale forecasts ─backTransformForecast─▶ forecasts ─scoreHorizon / compareModels─▶ record
@@ -9,13 +11,13 @@ import { availableParallelism } from 'node:os';
 import { InputError, type InputProblem } from '../base/problem.js';
 import { TREND_MODELS, type AnalysisSettings, type TrendModelKind } from '../base/settings.js';
 import { minimumObservations } from '../models/trendModels.js';
-import { FORECAST_METHODS, type ArmaOrder, type BacktestRecord } from './backtestRecord.js';
+import type { ArmaOrder, BacktestRecord } from './backtestRecord.js';
 import { collectForecasts } from './collectForecasts.js';
 import { compareModels } from './compareModels.js';
 import type { OriginTask } from './forecastAtOrigin.js';
 import { fullSampleModels, parametersForWindow } from './fullSampleModels.js';
 import { backtestMessages, backtestNotes } from './messages.js';
-import { planOrigins } from './planOrigins.js';
+import { originSeasons, planOrigins } from './planOrigins.js';
 import { readBacktestInput, type BacktestInput } from './readBacktestInput.js';
 import { runOriginTasks, type OriginPool } from './runOriginTasks.js';
 import { scoreHorizon } from './scoreHorizon.js';
@@ -30,22 +32,31 @@ export interface BacktestRun {
   threads?: number;
   /** An open pool to run on instead of starting threads for this backtest alone. */
   pool?: OriginPool;
+  /**
+   * Seasonal period s of the series: 1 (the default) for none, 4 quarterly, 12 monthly. Above 1
+   * the seasonal naive forecast is scored and is the benchmark, MASE is scaled by its in-sample
+   * error, and at least s origins are planned so that every season is forecast from.
+   */
+  period?: number;
 }
 
 export async function runBacktest(input: BacktestInput, settings: AnalysisSettings, run: BacktestRun = {}): Promise<BacktestRecord> {
   const { max_p: maxP, max_q: maxQ } = settings;
   const { horizon, refit, origins, window, min_train: minTrainingLength } = settings.backtest;
   checkRun(run, refit);
+  const period = run.period ?? 1;
   const data = readBacktestInput(input, settings.transform);
   const n = data.y.length;
   if (n - horizon < minTrainingLength) throw new InputError(backtestMessages.seriesTooShort(n, horizon, minTrainingLength));
+  // The seasonal naive forecast and its error variance need one change a full cycle long in the shortest window.
+  if (minTrainingLength < period + 1) throw new InputError(backtestMessages.trainingShorterThanCycle(minTrainingLength, period));
 
   const full = refit === 'reselect' ? undefined : fullSampleModels(data.w, refit, maxP, maxQ, settings.estimation, run.orders);
   // The largest order each model is fitted at: the fixed one, or the top of the search grid.
   const largestOrder = (kind: TrendModelKind): ArmaOrder => full?.orders[kind] ?? { p: maxP, q: maxQ };
   const needed = Math.max(...TREND_MODELS.map((kind) => minimumObservations(kind, largestOrder(kind).p, largestOrder(kind).q)));
   if (minTrainingLength < needed) throw new InputError(backtestMessages.trainingTooShort(minTrainingLength, needed));
-  const planned = planOrigins(n, { horizon, origins, step: ORIGIN_STEP, window, minTrainingLength });
+  const planned = planOrigins(n, { horizon, origins, step: ORIGIN_STEP, window, minTrainingLength, period });
   // A forecast starts from an observed value: origins whose last training value is missing are left out.
   const observedOrigins = planned.origins.filter(({ end }) => !Number.isNaN(data.w[end - 1]));
   const skippedOrigins = planned.origins.length - observedOrigins.length;
@@ -67,15 +78,18 @@ export async function runBacktest(input: BacktestInput, settings: AnalysisSettin
   );
   const threads = run.threads ?? Math.min(availableParallelism(), plan.origins.length);
   const results = await runOriginTasks(tasks, threads, run.pool);
-  const collected = collectForecasts(data, plan.origins, results, settings);
+  const collected = collectForecasts(data, plan.origins, results, settings, period);
 
   const perHorizon = {} as BacktestRecord['per_horizon'];
-  for (const method of FORECAST_METHODS) {
+  for (const method of collected.methods) {
     perHorizon[method] = collected.scored[method].map((rows, i) => scoreHorizon(i + 1, rows, settings.levels));
   }
+  const seasonsCovered = originSeasons(plan.origins, period);
   const comparison = collected.scored.deterministic.flatMap((rows, i) => compareModels(i + 1, rows, collected.scored.stochastic[i], settings.recommendation.scored_level));
   const notes: string[] = [];
   if (plan.available < plan.requested) notes.push(backtestNotes.originsCut(plan.requested, plan.origins.length, minTrainingLength));
+  if (plan.planned > plan.requested) notes.push(backtestNotes.originsRaised(plan.requested, plan.planned, period));
+  if (seasonsCovered < period) notes.push(backtestNotes.seasonsMissed(seasonsCovered, period));
   if (full !== undefined) notes.push(backtestNotes.lookAhead(refit));
   if (skippedOrigins > 0) notes.push(backtestNotes.missingOrigins(skippedOrigins));
   const unconverged = results.filter((result) => !result.converged).length;
@@ -98,6 +112,10 @@ export async function runBacktest(input: BacktestInput, settings: AnalysisSettin
       max_q: maxQ,
       orders: full?.orders ?? null,
       significance: settings.significance,
+      period,
+      benchmark: period > 1 ? 'seasonal_naive' : 'naive',
+      mase_scaling: period > 1 ? 'seasonal_naive' : 'naive',
+      seasons_covered: seasonsCovered,
     },
     notes,
     origins: collected.origins,
@@ -120,5 +138,6 @@ function checkRun(run: BacktestRun, refit: AnalysisSettings['backtest']['refit']
     }
   }
   if (run.threads !== undefined && !(Number.isInteger(run.threads) && run.threads >= 1)) problems.push(backtestMessages.badThreads(run.threads));
+  if (run.period !== undefined && !(Number.isInteger(run.period) && run.period >= 1)) problems.push(backtestMessages.badPeriod(run.period));
   if (problems.length > 0) throw new InputError(problems);
 }

@@ -64,6 +64,10 @@ export function handMadeBacktest(record: AnalysisRecord, origins = 14): Backtest
       max_q: 3,
       orders: null,
       significance: 0.05,
+      period: 1,
+      benchmark: 'naive',
+      mase_scaling: 'naive',
+      seasons_covered: 1,
     },
     notes: ['The last origin is five periods before the end of the history, so every origin is scored at every horizon.'],
     origins: Array.from({ length: origins }, (_, i) => ({
