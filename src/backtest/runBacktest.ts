@@ -89,9 +89,9 @@ export async function runBacktest(input: BacktestInput, settings: AnalysisSettin
   const notes: string[] = [];
   if (plan.available < plan.requested) notes.push(backtestNotes.originsCut(plan.requested, plan.origins.length, minTrainingLength));
   if (plan.planned > plan.requested) notes.push(backtestNotes.originsRaised(plan.requested, plan.planned, period));
-  if (seasonsCovered < period) notes.push(backtestNotes.seasonsMissed(seasonsCovered, period));
   if (full !== undefined) notes.push(backtestNotes.lookAhead(refit));
   if (skippedOrigins > 0) notes.push(backtestNotes.missingOrigins(skippedOrigins));
+  if (seasonsCovered < period) notes.push(backtestNotes.seasonsMissed(seasonsCovered, period));
   const unconverged = results.filter((result) => !result.converged).length;
   if (unconverged > 0) notes.push(backtestNotes.unconverged(unconverged, results.length));
   if (collected.forecasts.some((row) => !Number.isNaN(row.actual) && !(row.actual > 0))) notes.push(backtestNotes.mapeUnavailable);
