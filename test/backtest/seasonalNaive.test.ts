@@ -3,9 +3,26 @@
 // Athanasopoulos, Forecasting: Principles and Practice, 3rd ed., §5.2 and §5.5, from memory),
 // and the in-sample mean absolute lag-s difference as the MASE scale (Hyndman & Koehler 2006,
 // §3.4; seasonal form as in Forecasting: Principles and Practice, 2nd ed., §3.4, from memory).
+import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { inSampleNaiveMae, naiveForecast } from '../../src/backtest/naiveForecast.js';
+import { readSeriesCsv } from '../../src/data/readSeriesCsv.js';
 import { expectRelative } from '../evidence/expectRelative.js';
+
+interface RandomWalkReference {
+  name: string;
+  file: string;
+  period: number;
+  transform: 'none' | 'log';
+  training_length: number;
+  steps: number;
+  sigma2: number;
+  mean: number[];
+  se: number[];
+}
+const randomWalks = (
+  JSON.parse(readFileSync(new URL('../fixtures/backtest/seasonalNaiveReference.json', import.meta.url), 'utf8')) as { seasonal_random_walk: RandomWalkReference[] }
+).seasonal_random_walk;
 
 // Two years of a quarterly series: lag-4 changes 1, 2, −1, 3.
 const QUARTERLY = [10, 20, 30, 40, 11, 22, 29, 43];
@@ -38,6 +55,21 @@ describe('naiveForecast at a seasonal period', () => {
     const sigma = Math.sqrt(11 / 3);
     const cycles = [1, 2, 1, 1, 2, 3];
     se.forEach((value, i) => expectRelative(value, sigma * Math.sqrt(cycles[i]), 1e-15));
+  });
+
+  // statsmodels 0.13.5 SARIMAX(order=(0, 0, 0), seasonal_order=(0, 1, 0, s), use_exact_diffuse=True)
+  // smoothed at σ² = the window's mean squared lag-s change, get_forecast(steps): predicted_mean
+  // and se_mean (test/fixtures/backtest/seasonalNaiveReference.json, seasonal_random_walk).
+  it.each(randomWalks.map((check) => [check.name, check] as const))('gives the seasonal random walk’s exact forecast moments (%s, statsmodels SARIMAX)', (_, check) => {
+    const series = readSeriesCsv(new URL(`../fixtures/seasonal/${check.file}`, import.meta.url).pathname, { missing: 'error' });
+    const w = series.values.slice(0, check.training_length).map((v) => (check.transform === 'log' ? Math.log(v) : v));
+    const { mean, se } = naiveForecast(w, check.steps, check.period);
+    expect(mean).toHaveLength(check.steps);
+    mean.forEach((value, i) => expectRelative(value, check.mean[i], 1e-12));
+    se.forEach((value, i) => expectRelative(value, check.se[i], 1e-12));
+    // Beyond one cycle the standard error grows by √2, then √3 (Hyndman & Athanasopoulos, §5.5, from memory).
+    expectRelative(se[check.period] / se[0], Math.SQRT2, 1e-12);
+    expectRelative(se[0] ** 2, check.sigma2, 1e-12);
   });
 
   it('refuses a window with no change a full period long, and a period that is not a whole number', () => {
