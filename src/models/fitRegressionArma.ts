@@ -1,12 +1,15 @@
 // Exact maximum likelihood (or its restricted form, REML) for regression with ARMA(p,q)
-// errors: BFGS over the unconstrained ARMA parameters from several starts (zeros,
-// Hannan-Rissanen, and any the caller passes, e.g. a neighbouring order's optimum), best
-// log-likelihood kept.
+// errors, optionally times a seasonal ARMA(P,Q) factor (seasonalArma.ts): BFGS over the
+// unconstrained ARMA parameters from several starts (zeros, Hannan-Rissanen, for a seasonal
+// part also one from the residuals' seasonal autocorrelation, and any the caller passes,
+// e.g. a neighbouring order's optimum), best log-likelihood kept.
 import { choleskyInverse } from '../linalg/smallSpd.js';
 import { leastSquares } from '../linalg/ols.js';
 import { minimizeBfgs } from './bfgs.js';
 import { unconstrainAr, unconstrainMa } from './constraints.js';
 import { hannanRissanen } from './hannanRissanen.js';
+import { autocovariances, demean } from '../linalg/autocovariances.js';
+import { parameterCount, type ArmaFactors, type SeasonalArmaOrder } from './seasonalArma.js';
 import type { Estimation } from '../base/settings.js';
 import { createProfileLikelihood, type LikelihoodOptions, type ProfileLikelihood } from './profileLikelihood.js';
 
@@ -16,10 +19,19 @@ const HEAT_ITERATIONS = 8;
 const FINALISTS = 1;
 
 export interface RegressionArmaFit {
+  /**
+   * Orders and coefficients of the ARMA process the filter ran: with a seasonal part, the
+   * expanded ARMA(p + sP, q + sQ) (`order` and `factors` give the multiplicative form), so
+   * whatever filters or forecasts with `ar` and `ma` treats every fit alike.
+   */
   p: number;
   q: number;
   ar: Float64Array;
   ma: Float64Array;
+  /** The order in multiplicative form (P = Q = 0 without a seasonal part). */
+  order: SeasonalArmaOrder;
+  /** The factors' coefficients; without a seasonal part `ar` and `ma` above, and empty seasonal ones. */
+  factors: ArmaFactors;
   /** GLS regression coefficients, in the order of the regressors. */
   beta: Float64Array;
   /** Var(β̂) = σ² (X'Ω⁻¹X)⁻¹, k×k row-major. */
@@ -33,7 +45,7 @@ export interface RegressionArmaFit {
   /** Observations in the likelihood. */
   nobs: number;
   converged: boolean;
-  /** The optimum in the unconstrained space (a warm start for larger orders). */
+  /** The optimum in the unconstrained space, laid out as (AR, MA, seasonal AR, seasonal MA) (a warm start for larger orders). */
   unconstrained: Float64Array;
   /** One-step prediction errors of y − Xβ̂ (NaN where y is missing) and their variances / σ². */
   residuals: Float64Array;
@@ -45,7 +57,7 @@ export interface RegressionArmaFit {
 }
 
 export interface FitOptions extends LikelihoodOptions {
-  /** Extra unconstrained starting points of length p + q. */
+  /** Extra unconstrained starting points of length p + q (+ P + Q with a seasonal part). */
   starts?: readonly Float64Array[];
 }
 
@@ -60,10 +72,13 @@ export function fitRegressionArma(
   // correction to the OLS coefficients, and Σv²/F does not lose digits to a large level
   // (a series near 580 would otherwise leave SSR as the difference of two numbers ~1e7).
   const ols = olsFit(y, regressors);
-  const likelihood = createProfileLikelihood(ols.residuals, regressors, p, q, { accumulateGaps: options.accumulateGaps, estimation: options.estimation });
+  const likelihood = createProfileLikelihood(ols.residuals, regressors, p, q, { accumulateGaps: options.accumulateGaps, estimation: options.estimation, seasonal: options.seasonal });
   const nobs = countObserved(y);
   const objective = (x: Float64Array): number => -likelihood.atUnconstrained(x) / nobs;
-  const base = [new Float64Array(p + q), ...startFromHannanRissanen(ols.residuals, p, q)];
+  const { order } = likelihood;
+  const count = parameterCount(order);
+  const plainStarts = startFromHannanRissanen(ols.residuals, p, q).map((x) => padSeasonal(x, count));
+  const base = [new Float64Array(count), ...plainStarts, ...startFromSeasonalAutocorrelation(ols.residuals, order, plainStarts[0])];
   const baseStarts = base.length;
   const starts = [...base, ...(options.starts ?? [])];
   // Race the extra starts: a few iterations each, then only the most promising run to the
@@ -84,7 +99,7 @@ export function fitRegressionArma(
     }
   }
   if (best === undefined || !Number.isFinite(best.value)) {
-    throw new Error(`fitRegressionArma: no start gave a finite likelihood for ARMA(${p},${q})`);
+    throw new Error(`fitRegressionArma: no start gave a finite likelihood for ARMA(${p},${q})(${order.P},${order.Q})`);
   }
   const fit = summarise(likelihood, best.x, best.converged, evaluations);
   // Back from the OLS residuals to y: β adds the OLS coefficients, and by linearity the
@@ -100,6 +115,7 @@ export function fitRegressionArma(
 
 function summarise(likelihood: ProfileLikelihood, x: Float64Array, converged: boolean, evaluations: number): RegressionArmaFit {
   const { ar, ma } = likelihood.coefficientsOf(x);
+  const factors = likelihood.factorsOf(x);
   const loglik = likelihood.atCoefficients(ar, ma, true);
   const ws = likelihood.workspace;
   const k = ws.ncol - 1;
@@ -121,6 +137,8 @@ function summarise(likelihood: ProfileLikelihood, x: Float64Array, converged: bo
     q: likelihood.q,
     ar,
     ma,
+    order: likelihood.order,
+    factors,
     beta,
     covBeta,
     sigma2,
@@ -175,6 +193,42 @@ export function olsFit(y: Float64Array, regressors: readonly Float64Array[]): Ol
     return value - fitted;
   });
   return { coefficients, residuals };
+}
+
+/** A start of the nonseasonal parameters, with the seasonal ones at zero. */
+function padSeasonal(x: Float64Array, count: number): Float64Array {
+  if (x.length === count) return x;
+  const padded = new Float64Array(count);
+  padded.set(x, 0);
+  return padded;
+}
+
+/** Largest seasonal coefficient a start takes from the sample autocorrelation. */
+const SEASONAL_START_LIMIT = 0.9;
+
+/**
+ * A start for a seasonal part from the lag-s sample autocorrelation ρ_s of the OLS residuals:
+ * a seasonal AR(1) factor has ρ_s = Φ, and a seasonal MA(1) factor ρ_s = Θ/(1 + Θ²), whose
+ * sign Θ shares (so Θ starts at ρ_s, inside ±1/2, on the right side); with both, Φ takes it
+ * (common practice for moment starts; Box, Jenkins & Reinsel 2008, §6.3 and §9.2, from memory).
+ * The nonseasonal part starts from Hannan-Rissanen when it has one, else from zero.
+ */
+function startFromSeasonalAutocorrelation(eta: Float64Array, order: SeasonalArmaOrder, plain: Float64Array | undefined): Float64Array[] {
+  const { p, q, P, Q, period } = order;
+  if (P + Q === 0) return [];
+  const observed = Float64Array.from(eta.filter((v) => !Number.isNaN(v)));
+  if (observed.length <= 2 * period) return [];
+  const acvf = autocovariances(demean(observed), period);
+  if (!(acvf[0] > 0)) return [];
+  const rho = Math.max(-SEASONAL_START_LIMIT, Math.min(SEASONAL_START_LIMIT, acvf[period] / acvf[0]));
+  const seasonalAr = P > 0 ? unconstrainAr([rho, ...new Array<number>(P - 1).fill(0)]) : new Float64Array(0);
+  const seasonalMa = Q > 0 ? unconstrainMa([P > 0 ? 0 : rho, ...new Array<number>(Q - 1).fill(0)]) : new Float64Array(0);
+  if (seasonalAr === undefined || seasonalMa === undefined) return [];
+  const x = new Float64Array(p + q + P + Q);
+  if (plain !== undefined) x.set(plain.subarray(0, p + q), 0);
+  x.set(seasonalAr, p + q);
+  x.set(seasonalMa, p + q + P);
+  return [x];
 }
 
 /** Hannan-Rissanen on the OLS residuals, mapped to the unconstrained space (shrunk if needed). */

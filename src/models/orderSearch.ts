@@ -5,10 +5,14 @@
 // Each order is started, besides zeros and Hannan-Rissanen, from the optima of its smaller
 // neighbours padded with a zero partial autocorrelation, which reproduces the smaller
 // model exactly, so a larger model never ends below a nested smaller one.
+// With a seasonal part (P, Q) the grid runs over the nonseasonal (p, q) with the seasonal
+// orders held, and every start carries the neighbour's seasonal coefficients along.
 import { admissibility, type InadmissibleReason } from './admissibility.js';
 import { unconstrainAr, unconstrainMa } from './constraints.js';
 import { countObserved, fitRegressionArma, type RegressionArmaFit } from './fitRegressionArma.js';
 import { type WorkspaceOptions } from '../statespace/filterWorkspace.js';
+import type { SeasonalPart } from './profileLikelihood.js';
+import type { SeasonalArmaOrder } from './seasonalArma.js';
 
 /** Real roots of the common factor tried by `cancellingStart` from the (p−1, q−1) optimum. */
 const CANCELLING_ROOTS = [0.8, -0.8];
@@ -36,8 +40,12 @@ export interface OrderSearchResult {
 }
 
 export interface SearchOptions extends WorkspaceOptions {
-  /** The model is for first differences: a fit that undoes the differencing is not admissible. */
+  /** The model is for differences: a fit that undoes the differencing is not admissible. */
   differenced?: boolean;
+  /** A seasonal ARMA part held fixed over the grid. */
+  seasonal?: SeasonalPart;
+  /** Fits already made at some orders of this grid (same data and seasonal part), reused as they are. */
+  known?: readonly RegressionArmaFit[];
 }
 
 /**
@@ -56,16 +64,45 @@ export function searchOrders(
   maxQ: number,
   options: SearchOptions = {},
 ): OrderSearchResult {
-  const { differenced = false, ...workspace } = options;
+  const grid = fitGrid(y, regressors, maxP, maxQ, options);
+  let best: GridFit | undefined;
+  let bestSetAside: GridFit | undefined;
+  for (const entry of grid) {
+    const { candidate } = entry;
+    if (candidate.admissible && candidate.aicc < (best?.candidate.aicc ?? Number.POSITIVE_INFINITY)) best = entry;
+    if (candidate.reason !== null && candidate.reason !== 'not-converged' && candidate.aicc < (bestSetAside?.candidate.aicc ?? Number.POSITIVE_INFINITY)) {
+      bestSetAside = entry;
+    }
+  }
+  // (0, 0) has nothing to be inadmissible about, so an admissible fit exists whenever any fits.
+  if (best === undefined) throw new Error('searchOrders: no order fits this many observations');
+  const setAside =
+    bestSetAside !== undefined && bestSetAside.candidate.reason !== null && bestSetAside.candidate.aicc < best.candidate.aicc
+      ? { fit: bestSetAside.fit, aicc: bestSetAside.candidate.aicc, reason: bestSetAside.candidate.reason }
+      : null;
+  return { best: best.fit, bestAicc: best.candidate.aicc, candidates: grid.map((entry) => entry.candidate), setAside };
+}
+
+/** One fit of a grid with its candidate entry. */
+export interface GridFit {
+  fit: RegressionArmaFit;
+  candidate: Candidate;
+}
+
+/**
+ * Every (p, q) with p ≤ maxP, q ≤ maxQ that leaves AICc defined, fitted in order of p then q,
+ * each started from its neighbours' optima, with its AICc and admissibility.
+ */
+export function fitGrid(y: Float64Array, regressors: readonly Float64Array[], maxP: number, maxQ: number, options: SearchOptions = {}): GridFit[] {
+  const { differenced = false, seasonal, known = [], ...workspace } = options;
   const fits = new Map<string, RegressionArmaFit>();
-  const candidates: Candidate[] = [];
-  let best: RegressionArmaFit | undefined;
-  let bestAicc = Number.POSITIVE_INFINITY;
-  let bestSetAside: OrderSearchResult['setAside'] = null;
+  const given = new Map(known.map((fit) => [key(fit.order.p, fit.order.q), fit]));
+  const seasonalCount = (seasonal?.P ?? 0) + (seasonal?.Q ?? 0);
+  const grid: GridFit[] = [];
   const nobs = countObserved(y);
   for (let p = 0; p <= maxP; p++) {
     for (let q = 0; q <= maxQ; q++) {
-      const parameters = p + q + regressors.length + 1;
+      const parameters = p + q + seasonalCount + regressors.length + 1;
       if (nobs - parameters - 1 <= 0) continue;
       const starts = [fits.get(key(p - 1, q)), fits.get(key(p, q - 1))]
         .filter((fit): fit is RegressionArmaFit => fit !== undefined)
@@ -80,23 +117,14 @@ export function searchOrders(
         const { modulus, angle } = CANCELLING_PAIR;
         starts.push(...cancellingStart(second, [-2 * modulus * Math.cos(angle), modulus * modulus]));
       }
-      const fit = fitRegressionArma(y, regressors, p, q, { ...workspace, starts });
+      const fit = given.get(key(p, q)) ?? fitRegressionArma(y, regressors, p, q, { ...workspace, seasonal, starts });
       fits.set(key(p, q), fit);
       const value = aicc(fit.loglik, parameters, fit.nobs);
       const { admissible, reason } = admissibility(fit, differenced);
-      candidates.push({ p, q, loglik: fit.loglik, aicc: value, converged: fit.converged, admissible, reason });
-      if (admissible && value < bestAicc) {
-        bestAicc = value;
-        best = fit;
-      }
-      if (reason !== null && reason !== 'not-converged' && value < (bestSetAside?.aicc ?? Number.POSITIVE_INFINITY)) {
-        bestSetAside = { fit, aicc: value, reason };
-      }
+      grid.push({ fit, candidate: { p, q, loglik: fit.loglik, aicc: value, converged: fit.converged, admissible, reason } });
     }
   }
-  // (0, 0) has nothing to be inadmissible about, so an admissible fit exists whenever any fits.
-  if (best === undefined) throw new Error('searchOrders: no order fits this many observations');
-  return { best, bestAicc, candidates, setAside: bestSetAside !== null && bestSetAside.aicc < bestAicc ? bestSetAside : null };
+  return grid;
 }
 
 /**
@@ -106,15 +134,22 @@ export function searchOrders(
  */
 function cancellingStart(fit: RegressionArmaFit, factor: readonly number[]): Float64Array[] {
   // AR polynomial 1 − a₁B − …: negate into "1 + c₁B + …" form, multiply, negate back.
-  const ar = multiplyPolynomials(fit.ar.map((v) => -v), factor).map((v) => -v);
-  const ma = multiplyPolynomials(fit.ma, factor);
+  const ar = multiplyPolynomials(fit.factors.ar.map((v) => -v), factor).map((v) => -v);
+  const ma = multiplyPolynomials(fit.factors.ma, factor);
   const xAr = unconstrainAr(ar);
   const xMa = unconstrainMa(ma);
   if (xAr === undefined || xMa === undefined) return [];
-  const x = new Float64Array(ar.length + ma.length);
+  const seasonalPart = seasonalParameters(fit);
+  const x = new Float64Array(ar.length + ma.length + seasonalPart.length);
   x.set(xAr, 0);
   x.set(xMa, ar.length);
+  x.set(seasonalPart, ar.length + ma.length);
   return [x];
+}
+
+/** The unconstrained seasonal parameters of a fit (after its p + q nonseasonal ones). */
+function seasonalParameters(fit: RegressionArmaFit): Float64Array {
+  return fit.unconstrained.subarray(fit.order.p + fit.order.q);
 }
 
 /** Coefficients after the leading 1 of (1 + a₁B + …)(1 + b₁B + …). */
@@ -126,11 +161,18 @@ function multiplyPolynomials(a: ArrayLike<number>, b: readonly number[]): Float6
   return out.slice(1);
 }
 
-/** A smaller fit's optimum as a start for (p, q): extra partial autocorrelations set to 0. */
-function padStart(fit: RegressionArmaFit, p: number, q: number): Float64Array {
-  const x = new Float64Array(p + q);
-  x.set(fit.unconstrained.subarray(0, fit.p), 0);
-  x.set(fit.unconstrained.subarray(fit.p, fit.p + fit.q), p);
+/**
+ * A smaller fit's optimum as a start for a larger order: extra partial autocorrelations set
+ * to 0, which reproduces the smaller model exactly (the seasonal factors likewise).
+ */
+export function padStart(fit: RegressionArmaFit, p: number, q: number, P = fit.order.P, Q = fit.order.Q): Float64Array {
+  const from: SeasonalArmaOrder = fit.order;
+  const x = new Float64Array(p + q + P + Q);
+  const u = fit.unconstrained;
+  x.set(u.subarray(0, from.p), 0);
+  x.set(u.subarray(from.p, from.p + from.q), p);
+  x.set(u.subarray(from.p + from.q, from.p + from.q + from.P), p + q);
+  x.set(u.subarray(from.p + from.q + from.P, from.p + from.q + from.P + from.Q), p + q + P);
   return x;
 }
 

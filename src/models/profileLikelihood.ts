@@ -1,31 +1,64 @@
 // The profile log-likelihood of y = Xβ + η, η ~ ARMA(p,q), as a function of the ARMA
 // parameters alone (β and σ² concentrated out by the filter; see statespace/kalmanFilter):
-// the full (exact ML) one, or the restricted one that REML maximises.
+// the full (exact ML) one, or the restricted one that REML maximises. With a seasonal part,
+// η follows the multiplicative ARMA of seasonalArma.ts and the filter runs its expansion.
 import { createWorkspace, profileLoglik, restrictedLoglik, runFilter, setArma } from '../statespace/kalmanFilter.js';
 import { stateDimension } from '../statespace/armaStateSpace.js';
-import { constrainAr, constrainMa } from './constraints.js';
+import { isStationary } from './constraints.js';
 import { type FilterWorkspace, type WorkspaceOptions } from '../statespace/filterWorkspace.js';
+import {
+  checkSeasonalOrder,
+  constrainFactors,
+  emptyFactors,
+  expandFactors,
+  hasSeasonalPart,
+  parameterCount,
+  plainOrder,
+  processOrders,
+  unpackFactors,
+  type ArmaFactors,
+  type SeasonalArmaOrder,
+} from './seasonalArma.js';
 
 import type { Estimation } from '../base/settings.js';
+
+/** A seasonal ARMA part: factors of orders P and Q in the lag B^period. */
+export interface SeasonalPart {
+  period: number;
+  P: number;
+  Q: number;
+}
 
 export interface LikelihoodOptions extends WorkspaceOptions {
   /** Which likelihood the functions return; 'ml' when absent. */
   estimation?: Estimation;
+  /** Multiplies a seasonal ARMA part into the noise; absent or P = Q = 0: none. */
+  seasonal?: SeasonalPart;
 }
 
 export interface ProfileLikelihood {
+  /** Orders of the ARMA process the filter runs (expanded: p + sP, q + sQ with a seasonal part). */
   readonly p: number;
   readonly q: number;
+  /** The order in multiplicative form; its p and q are the nonseasonal factors'. */
+  readonly order: SeasonalArmaOrder;
   readonly estimation: Estimation;
   readonly workspace: FilterWorkspace;
   /** The filtered columns: y first, then the regressors. */
   readonly columns: readonly Float64Array[];
-  /** Log-likelihood at AR/MA coefficients given directly; NaN outside the stationary region. */
+  /** Log-likelihood at the process's AR/MA coefficients given directly; NaN outside the stationary region. */
   atCoefficients(ar: ArrayLike<number>, ma: ArrayLike<number>, keepCovariance?: boolean): number;
-  /** Log-likelihood at unconstrained parameters (first p map to AR, next q to MA). */
+  /**
+   * Log-likelihood at the factors' coefficients packed as (AR, MA, seasonal AR, seasonal MA)
+   * (seasonalArma.ts); NaN when a factor is not stationary or not invertible.
+   */
+  atParameters(theta: Float64Array): number;
+  /** Log-likelihood at unconstrained parameters in the same layout. */
   atUnconstrained(x: ArrayLike<number>): number;
-  /** Writes the AR and MA coefficients for unconstrained `x`. */
+  /** The process's AR and MA coefficients for unconstrained `x`. */
   coefficientsOf(x: ArrayLike<number>): { ar: Float64Array; ma: Float64Array };
+  /** The factors' coefficients for unconstrained `x`. */
+  factorsOf(x: ArrayLike<number>): ArmaFactors;
 }
 
 export function createProfileLikelihood(
@@ -35,30 +68,47 @@ export function createProfileLikelihood(
   q: number,
   options: LikelihoodOptions = {},
 ): ProfileLikelihood {
+  const seasonal = options.seasonal;
+  const order: SeasonalArmaOrder = seasonal === undefined ? plainOrder(p, q) : { p, q, P: seasonal.P, Q: seasonal.Q, period: seasonal.period };
+  checkSeasonalOrder(order);
+  const process = processOrders(order);
   const columns = [y, ...regressors];
-  const workspace = createWorkspace(stateDimension(p, q), columns, options);
+  const workspace = createWorkspace(stateDimension(process.p, process.q), columns, options);
   const estimation = options.estimation ?? 'ml';
   const loglikOf = estimation === 'reml' ? restrictedLoglik : profileLoglik;
-  const ar = new Float64Array(p);
-  const ma = new Float64Array(q);
-  const work = new Float64Array(Math.max(p, q, 1));
+  const ar = new Float64Array(process.p);
+  const ma = new Float64Array(process.q);
+  const factors = emptyFactors(order);
+  const work = new Float64Array(Math.max(p, q, order.P, order.Q, 1));
 
   const atCoefficients = (arCoef: ArrayLike<number>, maCoef: ArrayLike<number>, keepCovariance = false): number => {
-    if (!setArma(workspace, arCoef, p, maCoef, q, !keepCovariance && workspace.complete)) return Number.NaN;
+    if (!setArma(workspace, arCoef, process.p, maCoef, process.q, !keepCovariance && workspace.complete)) return Number.NaN;
     if (!runFilter(workspace, columns, keepCovariance)) return Number.NaN;
     return loglikOf(workspace);
   };
   const fill = (x: ArrayLike<number>): void => {
-    constrainAr(x, 0, p, ar, work);
-    constrainMa(x, p, q, ma, work);
+    constrainFactors(x, order, factors, work);
+    expandFactors(factors, order.period, ar, ma);
   };
   return {
-    p,
-    q,
+    p: process.p,
+    q: process.q,
+    order,
     estimation,
     workspace,
     columns,
     atCoefficients,
+    atParameters(theta) {
+      if (theta.length !== parameterCount(order)) throw new RangeError(`atParameters needs ${parameterCount(order)} parameters, got ${theta.length}`);
+      if (!hasSeasonalPart(order)) return atCoefficients(theta.subarray(0, p), theta.subarray(p));
+      const given = unpackFactors(theta, order);
+      const inside = isStationary(given.ar) && isStationary(given.seasonalAr) && isStationary(given.ma.map((v) => -v)) && isStationary(given.seasonalMa.map((v) => -v));
+      if (!inside) return Number.NaN;
+      const expandedAr = new Float64Array(process.p);
+      const expandedMa = new Float64Array(process.q);
+      expandFactors(given, order.period, expandedAr, expandedMa);
+      return atCoefficients(expandedAr, expandedMa);
+    },
     atUnconstrained(x) {
       fill(x);
       return atCoefficients(ar, ma);
@@ -66,6 +116,10 @@ export function createProfileLikelihood(
     coefficientsOf(x) {
       fill(x);
       return { ar: ar.slice(), ma: ma.slice() };
+    },
+    factorsOf(x) {
+      fill(x);
+      return { ar: factors.ar.slice(), ma: factors.ma.slice(), seasonalAr: factors.seasonalAr.slice(), seasonalMa: factors.seasonalMa.slice() };
     },
   };
 }

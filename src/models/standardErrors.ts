@@ -10,7 +10,8 @@
 //   of the information being asymptotically separate from theirs (Brockwell & Davis 1991,
 //   §8.8, from memory). It needs only first derivatives, on the side of each step that stays
 //   in the region.
-// β's standard errors come from GLS.
+// β's standard errors come from GLS. With a seasonal part the parameters are the factors'
+// (φ, θ, Φ, Θ; seasonalArma.ts), the ones the fit reports, not the expanded coefficients.
 import { invertSymmetric } from '../linalg/invertSymmetric.js';
 import type { ProfileLikelihood } from './profileLikelihood.js';
 
@@ -18,7 +19,7 @@ import type { ProfileLikelihood } from './profileLikelihood.js';
 export type StandardErrorMethod = 'observed-information' | 'outer-product' | null;
 
 export interface ArmaStandardErrors {
-  /** AR first, then MA; NaN where no method gives one. */
+  /** In the layout of the parameters (AR, MA, seasonal AR, seasonal MA); NaN where no method gives one. */
   values: Float64Array;
   method: StandardErrorMethod;
 }
@@ -28,15 +29,13 @@ function stepFor(value: number): number {
   return 1e-4 * Math.max(Math.abs(value), 0.1);
 }
 
-export function armaStandardErrors(likelihood: ProfileLikelihood, ar: Float64Array, ma: Float64Array): ArmaStandardErrors {
-  const k = ar.length + ma.length;
+/** Standard errors of the ARMA parameters `theta`, packed as `ProfileLikelihood.atParameters` takes them. */
+export function armaStandardErrors(likelihood: ProfileLikelihood, theta: Float64Array): ArmaStandardErrors {
+  const k = theta.length;
   if (k === 0) return { values: new Float64Array(0), method: null };
-  const theta = new Float64Array(k);
-  theta.set(ar, 0);
-  theta.set(ma, ar.length);
-  const fromHessian = observedInformationErrors(likelihood, theta, ar.length);
+  const fromHessian = observedInformationErrors(likelihood, theta);
   if (fromHessian.every(Number.isFinite)) return { values: fromHessian, method: 'observed-information' };
-  const fromScores = outerProductErrors(likelihood, theta, ar.length);
+  const fromScores = outerProductErrors(likelihood, theta);
   if (fromScores.every(Number.isFinite)) return { values: fromScores, method: 'outer-product' };
   return { values: new Float64Array(k).fill(Number.NaN), method: null };
 }
@@ -54,9 +53,9 @@ function errorsFromInformation(information: Float64Array, k: number): Float64Arr
 }
 
 /** By central differences of the profile log-likelihood. */
-export function observedInformationErrors(likelihood: ProfileLikelihood, theta: Float64Array, p: number): Float64Array {
+export function observedInformationErrors(likelihood: ProfileLikelihood, theta: Float64Array): Float64Array {
   const k = theta.length;
-  const at = (point: Float64Array): number => likelihood.atCoefficients(point.subarray(0, p), point.subarray(p));
+  const at = (point: Float64Array): number => likelihood.atParameters(point);
   const steps = Array.from(theta, stepFor);
   const centre = at(theta);
   const shifted = (moves: readonly [number, number][]): number => {
@@ -80,10 +79,10 @@ export function observedInformationErrors(likelihood: ProfileLikelihood, theta: 
 }
 
 /** By the outer product of the per-observation scores. */
-export function outerProductErrors(likelihood: ProfileLikelihood, theta: Float64Array, p: number): Float64Array {
+export function outerProductErrors(likelihood: ProfileLikelihood, theta: Float64Array): Float64Array {
   const k = theta.length;
   const failed = new Float64Array(k).fill(Number.NaN);
-  const base = contributions(likelihood, theta, p);
+  const base = contributions(likelihood, theta);
   if (base === undefined) return failed;
   const { beta, sigma2 } = base;
   const n = base.values.length;
@@ -93,7 +92,7 @@ export function outerProductErrors(likelihood: ProfileLikelihood, theta: Float64
     const moved = (sign: number): Float64Array | undefined => {
       const point = theta.slice();
       point[i] += sign * step;
-      return contributions(likelihood, point, p, { beta, sigma2 })?.values;
+      return contributions(likelihood, point, { beta, sigma2 })?.values;
     };
     const up = moved(1);
     const down = moved(-1);
@@ -115,16 +114,15 @@ export function outerProductErrors(likelihood: ProfileLikelihood, theta: Float64
 }
 
 /**
- * l_t at the ARMA coefficients `theta` (AR first), 0 at a missing observation; with `fixed`,
- * at that β and σ², else at their estimates for `theta`. Undefined outside the region.
+ * l_t at the ARMA parameters `theta`, 0 at a missing observation; with `fixed`, at that β and
+ * σ², else at their estimates for `theta`. Undefined outside the region.
  */
 function contributions(
   likelihood: ProfileLikelihood,
   theta: Float64Array,
-  p: number,
   fixed?: { beta: Float64Array; sigma2: number },
 ): { values: Float64Array; beta: Float64Array; sigma2: number } | undefined {
-  if (Number.isNaN(likelihood.atCoefficients(theta.subarray(0, p), theta.subarray(p)))) return undefined;
+  if (Number.isNaN(likelihood.atParameters(theta))) return undefined;
   const { innovations, variances, gramRhs, n, ncol, nobs } = likelihood.workspace;
   const k = ncol - 1;
   const beta = fixed?.beta ?? gramRhs.slice(0, k);

@@ -3,7 +3,10 @@
 //                  observation (trend-stationary);
 //   stochastic:    w_t − w_{t−1} = c + η_t on the first differences (difference-stationary,
 //                  ARIMA(p,1,q) with drift c).
-// η ~ stationary, invertible ARMA(p,q) in both. Only the design differs.
+// η ~ stationary, invertible ARMA(p,q) in both. Only the design differs (trendDesign.ts).
+// A seasonal series adds a seasonal part chosen from the data (seasonalSearch.ts): harmonic
+// regressors for a fixed pattern, a seasonal ARMA factor in η for a pattern that drifts, and
+// for the stochastic model, when the caller says so, seasonal differences.
 //
 // The order is chosen by AICc on the exact (full) likelihood, which the reference checks
 // compare candidate by candidate. The chosen order's coefficients are then estimated by
@@ -14,71 +17,35 @@
 // fit that is not admissible or did not converge is not used: the ML fit stays, and says why.
 import type { Estimation, TrendModelKind } from '../base/settings.js';
 import { fitRegressionArma, olsFit, type RegressionArmaFit } from './fitRegressionArma.js';
-import { forecastRegressionArma, type ForecastMoments } from '../statespace/forecast.js';
-import { createProfileLikelihood } from './profileLikelihood.js';
+import { forecastRegressionArma, type ForecastInput, type ForecastMoments, type Integration } from '../statespace/forecast.js';
+import { createProfileLikelihood, type SeasonalPart } from './profileLikelihood.js';
 import { admissibility, type InadmissibleReason } from './admissibility.js';
-import { aicc, searchOrders, type Candidate } from './orderSearch.js';
+import { aicc, searchOrders } from './orderSearch.js';
 import { armaStandardErrors, type StandardErrorMethod } from './standardErrors.js';
+import { harmonicColumnCount, seasonalPattern } from './harmonics.js';
+import { packFactors } from './seasonalArma.js';
+import { searchSeasonalModel, type SeasonalCandidate, type SeasonalChoice, type SeasonalSearchSpec } from './seasonalSearch.js';
+import { trendDesign, type TrendDesign } from './trendDesign.js';
 
+export { trendDesign, type DesignSeasonality, type TrendDesign } from './trendDesign.js';
+export type { SeasonalCandidate, SeasonalChoice, SeasonalSearchSpec } from './seasonalSearch.js';
 
-export interface TrendDesign {
-  response: Float64Array;
-  regressors: Float64Array[];
-  /** Names of the regression coefficients, in order. */
-  coefficientNames: string[];
-  /** Regressor rows for h = 1..horizon. */
-  futureRows(horizon: number): number[][];
-  /** For the stochastic model: forecasts are integrated from this last level. */
-  integrateFrom?: number;
-  /** The response is the change since the last observed level, NaN at missing levels (gapFilter.ts). */
-  accumulateGaps: boolean;
+/** The seasonal side of a model's order, for `minimumObservations`. */
+export interface SeasonalOrderSize {
+  period: number;
+  P: number;
+  Q: number;
+  harmonics: number;
+  seasonalDifferencing: boolean;
 }
 
-/** The response and regressors of a model for the model-scale series `w`. */
-export function trendDesign(kind: TrendModelKind, w: Float64Array): TrendDesign {
-  const n = w.length;
-  if (kind === 'deterministic') {
-    return {
-      response: w,
-      regressors: [new Float64Array(n).fill(1), Float64Array.from({ length: n }, (_, i) => i + 1)],
-      coefficientNames: ['intercept', 'slope'],
-      futureRows: (horizon) => Array.from({ length: horizon }, (_, h) => [1, n + h + 1]),
-      accumulateGaps: false,
-    };
-  }
-  // Δ_j = w_{j+1} − (the last observed level before it), g_j = the periods it spans; with no
-  // missing levels these are the first differences and a column of ones.
-  const changes = new Float64Array(n - 1);
-  const spans = new Float64Array(n - 1);
-  let last = 0;
-  for (let t = 1; t < n; t++) {
-    if (Number.isNaN(w[t])) {
-      changes[t - 1] = Number.NaN;
-      spans[t - 1] = 1;
-      continue;
-    }
-    changes[t - 1] = w[t] - w[last];
-    spans[t - 1] = t - last;
-    last = t;
-  }
-  if (Number.isNaN(w[0]) || Number.isNaN(w[n - 1])) {
-    throw new RangeError('trendDesign: the first and last observations must be present');
-  }
-  return {
-    response: changes,
-    regressors: [spans],
-    coefficientNames: ['drift'],
-    futureRows: (horizon) => Array.from({ length: horizon }, () => [1]),
-    integrateFrom: w[n - 1],
-    accumulateGaps: true,
-  };
-}
-
-/** Fewest observations (of w) either model needs for an order (p, q), so that AICc exists. */
-export function minimumObservations(kind: TrendModelKind, p: number, q: number): number {
-  const k = p + q + (kind === 'deterministic' ? 2 : 1) + 1;
-  // AICc needs m > k + 1; the stochastic model loses one observation to differencing.
-  return k + 2 + (kind === 'stochastic' ? 1 : 0);
+/** Fewest observations (of w) a model needs for an order (p, q), with its seasonal part if any, so that AICc exists. */
+export function minimumObservations(kind: TrendModelKind, p: number, q: number, seasonal?: SeasonalOrderSize): number {
+  const seasonalDifferencing = kind === 'stochastic' && seasonal?.seasonalDifferencing === true;
+  const regression = (kind === 'deterministic' ? 2 : 1) + (seasonal === undefined ? 0 : harmonicColumnCount(seasonal.period, seasonal.harmonics));
+  const k = p + q + (seasonal?.P ?? 0) + (seasonal?.Q ?? 0) + regression + 1;
+  // AICc needs m > k + 1; the stochastic model loses one observation to differencing, s to seasonal differencing.
+  return k + 2 + (kind === 'stochastic' ? (seasonalDifferencing ? (seasonal?.period ?? 1) : 1) : 0);
 }
 
 /** Why a model asked for REML kept its exact-ML estimates. */
@@ -87,50 +54,157 @@ export type RestrictedFallback = 'not-converged' | InadmissibleReason;
 export interface TrendModelOptions {
   /** How the chosen order's coefficients are estimated; 'reml' (REML) when absent. */
   estimation?: Estimation;
+  /** A seasonal series: what the seasonal search may try. Absent: no seasonal part. */
+  seasonal?: SeasonalSearchSpec;
+}
+
+/** A seasonal part fixed in advance, for `fitTrendModelAtOrder` (a backtest that keeps the orders). */
+export interface FixedSeasonalPart extends SeasonalChoice {
+  period: number;
+  firstSeason: number;
+  seasonalDifferencing: boolean;
+}
+
+export interface FixedOrderOptions {
+  estimation?: Estimation;
+  seasonal?: FixedSeasonalPart;
+}
+
+/** The seasonal part of a fitted model. */
+export interface SeasonalModelPart extends SeasonalChoice {
+  period: number;
+  /** The stochastic model works on seasonal differences (1 − B^s). */
+  seasonalDifferencing: boolean;
+  /** The fixed pattern the harmonics describe, one value per position in the year (0 = January or Q1); null without harmonics. */
+  pattern: number[] | null;
 }
 
 export interface TrendModelFit {
   kind: TrendModelKind;
   design: TrendDesign;
-  /** The estimates the model reports and forecasts with (REML unless `restrictedFallback`). */
+  /**
+   * The estimates the model reports and forecasts with (REML unless `restrictedFallback`).
+   * With a seasonal ARMA factor `fit.ar`/`fit.ma` are the expanded process; `fit.order` and
+   * `fit.factors` the multiplicative form.
+   */
   fit: RegressionArmaFit;
   /** The full log-likelihood and AICc of the chosen order at its exact-ML optimum (the selection's figures). */
   loglik: number;
   aicc: number;
   /** Set when REML was asked for but its fit was not used (the ML fit stands). */
   restrictedFallback?: RestrictedFallback;
-  candidates: Candidate[];
+  /** Every fit of the search; P, Q and harmonics are 0 for a model without a seasonal part. */
+  candidates: SeasonalCandidate[];
+  /** The regression coefficients by name (intercept, slope or drift; cos1, sin1, … with harmonics). */
   coefficients: Record<string, number>;
+  /** The seasonal part chosen; null for a model fitted without a seasonal search. */
+  seasonal: SeasonalModelPart | null;
   /**
    * The fit of lower AICc that the search set aside as not admissible (admissibility.ts),
-   * absent when the selected fit is also the AICc best.
+   * absent when the selected fit is also the AICc best. `ar` and `ma` are the nonseasonal
+   * factors; a seasonal model adds its seasonal part.
    */
-  setAside?: { p: number; q: number; ar: number[]; ma: number[]; aicc: number; reason: InadmissibleReason };
-  /** Standard errors for the regression coefficients (GLS) and AR/MA (observed information). */
-  stderr: { regression: Record<string, number>; ar: number[]; ma: number[]; method: StandardErrorMethod };
+  setAside?: {
+    p: number;
+    q: number;
+    ar: number[];
+    ma: number[];
+    aicc: number;
+    reason: InadmissibleReason;
+  } & Partial<SeasonalChoice & { seasonalAr: number[]; seasonalMa: number[] }>;
+  /** Standard errors for the regression coefficients (GLS) and the ARMA factors (observed information). */
+  stderr: { regression: Record<string, number>; ar: number[]; ma: number[]; seasonalAr: number[]; seasonalMa: number[]; method: StandardErrorMethod };
 }
 
 /** Order search for one model, the chosen order's estimates, then their standard errors. */
 export function fitTrendModel(kind: TrendModelKind, w: Float64Array, maxP: number, maxQ: number, options: TrendModelOptions = {}): TrendModelFit {
+  if (options.seasonal !== undefined) return fitSeasonalTrendModel(kind, w, maxP, maxQ, options.seasonal, options);
   const design = trendDesign(kind, w);
   const search = searchOrders(design.response, design.regressors, maxP, maxQ, { accumulateGaps: design.accumulateGaps, differenced: kind === 'stochastic' });
-  const model = describeFit(kind, design, search.best, search.bestAicc, search.candidates, options);
+  const candidates = search.candidates.map((candidate) => ({ ...candidate, P: 0, Q: 0, harmonics: 0 }));
+  const model = describeFit(kind, design, search.best, search.bestAicc, candidates, null, options);
   const { setAside } = search;
   return setAside === null ? model : { ...model, setAside: { p: setAside.fit.p, q: setAside.fit.q, ar: Array.from(setAside.fit.ar), ma: Array.from(setAside.fit.ma), aicc: setAside.aicc, reason: setAside.reason } };
 }
 
+function fitSeasonalTrendModel(kind: TrendModelKind, w: Float64Array, maxP: number, maxQ: number, spec: SeasonalSearchSpec, options: TrendModelOptions): TrendModelFit {
+  const search = searchSeasonalModel(kind, w, maxP, maxQ, spec);
+  const part = seasonalPart(search.design, search.choice);
+  const model = describeFit(kind, search.design, search.best, search.bestAicc, search.candidates, part, options);
+  const { setAside } = search;
+  if (setAside === null) return model;
+  const { factors, order } = setAside.fit;
+  return {
+    ...model,
+    setAside: {
+      p: order.p,
+      q: order.q,
+      ar: Array.from(factors.ar),
+      ma: Array.from(factors.ma),
+      aicc: setAside.aicc,
+      reason: setAside.reason,
+      ...setAside.choice,
+      seasonalAr: Array.from(factors.seasonalAr),
+      seasonalMa: Array.from(factors.seasonalMa),
+    },
+  };
+}
+
 /** A model at a fixed order (no search), e.g. for a backtest that keeps orders fixed. */
-export function fitTrendModelAtOrder(kind: TrendModelKind, w: Float64Array, p: number, q: number, options: TrendModelOptions = {}): TrendModelFit {
-  const design = trendDesign(kind, w);
-  const fit = fitRegressionArma(design.response, design.regressors, p, q, { accumulateGaps: design.accumulateGaps });
-  const k = p + q + design.regressors.length + 1;
+export function fitTrendModelAtOrder(kind: TrendModelKind, w: Float64Array, p: number, q: number, options: FixedOrderOptions = {}): TrendModelFit {
+  const fixed = options.seasonal;
+  const design = trendDesign(
+    kind,
+    w,
+    fixed === undefined ? undefined : { period: fixed.period, firstSeason: fixed.firstSeason, harmonics: fixed.harmonics, seasonalDifferencing: fixed.seasonalDifferencing },
+  );
+  const seasonal = seasonalPartOf(design, fixed);
+  const fit = fitRegressionArma(design.response, design.regressors, p, q, { accumulateGaps: design.accumulateGaps, seasonal });
+  const k = p + q + (fixed?.P ?? 0) + (fixed?.Q ?? 0) + design.regressors.length + 1;
   const value = aicc(fit.loglik, k, fit.nobs);
-  return describeFit(kind, design, fit, value, [{ p, q, loglik: fit.loglik, aicc: value, converged: fit.converged, ...admissibility(fit, kind === 'stochastic') }], options);
+  const candidate: SeasonalCandidate = {
+    p,
+    q,
+    P: fixed?.P ?? 0,
+    Q: fixed?.Q ?? 0,
+    harmonics: fixed?.harmonics ?? 0,
+    loglik: fit.loglik,
+    aicc: value,
+    converged: fit.converged,
+    ...admissibility(fit, kind === 'stochastic'),
+  };
+  const part = fixed === undefined ? null : seasonalPart(design, fixed);
+  return describeFit(kind, design, fit, value, [candidate], part, options);
+}
+
+/** The seasonal ARMA part a fit at this design and choice runs with (none without a seasonal factor). */
+function seasonalPartOf(design: TrendDesign, choice: SeasonalChoice | undefined): SeasonalPart | undefined {
+  const period = design.seasonality?.period;
+  if (choice === undefined || period === undefined || choice.P + choice.Q === 0) return undefined;
+  return { period, P: choice.P, Q: choice.Q };
+}
+
+function seasonalPart(design: TrendDesign, choice: SeasonalChoice): SeasonalModelPart {
+  const seasonality = design.seasonality;
+  if (seasonality === undefined) throw new Error('trendModels: a seasonal part needs a design with a seasonality');
+  return {
+    harmonics: choice.harmonics,
+    P: choice.P,
+    Q: choice.Q,
+    period: seasonality.period,
+    seasonalDifferencing: seasonality.seasonalDifferencing,
+    pattern: null,
+  };
 }
 
 /** The REML fit at the ML fit's order, started from its optimum, or why the ML fit stays. */
-function restrictedFit(kind: TrendModelKind, design: TrendDesign, ml: RegressionArmaFit): RegressionArmaFit | RestrictedFallback {
-  const fit = fitRegressionArma(design.response, design.regressors, ml.p, ml.q, { accumulateGaps: design.accumulateGaps, estimation: 'reml', starts: [ml.unconstrained] });
+function restrictedFit(kind: TrendModelKind, design: TrendDesign, ml: RegressionArmaFit, seasonal: SeasonalPart | undefined): RegressionArmaFit | RestrictedFallback {
+  const fit = fitRegressionArma(design.response, design.regressors, ml.order.p, ml.order.q, {
+    accumulateGaps: design.accumulateGaps,
+    estimation: 'reml',
+    seasonal,
+    starts: [ml.unconstrained],
+  });
   if (!fit.converged) return 'not-converged';
   const verdict = admissibility(fit, kind === 'stochastic');
   return verdict.admissible ? fit : (verdict.reason ?? 'not-converged');
@@ -141,10 +215,12 @@ function describeFit(
   design: TrendDesign,
   ml: RegressionArmaFit,
   aicc: number,
-  candidates: Candidate[],
-  options: TrendModelOptions,
+  candidates: SeasonalCandidate[],
+  part: SeasonalModelPart | null,
+  options: TrendModelOptions | FixedOrderOptions,
 ): TrendModelFit {
-  const restricted = (options.estimation ?? 'reml') === 'reml' ? restrictedFit(kind, design, ml) : undefined;
+  const seasonal = seasonalPartOf(design, part ?? undefined);
+  const restricted = (options.estimation ?? 'reml') === 'reml' ? restrictedFit(kind, design, ml, seasonal) : undefined;
   const fit = typeof restricted === 'object' ? restricted : ml;
   const coefficients: Record<string, number> = {};
   const regression: Record<string, number> = {};
@@ -154,8 +230,14 @@ function describeFit(
     regression[name] = Math.sqrt(fit.covBeta[i * k + i]);
   });
   const ols = olsFit(design.response, design.regressors);
-  const likelihood = createProfileLikelihood(ols.residuals, design.regressors, fit.p, fit.q, { accumulateGaps: design.accumulateGaps, estimation: fit.estimation });
-  const armaSe = armaStandardErrors(likelihood, fit.ar, fit.ma);
+  const likelihood = createProfileLikelihood(ols.residuals, design.regressors, fit.order.p, fit.order.q, {
+    accumulateGaps: design.accumulateGaps,
+    estimation: fit.estimation,
+    seasonal,
+  });
+  const armaSe = armaStandardErrors(likelihood, packFactors(fit.factors));
+  const { p, q, P } = fit.order;
+  const harmonicAt = design.coefficientNames.length - (part === null ? 0 : harmonicColumnCount(part.period, part.harmonics));
   return {
     kind,
     design,
@@ -165,12 +247,30 @@ function describeFit(
     ...(typeof restricted === 'string' ? { restrictedFallback: restricted } : {}),
     candidates,
     coefficients,
-    stderr: { regression, ar: Array.from(armaSe.values.subarray(0, fit.p)), ma: Array.from(armaSe.values.subarray(fit.p)), method: armaSe.method },
+    seasonal: part === null ? null : { ...part, pattern: part.harmonics === 0 ? null : seasonalPattern(part.period, part.harmonics, fit.beta.subarray(harmonicAt)) },
+    stderr: {
+      regression,
+      ar: Array.from(armaSe.values.subarray(0, p)),
+      ma: Array.from(armaSe.values.subarray(p, p + q)),
+      seasonalAr: Array.from(armaSe.values.subarray(p + q, p + q + P)),
+      seasonalMa: Array.from(armaSe.values.subarray(p + q + P)),
+      method: armaSe.method,
+    },
   };
+}
+
+/** How a design's forecasts are integrated to levels (none for the deterministic model). */
+export function designIntegration(design: TrendDesign): { lastLevel: number } | Integration | undefined {
+  if (design.seasonalIntegration !== undefined) return design.seasonalIntegration;
+  return design.integrateFrom === undefined ? undefined : { lastLevel: design.integrateFrom };
+}
+
+/** Model-scale forecast moments for h = 1..horizon from a design and the filtered state at its end. */
+export function forecastDesign(design: TrendDesign, input: ForecastInput, horizon: number): ForecastMoments {
+  return forecastRegressionArma(input, design.futureRows(horizon), designIntegration(design));
 }
 
 /** Model-scale forecast moments for h = 1..horizon. */
 export function forecastTrendModel(model: TrendModelFit, horizon: number): ForecastMoments {
-  const integrate = model.design.integrateFrom === undefined ? undefined : { lastLevel: model.design.integrateFrom };
-  return forecastRegressionArma(model.fit, model.design.futureRows(horizon), integrate);
+  return forecastDesign(model.design, model.fit, horizon);
 }

@@ -18,6 +18,14 @@
 // so Var(S_h | data) = σ² s_{h+1}, the origin's uncertainty included. The same state serves a
 // series with missing levels: the gap filter leaves the α part of its last prediction, and the
 // last level is observed, so the running sum starts afresh at the origin (gapFilter.ts).
+// A model for seasonal differences (1 − B^s)w builds each level on the one a year before,
+// w_{n+h} = w_{n+h−s} + Δ_s w_{n+h}, so the sums run per season: season c = (h − 1) mod s
+// collects the forecast changes at h ≡ c + 1 (mod s) on top of the last level of its season.
+// Each sum is one more state element like the one above, with its own c_j and s_j; only
+// changes of one season are ever added up, so the sums' covariances with each other are never
+// needed. With one season this is exactly the first-difference case. Where the last level of
+// a season is missing, its sum starts from the filtered sum of the changes since that season's
+// last observed level (`pending`, from the gap filter), with its covariance with the state.
 
 export interface ForecastInput {
   ar: ArrayLike<number>;
@@ -32,6 +40,28 @@ export interface ForecastInput {
   finalCovariance: Float64Array;
 }
 
+/** Levels forecast from differences: first (period 1) or seasonal (period s). */
+export interface Integration {
+  /** 1 for first differences, s for seasonal differences. */
+  period: number;
+  /** The last observed level of each season, oldest season first: for period 1 the last level, for s the levels at n − s + 1..n when all are observed. */
+  lastLevels: ArrayLike<number>;
+  /** Where a season's last level is missing: the filtered sums of its unobserved changes since its last observed level. */
+  pending?: PendingChanges;
+}
+
+/** The origin's filtered sums of each season's changes not yet seen in a level (all zero when every season's last level is observed). */
+export interface PendingChanges {
+  /** Per filtered column (y first, then each regressor), the sums by season (length `period` each). */
+  sums: readonly Float64Array[];
+  /** Per season, the regressors summed over those changes, season c at [c·k, (c+1)·k). */
+  regressorTotals: Float64Array;
+  /** Cov(α_{n+1}, sum_c) / σ², season c at [c·r, (c+1)·r). */
+  cross: Float64Array;
+  /** Var(sum_c) / σ² by season. */
+  variance: Float64Array;
+}
+
 export interface ForecastMoments {
   mean: Float64Array;
   /** Standard error from the ARMA process alone. */
@@ -42,12 +72,13 @@ export interface ForecastMoments {
 
 /**
  * Forecasts for h = 1..H given the regressor rows `futureRows[h − 1]` (each of length k).
- * With `integrate.lastLevel`, moments are for the level y_n + Σ_{j ≤ h} Δy_{n+j}.
+ * With `integrate.lastLevel`, moments are for the level y_n + Σ_{j ≤ h} Δy_{n+j}; with an
+ * `Integration` of period s, for the level w_{n+h} built from seasonal differences.
  */
 export function forecastRegressionArma(
   input: ForecastInput,
   futureRows: readonly ArrayLike<number>[],
-  integrate?: { lastLevel: number },
+  integrate?: { lastLevel: number } | Integration,
 ): ForecastMoments {
   const horizon = futureRows.length;
   const r = input.finalCovariance.length === 0 ? 1 : Math.round(Math.sqrt(input.finalCovariance.length));
@@ -63,33 +94,37 @@ export function forecastRegressionArma(
   const regressorStates = input.finalState.slice(1).map((s) => s.slice());
   for (let c = 0; c < k; c++) for (let i = 0; i < r; i++) noise[i] -= input.beta[c] * regressorStates[c][i];
 
-  // P_{n+j} / σ², and for `integrate` c_j and s_j (also / σ²), updated in place.
+  // P_{n+j} / σ², and for `integrate` per season c_j and s_j (also / σ²), updated in place.
   const cov = input.finalCovariance.slice();
   const product = new Float64Array(r * r);
-  const sumCross = new Float64Array(r);
-  let sumVariance = 0;
+  const sums = integrate === undefined ? undefined : startSums(integrate, input.beta, r, k);
+  const period = sums?.period ?? 1;
 
   const mean = new Float64Array(horizon);
   const seProcess = new Float64Array(horizon);
   const seTotal = new Float64Array(horizon);
-  const g = new Float64Array(k);
-  let level = integrate?.lastLevel ?? 0;
+  let g: Float64Array = new Float64Array(k);
   for (let h = 0; h < horizon; h++) {
     const row = futureRows[h];
+    const season = h % period;
+    if (sums !== undefined) g = sums.g.subarray(season * k, (season + 1) * k);
     let step = noise[0];
     for (let c = 0; c < k; c++) {
       step += row[c] * input.beta[c];
       const gc = row[c] - regressorStates[c][0];
-      g[c] = integrate ? g[c] + gc : gc;
+      g[c] = sums !== undefined ? g[c] + gc : gc;
     }
-    level = integrate ? level + step : step;
-    mean[h] = level;
     let processVariance = cov[0];
-    if (integrate) {
-      sumVariance += 2 * sumCross[0] + cov[0];
-      processVariance = sumVariance;
+    if (sums === undefined) {
+      mean[h] = step;
+    } else {
+      sums.level[season] += step;
+      mean[h] = sums.level[season];
+      const sumCross = sums.cross.subarray(season * r, (season + 1) * r);
+      sums.variance[season] += 2 * sumCross[0] + cov[0];
+      processVariance = sums.variance[season];
       for (let i = 0; i < r; i++) sumCross[i] += cov[i * r];
-      advance(sumCross, phi, r);
+      for (let c = 0; c < period; c++) advance(sums.cross.subarray(c * r, (c + 1) * r), phi, r);
     }
     processVariance *= input.sigma2;
     let coefficientVariance = 0;
@@ -101,6 +136,43 @@ export function forecastRegressionArma(
     propagate(cov, product, phi, rvec, r);
   }
   return { mean, seProcess, seTotal };
+}
+
+/** Per season: the level so far, the coefficient gradient g, c_j and s_j (/ σ²). */
+interface SeasonSums {
+  period: number;
+  level: Float64Array;
+  g: Float64Array;
+  cross: Float64Array;
+  variance: Float64Array;
+}
+
+/** The sums at the origin: each season's last level, plus what its pending changes add when some are missing. */
+function startSums(integrate: { lastLevel: number } | Integration, beta: ArrayLike<number>, r: number, k: number): SeasonSums {
+  const { period, lastLevels, pending } = 'lastLevel' in integrate ? { period: 1, lastLevels: [integrate.lastLevel], pending: undefined } : integrate;
+  if (lastLevels.length !== period) throw new RangeError(`forecastRegressionArma: ${period} last levels needed, got ${lastLevels.length}`);
+  const sums: SeasonSums = {
+    period,
+    level: Float64Array.from(lastLevels),
+    g: new Float64Array(period * k),
+    cross: new Float64Array(period * r),
+    variance: new Float64Array(period),
+  };
+  if (pending === undefined) return sums;
+  // The pending changes' mean: x̄'β + (ū_y − Σ β_c ū_{x_c}); their gradient in β: x̄ − ū_x.
+  for (let season = 0; season < period; season++) {
+    let add = pending.sums[0][season];
+    for (let c = 0; c < k; c++) {
+      const total = pending.regressorTotals[season * k + c];
+      const filtered = pending.sums[c + 1][season];
+      add += beta[c] * (total - filtered);
+      sums.g[season * k + c] = total - filtered;
+    }
+    sums.level[season] += add;
+  }
+  sums.cross.set(pending.cross);
+  sums.variance.set(pending.variance);
+  return sums;
 }
 
 /** s ← T s for the companion-form T. */

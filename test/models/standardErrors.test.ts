@@ -20,8 +20,8 @@ describe('armaStandardErrors', () => {
     const model = fitTrendModelAtOrder('deterministic', lake, 2, 0, { estimation: 'ml' });
     expect(model.stderr.method).toBe('observed-information');
     const likelihood = likelihoodFor(2, 0);
-    const hessian = observedInformationErrors(likelihood, model.fit.ar, 2);
-    const scores = outerProductErrors(likelihood, model.fit.ar, 2);
+    const hessian = observedInformationErrors(likelihood, model.fit.ar);
+    const scores = outerProductErrors(likelihood, model.fit.ar);
     hessian.forEach((se, i) => expect(se).toBeCloseTo(model.stderr.ar[i], 12));
     // Both estimate the same information (Berndt, Hall, Hall & Hausman 1974): asymptotically
     // equal, and in a sample of 98 within a quarter of each other (common practice).
@@ -31,12 +31,12 @@ describe('armaStandardErrors', () => {
   it('falls back to the outer product when a Hessian step leaves the stationary region', () => {
     // φ = 0.99995 with a step of 1e-4: φ + step is not stationary, so the second difference
     // cannot be formed; the scores take the step that stays inside.
-    const result = armaStandardErrors(likelihoodFor(1, 0), Float64Array.of(0.99995), new Float64Array(0));
+    const result = armaStandardErrors(likelihoodFor(1, 0), Float64Array.of(0.99995));
     expect(result.method).toBe('outer-product');
     expect(result.values[0]).toBeGreaterThan(0);
   });
 
   it('reports no method without ARMA terms', () => {
-    expect(armaStandardErrors(likelihoodFor(0, 0), new Float64Array(0), new Float64Array(0))).toEqual({ values: new Float64Array(0), method: null });
+    expect(armaStandardErrors(likelihoodFor(0, 0), new Float64Array(0))).toEqual({ values: new Float64Array(0), method: null });
   });
 });

@@ -1,0 +1,213 @@
+// The seasonal part of a trend model, chosen from the data with the ARMA order, by AICc among
+// the admissible fits (admissibility.ts), one model at a time. A seasonal part is
+// (K, P, Q): K harmonic pairs for a fixed pattern (harmonics.ts; none on seasonal
+// differences, which remove a fixed pattern) and seasonal AR and MA factors of orders P, Q
+// for a pattern that drifts (seasonalArma.ts). All parts are fitted to the same response, so
+// their AICc compare; whether the stochastic model differences seasonally changes the
+// response, so the caller decides that (from the seasonal evidence) and AICc never does.
+//
+// Trying every part with every (p, q) would cost (K + 1)(P + 1)(Q + 1)(p + 1)(q + 1) fits, 448
+// for a monthly series at the default limits, most with a state of dimension 13 to 16. The
+// search goes in stages instead (our design, in the spirit of the stepwise search of
+// Hyndman & Khandakar 2008, §3.2, from memory, which also fixes a small order first):
+//   1. every seasonal part at a small base order, (1, 1) within the limits;
+//   2. the (p, q) grid with the best part held (orderSearch.ts, neighbours' optima as starts);
+//   3. every other part at the grid's best (p, q); if one beats it, back to 2 with that part,
+//      at most `MAX_ROUNDS` times.
+// The model is the admissible fit of lowest AICc among all fitted. The plain part (0, 0, 0)
+// at (0, 0) is always fitted, so an admissible fit always exists.
+import type { TrendModelKind } from '../base/settings.js';
+import { admissibility, type InadmissibleReason } from './admissibility.js';
+import { countObserved, fitRegressionArma, type RegressionArmaFit } from './fitRegressionArma.js';
+import { checkHarmonics } from './harmonics.js';
+import { aicc, fitGrid, padStart, type Candidate } from './orderSearch.js';
+import { trendDesign, type TrendDesign } from './trendDesign.js';
+
+/** Stage 3 sends the search back to stage 2 at most this many times. */
+const MAX_ROUNDS = 3;
+
+/** What a seasonal series lets the search try. */
+export interface SeasonalSearchSpec {
+  /** Observations per year s: 12 monthly, 4 quarterly. */
+  period: number;
+  /** Position in the year of the first observation: month − 1, or quarter − 1. */
+  firstSeason: number;
+  /** Stochastic model: seasonal differences instead of first differences (the deterministic model never differences). */
+  seasonalDifferencing: boolean;
+  /** Most harmonic pairs tried, 0..⌊s/2⌋. */
+  maxHarmonics: number;
+  /** Largest seasonal AR and MA orders tried (0 or 1 each). */
+  maxSeasonalP: number;
+  maxSeasonalQ: number;
+}
+
+/** A seasonal part: harmonic pairs and seasonal ARMA orders. */
+export interface SeasonalChoice {
+  harmonics: number;
+  P: number;
+  Q: number;
+}
+
+/** A candidate of the seasonal search: a nonseasonal order with its seasonal part. */
+export interface SeasonalCandidate extends Candidate {
+  P: number;
+  Q: number;
+  harmonics: number;
+}
+
+export interface SeasonalSearchResult {
+  best: RegressionArmaFit;
+  bestAicc: number;
+  /** The best fit's design (its harmonic pairs). */
+  design: TrendDesign;
+  choice: SeasonalChoice;
+  /** Every fit made, in the order made. */
+  candidates: SeasonalCandidate[];
+  /** The converged fit of lowest AICc when it is not admissible and beats the selected one, else null. */
+  setAside: { fit: RegressionArmaFit; aicc: number; reason: InadmissibleReason; choice: SeasonalChoice } | null;
+}
+
+interface Entry {
+  fit: RegressionArmaFit;
+  choice: SeasonalChoice;
+  candidate: SeasonalCandidate;
+}
+
+export function checkSeasonalSearchSpec(spec: SeasonalSearchSpec): void {
+  checkHarmonics(spec.period, spec.maxHarmonics);
+  for (const [name, value] of [['maxSeasonalP', spec.maxSeasonalP], ['maxSeasonalQ', spec.maxSeasonalQ]] as const) {
+    if (!(value === 0 || value === 1)) throw new RangeError(`seasonal search: ${name} must be 0 or 1, got ${value}`);
+  }
+}
+
+/** The seasonal parts the search tries for a model. */
+export function seasonalChoices(kind: TrendModelKind, spec: SeasonalSearchSpec): SeasonalChoice[] {
+  const harmonicsTried = kind === 'stochastic' && spec.seasonalDifferencing ? 0 : spec.maxHarmonics;
+  const choices: SeasonalChoice[] = [];
+  for (let harmonics = 0; harmonics <= harmonicsTried; harmonics++) {
+    for (let P = 0; P <= spec.maxSeasonalP; P++) for (let Q = 0; Q <= spec.maxSeasonalQ; Q++) choices.push({ harmonics, P, Q });
+  }
+  return choices;
+}
+
+export function searchSeasonalModel(kind: TrendModelKind, w: Float64Array, maxP: number, maxQ: number, spec: SeasonalSearchSpec): SeasonalSearchResult {
+  checkSeasonalSearchSpec(spec);
+  const seasonalDifferencing = kind === 'stochastic' && spec.seasonalDifferencing;
+  const differenced = kind === 'stochastic';
+  const designs = new Map<number, TrendDesign>();
+  const designFor = (harmonics: number): TrendDesign => {
+    let design = designs.get(harmonics);
+    if (design === undefined) {
+      design = trendDesign(kind, w, { period: spec.period, firstSeason: spec.firstSeason, harmonics, seasonalDifferencing });
+      designs.set(harmonics, design);
+    }
+    return design;
+  };
+  const entries = new Map<string, Entry>();
+  const entryAt = (choice: SeasonalChoice, p: number, q: number): Entry | undefined => entries.get(entryKey(choice, p, q));
+  const record = (choice: SeasonalChoice, fit: RegressionArmaFit): Entry => {
+    const design = designFor(choice.harmonics);
+    const parameters = fit.order.p + fit.order.q + choice.P + choice.Q + design.regressors.length + 1;
+    const value = aicc(fit.loglik, parameters, fit.nobs);
+    const { admissible, reason } = admissibility(fit, differenced);
+    const entry: Entry = {
+      fit,
+      choice,
+      candidate: { p: fit.order.p, q: fit.order.q, P: choice.P, Q: choice.Q, harmonics: choice.harmonics, loglik: fit.loglik, aicc: value, converged: fit.converged, admissible, reason },
+    };
+    entries.set(entryKey(choice, fit.order.p, fit.order.q), entry);
+    return entry;
+  };
+  const fits = (choice: SeasonalChoice, p: number, q: number): boolean => {
+    const design = designFor(choice.harmonics);
+    return countObserved(design.response) - (p + q + choice.P + choice.Q + design.regressors.length + 1) - 1 > 0;
+  };
+  /**
+   * One fit at (p, q), started from its neighbours at this order already fitted: the same
+   * harmonics with a seasonal factor fewer (padded, they reproduce that fit exactly), and the
+   * same seasonal orders with one harmonic pair fewer.
+   */
+  const fitAt = (choice: SeasonalChoice, p: number, q: number): Entry | undefined => {
+    const known = entryAt(choice, p, q);
+    if (known !== undefined) return known;
+    if (!fits(choice, p, q)) return undefined;
+    const neighbours = [
+      { ...choice, P: choice.P - 1 },
+      { ...choice, Q: choice.Q - 1 },
+      { ...choice, P: choice.P - 1, Q: choice.Q - 1 },
+      { ...choice, harmonics: choice.harmonics - 1 },
+    ].filter((c) => c.P >= 0 && c.Q >= 0 && c.harmonics >= 0);
+    const starts = neighbours
+      .map((c) => entryAt(c, p, q))
+      .filter((entry): entry is Entry => entry !== undefined)
+      .map((entry) => padStart(entry.fit, p, q, choice.P, choice.Q));
+    const design = designFor(choice.harmonics);
+    const fit = fitRegressionArma(design.response, design.regressors, p, q, {
+      accumulateGaps: design.accumulateGaps,
+      seasonal: { period: spec.period, P: choice.P, Q: choice.Q },
+      starts,
+    });
+    return record(choice, fit);
+  };
+  const bestOf = (candidates: readonly (Entry | undefined)[]): Entry | undefined => {
+    let best: Entry | undefined;
+    for (const entry of candidates) {
+      if (entry !== undefined && entry.candidate.admissible && entry.candidate.aicc < (best?.candidate.aicc ?? Number.POSITIVE_INFINITY)) best = entry;
+    }
+    return best;
+  };
+
+  const choices = seasonalChoices(kind, spec);
+  const plain = choices[0];
+  fitAt(plain, 0, 0);
+  const baseP = Math.min(1, maxP);
+  const baseQ = Math.min(1, maxQ);
+  // Stage 1.
+  let choice = bestOf(choices.map((c) => fitAt(c, baseP, baseQ)))?.choice ?? plain;
+  for (let round = 0; round < MAX_ROUNDS; round++) {
+    // Stage 2.
+    const design = designFor(choice.harmonics);
+    const known = [...entries.values()].filter((entry) => sameChoice(entry.choice, choice)).map((entry) => entry.fit);
+    const grid = fitGrid(design.response, design.regressors, maxP, maxQ, {
+      accumulateGaps: design.accumulateGaps,
+      differenced,
+      seasonal: { period: spec.period, P: choice.P, Q: choice.Q },
+      known,
+    });
+    for (const { fit } of grid) if (entryAt(choice, fit.order.p, fit.order.q) === undefined) record(choice, fit);
+    const gridBest = bestOf(grid.map(({ fit }) => entryAt(choice, fit.order.p, fit.order.q)));
+    if (gridBest === undefined) break;
+    // Stage 3.
+    const { p, q } = gridBest.fit.order;
+    const next = bestOf(choices.map((c) => fitAt(c, p, q)));
+    if (next === undefined || sameChoice(next.choice, choice)) break;
+    choice = next.choice;
+  }
+  const all = [...entries.values()];
+  const best = bestOf(all);
+  if (best === undefined) throw new Error('searchSeasonalModel: no admissible fit, not even the plain (0, 0)');
+  let setAside: Entry | undefined;
+  for (const entry of all) {
+    const { reason, aicc: value } = entry.candidate;
+    if (reason !== null && reason !== 'not-converged' && value < best.candidate.aicc && value < (setAside?.candidate.aicc ?? Number.POSITIVE_INFINITY)) setAside = entry;
+  }
+  return {
+    best: best.fit,
+    bestAicc: best.candidate.aicc,
+    design: designFor(best.choice.harmonics),
+    choice: best.choice,
+    candidates: all.map((entry) => entry.candidate),
+    setAside:
+      setAside === undefined || setAside.candidate.reason === null
+        ? null
+        : { fit: setAside.fit, aicc: setAside.candidate.aicc, reason: setAside.candidate.reason, choice: setAside.choice },
+  };
+}
+
+function sameChoice(a: SeasonalChoice, b: SeasonalChoice): boolean {
+  return a.harmonics === b.harmonics && a.P === b.P && a.Q === b.Q;
+}
+
+function entryKey(choice: SeasonalChoice, p: number, q: number): string {
+  return `${choice.harmonics},${choice.P},${choice.Q},${p},${q}`;
+}
