@@ -98,7 +98,7 @@ export const evidenceWording = {
   fitFacts: (a: { p: number; q: number; nobs: number; loglik: string; aicc: string; sigma2: string; converged: string; estimation: Estimation }) =>
     `ARMA(${a.p}, ${a.q}) errors, the order chosen by AICc on the exact likelihood (${a.nobs} observations; log-likelihood ${a.loglik}; AICc ${a.aicc}). ` +
     (a.estimation === 'reml'
-      ? `Coefficients, innovation variance (${a.sigma2}) and standard errors by restricted maximum likelihood (REML), which removes most of the downward bias that exact maximum likelihood gives autoregressive coefficients, and the standard errors with them, when a trend is estimated from a short series. The fit ${a.converged}.`
+      ? `Coefficients, innovation variance (${a.sigma2}) and standard errors by restricted maximum likelihood (REML), less biased than exact maximum likelihood when the trend is estimated alongside the errors. The fit ${a.converged}.`
       : `Coefficients, innovation variance (${a.sigma2}) and standard errors by exact maximum likelihood. The fit ${a.converged}.`),
   /** REML was asked for, but its fit was not used. */
   restrictedFallback: (reason: string) =>
