@@ -1,9 +1,12 @@
 // The `evidence` part of an AnalysisRecord: unit-root tests on the model-scale levels, their
-// combined reading, residual checks of both fitted models, and the stability of the trend.
+// combined reading, residual checks of both fitted models, and the stability of the trend; for
+// a seasonal series (period > 1) also the seasonal evidence, and residual checks over at least
+// two seasonal cycles of lags.
 import type { Estimation } from '../base/settings.js';
 import { adfTest } from './adfTest.js';
 import { kpssTest } from './kpssTest.js';
 import { residualChecks, type ResidualChecks } from './residualChecks.js';
+import { seasonalEvidence, type SeasonalEvidenceOptions, type SeasonalEvidenceRecord } from './seasonalEvidence.js';
 import { breakTestSummary, evidenceNotes } from './messages.js';
 import { trendStability } from './trendStability.js';
 import { trendVerdict } from './trendVerdict.js';
@@ -16,6 +19,12 @@ export interface EvidenceOptions {
   kpssLagRule?: KpssLagRule;
   /** Period label of observation `index` (0-based), so break dates read as periods. */
   periodOf?: (index: number) => string;
+  /** Observations per year; default 1. Above 1 the record gets `seasonal` and longer residual checks. */
+  period?: number;
+  /** The seasonal evidence when the caller has it already (it decides the seasonal differencing before the fit). */
+  seasonal?: SeasonalEvidenceRecord;
+  /** Where the series starts in the calendar, for the seasonal pattern when `seasonal` is not given. */
+  seasonStart?: SeasonalEvidenceOptions['start'];
 }
 
 export interface EvidenceRecord {
@@ -29,12 +38,17 @@ export interface EvidenceRecord {
   unavailable: { test: string; reason: string }[];
   /** Caveats on how the tests were run, e.g. with missing values. */
   notes: string[];
+  /** Seasonal unit-root test, seasonal strength and pattern; present only for period > 1. */
+  seasonal?: SeasonalEvidenceRecord;
 }
 
 export interface FittedResiduals {
   residuals: ArrayLike<number>;
   p: number;
   q: number;
+  /** Seasonal AR and MA orders of the fit; default 0. */
+  P?: number;
+  Q?: number;
   /** How the fit was estimated; the stability windows are estimated the same way. */
   estimation?: Estimation;
 }
@@ -45,6 +59,7 @@ export function collectEvidence(
   options: EvidenceOptions,
 ): EvidenceRecord {
   const { significance } = options;
+  const period = options.period ?? 1;
   const lagRule = options.kpssLagRule ?? 'auto';
   const unavailable: EvidenceRecord['unavailable'] = [];
   const attempt = <T>(test: string, run: () => T): T | null => {
@@ -81,8 +96,8 @@ export function collectEvidence(
     adf,
     reading,
     residuals: {
-      deterministic: residualChecks(fits.deterministic.residuals, fits.deterministic.p, fits.deterministic.q, significance),
-      stochastic: residualChecks(fits.stochastic.residuals, fits.stochastic.p, fits.stochastic.q, significance),
+      deterministic: checkResiduals(fits.deterministic, significance, period),
+      stochastic: checkResiduals(fits.stochastic, significance, period),
     },
     stability: missing > 0 ? skipStability(unavailable) : attempt('stability', () => {
       const stability = trendStability(w, {
@@ -99,7 +114,13 @@ export function collectEvidence(
     }),
     unavailable,
     notes,
+    ...(period > 1 ? { seasonal: options.seasonal ?? seasonalEvidence(w, period, { significance, start: options.seasonStart }) } : {}),
   };
+}
+
+function checkResiduals(fit: FittedResiduals, significance: number, period: number): ResidualChecks {
+  if (period === 1) return residualChecks(fit.residuals, fit.p, fit.q, significance);
+  return residualChecks(fit.residuals, fit.p, fit.q, significance, { period, P: fit.P ?? 0, Q: fit.Q ?? 0 });
 }
 
 function skipStability(unavailable: EvidenceRecord['unavailable']): null {

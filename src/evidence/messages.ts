@@ -2,7 +2,7 @@
 // and reworded without touching the statistics. Written for a client reviewer: no test jargon
 // beyond naming the p-values.
 import { formatPValue, type StatedPValue } from '../base/pValueText.js';
-import type { SupWaldPBound, TrendVerdictKind } from './types.js';
+import type { SeasonalPattern, SeasonalStrength, SupWaldPBound, TrendVerdictKind } from './types.js';
 
 /** A short plain-language explanation of a trend verdict, with both p-values and the level used. */
 export function trendVerdictSummary(
@@ -74,4 +74,83 @@ export const evidenceNotes = {
     return `${count} missing value${count === 1 ? ' was' : 's were'} left out of the unit-root tests, which then treat the remaining values as consecutive; read them as approximate.`;
   },
   stabilityNeedsComplete: 'the trend-stability checks need a series without missing values',
+  seasonalNeedsComplete: 'the seasonal checks need a series without missing values',
 };
+
+const MONTHS = [
+  'January', 'February', 'March', 'April', 'May', 'June',
+  'July', 'August', 'September', 'October', 'November', 'December',
+];
+
+/** "March", "the second quarter", or "season 3" for another period. */
+export function seasonName(season: number, period: number): string {
+  if (period === 12) return MONTHS[season - 1];
+  if (period === 4) return `the ${['first', 'second', 'third', 'fourth'][season - 1]} quarter`;
+  return `season ${season}`;
+}
+
+/** "month" or "quarter", for a sentence about the same season a year earlier. */
+function seasonWord(period: number): string {
+  if (period === 12) return 'month';
+  if (period === 4) return 'quarter';
+  return 'season';
+}
+
+/** Three significant figures, without a trailing exponent for ordinary sizes. */
+function threeFigures(x: number): string {
+  return String(Number(x.toPrecision(3)));
+}
+
+/**
+ * One sentence on the seasonal unit-root check (Canova-Hansen): whether a stable pattern
+ * survives, and what the stochastic model does about it.
+ */
+export function seasonalTestSummary(
+  differencing: boolean,
+  pValue: StatedPValue,
+  significance: number,
+  period: number,
+): string {
+  const p = formatPValue(pValue);
+  const level = `${Number((significance * 100).toPrecision(6))}% level`;
+  const word = seasonWord(period);
+  return differencing
+    ? `The seasonal pattern does not hold still: the check for a stable pattern rules one out at the ${level} (${p}), ` +
+        `so the stochastic model also compares each ${word} with the same ${word} a year earlier (seasonal differencing).`
+    : `The check for a stable seasonal pattern finds nothing against one at the ${level} (${p}), ` +
+        'so the stochastic model keeps a fixed pattern and takes no seasonal difference.';
+}
+
+/** Descriptive bands for a strength between 0 and 1 (our wording, not a test). */
+function strengthWord(strength: number): string {
+  if (strength >= 0.7) return 'strong';
+  if (strength >= 0.4) return 'moderate';
+  return 'weak';
+}
+
+/**
+ * How strong the seasonal pattern is and whether it kept its shape: "stable" when no season's
+ * effect moved by more than a fifth of the pattern's range between the first and last complete
+ * years, "shifting" up to half of it, "changing" beyond (our wording bands, not a test).
+ */
+export function seasonalStrengthSummary(strength: Pick<SeasonalStrength, 'seasonal' | 'trend'>, pattern: SeasonalPattern): string {
+  const trend = strength.trend === null ? '' : ` The trend's strength on the same scale is ${strength.trend.toFixed(2)}.`;
+  if (strength.seasonal === null) return `The series does not vary, so no seasonal strength can be measured.${trend}`;
+  const value = strength.seasonal.toFixed(2);
+  const opening = `The seasonal pattern is ${strengthWord(strength.seasonal)} (seasonal strength ${value} on a scale from 0 to 1)`;
+  if (pattern.change_share === null || pattern.largest_change === null || pattern.largest_change_season === null) {
+    return `${opening}; the series is too short to compare two complete years of it.${trend}`;
+  }
+  const years =
+    pattern.first_year !== null && pattern.last_year !== null
+      ? `between ${pattern.first_year} and ${pattern.last_year}`
+      : 'between the first and the last complete year';
+  const share = `${Math.round(pattern.change_share * 100)}% of the pattern's range of ${threeFigures(pattern.amplitude)}`;
+  const season = seasonName(pattern.largest_change_season, pattern.period);
+  const change = threeFigures(pattern.largest_change);
+  if (pattern.change_share <= 0.2) {
+    return `${opening} and stable: ${years} no ${seasonWord(pattern.period)}'s effect moved by more than ${change}, ${share}.${trend}`;
+  }
+  const how = pattern.change_share <= 0.5 ? 'has shifted somewhat' : 'has changed considerably';
+  return `${opening}, and its shape ${how}: ${years} the effect of ${season} moved by ${change}, ${share}.${trend}`;
+}

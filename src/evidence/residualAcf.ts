@@ -6,11 +6,14 @@ import { defaultAcfLags } from './defaultAcfLags.js';
 import { finiteSeries } from './finiteSeries.js';
 import type { AcfResult } from './types.js';
 
-/** Autocorrelations at lags 1..lags (default min(10, floor(n/5))) with their white-noise band. */
-export function residualAcf(residuals: ArrayLike<number>, options: { lags?: number } = {}): AcfResult {
+/**
+ * Autocorrelations at lags 1..lags with their white-noise band; by default `defaultAcfLags(n,
+ * period)` lags, min(10, floor(n/5)) for non-seasonal data (period 1).
+ */
+export function residualAcf(residuals: ArrayLike<number>, options: { lags?: number; period?: number } = {}): AcfResult {
   const series = finiteSeries(residuals, 'residualAcf');
   const n = series.length;
-  const lags = options.lags ?? defaultAcfLags(n);
+  const lags = options.lags ?? defaultAcfLags(n, options.period);
   return { ...autocorrelations(series, lags, 'residualAcf'), bound: 1.96 / Math.sqrt(n) };
 }
 

@@ -159,3 +159,99 @@ export interface StabilityRecord {
     stochastic: BreakTestResult;
   };
 }
+
+/** Critical values of the Canova-Hansen statistic by test size in percent (VM(p) quantiles). */
+export interface SeasonalCritical {
+  '10': number;
+  '5': number;
+  '1': number;
+}
+
+/** The Canova-Hansen statistic for the seasonal cycle(s) of one frequency. */
+export interface SeasonalFrequencyTest {
+  /** Cycles per year j: the frequency 2πj/s (j = s/2 is the half-year or two-quarter cycle). */
+  cycles_per_year: number;
+  stat: number;
+  /** 2 (a cosine and a sine), or 1 at j = s/2. */
+  restrictions: number;
+  p_value: number;
+  critical: SeasonalCritical;
+}
+
+/**
+ * Canova & Hansen (1995) test of a stable seasonal pattern against seasonal unit roots, on the
+ * first differences of the model-scale levels.
+ */
+export interface SeasonalUnitRootResult {
+  method: 'canova-hansen';
+  source: string;
+  /** The series the test regression ran on. */
+  tested: 'first differences';
+  /** Joint statistic over all seasonal frequencies. */
+  stat: number;
+  /** s − 1: the harmonic coefficients allowed to wander under the alternative. */
+  restrictions: number;
+  /** Bartlett-window truncation of the long-run covariance. */
+  lags: number;
+  lag_rule: string;
+  /** Observations in the test regression. */
+  n: number;
+  period: number;
+  /** Asymptotic p-value from the VM(s − 1) distribution. */
+  p_value: number;
+  critical: SeasonalCritical;
+  significance: number;
+  /** True when the stable pattern is rejected at `significance`: seasonal differencing is indicated. */
+  seasonal_differencing: boolean;
+  by_frequency: SeasonalFrequencyTest[];
+  /** A short plain-language sentence on what the test says. */
+  text: string;
+}
+
+/** Strength of the seasonal pattern and of the trend, from an STL decomposition. */
+export interface SeasonalStrength {
+  method: 'stl';
+  source: string;
+  /** F_S = max(0, 1 − Var(R)/Var(S + R)); null when S + R does not vary. */
+  seasonal: number | null;
+  /** F_T = max(0, 1 − Var(R)/Var(T + R)); null when T + R does not vary. */
+  trend: number | null;
+  /** The STL settings used: spans (odd), local degrees, inner and outer passes. */
+  stl: {
+    seasonal_span: number | 'periodic';
+    seasonal_degree: number;
+    trend_span: number;
+    trend_degree: number;
+    low_pass_span: number;
+    low_pass_degree: number;
+    inner: number;
+    outer: number;
+    robust: boolean;
+  };
+  /** A short plain-language sentence on the strength and stability of the pattern. */
+  text: string;
+}
+
+/** The STL seasonal pattern by month or quarter, and how it changed over the series. */
+export interface SeasonalPattern {
+  period: number;
+  /** Month (1–12) or quarter (1–4) of each entry below. */
+  season: number[];
+  /** Mean seasonal effect of each season over the whole series, on the model scale. */
+  mean_effect: number[];
+  /** Largest minus smallest mean effect. */
+  amplitude: number;
+  /** Calendar years with all s observations. */
+  complete_years: number;
+  /** The first and last complete calendar years; null when the start year is unknown or fewer than two. */
+  first_year: number | null;
+  last_year: number | null;
+  /** Seasonal effects in the first and last complete years; null with fewer than two complete years. */
+  first_year_effect: number[] | null;
+  last_year_effect: number[] | null;
+  /** Largest absolute change of one season's effect between those years, and that season. */
+  largest_change: number | null;
+  largest_change_season: number | null;
+  /** largest_change / amplitude; null when it cannot be formed. */
+  change_share: number | null;
+}
