@@ -9,11 +9,15 @@
 // Trying every part with every (p, q) would cost (K + 1)(P + 1)(Q + 1)(p + 1)(q + 1) fits, 448
 // for a monthly series at the default limits, most with a state of dimension 13 to 16. The
 // search goes in stages instead (our design, in the spirit of the stepwise search of
-// Hyndman & Khandakar 2008, §3.2, from memory, which also fixes a small order first):
-//   1. every seasonal part at a small base order, (1, 1) within the limits;
+// Hyndman & Khandakar 2008, §3.2, from memory, which also moves from a small order to its
+// neighbours):
+//   1. at a small base order, (1, 1) within the limits: the number of harmonic pairs K* with
+//      no seasonal factor (a state of dimension 2, cheap), then the seasonal factors with K*
+//      pairs and with none;
 //   2. the (p, q) grid with the best part held (orderSearch.ts, neighbours' optima as starts);
-//   3. every other part at the grid's best (p, q); if one beats it, back to 2 with that part,
-//      at most `MAX_ROUNDS` times.
+//   3. the best part's neighbours at the grid's best (p, q): one harmonic pair more or fewer,
+//      a seasonal factor added or dropped, the harmonics dropped; if one beats it, back to 2
+//      with that part, at most `MAX_ROUNDS` times.
 // The model is the admissible fit of lowest AICc among all fitted. The plain part (0, 0, 0)
 // at (0, 0) is always fitted, so an admissible fit always exists.
 import type { TrendModelKind } from '../base/settings.js';
@@ -158,12 +162,15 @@ export function searchSeasonalModel(kind: TrendModelKind, w: Float64Array, maxP:
   };
 
   const choices = seasonalChoices(kind, spec);
+  const allowed = (c: SeasonalChoice): boolean => choices.some((other) => sameChoice(other, c));
   const plain = choices[0];
   fitAt(plain, 0, 0);
   const baseP = Math.min(1, maxP);
   const baseQ = Math.min(1, maxQ);
   // Stage 1.
-  let choice = bestOf(choices.map((c) => fitAt(c, baseP, baseQ)))?.choice ?? plain;
+  const harmonicsBest = bestOf(choices.filter((c) => c.P + c.Q === 0).map((c) => fitAt(c, baseP, baseQ)))?.choice.harmonics ?? 0;
+  const factorsFirst = choices.filter((c) => c.P + c.Q > 0 && (c.harmonics === harmonicsBest || c.harmonics === 0));
+  let choice = bestOf([...factorsFirst, ...choices.filter((c) => c.P + c.Q === 0)].map((c) => fitAt(c, baseP, baseQ)))?.choice ?? plain;
   for (let round = 0; round < MAX_ROUNDS; round++) {
     // Stage 2.
     const design = designFor(choice.harmonics);
@@ -179,7 +186,7 @@ export function searchSeasonalModel(kind: TrendModelKind, w: Float64Array, maxP:
     if (gridBest === undefined) break;
     // Stage 3.
     const { p, q } = gridBest.fit.order;
-    const next = bestOf(choices.map((c) => fitAt(c, p, q)));
+    const next = bestOf([choice, ...neighbourChoices(choice)].filter(allowed).map((c) => fitAt(c, p, q)));
     if (next === undefined || sameChoice(next.choice, choice)) break;
     choice = next.choice;
   }
@@ -202,6 +209,18 @@ export function searchSeasonalModel(kind: TrendModelKind, w: Float64Array, maxP:
         ? null
         : { fit: setAside.fit, aicc: setAside.candidate.aicc, reason: setAside.candidate.reason, choice: setAside.choice },
   };
+}
+
+/** A part's neighbours: a harmonic pair more or fewer, a seasonal factor added or dropped, no harmonics. */
+function neighbourChoices(choice: SeasonalChoice): SeasonalChoice[] {
+  const { harmonics, P, Q } = choice;
+  return [
+    { harmonics: harmonics + 1, P, Q },
+    { harmonics: harmonics - 1, P, Q },
+    { harmonics: 0, P, Q },
+    { harmonics, P: 1 - P, Q },
+    { harmonics, P, Q: 1 - Q },
+  ].filter((c) => c.harmonics >= 0 && !sameChoice(c, choice));
 }
 
 function sameChoice(a: SeasonalChoice, b: SeasonalChoice): boolean {
