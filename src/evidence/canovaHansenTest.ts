@@ -3,11 +3,25 @@
 // f_t = (cos(2πjt/s), sin(2πjt/s))_{j < s/2} and cos(πt) when s is even (their eq. 2 and §2.2)
 // is fitted by OLS; under the null γ is constant (a deterministic, stationary pattern), under
 // the alternative it wanders as a random walk, which puts unit roots at the seasonal
-// frequencies. The Lagrange multiplier statistic (their eq. 8 with A selecting harmonics) is
-//   L = n⁻² Σ_t F̂_t' (A'Ω̂A)⁻¹ F̂_t,   F̂_t = Σ_{i≤t} A'f_i ê_i,
+// frequencies. For the harmonics of one frequency j (A selecting its cosine and sine, or the
+// cosine alone at j = s/2) the Lagrange multiplier statistic (their eq. 8) is
+//   L_j = n⁻² Σ_t F̂_t' (A'Ω̂A)⁻¹ F̂_t,   F̂_t = Σ_{i≤t} A'f_i ê_i,
 //   Ω̂ = Σ_{|k|≤m} (1 − |k|/(m + 1)) n⁻¹ Σ_i f_{i+k} ê_{i+k} ê_i f_i'   (Newey & West 1987),
-// asymptotically VM(rank A). A = I gives the joint test at all seasonal frequencies; one
-// frequency's cosine and sine give its own test (2 restrictions, 1 at π).
+// asymptotically VM(rank A) (their Theorem 1).
+//
+// The joint statistic over all seasonal frequencies is L = Σ_j L_j: Ω̂ taken block-diagonal by
+// frequency. Under the null with covariance-stationary errors the long-run covariance between
+// the scores of two different frequencies is zero (Σ_h γ(h) · lim n⁻¹ Σ_t f_j(t) f_k(t − h) = 0
+// for j ≠ k, the harmonics being orthogonal), so the blocks' Brownian bridges are independent
+// in the limit and L → VM(s − 1), the limit of the full-matrix statistic with A = I. We do not
+// estimate those zero covariances: with the full (s − 1) × (s − 1) Ω̂ the monthly statistic
+// never rejected at 5% in our simulations (test/fixtures/seasonal/canovaHansenSize.ts, 500
+// series per cell, the window below), not even against a pattern whose months wander as random
+// walks with steps as large as the noise (the sum: 38% at n = 72, 100% at n = 240); once the
+// window reaches lag s the estimated cross-frequency terms swamp the statistic. Quarterly, the
+// two agree at n = 108 and the sum has more power at n = 48. The price is the case the limit
+// does not cover, errors whose variance changes with the season: with white noise three times
+// as variable in a quarter of the year the sum rejected 4–8% of the series at 5%.
 //
 // Why this test: its null is the stable pattern, so the model keeps its simpler deterministic
 // seasonal unless the data speak against it, as KPSS does for the trend; it needs no choice
@@ -23,6 +37,9 @@
 // Schwert's (1989) rule does for the KPSS test (for s = 12 it is that rule). No lagged
 // dependent variable is added to the regression (Canova & Hansen allow one): a lag with a
 // coefficient near −1 takes up the root at frequency π, which is one of the roots tested.
+// Known weakness (of a kernel window that does not reach many years back): stationary seasonal
+// autocorrelation, a seasonal AR(1) with Φ = 0.5, was taken for a wandering pattern in 25–75%
+// of the simulated series; under the other fixed-pattern processes the test rejected 0–8%.
 import { ols } from '../linalg/ols.js';
 import { invertSymmetric } from '../linalg/invertSymmetric.js';
 import { finiteSeries } from './finiteSeries.js';
@@ -72,8 +89,31 @@ export function seasonalHarmonics(n: number, period: number): { columns: Float64
   return { columns, frequency };
 }
 
-/** Canova-Hansen statistics of y (already free of a zero-frequency unit root) for period s. */
+/** Canova-Hansen statistics of y (already free of a zero-frequency unit root) for period s, with p-values. */
 export function canovaHansenTest(y: ArrayLike<number>, period: number, options: CanovaHansenOptions = {}): CanovaHansenStatistic {
+  const { stat, lags, n, by_frequency } = canovaHansenStatistics(y, period, options);
+  const restrictions = period - 1;
+  return {
+    stat,
+    restrictions,
+    p_value: vonMisesUpperTail(stat, restrictions),
+    critical: vonMisesCritical(restrictions),
+    lags,
+    n,
+    by_frequency: by_frequency.map((f) => ({
+      ...f,
+      p_value: vonMisesUpperTail(f.stat, f.restrictions),
+      critical: vonMisesCritical(f.restrictions),
+    })),
+  };
+}
+
+/** The joint and per-frequency statistics alone; `canovaHansenTest` adds their p-values. */
+export function canovaHansenStatistics(
+  y: ArrayLike<number>,
+  period: number,
+  options: CanovaHansenOptions = {},
+): { stat: number; lags: number; n: number; by_frequency: Pick<SeasonalFrequencyTest, 'cycles_per_year' | 'stat' | 'restrictions'>[] } {
   if (!Number.isInteger(period) || period < 2 || period - 1 > MAX_TABULATED_RESTRICTIONS) {
     throw new Error(`canovaHansenTest needs a whole period from 2 to ${MAX_TABULATED_RESTRICTIONS + 1}`);
   }
@@ -85,60 +125,50 @@ export function canovaHansenTest(y: ArrayLike<number>, period: number, options: 
     throw new Error('canovaHansenTest needs whole, non-negative lags below the number of observations');
   }
   const { columns, frequency } = seasonalHarmonics(n, period);
-  const k = columns.length;
-  const residuals = ols(series, [new Float64Array(n).fill(1), ...columns]).residuals;
+  const fit = ols(series, [new Float64Array(n).fill(1), ...columns]);
+  const centred = series.map((v) => v - series.reduce((a, b) => a + b, 0) / n);
+  // A series the harmonics fit to rounding leaves scores of rounding size and a meaningless L.
+  if (!(fit.ssr > 1e-20 * centred.reduce((a, v) => a + v * v, 0))) {
+    throw new Error('canovaHansenTest needs a series that varies around its seasonal pattern');
+  }
+  const residuals = fit.residuals;
+  const by_frequency = [...new Set(frequency)].map((j) => {
+    const block = columns.filter((_, a) => frequency[a] === j);
+    return { cycles_per_year: j, stat: blockStatistic(block, residuals, lags), restrictions: block.length };
+  });
+  const stat = by_frequency.reduce((sum, f) => sum + f.stat, 0);
+  return { stat, lags, n, by_frequency };
+}
 
-  // Scores u_t = f_t ê_t, row-major n × k.
-  const scores = new Float64Array(n * k);
-  for (let t = 0; t < n; t++) for (let a = 0; a < k; a++) scores[t * k + a] = columns[a][t] * residuals[t];
-
+/** L_j for the harmonics `block` of one frequency, from the OLS residuals. */
+function blockStatistic(block: readonly Float64Array[], residuals: Float64Array, lags: number): number {
+  const n = residuals.length;
+  const k = block.length;
+  const scores = block.map((column) => column.map((value, t) => value * residuals[t]));
   const omega = new Float64Array(k * k);
   for (let lag = 0; lag <= lags; lag++) {
-    const weight = lag === 0 ? 1 : 1 - lag / (lags + 1);
+    const weight = 1 - lag / (lags + 1);
     for (let a = 0; a < k; a++) {
       for (let b = 0; b < k; b++) {
         let sum = 0;
-        for (let t = lag; t < n; t++) sum += scores[t * k + a] * scores[(t - lag) * k + b];
+        for (let t = lag; t < n; t++) sum += scores[a][t] * scores[b][t - lag];
         const term = (weight * sum) / n;
         omega[a * k + b] += term;
         if (lag > 0) omega[b * k + a] += term;
       }
     }
   }
-
   // Σ_t F̂_t F̂_t' from the running sums of the scores.
   const outer = new Float64Array(k * k);
   const running = new Float64Array(k);
   for (let t = 0; t < n; t++) {
-    for (let a = 0; a < k; a++) running[a] += scores[t * k + a];
+    for (let a = 0; a < k; a++) running[a] += scores[a][t];
     for (let a = 0; a < k; a++) for (let b = 0; b < k; b++) outer[a * k + b] += running[a] * running[b];
   }
-
-  const statistic = (selected: readonly number[]): number => {
-    const size = selected.length;
-    const block = new Float64Array(size * size);
-    selected.forEach((a, i) => selected.forEach((b, j) => (block[i * size + j] = omega[a * k + b])));
-    const inverse = invertSymmetric(block, size);
-    if (inverse === undefined) throw new Error('canovaHansenTest needs a series that varies around its seasonal pattern');
-    let trace = 0;
-    selected.forEach((a, i) => selected.forEach((b, j) => (trace += inverse[i * size + j] * outer[b * k + a])));
-    if (!(trace >= 0)) throw new Error('canovaHansenTest needs a series that varies around its seasonal pattern');
-    return trace / (n * n);
-  };
-
-  const all = Array.from({ length: k }, (_, a) => a);
-  const stat = statistic(all);
-  const cycles = [...new Set(frequency)];
-  const by_frequency = cycles.map((j): SeasonalFrequencyTest => {
-    const selected = all.filter((a) => frequency[a] === j);
-    const value = statistic(selected);
-    return {
-      cycles_per_year: j,
-      stat: value,
-      restrictions: selected.length,
-      p_value: vonMisesUpperTail(value, selected.length),
-      critical: vonMisesCritical(selected.length),
-    };
-  });
-  return { stat, restrictions: k, p_value: vonMisesUpperTail(stat, k), critical: vonMisesCritical(k), lags, n, by_frequency };
+  const inverse = invertSymmetric(omega, k);
+  if (inverse === undefined) throw new Error('canovaHansenTest needs a series that varies around its seasonal pattern');
+  let trace = 0;
+  for (let a = 0; a < k; a++) for (let b = 0; b < k; b++) trace += inverse[a * k + b] * outer[b * k + a];
+  if (!(trace >= 0) || !Number.isFinite(trace)) throw new Error('canovaHansenTest needs a series that varies around its seasonal pattern');
+  return trace / (n * n);
 }
