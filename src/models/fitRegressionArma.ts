@@ -10,6 +10,7 @@ import { unconstrainAr, unconstrainMa } from './constraints.js';
 import { hannanRissanen } from './hannanRissanen.js';
 import { autocovariances, demean } from '../linalg/autocovariances.js';
 import { parameterCount, type ArmaFactors, type SeasonalArmaOrder } from './seasonalArma.js';
+import type { GapSums } from '../statespace/filterWorkspace.js';
 import type { Estimation } from '../base/settings.js';
 import { createProfileLikelihood, type LikelihoodOptions, type ProfileLikelihood } from './profileLikelihood.js';
 
@@ -53,6 +54,12 @@ export interface RegressionArmaFit {
   /** Predicted state a_{n+1|n} for each filtered column (y first) and P_{n+1|n} / σ². */
   finalState: Float64Array[];
   finalCovariance: Float64Array;
+  /**
+   * Seasonal differences with missing levels: the changes of each season not yet seen in a
+   * level, summed by the filter (y first), with their covariance with the predicted state;
+   * absent otherwise (with first differences the last level is always observed).
+   */
+  pending?: GapSums;
   evaluations: number;
 }
 
@@ -72,7 +79,13 @@ export function fitRegressionArma(
   // correction to the OLS coefficients, and Σv²/F does not lose digits to a large level
   // (a series near 580 would otherwise leave SSR as the difference of two numbers ~1e7).
   const ols = olsFit(y, regressors);
-  const likelihood = createProfileLikelihood(ols.residuals, regressors, p, q, { accumulateGaps: options.accumulateGaps, estimation: options.estimation, seasonal: options.seasonal });
+  const likelihood = createProfileLikelihood(ols.residuals, regressors, p, q, {
+    accumulateGaps: options.accumulateGaps,
+    gapPeriod: options.gapPeriod,
+    gapRestarts: options.gapRestarts,
+    estimation: options.estimation,
+    seasonal: options.seasonal,
+  });
   const nobs = countObserved(y);
   const objective = (x: Float64Array): number => -likelihood.atUnconstrained(x) / nobs;
   const { order } = likelihood;
@@ -106,6 +119,12 @@ export function fitRegressionArma(
   // filtered state of y is that of the residuals plus X's states weighted by them.
   const yState = fit.finalState[0].slice();
   ols.coefficients.forEach((b, c) => fit.finalState[c + 1].forEach((v, i) => (yState[i] += b * v)));
+  const pending = fit.pending;
+  if (pending !== undefined) {
+    const ySums = pending.sums[0].slice();
+    ols.coefficients.forEach((b, c) => pending.sums[c + 1].forEach((v, i) => (ySums[i] += b * v)));
+    pending.sums[0] = ySums;
+  }
   return {
     ...fit,
     beta: fit.beta.map((b, i) => b + ols.coefficients[i]),
@@ -132,6 +151,16 @@ function summarise(likelihood: ProfileLikelihood, x: Float64Array, converged: bo
   }
   const finalState: Float64Array[] = [];
   for (let c = 0; c <= k; c++) finalState.push(ws.state.slice(c * ws.r, (c + 1) * ws.r));
+  const gaps = ws.gaps;
+  const pending: GapSums | undefined =
+    gaps === undefined || gaps.period === 1
+      ? undefined
+      : {
+          period: gaps.period,
+          sums: Array.from({ length: k + 1 }, (_, c) => gaps.pendingSums.slice(c * gaps.period, (c + 1) * gaps.period)),
+          cross: gaps.pendingCross.slice(),
+          variance: gaps.pendingVariance.slice(),
+        };
   return {
     p: likelihood.p,
     q: likelihood.q,
@@ -151,6 +180,7 @@ function summarise(likelihood: ProfileLikelihood, x: Float64Array, converged: bo
     residualVariance: ws.variances.slice(),
     finalState,
     finalCovariance: ws.pmat.slice(),
+    ...(pending === undefined ? {} : { pending }),
     evaluations,
   };
 }

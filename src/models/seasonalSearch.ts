@@ -25,7 +25,7 @@ import { admissibility, type InadmissibleReason } from './admissibility.js';
 import { countObserved, fitRegressionArma, type RegressionArmaFit } from './fitRegressionArma.js';
 import { checkHarmonics } from './harmonics.js';
 import { aicc, fitGrid, padStart, type Candidate } from './orderSearch.js';
-import { trendDesign, type TrendDesign } from './trendDesign.js';
+import { designWorkspace, trendDesign, type TrendDesign } from './trendDesign.js';
 
 /** Stage 3 sends the search back to stage 2 at most this many times. */
 const MAX_ROUNDS = 3;
@@ -147,7 +147,7 @@ export function searchSeasonalModel(kind: TrendModelKind, w: Float64Array, maxP:
       .map((entry) => padStart(entry.fit, p, q, choice.P, choice.Q));
     const design = designFor(choice.harmonics);
     const fit = fitRegressionArma(design.response, design.regressors, p, q, {
-      accumulateGaps: design.accumulateGaps,
+      ...designWorkspace(design),
       seasonal: { period: spec.period, P: choice.P, Q: choice.Q },
       starts,
     });
@@ -176,7 +176,7 @@ export function searchSeasonalModel(kind: TrendModelKind, w: Float64Array, maxP:
     const design = designFor(choice.harmonics);
     const known = [...entries.values()].filter((entry) => sameChoice(entry.choice, choice)).map((entry) => entry.fit);
     const grid = fitGrid(design.response, design.regressors, maxP, maxQ, {
-      accumulateGaps: design.accumulateGaps,
+      ...designWorkspace(design),
       differenced,
       seasonal: { period: spec.period, P: choice.P, Q: choice.Q },
       known,

@@ -13,7 +13,7 @@
 // trend that wanders with a drift, as the comparison with the deterministic trend needs).
 // A fixed pattern is removed by seasonal differencing, so that design takes no harmonics.
 import type { TrendModelKind } from '../base/settings.js';
-import type { Integration } from '../statespace/forecast.js';
+import type { WorkspaceOptions } from '../statespace/filterWorkspace.js';
 import { checkHarmonics, harmonicColumns, harmonicNames, harmonicRow } from './harmonics.js';
 
 /** The seasonal side of a design. */
@@ -37,12 +37,35 @@ export interface TrendDesign {
   futureRows(horizon: number): number[][];
   /** For the stochastic model on first differences: forecasts are integrated from this last level. */
   integrateFrom?: number;
-  /** For the stochastic model on seasonal differences: each season's forecasts build on its last level. */
-  seasonalIntegration?: Integration;
+  /** For the stochastic model on seasonal differences: each season's forecasts build on its last observed level. */
+  seasonalIntegration?: SeasonalLevels;
   /** The response is the change since the last observed level, NaN at missing levels (gapFilter.ts). */
   accumulateGaps: boolean;
+  /** Seasonal differences with missing levels: the filter's seasons, and the positions where a season's changes start afresh. */
+  gapPeriod?: number;
+  gapRestarts?: number[];
   /** The seasonality the design was built with; absent for a design without one. */
   seasonality?: DesignSeasonality;
+}
+
+/** What the forecasts of a seasonal-difference design build on, by forecast season (h − 1) mod s. */
+export interface SeasonalLevels {
+  period: number;
+  /** The last observed level of each forecast season. */
+  lastLevels: Float64Array;
+  /** Changes of each forecast season since that level that no level has shown (its later levels are missing). */
+  pendingCounts: number[];
+  /** The filter's season (response position mod s) of the first forecast step. */
+  filterSeasonOffset: number;
+}
+
+/** The filter options a design needs (gapFilter.ts). */
+export function designWorkspace(design: TrendDesign): WorkspaceOptions {
+  return {
+    accumulateGaps: design.accumulateGaps,
+    ...(design.gapPeriod === undefined ? {} : { gapPeriod: design.gapPeriod }),
+    ...(design.gapRestarts === undefined ? {} : { gapRestarts: design.gapRestarts }),
+  };
 }
 
 /** The response and regressors of a model for the model-scale series `w`. */
@@ -107,21 +130,52 @@ export function trendDesign(kind: TrendModelKind, w: Float64Array, seasonality?:
 
 /**
  * w_t − w_{t−s} = s·c + η_t for t = s + 1..n (1-based): the first s levels are conditioned on,
- * as the first level is in the first-difference design.
+ * as the first level is in the first-difference design. With missing levels, position j holds
+ * the change of level j + s since the last observed level of its season and the periods it
+ * spans (s per seasonal step, the drift's regressor), NaN where level j + s is missing or its
+ * season has no earlier observed level (a restart, gapFilter.ts).
  */
 function seasonalDifferenceDesign(w: Float64Array, seasonality: DesignSeasonality): TrendDesign {
   const n = w.length;
   const s = seasonality.period;
-  if (w.some(Number.isNaN)) throw new RangeError('trendDesign: seasonal differences need a series without missing values');
   const response = new Float64Array(n - s);
-  for (let t = s; t < n; t++) response[t - s] = w[t] - w[t - s];
+  const spans = new Float64Array(n - s).fill(s);
+  const restarts: number[] = [];
+  const lastObserved = Array.from({ length: s }, (_, season) => (Number.isNaN(w[season]) ? -1 : season));
+  for (let t = s; t < n; t++) {
+    const season = t % s;
+    const previous = lastObserved[season];
+    if (Number.isNaN(w[t])) {
+      response[t - s] = Number.NaN;
+      continue;
+    }
+    if (previous < 0) {
+      response[t - s] = Number.NaN;
+      restarts.push(t - s);
+    } else {
+      response[t - s] = w[t] - w[previous];
+      spans[t - s] = t - previous;
+    }
+    lastObserved[season] = t;
+  }
+  const missing = response.some(Number.isNaN);
+  // Forecast season q holds levels n + q, n + q + s, …; its base is the last observed level of the same season.
+  const lastLevels = new Float64Array(s);
+  const pendingCounts: number[] = [];
+  for (let q = 0; q < s; q++) {
+    const last = lastObserved[(n + q) % s];
+    if (last < 0) throw new RangeError('trendDesign: seasonal differences need an observed level in every season');
+    lastLevels[q] = w[last];
+    pendingCounts.push(Math.floor((n - 1 - last) / s));
+  }
   return {
     response,
-    regressors: [new Float64Array(n - s).fill(s)],
+    regressors: [spans],
     coefficientNames: ['drift'],
     futureRows: (horizon) => Array.from({ length: horizon }, () => [s]),
-    seasonalIntegration: { period: s, lastLevels: w.slice(n - s) },
-    accumulateGaps: false,
+    seasonalIntegration: { period: s, lastLevels, pendingCounts, filterSeasonOffset: n % s },
+    accumulateGaps: missing,
+    ...(missing ? { gapPeriod: s, gapRestarts: restarts } : {}),
     seasonality,
   };
 }

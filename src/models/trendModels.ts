@@ -18,6 +18,7 @@
 import type { Estimation, TrendModelKind } from '../base/settings.js';
 import { fitRegressionArma, olsFit, type RegressionArmaFit } from './fitRegressionArma.js';
 import { forecastRegressionArma, type ForecastInput, type ForecastMoments, type Integration } from '../statespace/forecast.js';
+import type { GapSums } from '../statespace/filterWorkspace.js';
 import { createProfileLikelihood, type SeasonalPart } from './profileLikelihood.js';
 import { admissibility, type InadmissibleReason } from './admissibility.js';
 import { aicc, searchOrders } from './orderSearch.js';
@@ -25,9 +26,9 @@ import { armaStandardErrors, type StandardErrorMethod } from './standardErrors.j
 import { harmonicColumnCount, seasonalPattern } from './harmonics.js';
 import { packFactors } from './seasonalArma.js';
 import { searchSeasonalModel, type SeasonalCandidate, type SeasonalChoice, type SeasonalSearchSpec } from './seasonalSearch.js';
-import { trendDesign, type TrendDesign } from './trendDesign.js';
+import { designWorkspace, trendDesign, type TrendDesign } from './trendDesign.js';
 
-export { trendDesign, type DesignSeasonality, type TrendDesign } from './trendDesign.js';
+export { designWorkspace, trendDesign, type DesignSeasonality, type SeasonalLevels, type TrendDesign } from './trendDesign.js';
 export type { SeasonalCandidate, SeasonalChoice, SeasonalSearchSpec } from './seasonalSearch.js';
 
 /** The seasonal side of a model's order, for `minimumObservations`. */
@@ -120,7 +121,7 @@ export interface TrendModelFit {
 export function fitTrendModel(kind: TrendModelKind, w: Float64Array, maxP: number, maxQ: number, options: TrendModelOptions = {}): TrendModelFit {
   if (options.seasonal !== undefined) return fitSeasonalTrendModel(kind, w, maxP, maxQ, options.seasonal, options);
   const design = trendDesign(kind, w);
-  const search = searchOrders(design.response, design.regressors, maxP, maxQ, { accumulateGaps: design.accumulateGaps, differenced: kind === 'stochastic' });
+  const search = searchOrders(design.response, design.regressors, maxP, maxQ, { ...designWorkspace(design), differenced: kind === 'stochastic' });
   const candidates = search.candidates.map((candidate) => ({ ...candidate, P: 0, Q: 0, harmonics: 0 }));
   const model = describeFit(kind, design, search.best, search.bestAicc, candidates, null, options);
   const { setAside } = search;
@@ -159,7 +160,7 @@ export function fitTrendModelAtOrder(kind: TrendModelKind, w: Float64Array, p: n
     fixed === undefined ? undefined : { period: fixed.period, firstSeason: fixed.firstSeason, harmonics: fixed.harmonics, seasonalDifferencing: fixed.seasonalDifferencing },
   );
   const seasonal = seasonalPartOf(design, fixed);
-  const fit = fitRegressionArma(design.response, design.regressors, p, q, { accumulateGaps: design.accumulateGaps, seasonal });
+  const fit = fitRegressionArma(design.response, design.regressors, p, q, { ...designWorkspace(design), seasonal });
   const k = p + q + (fixed?.P ?? 0) + (fixed?.Q ?? 0) + design.regressors.length + 1;
   const value = aicc(fit.loglik, k, fit.nobs);
   const candidate: SeasonalCandidate = {
@@ -200,7 +201,7 @@ function seasonalPart(design: TrendDesign, choice: SeasonalChoice): SeasonalMode
 /** The REML fit at the ML fit's order, started from its optimum, or why the ML fit stays. */
 function restrictedFit(kind: TrendModelKind, design: TrendDesign, ml: RegressionArmaFit, seasonal: SeasonalPart | undefined): RegressionArmaFit | RestrictedFallback {
   const fit = fitRegressionArma(design.response, design.regressors, ml.order.p, ml.order.q, {
-    accumulateGaps: design.accumulateGaps,
+    ...designWorkspace(design),
     estimation: 'reml',
     seasonal,
     starts: [ml.unconstrained],
@@ -231,7 +232,7 @@ function describeFit(
   });
   const ols = olsFit(design.response, design.regressors);
   const likelihood = createProfileLikelihood(ols.residuals, design.regressors, fit.order.p, fit.order.q, {
-    accumulateGaps: design.accumulateGaps,
+    ...designWorkspace(design),
     estimation: fit.estimation,
     seasonal,
   });
@@ -259,15 +260,71 @@ function describeFit(
   };
 }
 
-/** How a design's forecasts are integrated to levels (none for the deterministic model). */
-export function designIntegration(design: TrendDesign): { lastLevel: number } | Integration | undefined {
-  if (design.seasonalIntegration !== undefined) return design.seasonalIntegration;
-  return design.integrateFrom === undefined ? undefined : { lastLevel: design.integrateFrom };
+/**
+ * How a design's forecasts are integrated to levels (none for the deterministic model). For
+ * seasonal differences, `pending` is the fit's gap-filter output when some seasons' last levels
+ * are missing: their sums, moved from the filter's seasons to the forecast seasons, with the
+ * drift's regressor summed over those changes.
+ */
+export function designIntegration(design: TrendDesign, pending?: GapSums): { lastLevel: number } | Integration | undefined {
+  const levels = design.seasonalIntegration;
+  if (levels === undefined) return design.integrateFrom === undefined ? undefined : { lastLevel: design.integrateFrom };
+  const { period, lastLevels, pendingCounts, filterSeasonOffset } = levels;
+  if (pending === undefined) {
+    if (pendingCounts.some((count) => count > 0)) throw new Error('designIntegration: a season has unseen changes, so the fit\'s pending sums are needed');
+    return { period, lastLevels };
+  }
+  const k = design.regressors.length;
+  const r = pending.cross.length / period;
+  const from = (q: number): number => (filterSeasonOffset + q) % period;
+  const futureRow = design.futureRows(1)[0];
+  return {
+    period,
+    lastLevels,
+    pending: {
+      sums: pending.sums.map((sums) => Float64Array.from({ length: period }, (_, q) => sums[from(q)])),
+      regressorTotals: Float64Array.from({ length: period * k }, (_, i) => pendingCounts[Math.floor(i / k)] * futureRow[i % k]),
+      cross: Float64Array.from({ length: period * r }, (_, i) => pending.cross[from(Math.floor(i / r)) * r + (i % r)]),
+      variance: Float64Array.from({ length: period }, (_, q) => pending.variance[from(q)]),
+    },
+  };
 }
 
-/** Model-scale forecast moments for h = 1..horizon from a design and the filtered state at its end. */
-export function forecastDesign(design: TrendDesign, input: ForecastInput, horizon: number): ForecastMoments {
-  return forecastRegressionArma(input, design.futureRows(horizon), designIntegration(design));
+/** A design filtered at given process coefficients: what forecasts at those parameters start from. */
+export interface FilteredDesign {
+  /** The profile log-likelihood there (β and σ² at their estimates); NaN outside the stationary region. */
+  loglik: number;
+  finalState: Float64Array[];
+  finalCovariance: Float64Array;
+  pending?: GapSums;
+}
+
+/**
+ * Filters a design's response and regressors at fixed AR and MA coefficients of the process
+ * (with a seasonal part, the expanded ones), e.g. for forecasts at parameters estimated
+ * elsewhere (Harvey 1989, §3.5).
+ */
+export function filterDesign(design: TrendDesign, ar: ArrayLike<number>, ma: ArrayLike<number>): FilteredDesign {
+  const likelihood = createProfileLikelihood(design.response, design.regressors, ar.length, ma.length, designWorkspace(design));
+  const loglik = likelihood.atCoefficients(ar, ma, true);
+  const { state, pmat, r, ncol, gaps } = likelihood.workspace;
+  const finalState = Array.from({ length: ncol }, (_, c) => state.slice(c * r, (c + 1) * r));
+  const filtered = { loglik, finalState, finalCovariance: pmat.slice() };
+  if (gaps === undefined || gaps.period === 1) return filtered;
+  return {
+    ...filtered,
+    pending: {
+      period: gaps.period,
+      sums: Array.from({ length: ncol }, (_, c) => gaps.pendingSums.slice(c * gaps.period, (c + 1) * gaps.period)),
+      cross: gaps.pendingCross.slice(),
+      variance: gaps.pendingVariance.slice(),
+    },
+  };
+}
+
+/** Model-scale forecast moments for h = 1..horizon from a design and the filtered state at its end (and, with gaps, the fit's pending sums). */
+export function forecastDesign(design: TrendDesign, input: ForecastInput & { pending?: GapSums }, horizon: number): ForecastMoments {
+  return forecastRegressionArma(input, design.futureRows(horizon), designIntegration(design, input.pending));
 }
 
 /** Model-scale forecast moments for h = 1..horizon. */

@@ -44,16 +44,37 @@ export interface FilterWorkspace {
   nobs: number;
 }
 
-/** Scratch the gap filter needs beyond the workspace's own arrays, for state dimension r. */
+/** Scratch the gap filter needs beyond the workspace's own arrays, for state dimension r and `period` seasons. */
 export interface GapScratch {
-  /** Augmented state covariance, (r+1)², row-major. */
+  /** Seasons whose changes accumulate apart: 1 for first differences, s for seasonal ones. */
+  period: number;
+  /** 1 at positions where a season's changes start afresh without an observation. */
+  restart: Uint8Array;
+  /** Augmented state covariance, (r + period)², row-major. */
   cov: Float64Array;
-  /** Products and the transition, (r+1)² each. */
-  tmp: Float64Array;
-  transition: Float64Array;
-  /** Augmented state means, column c at [c·(r+1), (c+1)·(r+1)). */
+  /** Augmented state means, column c at [c·(r + period), (c+1)·(r + period)). */
   means: Float64Array;
-  shock: Float64Array;
+  /** One row or column of the covariance while the transition is applied. */
+  line: Float64Array;
+  /** Per season: 1 while its changes accumulate over missing levels. */
+  open: Uint8Array;
+  /**
+   * After a run, what the forecasts need of the seasons whose last levels are missing: per
+   * column (y first) and season, the filtered sum of the changes since the season's last
+   * observed level (column c at [c·period, (c+1)·period)), its covariance with the predicted
+   * state α_{n+1} (season j at [j·r, (j+1)·r)) and its variance; zero for the others.
+   */
+  pendingSums: Float64Array;
+  pendingCross: Float64Array;
+  pendingVariance: Float64Array;
+}
+
+/** A copy of the gap filter's pending sums (see `GapScratch`), per column (y first), by the filter's seasons. */
+export interface GapSums {
+  period: number;
+  sums: Float64Array[];
+  cross: Float64Array;
+  variance: Float64Array;
 }
 
 export interface WorkspaceOptions {
@@ -62,4 +83,8 @@ export interface WorkspaceOptions {
    * the gap (gapFilter.ts) instead of skipping them.
    */
   accumulateGaps?: boolean;
+  /** With `accumulateGaps`: the seasons of seasonal differences (s); 1 when absent. */
+  gapPeriod?: number;
+  /** With `accumulateGaps`: positions where a season's changes start afresh without an observation (its earlier levels all missing). */
+  gapRestarts?: readonly number[];
 }

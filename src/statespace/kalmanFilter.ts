@@ -44,7 +44,7 @@ export function createWorkspace(r: number, columns: readonly Float64Array[], opt
     gramFactor: new Float64Array(Math.max(1, k * k)),
     gramRhs: new Float64Array(Math.max(1, k)),
     complete: !hasMissing(columns[0]),
-    gaps: options.accumulateGaps === true && hasMissing(columns[0]) ? createGapScratch(r, ncol) : undefined,
+    gaps: options.accumulateGaps === true && hasMissing(columns[0]) ? createGapScratch(r, ncol, n, options.gapPeriod ?? 1, options.gapRestarts ?? []) : undefined,
     sumLogF: 0,
     nobs: 0,
   };

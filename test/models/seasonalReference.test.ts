@@ -8,12 +8,13 @@
 //   their definitions.
 // - Forecasts at our own parameters from both (statsmodels `filter(params).get_forecast`, R
 //   `arima(fixed = ...)` and `predict`), so the forecasts are checked apart from the optimiser.
+// - Seven cases with missing levels: a season whose first level is missing, runs of gaps, and
+//   seasons whose last levels are missing, whose unseen changes the forecasts carry.
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import type { TrendModelKind } from '../../src/base/settings.js';
-import { createProfileLikelihood } from '../../src/models/profileLikelihood.js';
 import { expandedCoefficients, plainOrder, type SeasonalArmaOrder } from '../../src/models/seasonalArma.js';
-import { fitTrendModelAtOrder, forecastDesign, trendDesign, type TrendDesign } from '../../src/models/trendModels.js';
+import { filterDesign, fitTrendModelAtOrder, forecastDesign, trendDesign, type TrendDesign } from '../../src/models/trendModels.js';
 import { expectRelative } from '../evidence/expectRelative.js';
 
 interface SeasonalCase {
@@ -28,6 +29,8 @@ interface SeasonalCase {
   q: number;
   P: number;
   Q: number;
+  /** 1-based positions set to missing. */
+  missing: number[];
   first_season: number;
   ours: { loglik: number; ar: number[]; ma: number[]; seasonal_ar: number[]; seasonal_ma: number[]; beta: number[]; cov_beta: number[]; sigma2: number };
 }
@@ -56,7 +59,7 @@ function byId<T extends { id: string }>(list: T[], id: string): T {
 
 function modelScale(c: SeasonalCase): Float64Array {
   const values = fixture(c.data).trim().split('\n').slice(1).map((line) => Number(line.split(',')[1]));
-  return Float64Array.from(values, (v) => (c.transform === 'log' ? Math.log(v) : v));
+  return Float64Array.from(values, (v, t) => (c.missing.includes(t + 1) ? Number.NaN : c.transform === 'log' ? Math.log(v) : v));
 }
 
 function designOf(c: SeasonalCase): TrendDesign {
@@ -70,21 +73,13 @@ function orderOf(c: SeasonalCase): SeasonalArmaOrder {
 /** Our forecast at the case's stored parameters: the response filtered at them, then moved on (no optimiser involved). */
 function forecastAtStoredParameters(c: SeasonalCase): { mean: Float64Array; seProcess: Float64Array; loglik: number } {
   const design = designOf(c);
-  const order = orderOf(c);
   const { ar, ma } = expandedCoefficients(
     { ar: Float64Array.from(c.ours.ar), ma: Float64Array.from(c.ours.ma), seasonalAr: Float64Array.from(c.ours.seasonal_ar), seasonalMa: Float64Array.from(c.ours.seasonal_ma) },
-    order,
+    orderOf(c),
   );
-  const likelihood = createProfileLikelihood(design.response, design.regressors, ar.length, ma.length, { accumulateGaps: design.accumulateGaps });
-  const loglik = likelihood.atCoefficients(ar, ma, true);
-  const { state, pmat, r: dimension, ncol } = likelihood.workspace;
-  const finalState = Array.from({ length: ncol }, (_, col) => state.slice(col * dimension, (col + 1) * dimension));
-  const moments = forecastDesign(
-    design,
-    { ar, ma, beta: c.ours.beta, covBeta: c.ours.cov_beta, sigma2: c.ours.sigma2, finalState, finalCovariance: pmat.slice() },
-    inputs.horizon,
-  );
-  return { ...moments, loglik };
+  const filtered = filterDesign(design, ar, ma);
+  const moments = forecastDesign(design, { ar, ma, beta: c.ours.beta, covBeta: c.ours.cov_beta, sigma2: c.ours.sigma2, ...filtered }, inputs.horizon);
+  return { ...moments, loglik: filtered.loglik };
 }
 
 describe.each(inputs.cases)('seasonal reference: $id', (c) => {
@@ -102,9 +97,13 @@ describe.each(inputs.cases)('seasonal reference: $id', (c) => {
       seasonal: { period: c.period, firstSeason: c.first_season, seasonalDifferencing: c.seasonalDifferencing, harmonics: c.harmonics, P: c.P, Q: c.Q },
     });
     expect(model.fit.converged).toBe(true);
-    // statsmodels 0.13.5 SARIMAX .fit (best of three starts) and R 4.2.2 arima(method = "ML") (best of two starts): both exact.
-    const best = Math.max(sm.fit.loglik, rc.fit.loglik);
-    expect(model.fit.loglik).toBeGreaterThanOrEqual(best - 1e-6);
+    // statsmodels 0.13.5 SARIMAX .fit, best of three starts, exact (its diffuse terms taken out, see seasonalReference.py).
+    expect(model.fit.loglik).toBeGreaterThanOrEqual(sm.fit.loglik - 1e-6);
+    // R 4.2.2 arima(method = "ML"), best of two starts: exact on the differenced response; with
+    // missing levels R differences itself under its kappa = 1e6 prior, which moves its
+    // log-likelihood by up to ~1e-3 (test/fixtures/README.md).
+    const differencedWithGaps = c.kind === 'stochastic' && c.missing.length > 0;
+    expect(model.fit.loglik).toBeGreaterThanOrEqual(rc.fit.loglik - (differencedWithGaps ? 1e-3 : 1e-6));
     // The coefficients against statsmodels' fit from its own default start (nothing of ours in it):
     // exog β, then φ, θ, Φ, Θ (SARIMAX's parameter order), σ² last and not compared (ours is profiled).
     // The libraries' optimisers stop within about 1e-4 of the optimum where the likelihood is flat.
