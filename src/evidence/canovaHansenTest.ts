@@ -7,7 +7,7 @@
 // cosine alone at j = s/2) the Lagrange multiplier statistic (their eq. 8) is
 //   L_j = n⁻² Σ_t F̂_t' (A'Ω̂A)⁻¹ F̂_t,   F̂_t = Σ_{i≤t} A'f_i ê_i,
 //   Ω̂ = Σ_{|k|≤m} (1 − |k|/(m + 1)) n⁻¹ Σ_i f_{i+k} ê_{i+k} ê_i f_i'   (Newey & West 1987),
-// asymptotically VM(rank A) (their Theorem 1).
+// asymptotically VM(rank A) (their Theorem 1; equation, section and theorem numbers from memory).
 //
 // The joint statistic over all seasonal frequencies is L = Σ_j L_j: Ω̂ taken block-diagonal by
 // frequency. Under the null with covariance-stationary errors the long-run covariance between

@@ -5,6 +5,7 @@
 // linearly interpolated in between (§3.3, "computational considerations"); the last point is
 // always fitted. Positions are 1-based, as in the paper, so the window arithmetic reads as
 // written there: a span larger than the series widens the neighbourhood by half the excess.
+// (Section numbers here and in stlDecomposition.ts are from memory.)
 
 /** A loess smoother's settings: neighbourhood size (odd), local degree and jump. */
 export interface LoessSettings {
