@@ -98,8 +98,13 @@ function appliedValue(key: string, record: AnalysisRecord): string | undefined {
       return settings.levels.map((level) => `${level}%`).join(', ');
     case 'coefficient_uncertainty':
       return settings.coefficient_uncertainty ? 'included' : 'left out';
-    case 'estimation':
-      return settings.estimation === 'reml' ? 'restricted maximum likelihood (REML)' : 'exact maximum likelihood';
+    case 'estimation': {
+      if (settings.estimation === 'ml') return 'exact maximum likelihood';
+      // Say where REML could not be used, so the register agrees with the models section.
+      const kept = (['deterministic', 'stochastic'] as const).filter((kind) => record.models[kind].restricted_fallback !== null);
+      const where = kept.map((kind) => (kind === 'deterministic' ? 'the deterministic trend' : 'the stochastic trend')).join(' and ');
+      return kept.length === 0 ? 'restricted maximum likelihood (REML)' : `restricted maximum likelihood (REML); exact maximum likelihood for ${where}, whose REML fit was not usable`;
+    }
     case 'point':
       return settings.point === 'median' ? 'median (back-transformed)' : 'mean (bias-adjusted)';
     case 'max_p':
