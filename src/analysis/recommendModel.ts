@@ -110,19 +110,20 @@ export function recommendModel(input: RecommendationInput, settings: Pick<Analys
       reasons: [w.fixed(choices.model, justification)],
     };
   }
+  const ruled = (model: TrendModelKind, decidedBy: 'evidence' | 'policy', reasons: string[]) => ({
+    ...base,
+    model,
+    rule: choices.rule,
+    rule_text: ruleText,
+    fixed_by_config: false,
+    decided_by: decidedBy,
+    reasons,
+  });
   if (choices.rule === 'lowest-interval-score') {
     const model: TrendModelKind = lower === 'deterministic' ? 'deterministic' : 'stochastic';
     const against = model === 'deterministic' ? [...(broken ? [w.despiteBreak] : []), ...(origins < MIN_BACKTEST_ORIGINS ? [w.despiteFewOrigins] : []), ...(reach < settings.horizon ? [w.despiteShortReach] : [])] : [];
     const decidedBy = scores === undefined ? 'policy' : 'evidence';
-    return {
-      ...base,
-      model,
-      rule: choices.rule,
-      rule_text: ruleText,
-      fixed_by_config: false,
-      decided_by: decidedBy,
-      reasons: [...evidence.map((e) => e.finding), ...against, w.conclusion(model, decidedBy, false)],
-    };
+    return ruled(model, decidedBy, [...evidence.map((e) => e.finding), ...against, w.conclusion(model, decidedBy, false)]);
   }
   const conditions = {
     scores: everyHorizonBetter,
@@ -136,15 +137,7 @@ export function recommendModel(input: RecommendationInput, settings: Pick<Analys
   // The evidence decides the stochastic trend only when something speaks for it and nothing for the fixed line.
   const speaksFor = (side: TrendModelKind): boolean => evidence.some((e) => e.favours === side);
   const decidedBy = model === 'deterministic' || (speaksFor('stochastic') && !speaksFor('deterministic')) ? 'evidence' : 'policy';
-  return {
-    ...base,
-    model,
-    rule: choices.rule,
-    rule_text: ruleText,
-    fixed_by_config: false,
-    decided_by: decidedBy,
-    reasons: [...evidence.map((e) => e.finding), ...(model === 'stochastic' ? [w.unmet(unmet)] : []), w.conclusion(model, decidedBy, speaksFor('deterministic') && speaksFor('stochastic'))],
-  };
+  return ruled(model, decidedBy, [...evidence.map((e) => e.finding), ...(model === 'stochastic' ? [w.unmet(unmet)] : []), w.conclusion(model, decidedBy, speaksFor('deterministic') && speaksFor('stochastic'))]);
 }
 
 /** Mean interval scores at `level` at the horizons above half the backtest horizon. */
