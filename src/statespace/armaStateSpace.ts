@@ -126,26 +126,19 @@ export function firstColumnScratchSize(p: number, r: number): number {
   return (p + 1) * (p + 2) + 2 * (r + 1);
 }
 
+/** Scratch size `stationaryCovarianceFromMoments` needs: the moments and a list of r positions. */
+export function momentsScratchSize(p: number, r: number): number {
+  return firstColumnScratchSize(p, r) + r;
+}
+
 /**
- * The first column of the stationary P, P_{i1} = Cov(α_i, η), without solving the whole
- * Lyapunov equation (all the Chandrasekhar recursions need). With α_{i,t} =
- * Σ_{k≥i} φ_k η_{t−1−k+i} + Σ_{k≥i} θ_{k−1} ε_{t−k+i} (θ₀ = 1),
- *   Cov(α_i, η) = Σ_{k=i}^{r} φ_k γ(k−i+1) + Σ_{k=i}^{r} θ_{k−1} ψ_{k−i},
- * where γ are the ARMA autocovariances for σ² = 1, from the (p+1)-equation system of
- * Brockwell & Davis (1991), §3.3, eq. (3.3.8), and ψ the MA(∞) weights. Writes P_{i1} into
- * `out[i·r]`. Returns false when the AR part has a unit root.
+ * γ(0..r), the ARMA autocovariances for σ² = 1, and ψ_0..ψ_r, the MA(∞) weights, into
+ * `scratch` at `momentsAt(p, r)`: γ from the (p+1)-equation system of Brockwell & Davis (1991),
+ * §3.3, eq. (3.3.8), run forward beyond lag p. Returns false when the AR part has a unit root.
  */
-export function stationaryFirstColumn(
-  phi: Float64Array,
-  rvec: Float64Array,
-  p: number,
-  r: number,
-  out: Float64Array,
-  scratch: Float64Array,
-): boolean {
+function armaMoments(phi: Float64Array, rvec: Float64Array, p: number, r: number, scratch: Float64Array): boolean {
   const w = p + 2;
-  const psiAt = (p + 1) * w;
-  const gammaAt = psiAt + r + 1;
+  const { psiAt, gammaAt } = momentsAt(p, r);
   // ψ_0..ψ_r: ψ_j = θ_j + Σ_{i=1}^{min(j,p)} φ_i ψ_{j−i}; rvec holds (1, θ₁, …) padded to r.
   for (let j = 0; j <= r; j++) {
     let value = j < r ? rvec[j] : 0;
@@ -190,11 +183,93 @@ export function stationaryFirstColumn(
     for (let j = k; j < r; j++) value += rvec[j] * scratch[psiAt + j - k];
     scratch[gammaAt + k] = value;
   }
+  return true;
+}
+
+/** Where `armaMoments` leaves ψ and γ in the scratch. */
+function momentsAt(p: number, r: number): { psiAt: number; gammaAt: number } {
+  const psiAt = (p + 1) * (p + 2);
+  return { psiAt, gammaAt: psiAt + r + 1 };
+}
+
+/**
+ * The first column of the stationary P, P_{i1} = Cov(α_i, η), without solving the whole
+ * Lyapunov equation (all the Chandrasekhar recursions need). With α_{i,t} =
+ * Σ_{k≥i} φ_k η_{t−1−k+i} + Σ_{k≥i} θ_{k−1} ε_{t−k+i} (θ₀ = 1),
+ *   Cov(α_i, η) = Σ_{k=i}^{r} φ_k γ(k−i+1) + Σ_{k=i}^{r} θ_{k−1} ψ_{k−i},
+ * where γ are the ARMA autocovariances for σ² = 1, from the (p+1)-equation system of
+ * Brockwell & Davis (1991), §3.3, eq. (3.3.8), and ψ the MA(∞) weights. Writes P_{i1} into
+ * `out[i·r]`. Returns false when the AR part has a unit root.
+ */
+export function stationaryFirstColumn(
+  phi: Float64Array,
+  rvec: Float64Array,
+  p: number,
+  r: number,
+  out: Float64Array,
+  scratch: Float64Array,
+): boolean {
+  if (!armaMoments(phi, rvec, p, r, scratch)) return false;
+  const { psiAt, gammaAt } = momentsAt(p, r);
   // P_{i1} with 1-based i in the formula, 0-based here: k runs over i..r−1 (0-based).
   for (let i = 0; i < r; i++) {
     let value = 0;
     for (let k = i; k < r; k++) value += phi[k] * scratch[gammaAt + k - i + 1] + rvec[k] * scratch[psiAt + k - i];
     out[i * r] = value;
+  }
+  return true;
+}
+
+/**
+ * The whole stationary P from the same moments, for a large state whose expanded polynomials
+ * are mostly zeros (a seasonal ARMA): with α_a = Σ_{u≥0} (φ_{a+u} η_{t−1−u} + ϑ_{a+u} ε_{t−u})
+ * (0-based, ϑ = (1, θ₁, …)), Cov(η_x, ε_y) = ψ_{x−y} for x ≥ y and 0 otherwise, so
+ *   P_ab = Σ_u Σ_v [φ_{a+u} φ_{b+v} γ(|u − v|) + φ_{a+u} ϑ_{b+v} ψ_{v−u−1} + ϑ_{a+u} φ_{b+v} ψ_{u−v−1} + ϑ_{a+u} ϑ_{b+v} [u = v]]
+ * with ψ of a negative lag zero. Only the nonzero coefficients enter the sums, so a monthly
+ * model with one seasonal factor costs a few thousand operations where the Lyapunov system of
+ * `stationaryCovariance`, r(r+1)/2 unknowns, costs hundreds of thousands. `scratch` needs
+ * `momentsScratchSize(p, r)` numbers. Returns false when the AR part has a unit root.
+ */
+export function stationaryCovarianceFromMoments(
+  phi: Float64Array,
+  rvec: Float64Array,
+  p: number,
+  r: number,
+  out: Float64Array,
+  scratch: Float64Array,
+): boolean {
+  if (!armaMoments(phi, rvec, p, r, scratch)) return false;
+  const { psiAt, gammaAt } = momentsAt(p, r);
+  // The positions k where φ_k or ϑ_k is not zero, ascending, after the moments.
+  const listAt = gammaAt + r + 1;
+  let count = 0;
+  for (let k = 0; k < r; k++) if (phi[k] !== 0 || rvec[k] !== 0) scratch[listAt + count++] = k;
+  for (let a = 0; a < r; a++) {
+    let fromA = 0;
+    while (fromA < count && scratch[listAt + fromA] < a) fromA++;
+    for (let b = a; b < r; b++) {
+      let fromB = fromA;
+      while (fromB < count && scratch[listAt + fromB] < b) fromB++;
+      let value = 0;
+      for (let ia = fromA; ia < count; ia++) {
+        const ka = scratch[listAt + ia];
+        const fa = phi[ka];
+        const ta = rvec[ka];
+        const u = ka - a;
+        for (let ib = fromB; ib < count; ib++) {
+          const kb = scratch[listAt + ib];
+          const fb = phi[kb];
+          const tb = rvec[kb];
+          const v = kb - b;
+          value += fa * fb * scratch[gammaAt + Math.abs(u - v)];
+          if (v > u) value += fa * tb * scratch[psiAt + v - u - 1];
+          else if (u > v) value += ta * fb * scratch[psiAt + u - v - 1];
+          else value += ta * tb;
+        }
+      }
+      out[a * r + b] = value;
+      out[b * r + a] = value;
+    }
   }
   return true;
 }

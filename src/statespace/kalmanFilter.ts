@@ -11,7 +11,7 @@
 
 import { choleskyInto, choleskySolveInPlace } from '../linalg/smallSpd.js';
 import { accumulateCross, filterColumnGeneric, filterColumnsScalar, runChandrasekhar, runCovariance, SCALAR_STATE } from './filterRecursions.js';
-import { firstColumnScratchSize, lyapunovScratchSize, stationaryCovariance, stationaryFirstColumn } from './armaStateSpace.js';
+import { firstColumnScratchSize, lyapunovScratchSize, momentsScratchSize, stationaryCovariance, stationaryCovarianceFromMoments, stationaryFirstColumn } from './armaStateSpace.js';
 import type { FilterWorkspace, WorkspaceOptions } from './filterWorkspace.js';
 import { createGapScratch, runGapFilter } from './gapFilter.js';
 
@@ -38,7 +38,7 @@ export function createWorkspace(r: number, columns: readonly Float64Array[], opt
     innovations: new Float64Array(Math.max(ncol, 3) * n),
     state: new Float64Array(r * ncol),
     cross: new Float64Array(ncol * ncol),
-    lyapunovScratch: new Float64Array(Math.max(lyapunovScratchSize(r), firstColumnScratchSize(r, r))),
+    lyapunovScratch: new Float64Array(r > SCALAR_STATE ? momentsScratchSize(r, r) : Math.max(lyapunovScratchSize(r), firstColumnScratchSize(r, r))),
     zeros: new Float64Array(n),
     gram: new Float64Array(Math.max(1, k * k)),
     gramFactor: new Float64Array(Math.max(1, k * k)),
@@ -76,6 +76,8 @@ export function setArma(
   rvec[0] = 1;
   for (let j = 0; j < q; j++) rvec[j + 1] = ma[j];
   if (firstColumnOnly) return stationaryFirstColumn(phi, rvec, p, r, ws.pmat, ws.lyapunovScratch);
+  // Above the scalar path the Lyapunov system grows as r⁴ and more; the moments give P directly.
+  if (r > SCALAR_STATE) return stationaryCovarianceFromMoments(phi, rvec, p, r, ws.pmat, ws.lyapunovScratch);
   return stationaryCovariance(phi, rvec, r, ws.pmat, ws.lyapunovScratch);
 }
 
