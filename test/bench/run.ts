@@ -5,12 +5,14 @@ import { cpus } from 'node:os';
 import { backtestBench } from './backtestBench.js';
 import { batchBench } from './batchBench.js';
 import { engineBench } from './engineBench.js';
+import { seasonalBench } from './seasonalBench.js';
 import { startupBench } from './startupBench.js';
 import type { BenchRow } from './timing.js';
 
 const suites: [string, () => BenchRow[] | Promise<BenchRow[]>][] = [
   ['startup', startupBench],
   ['engine', engineBench],
+  ['seasonal', seasonalBench],
   ['backtest', backtestBench],
   ['batch', batchBench],
 ];
