@@ -29,6 +29,27 @@ export type PointForecast = (typeof POINT_FORECASTS)[number];
 export const MISSING_POLICIES = ['error', 'allow'] as const;
 export type MissingPolicy = (typeof MISSING_POLICIES)[number];
 
+/**
+ * The seasonal part of both models, for monthly and quarterly series: chosen from the data
+ * (`auto`), left out (`none`, for seasonally adjusted data; annual data have none), or fixed by
+ * the analyst. `period` is the observations per year the series' frequency gives (12, 4, or 1
+ * for annual data), so a stage never works it out again.
+ */
+export type SeasonalSetting =
+  | { readonly kind: 'auto'; readonly period: number }
+  | { readonly kind: 'none'; readonly period: number }
+  | {
+      readonly kind: 'fixed';
+      readonly period: number;
+      /** Harmonic pairs of the fixed pattern, 0..⌊period/2⌋. */
+      readonly harmonics: number;
+      /** Seasonal AR and MA orders of a drifting pattern, 0 or 1. */
+      readonly seasonal_ar: number;
+      readonly seasonal_ma: number;
+      /** Whether the stochastic model takes seasonal differences (1 − B^s). */
+      readonly seasonal_differences: boolean;
+    };
+
 /** The transform of the values before both models are fitted (Box & Cox 1964; λ = 0 is the log). */
 export type Transform = { readonly kind: 'none' } | { readonly kind: 'log' } | { readonly kind: 'box-cox'; readonly lambda: number };
 
@@ -65,6 +86,7 @@ export interface AnalysisSettings {
   readonly point: PointForecast;
   /** How the chosen order's coefficients are estimated; the order is chosen by AICc on the exact likelihood either way. */
   readonly estimation: Estimation;
+  readonly seasonal: SeasonalSetting;
   readonly max_p: number;
   readonly max_q: number;
   /** Significance level of the unit-root and residual tests. */

@@ -29,6 +29,8 @@ Options:
                             (default: ${BUILT_IN.levels.join(',')})
   --no-coef-uncertainty     intervals from the ARMA process alone, without coefficient uncertainty
   --point median|mean       back-transformed median (default) or bias-adjusted mean
+  --seasonal auto|none      monthly and quarterly series: a seasonal part chosen from the data
+                            (default), or none for seasonally adjusted data
   --estimation reml|ml      the chosen order's coefficients by restricted maximum likelihood
                             (default) or exact maximum likelihood; orders are chosen by AICc
                             on the exact likelihood either way

@@ -12,6 +12,7 @@ export const BUILT_IN_SETTINGS = {
   coefficient_uncertainty: true,
   point: 'median',
   estimation: 'reml',
+  seasonal: 'auto',
   max_p: 3,
   max_q: 3,
   significance: 0.05,

@@ -212,6 +212,12 @@ export const configMessages = {
     const hint = suggestion !== undefined ? `did you mean ${quoted(suggestion)}?` : 'add this person to memo.reviewers, or correct the name';
     return problem('config.unknown-reviewer', `${quoted(name)} signs off but is not a listed reviewer; ${listed}`, hint, at);
   },
+  seasonalFormAnnual(at: InputLocation): InputProblem {
+    return problem('config.seasonal-annual', 'a seasonal form is set for an annual series, which has no seasons', 'leave seasonal out (or write none) for annual data', at);
+  },
+  tooManyHarmonics(at: InputLocation, harmonics: number, most: number, frequency: string): InputProblem {
+    return problem('config.seasonal-harmonics', `${harmonics} harmonic pairs are more than a ${frequency} series has (at most ${most})`, `give harmonics from 0 to ${most}`, at);
+  },
   scoredLevelNotListed(at: InputLocation, level: number, levels: readonly number[]): InputProblem {
     return problem(
       'config.scored-level',

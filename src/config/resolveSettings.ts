@@ -9,9 +9,9 @@
 // The series must be read before the horizon can be resolved (its frequency may come from the
 // data), yet reading it needs the transform, the missing-value policy and the order limits:
 // `readingSettings` resolves those four, and `resolveSettings` builds the rest on them.
-import type { Frequency } from '../base/period.js';
+import { periodsPerYear, type Frequency } from '../base/period.js';
 import { InputError, type InputLocation } from '../base/problem.js';
-import { MIN_BACKTEST_ORIGINS, type AnalysisSettings, type Transform } from '../base/settings.js';
+import { MIN_BACKTEST_ORIGINS, type AnalysisSettings, type SeasonalSetting, type Transform } from '../base/settings.js';
 import { BUILT_IN_SETTINGS as BUILT_IN, HORIZON_BY_FREQUENCY, MIN_TRAIN_FLOOR, MIN_TRAIN_PER_PARAMETER } from './builtInSettings.js';
 import { BACKTEST_FIELDS } from './settingsSpec.js';
 import type { SettingsEntry } from './configSpec.js';
@@ -67,6 +67,7 @@ export function resolveSettings(written: WrittenSettings, series: SeriesFacts, p
     coefficient_uncertainty: written.coefficient_uncertainty ?? BUILT_IN.coefficient_uncertainty,
     point: written.point ?? BUILT_IN.point,
     estimation: written.estimation ?? BUILT_IN.estimation,
+    seasonal: toSeasonal(written.seasonal ?? BUILT_IN.seasonal, series.frequency, placeOf),
     max_p: reading.max_p,
     max_q: reading.max_q,
     significance: written.significance ?? BUILT_IN.significance,
@@ -102,6 +103,16 @@ function deepFreeze<T extends object>(value: T): T {
 function backtestHorizon(horizon: number, n: number, minTrain: number): number {
   const longest = n - minTrain - (MIN_BACKTEST_ORIGINS - 1);
   return Math.max(1, Math.min(horizon, longest, BACKTEST_FIELDS.horizon.max));
+}
+
+/** The seasonal setting with its period; a fixed form must suit the frequency. */
+function toSeasonal(written: NonNullable<WrittenSettings['seasonal']>, frequency: Frequency, placeOf: PlaceOf): SeasonalSetting {
+  const period = periodsPerYear(frequency);
+  if (typeof written === 'string') return { kind: period === 1 ? 'none' : written, period };
+  if (period === 1) throw new InputError(configMessages.seasonalFormAnnual(placeOf('seasonal')));
+  const most = Math.floor(period / 2);
+  if (written.harmonics > most) throw new InputError(configMessages.tooManyHarmonics(placeOf('seasonal'), written.harmonics, most, frequency));
+  return { kind: 'fixed', period, ...written };
 }
 
 function toTransform(written: NonNullable<WrittenSettings['transform']>): Transform {

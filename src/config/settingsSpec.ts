@@ -26,6 +26,24 @@ const transform = shapes(
   { description: 'none, log, or a mapping such as {box_cox: 0.5}', default: BUILT_IN.transform },
 );
 
+/** The fields of a seasonal form fixed by the analyst, kept by name for the command line. */
+export const SEASONAL_FORM_FIELDS = {
+  harmonics: whole('Harmonic (Fourier) pairs describing a fixed seasonal pattern: up to 6 for monthly, 2 for quarterly data.', 0, 6),
+  seasonal_ar: whole('Seasonal autoregressive order of a pattern that drifts (0 or 1).', 0, 1),
+  seasonal_ma: whole('Seasonal moving-average order of a pattern that drifts (0 or 1).', 0, 1),
+  seasonal_differences: flag('Whether the stochastic model takes seasonal differences (1 − B^s) instead of first differences.'),
+};
+
+const seasonal = shapes(
+  'Seasonal part of both models, for monthly and quarterly series.',
+  choice('auto: chosen from the data (the seasonal evidence and AICc); none: no seasonal part, for seasonally adjusted data.', ['auto', 'none']),
+  object('A seasonal form fixed by the analyst: the same in both models (harmonics, seasonal AR and MA), and whether the stochastic model differences seasonally.', SEASONAL_FORM_FIELDS, {
+    required: ['harmonics', 'seasonal_ar', 'seasonal_ma', 'seasonal_differences'],
+    example: '{harmonics: 2, seasonal_ar: 0, seasonal_ma: 1, seasonal_differences: false}',
+  }),
+  { description: 'auto, none, or a fixed form such as {harmonics: 2, seasonal_ar: 0, seasonal_ma: 1, seasonal_differences: false}; annual series have no seasonal part', default: BUILT_IN.seasonal },
+);
+
 /** The keys of `backtest`, each spec node kept by name for the command line's options. */
 export const BACKTEST_FIELDS = {
   origins: whole('Number of forecast origins, the latest ones in the series; fewer when the series is too short for them.', 1, 200, { default: BUILT_IN.backtest.origins }),
@@ -90,6 +108,7 @@ export const SETTINGS_FIELDS = {
     ESTIMATION_METHODS,
     { default: BUILT_IN.estimation },
   ),
+  seasonal,
   max_p: whole('Largest autoregressive order searched.', 0, MAX_ORDER, { default: BUILT_IN.max_p }),
   max_q: whole('Largest moving-average order searched.', 0, MAX_ORDER, { default: BUILT_IN.max_q }),
   significance: significance('Significance level of the unit-root and residual tests.', BUILT_IN.significance),

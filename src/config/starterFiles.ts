@@ -37,6 +37,7 @@ memo:
 #   horizon (10 annual, 12 quarterly, 24 monthly), transform (none | log | {box_cox: 0.5}),
 #   levels ([80, 95]), coefficient_uncertainty (true), point (median | mean),
 #   estimation (reml | ml: how the chosen order's coefficients are estimated),
+#   seasonal (auto | none | {harmonics, seasonal_ar, seasonal_ma, seasonal_differences}),
 #   max_p and max_q (3), significance (0.05), missing (error | allow),
 #   backtest: {origins (20), horizon (the forecast horizon where the series allows),
 #              refit (reselect | reestimate | fixed),

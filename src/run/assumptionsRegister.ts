@@ -14,6 +14,7 @@ const CHOICES: Record<string, string> = {
   coefficient_uncertainty: 'Coefficient uncertainty in the intervals',
   point: 'Point forecast',
   estimation: 'Estimation of the coefficients',
+  seasonal: 'Seasonal part',
   max_p: 'Largest AR order searched',
   max_q: 'Largest MA order searched',
   significance: 'Significance level of the tests',
@@ -98,6 +99,13 @@ function appliedValue(key: string, record: AnalysisRecord): string | undefined {
       return settings.levels.map((level) => `${level}%`).join(', ');
     case 'coefficient_uncertainty':
       return settings.coefficient_uncertainty ? 'included' : 'left out';
+    case 'seasonal': {
+      const { seasonal } = settings;
+      if (seasonal.kind === 'none') return seasonal.period === 1 ? 'none (annual data)' : 'none (the data are taken as seasonally adjusted)';
+      if (seasonal.kind === 'auto') return 'chosen from the data';
+      const parts = [`${seasonal.harmonics} harmonic pair${seasonal.harmonics === 1 ? '' : 's'}`, `seasonal AR ${seasonal.seasonal_ar}`, `seasonal MA ${seasonal.seasonal_ma}`];
+      return `fixed: ${parts.join(', ')}; ${seasonal.seasonal_differences ? 'the stochastic trend on seasonal differences' : 'no seasonal differences'}`;
+    }
     case 'estimation': {
       if (settings.estimation === 'ml') return 'exact maximum likelihood';
       // Say where REML could not be used, so the register agrees with the models section.

@@ -14,6 +14,7 @@ describe('resolveSettings', () => {
       coefficient_uncertainty: true,
       point: 'median',
       estimation: 'reml',
+      seasonal: { kind: 'none', period: 1 },
       max_p: 3,
       max_q: 3,
       significance: 0.05,
@@ -51,6 +52,31 @@ describe('resolveSettings', () => {
     expect(settings.levels).toEqual([50, 90]);
     expect(settings.recommendation.scored_level).toBe(90);
     expect(resolveSettings({ levels: [68, 95, 99], recommendation: { scored_level: 68 } }, { frequency: 'annual', n: 100 }).recommendation.scored_level).toBe(68);
+  });
+
+  it('gives monthly and quarterly series a seasonal part chosen from the data, and annual ones none', () => {
+    // Observations per year: 12 monthly, 4 quarterly (common practice).
+    expect(resolveSettings({}, { frequency: 'monthly', n: 120 }).seasonal).toEqual({ kind: 'auto', period: 12 });
+    expect(resolveSettings({ seasonal: 'none' }, { frequency: 'quarterly', n: 60 }).seasonal).toEqual({ kind: 'none', period: 4 });
+    expect(resolveSettings({ seasonal: 'auto' }, { frequency: 'annual', n: 60 }).seasonal).toEqual({ kind: 'none', period: 1 });
+    const form = { harmonics: 2, seasonal_ar: 0, seasonal_ma: 1, seasonal_differences: true };
+    expect(resolveSettings({ seasonal: form }, { frequency: 'quarterly', n: 60 }).seasonal).toEqual({ kind: 'fixed', period: 4, ...form });
+  });
+
+  it('refuses a fixed seasonal form on annual data, and more harmonic pairs than the period has', () => {
+    const form = { harmonics: 3, seasonal_ar: 0, seasonal_ma: 0, seasonal_differences: false };
+    const place = (key: string) => ({ file: 'memo.yaml', line: 4, field: `defaults.${key}` });
+    expect(() => resolveSettings({ seasonal: form }, { frequency: 'annual', n: 60 }, place)).toThrow(InputError);
+    try {
+      resolveSettings({ seasonal: form }, { frequency: 'quarterly', n: 60 }, place);
+      expect.unreachable();
+    } catch (error) {
+      // A quarterly series has ⌊4/2⌋ = 2 harmonic pairs (common practice).
+      expect((error as InputError).problems).toEqual([
+        expect.objectContaining({ code: 'config.seasonal-harmonics', line: 4, field: 'defaults.seasonal', message: '3 harmonic pairs are more than a quarterly series has (at most 2)' }),
+      ]);
+    }
+    expect(resolveSettings({ seasonal: { ...form, harmonics: 6 } }, { frequency: 'monthly', n: 60 }).seasonal).toMatchObject({ kind: 'fixed', harmonics: 6 });
   });
 
   it('turns the transform as written into the form the models take', () => {

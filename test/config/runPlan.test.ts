@@ -56,6 +56,7 @@ describe('merging defaults and overrides', () => {
       'coefficient_uncertainty',
       'point',
       'estimation',
+      'seasonal',
       'max_p',
       'max_q',
       'significance',
