@@ -24,7 +24,7 @@ import type { TrendModelKind } from '../base/settings.js';
 import { admissibility, type InadmissibleReason } from './admissibility.js';
 import { countObserved, fitRegressionArma, type RegressionArmaFit } from './fitRegressionArma.js';
 import { checkHarmonics } from './harmonics.js';
-import { aicc, fitGrid, padStart, type Candidate } from './orderSearch.js';
+import { aicc, fitGrid, padStart, searchOrders, type Candidate } from './orderSearch.js';
 import { designWorkspace, trendDesign, type TrendDesign } from './trendDesign.js';
 
 /** Stage 3 sends the search back to stage 2 at most this many times. */
@@ -50,6 +50,45 @@ export interface SeasonalChoice {
   harmonics: number;
   P: number;
   Q: number;
+}
+
+/**
+ * A seasonal part fixed by the analyst: the (p, q) grid is still searched. The rules of the
+ * search apply: the deterministic model never differences, and on seasonal differences the
+ * stochastic model takes no harmonics (they would describe a pattern the differences removed).
+ */
+export interface FixedSeasonalPart extends SeasonalChoice {
+  period: number;
+  firstSeason: number;
+  seasonalDifferencing: boolean;
+}
+
+/** The design of a model with a fixed seasonal part, under the search's rules. */
+export function fixedPartDesign(kind: TrendModelKind, w: Float64Array, part: FixedSeasonalPart): { design: TrendDesign; choice: SeasonalChoice } {
+  const seasonalDifferencing = kind === 'stochastic' && part.seasonalDifferencing;
+  const harmonics = seasonalDifferencing ? 0 : part.harmonics;
+  const design = trendDesign(kind, w, { period: part.period, firstSeason: part.firstSeason, harmonics, seasonalDifferencing });
+  return { design, choice: { harmonics, P: part.P, Q: part.Q } };
+}
+
+/** The (p, q) grid with a fixed seasonal part, in the form of the search's result. */
+export function searchWithSeasonalPart(kind: TrendModelKind, w: Float64Array, maxP: number, maxQ: number, part: FixedSeasonalPart): SeasonalSearchResult {
+  const { design, choice } = fixedPartDesign(kind, w, part);
+  if (!(choice.P === 0 || choice.P === 1) || !(choice.Q === 0 || choice.Q === 1)) throw new RangeError(`seasonal part: P and Q must be 0 or 1, got (${choice.P},${choice.Q})`);
+  const search = searchOrders(design.response, design.regressors, maxP, maxQ, {
+    ...designWorkspace(design),
+    differenced: kind === 'stochastic',
+    ...(choice.P + choice.Q > 0 ? { seasonal: { period: part.period, P: choice.P, Q: choice.Q } } : {}),
+  });
+  const { setAside } = search;
+  return {
+    best: search.best,
+    bestAicc: search.bestAicc,
+    design,
+    choice,
+    candidates: search.candidates.map((candidate) => ({ ...candidate, ...choice })),
+    setAside: setAside === null ? null : { ...setAside, choice },
+  };
 }
 
 /** A candidate of the seasonal search: a nonseasonal order with its seasonal part. */

@@ -25,11 +25,19 @@ import { aicc, searchOrders } from './orderSearch.js';
 import { armaStandardErrors, type StandardErrorMethod } from './standardErrors.js';
 import { harmonicColumnCount, seasonalPattern } from './harmonics.js';
 import { packFactors } from './seasonalArma.js';
-import { searchSeasonalModel, type SeasonalCandidate, type SeasonalChoice, type SeasonalSearchSpec } from './seasonalSearch.js';
+import {
+  fixedPartDesign,
+  searchSeasonalModel,
+  searchWithSeasonalPart,
+  type FixedSeasonalPart,
+  type SeasonalCandidate,
+  type SeasonalChoice,
+  type SeasonalSearchSpec,
+} from './seasonalSearch.js';
 import { designWorkspace, trendDesign, type TrendDesign } from './trendDesign.js';
 
 export { designWorkspace, trendDesign, type DesignSeasonality, type SeasonalLevels, type TrendDesign } from './trendDesign.js';
-export type { SeasonalCandidate, SeasonalChoice, SeasonalSearchSpec } from './seasonalSearch.js';
+export type { FixedSeasonalPart, SeasonalCandidate, SeasonalChoice, SeasonalSearchSpec } from './seasonalSearch.js';
 
 /** The seasonal side of a model's order, for `minimumObservations`. */
 export interface SeasonalOrderSize {
@@ -55,15 +63,11 @@ export type RestrictedFallback = 'not-converged' | InadmissibleReason;
 export interface TrendModelOptions {
   /** How the chosen order's coefficients are estimated; 'reml' (REML) when absent. */
   estimation?: Estimation;
-  /** A seasonal series: what the seasonal search may try. Absent: no seasonal part. */
-  seasonal?: SeasonalSearchSpec;
-}
-
-/** A seasonal part fixed in advance, for `fitTrendModelAtOrder` (a backtest that keeps the orders). */
-export interface FixedSeasonalPart extends SeasonalChoice {
-  period: number;
-  firstSeason: number;
-  seasonalDifferencing: boolean;
+  /**
+   * A seasonal series: the limits of the seasonal search, or a seasonal part fixed by the
+   * analyst (then only (p, q) is searched). Absent: no seasonal part.
+   */
+  seasonal?: SeasonalSearchSpec | FixedSeasonalPart;
 }
 
 export interface FixedOrderOptions {
@@ -128,8 +132,15 @@ export function fitTrendModel(kind: TrendModelKind, w: Float64Array, maxP: numbe
   return setAside === null ? model : { ...model, setAside: { p: setAside.fit.p, q: setAside.fit.q, ar: Array.from(setAside.fit.ar), ma: Array.from(setAside.fit.ma), aicc: setAside.aicc, reason: setAside.reason } };
 }
 
-function fitSeasonalTrendModel(kind: TrendModelKind, w: Float64Array, maxP: number, maxQ: number, spec: SeasonalSearchSpec, options: TrendModelOptions): TrendModelFit {
-  const search = searchSeasonalModel(kind, w, maxP, maxQ, spec);
+function fitSeasonalTrendModel(
+  kind: TrendModelKind,
+  w: Float64Array,
+  maxP: number,
+  maxQ: number,
+  spec: SeasonalSearchSpec | FixedSeasonalPart,
+  options: TrendModelOptions,
+): TrendModelFit {
+  const search = 'harmonics' in spec ? searchWithSeasonalPart(kind, w, maxP, maxQ, spec) : searchSeasonalModel(kind, w, maxP, maxQ, spec);
   const part = seasonalPart(search.design, search.choice);
   const model = describeFit(kind, search.design, search.best, search.bestAicc, search.candidates, part, options);
   const { setAside } = search;
@@ -151,14 +162,11 @@ function fitSeasonalTrendModel(kind: TrendModelKind, w: Float64Array, maxP: numb
   };
 }
 
-/** A model at a fixed order (no search), e.g. for a backtest that keeps orders fixed. */
+/** A model at a fixed order (no search), e.g. for a backtest that keeps orders fixed; a seasonal part follows `fixedPartDesign`'s rules. */
 export function fitTrendModelAtOrder(kind: TrendModelKind, w: Float64Array, p: number, q: number, options: FixedOrderOptions = {}): TrendModelFit {
-  const fixed = options.seasonal;
-  const design = trendDesign(
-    kind,
-    w,
-    fixed === undefined ? undefined : { period: fixed.period, firstSeason: fixed.firstSeason, harmonics: fixed.harmonics, seasonalDifferencing: fixed.seasonalDifferencing },
-  );
+  const fixedPart = options.seasonal === undefined ? undefined : fixedPartDesign(kind, w, options.seasonal);
+  const design = fixedPart?.design ?? trendDesign(kind, w);
+  const fixed = fixedPart?.choice;
   const seasonal = seasonalPartOf(design, fixed);
   const fit = fitRegressionArma(design.response, design.regressors, p, q, { ...designWorkspace(design), seasonal });
   const k = p + q + (fixed?.P ?? 0) + (fixed?.Q ?? 0) + design.regressors.length + 1;

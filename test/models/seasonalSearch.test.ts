@@ -94,6 +94,27 @@ describe('seasonal search on a seeded series with a fixed pattern', () => {
   });
 });
 
+describe('a seasonal part fixed by the analyst', () => {
+  const w = readSeries('uk-gas.csv', true);
+  const part = { period: 4, firstSeason: 0, harmonics: 2, P: 0, Q: 1, seasonalDifferencing: true };
+
+  it('holds the part and searches the (p, q) grid only', () => {
+    const model = fitTrendModel('deterministic', w, 3, 3, { estimation: 'ml', seasonal: part });
+    // The deterministic model never differences, so it keeps the two harmonic pairs.
+    expect(model.seasonal).toMatchObject({ harmonics: 2, P: 0, Q: 1, seasonalDifferencing: false });
+    expect(model.candidates).toHaveLength(16);
+    expect(model.candidates.every((c) => c.harmonics === 2 && c.P === 0 && c.Q === 1)).toBe(true);
+    expect(model.aicc).toBe(Math.min(...model.candidates.filter((c) => c.admissible).map((c) => c.aicc)));
+  });
+
+  it('takes no harmonics on seasonal differences, which remove a fixed pattern', () => {
+    const model = fitTrendModel('stochastic', w, 1, 1, { estimation: 'ml', seasonal: part });
+    expect(model.seasonal).toMatchObject({ harmonics: 0, P: 0, Q: 1, seasonalDifferencing: true });
+    expect(Object.keys(model.coefficients)).toEqual(['drift']);
+    expect(model.design.response).toHaveLength(w.length - 4);
+  });
+});
+
 describe('seasonal search inputs', () => {
   const w = readSeries('uk-gas.csv', true);
   it('refuses seasonal factors beyond order 1 and harmonics beyond s/2 (a defect in the caller)', () => {
