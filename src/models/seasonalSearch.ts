@@ -24,7 +24,7 @@ import type { TrendModelKind } from '../base/settings.js';
 import { admissibility, type InadmissibleReason } from './admissibility.js';
 import { countObserved, fitRegressionArma, type RegressionArmaFit } from './fitRegressionArma.js';
 import { checkHarmonics } from './harmonics.js';
-import { aicc, fitGrid, padStart, searchOrders, type Candidate } from './orderSearch.js';
+import { aicc, fitGrid, padStart, type Candidate, type GridFit } from './orderSearch.js';
 import { designWorkspace, trendDesign, type TrendDesign } from './trendDesign.js';
 
 /** Stage 3 sends the search back to stage 2 at most this many times. */
@@ -71,23 +71,65 @@ export function fixedPartDesign(kind: TrendModelKind, w: Float64Array, part: Fix
   return { design, choice: { harmonics, P: part.P, Q: part.Q } };
 }
 
-/** The (p, q) grid with a fixed seasonal part, in the form of the search's result. */
+/**
+ * The (p, q) grid with a fixed seasonal part, in the form of the search's result. When no fit
+ * with the fixed seasonal factors is admissible (the data push a factor to the unit circle,
+ * say), the grid runs again without them, keeping the harmonics and the differencing, and the
+ * result says which factors were dropped and why: an analyst's part is honoured where the data
+ * allow, and a fit that may not be selected is never selected silently.
+ */
 export function searchWithSeasonalPart(kind: TrendModelKind, w: Float64Array, maxP: number, maxQ: number, part: FixedSeasonalPart): SeasonalSearchResult {
   const { design, choice } = fixedPartDesign(kind, w, part);
   if (!(choice.P === 0 || choice.P === 1) || !(choice.Q === 0 || choice.Q === 1)) throw new RangeError(`seasonal part: P and Q must be 0 or 1, got (${choice.P},${choice.Q})`);
-  const search = searchOrders(design.response, design.regressors, maxP, maxQ, {
-    ...designWorkspace(design),
-    differenced: kind === 'stochastic',
-    ...(choice.P + choice.Q > 0 ? { seasonal: { period: part.period, P: choice.P, Q: choice.Q } } : {}),
-  });
-  const { setAside } = search;
+  const differenced = kind === 'stochastic';
+  const gridFor = (c: SeasonalChoice): Entry[] =>
+    fitGrid(design.response, design.regressors, maxP, maxQ, {
+      ...designWorkspace(design),
+      differenced,
+      ...(c.P + c.Q > 0 ? { seasonal: { period: part.period, P: c.P, Q: c.Q } } : {}),
+    }).map((entry: GridFit) => ({ fit: entry.fit, choice: c, candidate: { ...entry.candidate, ...c } }));
+  const held = gridFor(choice);
+  if (held.some((entry) => entry.candidate.admissible)) return selectFrom(held, design, null);
+  // The reason the best converged fit gives says most about the data; non-convergence only when nothing converged.
+  const best = lowestAicc(held.filter((entry) => entry.candidate.converged)) ?? lowestAicc(held);
+  const plain = { ...choice, P: 0, Q: 0 };
+  return selectFrom([...held, ...gridFor(plain)], design, { P: choice.P, Q: choice.Q, reason: best?.candidate.reason ?? 'not-converged' });
+}
+
+/** The fit of lowest AICc among `entries` (any admissibility), or undefined. */
+function lowestAicc(entries: readonly Entry[]): Entry | undefined {
+  let best: Entry | undefined;
+  for (const entry of entries) if (entry.candidate.aicc < (best?.candidate.aicc ?? Number.POSITIVE_INFINITY)) best = entry;
+  return best;
+}
+
+/** The admissible entry of lowest AICc, and the inadmissible one that beat it, as a search result (one design). */
+function selectFrom(entries: readonly Entry[], design: TrendDesign, droppedFactors: SeasonalSearchResult['droppedFactors']): SeasonalSearchResult {
+  let best: Entry | undefined;
+  for (const entry of entries) {
+    if (entry.candidate.admissible && entry.candidate.aicc < (best?.candidate.aicc ?? Number.POSITIVE_INFINITY)) best = entry;
+  }
+  // The (0, 0) fit without seasonal factors has nothing to be inadmissible about.
+  if (best === undefined) throw new Error('searchWithSeasonalPart: no admissible fit, not even the plain (0, 0)');
+  return { ...resultOf(entries, best), design, droppedFactors };
+}
+
+/** The search's result for the selected entry: candidates in order, and the best inadmissible fit that beat it. */
+function resultOf(entries: readonly Entry[], best: Entry): Omit<SeasonalSearchResult, 'design' | 'droppedFactors'> {
+  let setAside: Entry | undefined;
+  for (const entry of entries) {
+    const { reason, aicc: value } = entry.candidate;
+    if (reason !== null && reason !== 'not-converged' && value < best.candidate.aicc && value < (setAside?.candidate.aicc ?? Number.POSITIVE_INFINITY)) setAside = entry;
+  }
   return {
-    best: search.best,
-    bestAicc: search.bestAicc,
-    design,
-    choice,
-    candidates: search.candidates.map((candidate) => ({ ...candidate, ...choice })),
-    setAside: setAside === null ? null : { ...setAside, choice },
+    best: best.fit,
+    bestAicc: best.candidate.aicc,
+    choice: best.choice,
+    candidates: entries.map((entry) => entry.candidate),
+    setAside:
+      setAside === undefined || setAside.candidate.reason === null
+        ? null
+        : { fit: setAside.fit, aicc: setAside.candidate.aicc, reason: setAside.candidate.reason, choice: setAside.choice },
   };
 }
 
@@ -108,6 +150,11 @@ export interface SeasonalSearchResult {
   candidates: SeasonalCandidate[];
   /** The converged fit of lowest AICc when it is not admissible and beats the selected one, else null. */
   setAside: { fit: RegressionArmaFit; aicc: number; reason: InadmissibleReason; choice: SeasonalChoice } | null;
+  /**
+   * A fixed part whose seasonal factors no admissible fit could carry: the factors asked for
+   * and the reason of their best fit; the model then runs without them. Null otherwise.
+   */
+  droppedFactors: { P: number; Q: number; reason: InadmissibleReason } | null;
 }
 
 interface Entry {
@@ -232,22 +279,7 @@ export function searchSeasonalModel(kind: TrendModelKind, w: Float64Array, maxP:
   const all = [...entries.values()];
   const best = bestOf(all);
   if (best === undefined) throw new Error('searchSeasonalModel: no admissible fit, not even the plain (0, 0)');
-  let setAside: Entry | undefined;
-  for (const entry of all) {
-    const { reason, aicc: value } = entry.candidate;
-    if (reason !== null && reason !== 'not-converged' && value < best.candidate.aicc && value < (setAside?.candidate.aicc ?? Number.POSITIVE_INFINITY)) setAside = entry;
-  }
-  return {
-    best: best.fit,
-    bestAicc: best.candidate.aicc,
-    design: designFor(best.choice.harmonics),
-    choice: best.choice,
-    candidates: all.map((entry) => entry.candidate),
-    setAside:
-      setAside === undefined || setAside.candidate.reason === null
-        ? null
-        : { fit: setAside.fit, aicc: setAside.candidate.aicc, reason: setAside.candidate.reason, choice: setAside.choice },
-  };
+  return { ...resultOf(all, best), design: designFor(best.choice.harmonics), droppedFactors: null };
 }
 
 /** A part's neighbours: a harmonic pair more or fewer, a seasonal factor added or dropped, no harmonics. */

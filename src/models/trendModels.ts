@@ -82,6 +82,8 @@ export interface SeasonalModelPart extends SeasonalChoice {
   seasonalDifferencing: boolean;
   /** The fixed pattern the harmonics describe, one value per position in the year (0 = January or Q1); null without harmonics. */
   pattern: number[] | null;
+  /** A fixed part's seasonal factors that no admissible fit could carry, and why; the model runs without them. Null otherwise. */
+  droppedFactors: { P: number; Q: number; reason: InadmissibleReason } | null;
 }
 
 export interface TrendModelFit {
@@ -141,7 +143,7 @@ function fitSeasonalTrendModel(
   options: TrendModelOptions,
 ): TrendModelFit {
   const search = 'harmonics' in spec ? searchWithSeasonalPart(kind, w, maxP, maxQ, spec) : searchSeasonalModel(kind, w, maxP, maxQ, spec);
-  const part = seasonalPart(search.design, search.choice);
+  const part = { ...seasonalPart(search.design, search.choice), droppedFactors: search.droppedFactors };
   const model = describeFit(kind, search.design, search.best, search.bestAicc, search.candidates, part, options);
   const { setAside } = search;
   if (setAside === null) return model;
@@ -203,6 +205,7 @@ function seasonalPart(design: TrendDesign, choice: SeasonalChoice): SeasonalMode
     period: seasonality.period,
     seasonalDifferencing: seasonality.seasonalDifferencing,
     pattern: null,
+    droppedFactors: null,
   };
 }
 

@@ -107,6 +107,21 @@ describe('a seasonal part fixed by the analyst', () => {
     expect(model.aicc).toBe(Math.min(...model.candidates.filter((c) => c.admissible).map((c) => c.aicc)));
   });
 
+  it('drops seasonal factors no admissible fit can carry, says so, and keeps the rest of the part', () => {
+    // Nottingham temperatures have a fixed pattern: on first differences a seasonal AR and MA pair
+    // runs to the unit circle (Φ → 1) at every (p, q) ≤ (1, 1).
+    const temperature = readSeries('nottingham-temperature.csv', false);
+    const model = fitTrendModel('stochastic', temperature, 1, 1, {
+      estimation: 'ml',
+      seasonal: { period: 12, firstSeason: 0, harmonics: 0, P: 1, Q: 1, seasonalDifferencing: false },
+    });
+    expect(model.seasonal).toMatchObject({ P: 0, Q: 0, droppedFactors: { P: 1, Q: 1, reason: 'ar-unit-root' } });
+    const held = model.candidates.filter((c) => c.P === 1 && c.Q === 1);
+    expect(held).toHaveLength(4);
+    expect(held.every((c) => !c.admissible)).toBe(true);
+    expect(model.candidates.filter((c) => c.P === 0 && c.Q === 0)).toHaveLength(4);
+  });
+
   it('takes no harmonics on seasonal differences, which remove a fixed pattern', () => {
     const model = fitTrendModel('stochastic', w, 1, 1, { estimation: 'ml', seasonal: part });
     expect(model.seasonal).toMatchObject({ harmonics: 0, P: 0, Q: 1, seasonalDifferencing: true });
