@@ -6,7 +6,7 @@
 // The optimiser works on the factors: each is mapped from the reals to a stationary (or
 // invertible) polynomial by constraints.ts, so the product is stationary and invertible too,
 // its roots being the union of the factors' roots.
-import { constrainAr, constrainMa, unconstrainAr, unconstrainMa } from './constraints.js';
+import { constrainAr, constrainMa } from './constraints.js';
 
 /** An ARMA order in multiplicative form. P = Q = 0 is an ordinary ARMA(p, q) (period then unused). */
 export interface SeasonalArmaOrder {
@@ -105,20 +105,6 @@ export function constrainFactors(x: ArrayLike<number>, order: SeasonalArmaOrder,
   constrainMa(x, p, q, out.ma, work);
   constrainAr(x, p + q, P, out.seasonalAr, work);
   constrainMa(x, p + q + P, Q, out.seasonalMa, work);
-}
-
-/** Inverse of `constrainFactors`; undefined when a factor is not stationary or not invertible. */
-export function unconstrainFactors(factors: ArmaFactors): Float64Array | undefined {
-  const parts = [unconstrainAr(factors.ar), unconstrainMa(factors.ma), unconstrainAr(factors.seasonalAr), unconstrainMa(factors.seasonalMa)];
-  if (parts.some((part) => part === undefined)) return undefined;
-  const x = new Float64Array(parts.reduce((sum, part) => sum + (part?.length ?? 0), 0));
-  let at = 0;
-  for (const part of parts) {
-    if (part === undefined) continue;
-    x.set(part, at);
-    at += part.length;
-  }
-  return x;
 }
 
 /** The factors packed as (AR, MA, seasonal AR, seasonal MA), the layout of the parameter vector. */

@@ -163,7 +163,7 @@ interface Entry {
   candidate: SeasonalCandidate;
 }
 
-export function checkSeasonalSearchSpec(spec: SeasonalSearchSpec): void {
+function checkSeasonalSearchSpec(spec: SeasonalSearchSpec): void {
   checkHarmonics(spec.period, spec.maxHarmonics);
   for (const [name, value] of [['maxSeasonalP', spec.maxSeasonalP], ['maxSeasonalQ', spec.maxSeasonalQ]] as const) {
     if (!(value === 0 || value === 1)) throw new RangeError(`seasonal search: ${name} must be 0 or 1, got ${value}`);
@@ -171,7 +171,7 @@ export function checkSeasonalSearchSpec(spec: SeasonalSearchSpec): void {
 }
 
 /** The seasonal parts the search tries for a model. */
-export function seasonalChoices(kind: TrendModelKind, spec: SeasonalSearchSpec): SeasonalChoice[] {
+function seasonalChoices(kind: TrendModelKind, spec: SeasonalSearchSpec): SeasonalChoice[] {
   const harmonicsTried = kind === 'stochastic' && spec.seasonalDifferencing ? 0 : spec.maxHarmonics;
   const choices: SeasonalChoice[] = [];
   for (let harmonics = 0; harmonics <= harmonicsTried; harmonics++) {
