@@ -52,6 +52,36 @@ export interface SeasonalChoice {
   Q: number;
 }
 
+/** A candidate of the seasonal search: a nonseasonal order with its seasonal part. */
+export interface SeasonalCandidate extends Candidate {
+  P: number;
+  Q: number;
+  harmonics: number;
+}
+
+export interface SeasonalSearchResult {
+  best: RegressionArmaFit;
+  bestAicc: number;
+  /** The best fit's design (its harmonic pairs). */
+  design: TrendDesign;
+  choice: SeasonalChoice;
+  /** Every fit made, in the order made. */
+  candidates: SeasonalCandidate[];
+  /** The converged fit of lowest AICc when it is not admissible and beats the selected one, else null. */
+  setAside: { fit: RegressionArmaFit; aicc: number; reason: InadmissibleReason; choice: SeasonalChoice } | null;
+  /**
+   * A fixed part whose seasonal factors no admissible fit could carry: the factors asked for
+   * and the reason of their best fit; the model then runs without them. Null otherwise.
+   */
+  droppedFactors: { P: number; Q: number; reason: InadmissibleReason } | null;
+}
+
+interface Entry {
+  fit: RegressionArmaFit;
+  choice: SeasonalChoice;
+  candidate: SeasonalCandidate;
+}
+
 /**
  * A seasonal part fixed by the analyst: the (p, q) grid is still searched. The rules of the
  * search apply: the deterministic model never differences, and on seasonal differences the
@@ -94,73 +124,6 @@ export function searchWithSeasonalPart(kind: TrendModelKind, w: Float64Array, ma
   const best = lowestAicc(held.filter((entry) => entry.candidate.converged)) ?? lowestAicc(held);
   const plain = { ...choice, P: 0, Q: 0 };
   return selectFrom([...held, ...gridFor(plain)], design, { P: choice.P, Q: choice.Q, reason: best?.candidate.reason ?? 'not-converged' });
-}
-
-/** The fit of lowest AICc among `entries` (any admissibility), or undefined. */
-function lowestAicc(entries: readonly Entry[]): Entry | undefined {
-  let best: Entry | undefined;
-  for (const entry of entries) if (entry.candidate.aicc < (best?.candidate.aicc ?? Number.POSITIVE_INFINITY)) best = entry;
-  return best;
-}
-
-/** The admissible entry of lowest AICc, and the inadmissible one that beat it, as a search result (one design). */
-function selectFrom(entries: readonly Entry[], design: TrendDesign, droppedFactors: SeasonalSearchResult['droppedFactors']): SeasonalSearchResult {
-  let best: Entry | undefined;
-  for (const entry of entries) {
-    if (entry.candidate.admissible && entry.candidate.aicc < (best?.candidate.aicc ?? Number.POSITIVE_INFINITY)) best = entry;
-  }
-  // The (0, 0) fit without seasonal factors has nothing to be inadmissible about.
-  if (best === undefined) throw new Error('searchWithSeasonalPart: no admissible fit, not even the plain (0, 0)');
-  return { ...resultOf(entries, best), design, droppedFactors };
-}
-
-/** The search's result for the selected entry: candidates in order, and the best inadmissible fit that beat it. */
-function resultOf(entries: readonly Entry[], best: Entry): Omit<SeasonalSearchResult, 'design' | 'droppedFactors'> {
-  let setAside: Entry | undefined;
-  for (const entry of entries) {
-    const { reason, aicc: value } = entry.candidate;
-    if (reason !== null && reason !== 'not-converged' && value < best.candidate.aicc && value < (setAside?.candidate.aicc ?? Number.POSITIVE_INFINITY)) setAside = entry;
-  }
-  return {
-    best: best.fit,
-    bestAicc: best.candidate.aicc,
-    choice: best.choice,
-    candidates: entries.map((entry) => entry.candidate),
-    setAside:
-      setAside === undefined || setAside.candidate.reason === null
-        ? null
-        : { fit: setAside.fit, aicc: setAside.candidate.aicc, reason: setAside.candidate.reason, choice: setAside.choice },
-  };
-}
-
-/** A candidate of the seasonal search: a nonseasonal order with its seasonal part. */
-export interface SeasonalCandidate extends Candidate {
-  P: number;
-  Q: number;
-  harmonics: number;
-}
-
-export interface SeasonalSearchResult {
-  best: RegressionArmaFit;
-  bestAicc: number;
-  /** The best fit's design (its harmonic pairs). */
-  design: TrendDesign;
-  choice: SeasonalChoice;
-  /** Every fit made, in the order made. */
-  candidates: SeasonalCandidate[];
-  /** The converged fit of lowest AICc when it is not admissible and beats the selected one, else null. */
-  setAside: { fit: RegressionArmaFit; aicc: number; reason: InadmissibleReason; choice: SeasonalChoice } | null;
-  /**
-   * A fixed part whose seasonal factors no admissible fit could carry: the factors asked for
-   * and the reason of their best fit; the model then runs without them. Null otherwise.
-   */
-  droppedFactors: { P: number; Q: number; reason: InadmissibleReason } | null;
-}
-
-interface Entry {
-  fit: RegressionArmaFit;
-  choice: SeasonalChoice;
-  candidate: SeasonalCandidate;
 }
 
 function checkSeasonalSearchSpec(spec: SeasonalSearchSpec): void {
@@ -280,6 +243,43 @@ export function searchSeasonalModel(kind: TrendModelKind, w: Float64Array, maxP:
   const best = bestOf(all);
   if (best === undefined) throw new Error('searchSeasonalModel: no admissible fit, not even the plain (0, 0)');
   return { ...resultOf(all, best), design: designFor(best.choice.harmonics), droppedFactors: null };
+}
+
+/** The fit of lowest AICc among `entries` (any admissibility), or undefined. */
+function lowestAicc(entries: readonly Entry[]): Entry | undefined {
+  let best: Entry | undefined;
+  for (const entry of entries) if (entry.candidate.aicc < (best?.candidate.aicc ?? Number.POSITIVE_INFINITY)) best = entry;
+  return best;
+}
+
+/** The admissible entry of lowest AICc, and the inadmissible one that beat it, as a search result (one design). */
+function selectFrom(entries: readonly Entry[], design: TrendDesign, droppedFactors: SeasonalSearchResult['droppedFactors']): SeasonalSearchResult {
+  let best: Entry | undefined;
+  for (const entry of entries) {
+    if (entry.candidate.admissible && entry.candidate.aicc < (best?.candidate.aicc ?? Number.POSITIVE_INFINITY)) best = entry;
+  }
+  // The (0, 0) fit without seasonal factors has nothing to be inadmissible about.
+  if (best === undefined) throw new Error('searchWithSeasonalPart: no admissible fit, not even the plain (0, 0)');
+  return { ...resultOf(entries, best), design, droppedFactors };
+}
+
+/** The search's result for the selected entry: candidates in order, and the best inadmissible fit that beat it. */
+function resultOf(entries: readonly Entry[], best: Entry): Omit<SeasonalSearchResult, 'design' | 'droppedFactors'> {
+  let setAside: Entry | undefined;
+  for (const entry of entries) {
+    const { reason, aicc: value } = entry.candidate;
+    if (reason !== null && reason !== 'not-converged' && value < best.candidate.aicc && value < (setAside?.candidate.aicc ?? Number.POSITIVE_INFINITY)) setAside = entry;
+  }
+  return {
+    best: best.fit,
+    bestAicc: best.candidate.aicc,
+    choice: best.choice,
+    candidates: entries.map((entry) => entry.candidate),
+    setAside:
+      setAside === undefined || setAside.candidate.reason === null
+        ? null
+        : { fit: setAside.fit, aicc: setAside.candidate.aicc, reason: setAside.candidate.reason, choice: setAside.choice },
+  };
 }
 
 /** A part's neighbours: a harmonic pair more or fewer, a seasonal factor added or dropped, no harmonics. */
