@@ -13,9 +13,10 @@ import { backTransformForecast, transformValue } from '../base/transform.js';
 import { toolVersion } from '../base/toolVersion.js';
 import type { BacktestRecord } from '../backtest/backtestRecord.js';
 import type { BacktestRun } from '../backtest/runBacktest.js';
-import { collectEvidence, type EvidenceOptions } from '../evidence/collectEvidence.js';
+import { collectEvidence, type EvidenceOptions, type FittedResiduals } from '../evidence/collectEvidence.js';
+import { planSeasonal, type SeasonalPlan } from './seasonalPlan.js';
 import { smallestMaRootModulus, smallestRootModulus } from '../linalg/rootModulus.js';
-import { fitTrendModel, forecastTrendModel, minimumObservations, type TrendModelFit } from '../models/trendModels.js';
+import { fitTrendModel, forecastTrendModel, minimumObservations, type FixedSeasonalPart, type SeasonalSearchSpec, type TrendModelFit } from '../models/trendModels.js';
 import { describeEquation } from './describeEquation.js';
 import { RECORD_SCHEMA, type AnalysisRecord, type DeterministicCoefficients, type ForecastRow, type JsonNumber, type ModelRecord, type StochasticCoefficients } from './record.js';
 import { recommendationInput, recommendModel } from './recommendModel.js';
@@ -45,16 +46,29 @@ export function requiredObservations(maxP: number, maxQ: number): number {
 
 export async function analyseSeries(series: Series, settings: AnalysisSettings, identity: SeriesIdentity, run: AnalysisRun): Promise<AnalysisRecord> {
   const w = series.values.map((y) => transformValue(settings.transform, y));
-  const fitted = {
-    deterministic: fitTrendModel('deterministic', w, settings.max_p, settings.max_q, { estimation: settings.estimation }),
-    stochastic: fitTrendModel('stochastic', w, settings.max_p, settings.max_q, { estimation: settings.estimation }),
-  };
+  const seasonal = planSeasonal(series, w, settings);
+  const fitModel = (kind: TrendModelKind): TrendModelFit =>
+    fitTrendModel(kind, w, settings.max_p, settings.max_q, { estimation: settings.estimation, ...(seasonal.specs === undefined ? {} : { seasonal: seasonal.specs[kind] }) });
+  const fitted = { deterministic: fitModel('deterministic'), stochastic: fitModel('stochastic') };
+  const fittedResiduals = (model: TrendModelFit): FittedResiduals => ({
+    residuals: model.fit.residuals,
+    p: model.fit.order.p,
+    q: model.fit.order.q,
+    P: model.fit.order.P,
+    Q: model.fit.order.Q,
+    estimation: model.fit.estimation,
+  });
   const evidence = collectEvidence(
     w,
-    { deterministic: fitted.deterministic.fit, stochastic: fitted.stochastic.fit },
-    { significance: settings.significance, kpssLagRule: run.kpssLagRule, periodOf: (index) => series.periods[index] ?? addPeriods(series.first, index) },
+    { deterministic: fittedResiduals(fitted.deterministic), stochastic: fittedResiduals(fitted.stochastic) },
+    {
+      significance: settings.significance,
+      kpssLagRule: run.kpssLagRule,
+      periodOf: (index) => series.periods[index] ?? addPeriods(series.first, index),
+      ...(seasonal.evidence === undefined ? {} : { period: seasonal.record.period, seasonal: seasonal.evidence, seasonStart: seasonal.start, seasonalModels: true }),
+    },
   );
-  const backtest = run.backtest ? await backtestOrReason(series, settings, fitted, run) : undefined;
+  const backtest = run.backtest ? await backtestOrReason(series, settings, fitted, run, seasonal) : undefined;
   const deterministic = modelRecord('deterministic', fitted.deterministic) as ModelRecord<DeterministicCoefficients>;
   const stochastic = modelRecord('stochastic', fitted.stochastic) as ModelRecord<StochasticCoefficients>;
   return {
@@ -77,6 +91,7 @@ export async function analyseSeries(series: Series, settings: AnalysisSettings, 
       stochastic: forecastRows(fitted.stochastic, series.last, settings),
     },
     evidence,
+    seasonal: seasonal.record,
     ...(backtest === undefined
       ? {}
       : {
@@ -93,13 +108,25 @@ async function backtestOrReason(
   settings: AnalysisSettings,
   fitted: Record<TrendModelKind, TrendModelFit>,
   run: AnalysisRun,
+  seasonal: SeasonalPlan,
 ): Promise<{ record: BacktestRecord | null; reason?: string }> {
   // Orders chosen on the full sample, for the policies that keep them (a look-ahead the record notes).
-  const orders = settings.backtest.refit === 'reselect' ? undefined : { deterministic: orderOf(fitted.deterministic), stochastic: orderOf(fitted.stochastic) };
+  const reselect = settings.backtest.refit === 'reselect';
+  const orders = reselect ? undefined : { deterministic: orderOf(fitted.deterministic), stochastic: orderOf(fitted.stochastic) };
+  // The seasonal part: searched again at each origin, or the full-series choice kept with the orders.
+  const keptPart = (kind: TrendModelKind): FixedSeasonalPart | SeasonalSearchSpec | undefined => {
+    const spec = seasonal.specs?.[kind];
+    const part = fitted[kind].seasonal;
+    if (spec === undefined || reselect || part === null) return spec;
+    return { period: part.period, firstSeason: spec.firstSeason, seasonalDifferencing: part.seasonalDifferencing, harmonics: part.harmonics, P: part.P, Q: part.Q };
+  };
+  const det = keptPart('deterministic');
+  const sto = keptPart('stochastic');
+  const seasonalRun = det === undefined || sto === undefined ? {} : { seasonal: { deterministic: det, stochastic: sto }, period: seasonal.record.period };
   // The backtest (and its thread pool) loads only for an analysis that runs one.
   const { runBacktest } = await import('../backtest/runBacktest.js');
   try {
-    return { record: await runBacktest({ values: series.values, periods: series.periods }, settings, { orders, threads: run.threads, pool: run.pool }) };
+    return { record: await runBacktest({ values: series.values, periods: series.periods }, settings, { orders, threads: run.threads, pool: run.pool, ...seasonalRun }) };
   } catch (error) {
     if (!(error instanceof InputError)) throw error;
     return { record: null, reason: error.problems.map((problem) => formatProblem({ ...problem, file: undefined })).join(' ') };
@@ -107,7 +134,7 @@ async function backtestOrReason(
 }
 
 function orderOf(model: TrendModelFit): { p: number; q: number } {
-  return { p: model.fit.p, q: model.fit.q };
+  return { p: model.fit.order.p, q: model.fit.order.q };
 }
 
 function jsonNumber(value: number): JsonNumber {
@@ -116,10 +143,15 @@ function jsonNumber(value: number): JsonNumber {
 
 function modelRecord(kind: TrendModelKind, model: TrendModelFit): ModelRecord {
   const { fit } = model;
-  const regressionSe = Object.fromEntries(Object.entries(model.stderr.regression).map(([name, value]) => [name, jsonNumber(value)]));
+  const { factors } = fit;
+  // The trend's own coefficients; the harmonic pairs' go under `seasonal`.
+  const trendNames = kind === 'deterministic' ? ['intercept', 'slope'] : ['drift'];
+  const trendOnly = <T>(values: Record<string, T>): Record<string, T> => Object.fromEntries(Object.entries(values).filter(([name]) => trendNames.includes(name)));
+  const harmonicsOnly = <T>(values: Record<string, T>): Record<string, T> => Object.fromEntries(Object.entries(values).filter(([name]) => !trendNames.includes(name)));
+  const regressionSe = Object.fromEntries(Object.entries(trendOnly(model.stderr.regression)).map(([name, value]) => [name, jsonNumber(value)]));
   return {
-    p: fit.p,
-    q: fit.q,
+    p: fit.order.p,
+    q: fit.order.q,
     nobs: fit.nobs,
     loglik: model.loglik,
     aicc: jsonNumber(model.aicc),
@@ -129,16 +161,44 @@ function modelRecord(kind: TrendModelKind, model: TrendModelFit): ModelRecord {
     sigma2: fit.sigma2,
     converged: fit.converged,
     // The design names the regression coefficients (intercept and slope, or drift), so the shape follows the kind.
-    coefficients: { ...model.coefficients, ar: Array.from(fit.ar), ma: Array.from(fit.ma) } as DeterministicCoefficients | StochasticCoefficients,
+    coefficients: { ...trendOnly(model.coefficients), ar: Array.from(factors.ar), ma: Array.from(factors.ma) } as DeterministicCoefficients | StochasticCoefficients,
     stderr: { ...regressionSe, ar: model.stderr.ar.map(jsonNumber), ma: model.stderr.ma.map(jsonNumber) } as DeterministicCoefficients<JsonNumber> | StochasticCoefficients<JsonNumber>,
     stderr_method: model.stderr.method,
     set_aside: model.setAside === undefined ? null : { ...model.setAside, aicc: jsonNumber(model.setAside.aicc) },
-    candidates: model.candidates.map((c) => ({ p: c.p, q: c.q, loglik: jsonNumber(c.loglik), aicc: jsonNumber(c.aicc), converged: c.converged, admissible: c.admissible, reason: c.reason })),
+    candidates: model.candidates.map((c) => ({
+      p: c.p,
+      q: c.q,
+      ...(model.seasonal === null ? {} : { harmonics: c.harmonics, P: c.P, Q: c.Q }),
+      loglik: jsonNumber(c.loglik),
+      aicc: jsonNumber(c.aicc),
+      converged: c.converged,
+      admissible: c.admissible,
+      reason: c.reason,
+    })),
     equation: describeEquation(kind, model),
     roots: {
-      ar_min_modulus: jsonNumber(smallestRootModulus(fit.ar) ?? Number.NaN),
-      ma_min_modulus: jsonNumber(smallestMaRootModulus(fit.ma) ?? Number.NaN),
+      ar_min_modulus: jsonNumber(smallestRootModulus(factors.ar) ?? Number.NaN),
+      ma_min_modulus: jsonNumber(smallestMaRootModulus(factors.ma) ?? Number.NaN),
     },
+    seasonal:
+      model.seasonal === null
+        ? null
+        : {
+            period: model.seasonal.period,
+            harmonics: model.seasonal.harmonics,
+            P: model.seasonal.P,
+            Q: model.seasonal.Q,
+            seasonal_differences: model.seasonal.seasonalDifferencing,
+            pattern: model.seasonal.pattern,
+            seasonal_ar: Array.from(factors.seasonalAr),
+            seasonal_ma: Array.from(factors.seasonalMa),
+            stderr: {
+              seasonal_ar: model.stderr.seasonalAr.map(jsonNumber),
+              seasonal_ma: model.stderr.seasonalMa.map(jsonNumber),
+              harmonics: Object.fromEntries(Object.entries(harmonicsOnly(model.stderr.regression)).map(([name, value]) => [name, jsonNumber(value)])),
+            },
+            harmonic_coefficients: harmonicsOnly(model.coefficients),
+          },
   };
 }
 

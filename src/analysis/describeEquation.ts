@@ -4,16 +4,21 @@ import type { TrendModelFit } from '../models/trendModels.js';
 import { type TrendModelKind } from '../base/settings.js';
 
 export function describeEquation(kind: TrendModelKind, model: TrendModelFit): string {
-  const { fit } = model;
-  const lhs = kind === 'deterministic' ? 'w_t' : '(1 - B) w_t';
+  const { fit, seasonal } = model;
+  const { factors } = fit;
+  const s = seasonal?.period ?? 1;
+  const lhs = kind === 'deterministic' ? 'w_t' : seasonal?.seasonalDifferencing === true ? `(1 - B^${s}) w_t` : '(1 - B) w_t';
   const regression =
-    kind === 'deterministic'
+    (kind === 'deterministic'
       ? `${format(model.coefficients.intercept)} ${signed(model.coefficients.slope)}·t`
-      : format(model.coefficients.drift);
-  const ar = Array.from(fit.ar, (v, i) => `${signed(-v)}B${power(i + 1)}`).join(' ');
-  const ma = Array.from(fit.ma, (v, j) => `${signed(v)}B${power(j + 1)}`).join(' ');
-  const noise = `${fit.ar.length > 0 ? `(1 ${ar}) ` : ''}η_t = ${fit.ma.length > 0 ? `(1 ${ma}) ` : ''}ε_t`;
-  return `${lhs} = ${regression} + η_t,  ${noise},  ε_t ~ N(0, ${format(fit.sigma2)})`;
+      : format(model.coefficients.drift)) + ((seasonal?.harmonics ?? 0) > 0 ? ' + S(t)' : '');
+  const polynomial = (coefficients: ArrayLike<number>, sign: number, step: number): string =>
+    coefficients.length === 0 ? '' : `(1 ${Array.from(coefficients, (v, i) => `${signed(sign * v)}B${power((i + 1) * step)}`).join(' ')}) `;
+  const arSide = polynomial(factors.ar, -1, 1) + polynomial(factors.seasonalAr, -1, s);
+  const maSide = polynomial(factors.ma, 1, 1) + polynomial(factors.seasonalMa, 1, s);
+  const noise = `${arSide}η_t = ${maSide}ε_t`;
+  const pattern = (seasonal?.harmonics ?? 0) > 0 ? `,  S(t): the fixed seasonal pattern (${seasonal?.harmonics} harmonic pair${seasonal?.harmonics === 1 ? '' : 's'})` : '';
+  return `${lhs} = ${regression} + η_t,  ${noise},  ε_t ~ N(0, ${format(fit.sigma2)})${pattern}`;
 }
 
 function format(value: number): string {

@@ -11,6 +11,8 @@ import type { BacktestRecord } from '../backtest/backtestRecord.js';
 import type { EvidenceRecord } from '../evidence/collectEvidence.js';
 import type { InadmissibleReason } from '../models/admissibility.js';
 import type { StandardErrorMethod } from '../models/standardErrors.js';
+import type { SeasonalRecord } from './seasonalPlan.js';
+export type { SeasonalRecord } from './seasonalPlan.js';
 import type { Estimation } from '../base/settings.js';
 import type { RestrictedFallback } from '../models/trendModels.js';
 
@@ -29,6 +31,10 @@ export type JsonNumber = number | null;
 export interface CandidateRecord {
   p: number;
   q: number;
+  /** With a seasonal part: its harmonic pairs and seasonal AR and MA orders. */
+  harmonics?: number;
+  P?: number;
+  Q?: number;
   loglik: JsonNumber;
   aicc: JsonNumber;
   converged: boolean;
@@ -94,6 +100,30 @@ export interface ModelRecord<C extends DeterministicCoefficients | StochasticCoe
    * the fit sits at the edge of stationarity or invertibility.
    */
   roots: { ar_min_modulus: JsonNumber; ma_min_modulus: JsonNumber };
+  /**
+   * The model's seasonal part; null for a model without one (annual data, `seasonal: none`,
+   * or too few years). `p`, `q`, `coefficients.ar`/`ma` and `roots` are then the nonseasonal
+   * factor's; the seasonal factor (1 − ΦB^s), (1 + ΘB^s) is here.
+   */
+  seasonal: SeasonalModelRecord | null;
+}
+
+/** A model's seasonal part: a fixed pattern (harmonic pairs), a drifting one (seasonal ARMA), and seasonal differences. */
+export interface SeasonalModelRecord {
+  period: number;
+  harmonics: number;
+  P: number;
+  Q: number;
+  /** The stochastic model works on seasonal differences w_t − w_{t−s}. */
+  seasonal_differences: boolean;
+  /** The fixed pattern the harmonics describe, one effect per month or quarter (January or Q1 first); null without harmonics. */
+  pattern: number[] | null;
+  /** Φ and Θ, with their standard errors (null where none could be had). */
+  seasonal_ar: number[];
+  seasonal_ma: number[];
+  stderr: { seasonal_ar: JsonNumber[]; seasonal_ma: JsonNumber[]; harmonics: Record<string, JsonNumber> };
+  /** The harmonic regression coefficients by name (cos1, sin1, …). */
+  harmonic_coefficients: Record<string, number>;
 }
 
 export interface ForecastRow {
@@ -151,6 +181,8 @@ export interface AnalysisRecord {
   models: { deterministic: ModelRecord<DeterministicCoefficients>; stochastic: ModelRecord<StochasticCoefficients> };
   forecasts: { deterministic: ForecastRow[]; stochastic: ForecastRow[] };
   evidence: EvidenceRecord;
+  /** The seasonal part asked for, whether it was applied, and who decided the seasonal differences. */
+  seasonal: SeasonalRecord;
   /** Rolling-origin backtest; null when the series is too short for one, absent when none was asked for. */
   backtest?: BacktestRecord | null;
   /** Why there is no backtest, when `backtest` is null. */

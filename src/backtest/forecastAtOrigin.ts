@@ -4,7 +4,7 @@
 // and the results do not depend on which thread ran it.
 import { createProfileLikelihood } from '../models/profileLikelihood.js';
 import type { Estimation, RefitPolicy, TrendModelKind } from '../base/settings.js';
-import { fitTrendModel, fitTrendModelAtOrder, forecastTrendModel, trendDesign } from '../models/trendModels.js';
+import { fitTrendModel, fitTrendModelAtOrder, forecastTrendModel, trendDesign, type FixedSeasonalPart, type SeasonalSearchSpec } from '../models/trendModels.js';
 import { forecastRegressionArma, type ForecastMoments } from '../statespace/forecast.js';
 import type { ArmaOrder } from './backtestRecord.js';
 
@@ -28,6 +28,8 @@ export interface OriginTask {
   maxQ: number;
   /** How the coefficients are estimated at each refit. */
   estimation: Estimation;
+  /** The seasonal part, its first season that of this window: searched (`reselect`) or kept (`reestimate`). */
+  seasonal?: SeasonalSearchSpec | FixedSeasonalPart;
   /** The order under `reestimate` and `fixed`. */
   order?: ArmaOrder;
   /** The parameters under `fixed`. */
@@ -49,9 +51,15 @@ export function forecastAtOrigin(task: OriginTask): OriginForecast {
   if (task.refit === 'fixed') return forecastWithFixedParameters(task);
   const model =
     task.refit === 'reselect'
-      ? fitTrendModel(task.kind, task.w, task.maxP, task.maxQ, { estimation: task.estimation })
-      : fitTrendModelAtOrder(task.kind, task.w, requireOrder(task).p, requireOrder(task).q, { estimation: task.estimation });
+      ? fitTrendModel(task.kind, task.w, task.maxP, task.maxQ, { estimation: task.estimation, ...(task.seasonal === undefined ? {} : { seasonal: task.seasonal }) })
+      : fitTrendModelAtOrder(task.kind, task.w, requireOrder(task).p, requireOrder(task).q, { estimation: task.estimation, ...(task.seasonal === undefined ? {} : { seasonal: fixedPart(task.seasonal) }) });
   return originForecast(model.fit, forecastTrendModel(model, task.horizon));
+}
+
+/** The part `reestimate` keeps: the full-series choice, given as a fixed part. */
+function fixedPart(seasonal: SeasonalSearchSpec | FixedSeasonalPart): FixedSeasonalPart {
+  if ('harmonics' in seasonal) return seasonal;
+  throw new Error('forecastAtOrigin: reestimate needs the seasonal part chosen on the full series');
 }
 
 /**

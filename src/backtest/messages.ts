@@ -71,6 +71,14 @@ export const backtestMessages = {
       { field: 'backtest.min_train' },
     );
   },
+  fixedWithSeasonalPart(): InputProblem {
+    return problem(
+      'backtest.fixed-seasonal',
+      'refit: fixed keeps the full-series parameters at every origin, which is not available for models with a seasonal part',
+      'use refit: reselect (the default) or reestimate, or seasonal: none',
+      { field: 'backtest.refit' },
+    );
+  },
   trainingShorterThanCycle(value: number, period: number): InputProblem {
     return problem(
       'backtest.training-too-short',

@@ -10,7 +10,7 @@
 import { availableParallelism } from 'node:os';
 import { InputError, type InputProblem } from '../base/problem.js';
 import { TREND_MODELS, type AnalysisSettings, type TrendModelKind } from '../base/settings.js';
-import { minimumObservations } from '../models/trendModels.js';
+import { minimumObservations, type FixedSeasonalPart, type SeasonalSearchSpec } from '../models/trendModels.js';
 import type { ArmaOrder, BacktestRecord } from './backtestRecord.js';
 import { collectForecasts } from './collectForecasts.js';
 import { compareModels } from './compareModels.js';
@@ -38,6 +38,12 @@ export interface BacktestRun {
    * error, and at least s origins are planned so that every season is forecast from.
    */
   period?: number;
+  /**
+   * The models' seasonal part, with the first season that of the whole series: what the search
+   * may try (`reselect`), or the full-series choice kept (`reestimate`, a look-ahead the record
+   * notes). Absent: no seasonal part.
+   */
+  seasonal?: Record<TrendModelKind, SeasonalSearchSpec | FixedSeasonalPart>;
 }
 
 export async function runBacktest(input: BacktestInput, settings: AnalysisSettings, run: BacktestRun = {}): Promise<BacktestRecord> {
@@ -72,6 +78,7 @@ export async function runBacktest(input: BacktestInput, settings: AnalysisSettin
       maxP,
       maxQ,
       estimation: settings.estimation,
+      ...(run.seasonal === undefined ? {} : { seasonal: { ...run.seasonal[kind], firstSeason: (run.seasonal[kind].firstSeason + start) % run.seasonal[kind].period } }),
       order: full?.orders[kind],
       parameters: full?.parameters === undefined ? undefined : parametersForWindow(kind, full.parameters[kind], start),
     })),
@@ -138,6 +145,7 @@ function checkRun(run: BacktestRun, refit: AnalysisSettings['backtest']['refit']
     }
   }
   if (run.threads !== undefined && !(Number.isInteger(run.threads) && run.threads >= 1)) problems.push(backtestMessages.badThreads(run.threads));
+  if (run.seasonal !== undefined && refit === 'fixed') problems.push(backtestMessages.fixedWithSeasonalPart());
   if (run.period !== undefined && !(Number.isInteger(run.period) && run.period >= 1)) problems.push(backtestMessages.badPeriod(run.period));
   if (problems.length > 0) throw new InputError(problems);
 }

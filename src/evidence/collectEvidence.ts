@@ -25,6 +25,11 @@ export interface EvidenceOptions {
   seasonal?: SeasonalEvidenceRecord;
   /** Where the series starts in the calendar, for the seasonal pattern when `seasonal` is not given. */
   seasonStart?: SeasonalEvidenceOptions['start'];
+  /**
+   * The models have a seasonal part: the trend-stability checks, which refit the plain trend
+   * designs on growing stretches, do not describe them, so they are not run (and say so).
+   */
+  seasonalModels?: boolean;
 }
 
 export interface EvidenceRecord {
@@ -99,7 +104,7 @@ export function collectEvidence(
       deterministic: checkResiduals(fits.deterministic, significance, period),
       stochastic: checkResiduals(fits.stochastic, significance, period),
     },
-    stability: missing > 0 ? skipStability(unavailable) : attempt('stability', () => {
+    stability: options.seasonalModels === true ? skipStability(unavailable, evidenceNotes.stabilityNotSeasonal) : missing > 0 ? skipStability(unavailable, evidenceNotes.stabilityNeedsComplete) : attempt('stability', () => {
       const stability = trendStability(w, {
         deterministic: { p: fits.deterministic.p, q: fits.deterministic.q, estimation: fits.deterministic.estimation },
         stochastic: { p: fits.stochastic.p, q: fits.stochastic.q, estimation: fits.stochastic.estimation },
@@ -123,8 +128,8 @@ function checkResiduals(fit: FittedResiduals, significance: number, period: numb
   return residualChecks(fit.residuals, fit.p, fit.q, significance, { period, P: fit.P ?? 0, Q: fit.Q ?? 0 });
 }
 
-function skipStability(unavailable: EvidenceRecord['unavailable']): null {
-  unavailable.push({ test: 'stability', reason: evidenceNotes.stabilityNeedsComplete });
+function skipStability(unavailable: EvidenceRecord['unavailable'], reason: string): null {
+  unavailable.push({ test: 'stability', reason });
   return null;
 }
 

@@ -100,6 +100,20 @@ export const evidenceWording = {
     (a.estimation === 'reml'
       ? `Coefficients, innovation variance (${a.sigma2}) and standard errors by restricted maximum likelihood (REML), less biased than exact maximum likelihood when the trend is estimated alongside the errors. The fit ${a.converged}.`
       : `Coefficients, innovation variance (${a.sigma2}) and standard errors by exact maximum likelihood. The fit ${a.converged}.`),
+  /** A model's seasonal part in words: the fixed pattern, the drifting part, the seasonal differences. */
+  seasonalPart: (kind: TrendModelKind, part: { period: number; harmonics: number; P: number; Q: number; seasonal_differences: boolean }, fixedByConfig: boolean) => {
+    const season = part.period === 12 ? 'month' : 'quarter';
+    const pieces = [
+      part.harmonics > 0
+        ? `a fixed seasonal pattern (${part.harmonics} harmonic pair${part.harmonics === 1 ? '' : 's'}, S(t) in the equation), the same every year`
+        : part.seasonal_differences
+          ? ''
+          : 'no fixed seasonal pattern',
+      part.P + part.Q > 0 ? `a seasonal ${[part.P > 0 ? 'autoregressive' : '', part.Q > 0 ? 'moving-average' : ''].filter(Boolean).join(' and ')} term at lag ${part.period}, so the pattern can drift from year to year` : '',
+      kind === 'stochastic' && part.seasonal_differences ? `seasonal differences: each ${season} is compared with the same ${season} a year earlier, so the pattern wanders with the trend` : '',
+    ].filter((piece) => piece !== '');
+    return `Seasonal part, ${fixedByConfig ? 'as fixed in the configuration' : 'chosen from the data with the order'}: ${pieces.join('; ')}.`;
+  },
   /** REML was asked for, but its fit was not used. */
   restrictedFallback: (reason: string) =>
     `The restricted-likelihood (REML) estimates ${reason === 'not-converged' ? 'did not converge' : `were not admissible (${reason === 'undoes-differencing' ? 'a moving-average root so close to 1 that it undoes the differencing' : (SET_ASIDE_REASONS[reason] ?? reason)})`}, so the exact maximum-likelihood estimates are shown instead.`,

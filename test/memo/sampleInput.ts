@@ -21,7 +21,7 @@ interface FixtureSpec {
 const FIXTURES = {
   lakeHuron: { file: 'test/fixtures/lake-huron.csv', id: 'lake-huron', title: 'Lake Huron mean level', settings: {}, units: 'ft' },
   nile: { file: 'test/fixtures/nile.csv', id: 'nile', title: 'Nile flow at Aswan', settings: {}, units: '10⁸ m³' },
-  gdp: { file: 'test/fixtures/us-real-gdp.csv', id: 'us-real-gdp', title: 'US real GDP', settings: { transform: 'log', horizon: 12 }, units: 'bn USD (2005)' },
+  gdp: { file: 'test/fixtures/us-real-gdp.csv', id: 'us-real-gdp', title: 'US real GDP', settings: { transform: 'log', horizon: 12, seasonal: 'none' }, units: 'bn USD (2005)' },
 } satisfies Record<string, FixtureSpec>;
 
 export type FixtureName = keyof typeof FIXTURES;

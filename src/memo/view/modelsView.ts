@@ -47,14 +47,23 @@ export function modelView(record: AnalysisRecord, kind: TrendModelKind): ModelVi
       : [coefficientRow(REGRESSION_NAMES.drift, stochastic.coefficients.drift, stochastic.stderr.drift)];
   const ar = model.coefficients.ar.map((v, i) => coefficientRow(`AR ${i + 1} (\u03c6${i + 1})`, v, model.stderr.ar[i]));
   const ma = model.coefficients.ma.map((v, i) => coefficientRow(`MA ${i + 1} (\u03b8${i + 1})`, v, model.stderr.ma[i]));
+  const seasonal = model.seasonal;
+  const seasonalRows =
+    seasonal === null
+      ? []
+      : [
+          ...seasonal.seasonal_ar.map((v, i) => coefficientRow(`Seasonal AR (\u03a6, lag ${seasonal.period})`, v, seasonal.stderr.seasonal_ar[i])),
+          ...seasonal.seasonal_ma.map((v, i) => coefficientRow(`Seasonal MA (\u0398, lag ${seasonal.period})`, v, seasonal.stderr.seasonal_ma[i])),
+        ];
   return {
     kind,
     name: MODEL_NAME[kind],
     gloss: MODEL_GLOSS[kind],
     equation: model.equation,
-    coefficients: [...regression, ...ar, ...ma],
+    coefficients: [...regression, ...ar, ...ma, ...seasonalRows],
     notes: [
       ...(model.set_aside === null ? [] : [evidenceWording.setAside({ model: kind, order: armaOrder(kind, model.set_aside), reason: model.set_aside.reason })]),
+      seasonal === null ? '' : evidenceWording.seasonalPart(kind, seasonal, record.seasonal.setting === 'fixed'),
       model.restricted_fallback === null ? '' : evidenceWording.restrictedFallback(model.restricted_fallback),
       evidenceWording.stderrMethod(model.stderr_method, model.p + model.q > 0),
     ].filter((note) => note !== ''),
