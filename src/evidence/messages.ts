@@ -119,7 +119,7 @@ export function seasonalTestSummary(
     ? `The seasonal pattern does not hold still: the check for a stable pattern rules one out at the ${level} (${p}), ` +
         `so the stochastic model also compares each ${word} with the same ${word} a year earlier (seasonal differencing).`
     : `The check for a stable seasonal pattern finds nothing against one at the ${level} (${p}), ` +
-        'so the stochastic model keeps a fixed pattern and takes no seasonal difference.';
+        'so the stochastic model takes no seasonal difference.';
 }
 
 /** Descriptive bands for a strength between 0 and 1 (our wording, not a test). */
