@@ -48,6 +48,12 @@ export interface CandidateRecord {
 export interface SetAsideRecord {
   p: number;
   q: number;
+  /** With a seasonal part: its harmonic pairs, seasonal orders and factors. */
+  harmonics?: number;
+  P?: number;
+  Q?: number;
+  seasonalAr?: number[];
+  seasonalMa?: number[];
   aicc: JsonNumber;
   reason: InadmissibleReason;
   ar: number[];

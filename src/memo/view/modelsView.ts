@@ -81,8 +81,13 @@ export function modelView(record: AnalysisRecord, kind: TrendModelKind): ModelVi
 }
 
 /** "ARMA(2, 3) errors" for the deterministic trend, "ARIMA(1, 1, 1)" for the stochastic. */
-function armaOrder(kind: TrendModelKind, order: { p: number; q: number }): string {
-  return kind === 'deterministic' ? `the trend line with ARMA(${order.p}, ${order.q}) errors` : `ARIMA(${order.p}, 1, ${order.q})`;
+function armaOrder(kind: TrendModelKind, order: { p: number; q: number; harmonics?: number; P?: number; Q?: number }): string {
+  const base = kind === 'deterministic' ? `the trend line with ARMA(${order.p}, ${order.q}) errors` : `ARIMA(${order.p}, 1, ${order.q})`;
+  const seasonal = [
+    (order.harmonics ?? 0) > 0 ? `a fixed seasonal pattern of ${order.harmonics} harmonic pair${order.harmonics === 1 ? '' : 's'}` : '',
+    (order.P ?? 0) + (order.Q ?? 0) > 0 ? `seasonal ARMA(${order.P ?? 0}, ${order.Q ?? 0})` : '',
+  ].filter((part) => part !== '');
+  return seasonal.length === 0 ? base : `${base} with ${seasonal.join(' and ')}`;
 }
 
 /** "Estimates are on the natural log scale of the series", or in its original units. */
