@@ -217,9 +217,20 @@ export function searchSeasonalModel(kind: TrendModelKind, w: Float64Array, maxP:
   const baseP = Math.min(1, maxP);
   const baseQ = Math.min(1, maxQ);
   // Stage 1.
-  const harmonicsBest = bestOf(choices.filter((c) => c.P + c.Q === 0).map((c) => fitAt(c, baseP, baseQ)))?.choice.harmonics ?? 0;
-  const factorsFirst = choices.filter((c) => c.P + c.Q > 0 && (c.harmonics === harmonicsBest || c.harmonics === 0));
-  let choice = bestOf([...factorsFirst, ...choices.filter((c) => c.P + c.Q === 0)].map((c) => fitAt(c, baseP, baseQ)))?.choice ?? plain;
+  const stageOne = (p: number, q: number): Entry | undefined => {
+    const harmonicsBest = bestOf(choices.filter((c) => c.P + c.Q === 0).map((c) => fitAt(c, p, q)))?.choice.harmonics ?? 0;
+    const factorsFirst = choices.filter((c) => c.P + c.Q > 0 && (c.harmonics === harmonicsBest || c.harmonics === 0));
+    return bestOf([...factorsFirst, ...choices.filter((c) => c.P + c.Q === 0)].map((c) => fitAt(c, p, q)));
+  };
+  let first = stageOne(baseP, baseQ);
+  // On a series whose trend is a fixed line, the differenced model's MA term at the base order
+  // undoes the differencing for every seasonal part alike, which leaves only the plain part
+  // admissible there; a pure AR base order cannot undo it, so the parts are compared there too.
+  if (baseQ > 0 && (first === undefined || sameChoice(first.choice, plain))) {
+    const second = stageOne(baseP, 0);
+    if (second !== undefined && (first === undefined || second.candidate.aicc < first.candidate.aicc)) first = second;
+  }
+  let choice = first?.choice ?? plain;
   for (let round = 0; round < MAX_ROUNDS; round++) {
     // Stage 2.
     const design = designFor(choice.harmonics);
