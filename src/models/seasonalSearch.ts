@@ -13,7 +13,7 @@
 // neighbours):
 //   1. at a small base order, (1, 1) within the limits: the number of harmonic pairs K* with
 //      no seasonal factor (a state of dimension 2, cheap), then the seasonal factors with K*
-//      pairs and with none;
+//      pairs and with none; again at (1, 0) when that leaves only the plain part;
 //   2. the (p, q) grid with the best part held (orderSearch.ts, neighbours' optima as starts);
 //   3. the best part's neighbours at the grid's best (p, q): one harmonic pair more or fewer,
 //      a seasonal factor added or dropped, the harmonics dropped; if one beats it, back to 2
