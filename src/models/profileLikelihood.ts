@@ -69,7 +69,8 @@ export function createProfileLikelihood(
   options: LikelihoodOptions = {},
 ): ProfileLikelihood {
   const seasonal = options.seasonal;
-  const order: SeasonalArmaOrder = seasonal === undefined ? plainOrder(p, q) : { p, q, P: seasonal.P, Q: seasonal.Q, period: seasonal.period };
+  // Without seasonal factors the order is a plain one, whatever period was passed along.
+  const order: SeasonalArmaOrder = seasonal === undefined || seasonal.P + seasonal.Q === 0 ? plainOrder(p, q) : { p, q, P: seasonal.P, Q: seasonal.Q, period: seasonal.period };
   checkSeasonalOrder(order);
   const process = processOrders(order);
   const columns = [y, ...regressors];
