@@ -3,6 +3,7 @@
 // the seasonal factors, the likelihoods of a seasonal model (exact ML and REML, with and
 // without missing values, and seasonal differences across gaps), the harmonic regressors, the
 // admissibility of seasonal factors, and the forecasts of a seasonal random walk with drift.
+import { readFileSync } from 'node:fs';
 import { Matrix, CholeskyDecomposition, solve } from 'ml-matrix';
 import { describe, expect, it } from 'vitest';
 import { ols } from '../../src/linalg/ols.js';
@@ -12,7 +13,7 @@ import { harmonicColumns, harmonicNames, harmonicRow, seasonalPattern } from '..
 import { createProfileLikelihood } from '../../src/models/profileLikelihood.js';
 import { unconstrainAr, unconstrainMa } from '../../src/models/constraints.js';
 import { constrainFactors, emptyFactors, expandedCoefficients, packFactors, type SeasonalArmaOrder } from '../../src/models/seasonalArma.js';
-import { designWorkspace, filterDesign, forecastDesign, trendDesign } from '../../src/models/trendModels.js';
+import { designWorkspace, filterDesign, fitTrendModelAtOrder, forecastDesign, trendDesign } from '../../src/models/trendModels.js';
 import { expectRelative } from '../evidence/expectRelative.js';
 import { seededNormals } from '../evidence/seededNormals.js';
 import { armaAutocovariance } from '../support/denseLikelihood.js';
@@ -178,6 +179,25 @@ describe('harmonic regressors', () => {
     expectRelative(harmonicRow(12, 1, 2)[0], 0.5, 1e-15);
     expectRelative(harmonicRow(12, 1, 2)[1], Math.sqrt(3) / 2, 1e-15);
     expect(harmonicRow(4, 2, 3)[2]).toBe(-1);
+  });
+});
+
+describe('harmonic fits anchored to the calendar', () => {
+  it('give a window that starts in April the pattern of the whole series, month by month', () => {
+    // US accidental deaths (test/fixtures/seasonal-models/, R datasets::USAccDeaths), deterministic
+    // trend with 5 harmonic pairs and AR(1) errors, fitted to 1973-01..1978-12 and to 1973-04..1978-12.
+    const text = readFileSync(new URL('../fixtures/seasonal-models/us-accidental-deaths.csv', import.meta.url), 'utf8');
+    const deaths = Float64Array.from(text.trim().split('\n').slice(1).map((line) => Number(line.split(',')[1])));
+    const fit = (w: Float64Array, firstSeason: number) =>
+      fitTrendModelAtOrder('deterministic', w, 1, 0, { estimation: 'ml', seasonal: { period: 12, firstSeason, harmonics: 5, P: 0, Q: 0, seasonalDifferencing: false } }).seasonal?.pattern ?? [];
+    const whole = fit(deaths, 0);
+    const fromApril = fit(deaths.subarray(3), 3);
+    const misread = fit(deaths.subarray(3), 0);
+    // The pattern's range is 3,150 deaths (measured); three months fewer moved each month's effect by 37, under 5% of it.
+    const largest = (a: number[], b: number[]): number => Math.max(...a.map((v, m) => Math.abs(v - b[m])));
+    expect(largest(whole, fromApril)).toBeLessThan(140);
+    // Read as if it started in January, the same window's pattern comes out three months out of place.
+    expect(largest(whole, misread)).toBeGreaterThan(1000);
   });
 });
 
