@@ -51,11 +51,14 @@ export const evidenceWording = {
     window: WindowKind;
     step: number;
     minTraining: number;
+    maseScaling: 'naive' | 'seasonal_naive';
   }) =>
     `Each model was fitted to the history up to a past date (an origin) and its forecasts compared with what then happened. ` +
     `There were ${a.origins} origins, ${countPeriods(a.step, a.frequency)} apart, from ${a.firstPeriod} (${a.firstLength} observations) to ${a.lastPeriod} (${a.lastLength} observations), each forecast up to ${countPeriods(a.horizon, a.frequency)} ahead. ` +
     `${REFIT_WORDS[a.refit]} ${a.window === 'expanding' ? 'Each fit used all the history up to its origin.' : `Each fit used a sliding window of at least ${a.minTraining} observations.`} ` +
-    'The no-change benchmark forecasts the last observed value at every horizon; a MASE below 1 beats the in-sample one-step error of that benchmark.',
+    (a.maseScaling === 'seasonal_naive'
+      ? `MASE divides each error by the in-sample error of the seasonal naive forecast, which repeats the value of the same ${a.frequency === 'quarterly' ? 'quarter' : 'month'} a year earlier; a MASE below 1 beats that benchmark.`
+      : 'The no-change benchmark forecasts the last observed value at every horizon; a MASE below 1 beats the in-sample one-step error of that benchmark.'),
   backtestUnavailable: (reason: string) => `Why: ${reason}`,
   /** `level`: the one the recommendation rule scores, the only level the comparison tests run at. */
   comparisonIntro: (level: number) =>
@@ -100,6 +103,10 @@ export const evidenceWording = {
     (a.estimation === 'reml'
       ? `Coefficients, innovation variance (${a.sigma2}) and standard errors by restricted maximum likelihood (REML), less biased than exact maximum likelihood when the trend is estimated alongside the errors. The fit ${a.converged}.`
       : `Coefficients, innovation variance (${a.sigma2}) and standard errors by exact maximum likelihood. The fit ${a.converged}.`),
+  seasonalHeading: 'Seasonal pattern',
+  seasonalNone: 'The configuration says the series has no seasonal pattern to model (seasonally adjusted data), so neither model has a seasonal part.',
+  seasonalDifferencesByConfig: (differences: boolean) =>
+    `The configuration fixes the seasonal form: the stochastic model ${differences ? 'takes' : 'does not take'} seasonal differences, whatever the test says.`,
   /** A model's seasonal part in words: the fixed pattern, the drifting part, the seasonal differences. */
   seasonalPart: (kind: TrendModelKind, part: { period: number; harmonics: number; P: number; Q: number; seasonal_differences: boolean }, fixedByConfig: boolean) => {
     const season = part.period === 12 ? 'month' : 'quarter';

@@ -170,7 +170,7 @@ export const TEMPLATE_TEXT = {
     'CRPS',
   ],
   accuracyNote:
-    'RMSE: root mean squared error. MAPE: mean absolute percentage error. MASE: mean absolute error divided by the one-step error of the no-change forecast. ' +
+    'RMSE: root mean squared error. MAPE: mean absolute percentage error. MASE: mean absolute error divided by the in-sample error of the benchmark each backtest names (the no-change forecast, or for a seasonal series the same season a year earlier). ' +
     'Cover: share of outcomes inside the interval. Score: interval score, the width plus a penalty for outcomes outside it (lower is better). CRPS: continuous ranked probability score (lower is better).',
 } as const;
 

@@ -70,6 +70,8 @@ export function backtestView(backtest: BacktestRecord, frequency: Frequency, dec
       window: backtest.settings.window,
       step: backtest.settings.step,
       minTraining: backtest.settings.min_training_length,
+      // Records written before the seasonal yardstick have no mase_scaling: theirs was the no-change forecast.
+      maseScaling: backtest.settings.mase_scaling ?? 'naive',
     }),
     point: horizons.map((h) => ({
       h,

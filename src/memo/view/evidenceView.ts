@@ -26,6 +26,8 @@ export interface EvidenceView {
   residualsIntro: string;
   residuals: { model: string; findings: { text: string; flagged: boolean }[] }[];
   unavailable: string[];
+  /** The seasonal checks in words, for a monthly or quarterly series; null when there is nothing to say. */
+  seasonal: { heading: string; sentences: string[] } | null;
 }
 
 type RowWords = (typeof UNIT_ROOT_ROWS)[keyof typeof UNIT_ROOT_ROWS];
@@ -69,5 +71,23 @@ export function evidenceView(record: AnalysisRecord): EvidenceView {
       findings: residuals[model].findings.map((f) => ({ text: noLinks(f.text), flagged: f.flagged })),
     })),
     unavailable: unavailable.map((u) => noLinks(evidenceWording.unavailable(u.test, u.reason))),
+    seasonal: seasonalSentences(record),
   };
+}
+
+/** The seasonal test's and the STL strength's readings, or why the models have no seasonal part. */
+function seasonalSentences(record: AnalysisRecord): EvidenceView['seasonal'] {
+  const { seasonal } = record;
+  // Records written before the seasonal part have no `seasonal` key.
+  if (seasonal === undefined || seasonal.period === 1) return null;
+  const found = record.evidence.seasonal;
+  const sentences = [
+    ...(seasonal.reason === null ? [] : [seasonal.reason]),
+    ...(seasonal.setting === 'none' ? [evidenceWording.seasonalNone] : []),
+    ...(found?.unit_root?.text === undefined ? [] : [found.unit_root.text]),
+    ...(seasonal.differences_decided_by === 'config' ? [evidenceWording.seasonalDifferencesByConfig(seasonal.seasonal_differences === true)] : []),
+    ...(found?.strength?.text === undefined ? [] : [found.strength.text]),
+    ...(found?.unavailable ?? []).map((u) => evidenceWording.unavailable(u.test, u.reason)),
+  ];
+  return sentences.length === 0 ? null : { heading: evidenceWording.seasonalHeading, sentences: sentences.map(noLinks) };
 }

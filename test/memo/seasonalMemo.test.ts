@@ -1,0 +1,64 @@
+// A seasonal series through the whole analysis and into the memo's words: the seasonal plan in
+// the record, each model's seasonal part, the seasonal evidence in the evidence section, and the
+// seasonally adjusted and annual cases that keep no seasonal part. Data: UK gas consumption,
+// quarterly 1960-Q1 to 1986-Q4 (R datasets::UKgas, test/fixtures/seasonal/README provenance in
+// test/fixtures/README.md), on the log scale; Lake Huron, annual.
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { AnalysisRecord } from '../../src/analysis/record.js';
+import { evidenceView } from '../../src/memo/view/evidenceView.js';
+import { modelView } from '../../src/memo/view/modelsView.js';
+import { fitRecord } from '../support/runCli.js';
+
+const UK_GAS = 'test/fixtures/seasonal/uk-gas.csv';
+
+describe('a quarterly seasonal series', () => {
+  let record: AnalysisRecord;
+  beforeAll(async () => {
+    record = await fitRecord(UK_GAS, ['--transform', 'log', '--max-p', '1', '--max-q', '1']);
+  }, 60_000);
+
+  it('plans a seasonal part from the data, with seasonal differences for the stochastic model', () => {
+    // The Canova-Hansen test on the log differences rejects a stable pattern (p ≈ 4e-5; the
+    // statistic checked against an independent numpy implementation in
+    // test/fixtures/seasonal/canova-hansen-reference.json), so the seasonal differences follow.
+    expect(record.seasonal).toEqual({ period: 4, setting: 'auto', applied: true, reason: null, seasonal_differences: true, differences_decided_by: 'evidence' });
+    expect(record.evidence.seasonal?.unit_root?.seasonal_differencing).toBe(true);
+    const stochastic = record.models.stochastic.seasonal;
+    // Seasonal differences remove a fixed pattern, so that model has no harmonic pairs.
+    expect(stochastic).toMatchObject({ period: 4, seasonal_differences: true, harmonics: 0 });
+    expect(record.models.deterministic.seasonal).toMatchObject({ period: 4, seasonal_differences: false });
+    expect(record.models.stochastic.equation.startsWith('(1 - B^4) w_t')).toBe(true);
+  });
+
+  it('says in the evidence section what the seasonal test found and how strong the pattern is', () => {
+    const view = evidenceView(record);
+    expect(view.seasonal?.heading).toBe('Seasonal pattern');
+    expect(view.seasonal?.sentences.some((s) => s.includes('seasonal differencing'))).toBe(true);
+    expect(view.seasonal?.sentences.some((s) => s.startsWith('The seasonal pattern is strong'))).toBe(true);
+    // The trend-stability refits do not carry a seasonal part, and the memo says so.
+    expect(view.unavailable.some((s) => s.includes('not run on models that have one'))).toBe(true);
+  });
+
+  it('describes each model\u2019s seasonal part beside its coefficients', () => {
+    const stochastic = modelView(record, 'stochastic');
+    expect(stochastic.notes.some((n) => n.startsWith('Seasonal part, chosen from the data with the order') && n.includes('same quarter a year earlier'))).toBe(true);
+  });
+});
+
+describe('series that keep no seasonal part', () => {
+  it('leaves it out for seasonal: none and says why', async () => {
+    const record = await fitRecord(UK_GAS, ['--transform', 'log', '--max-p', '1', '--max-q', '1', '--seasonal', 'none']);
+    expect(record.seasonal).toEqual({ period: 4, setting: 'none', applied: false, reason: null, seasonal_differences: null, differences_decided_by: null });
+    expect(record.models.deterministic.seasonal).toBeNull();
+    expect(record.evidence.seasonal).toBeUndefined();
+    expect(evidenceView(record).seasonal?.sentences).toEqual([
+      'The configuration says the series has no seasonal pattern to model (seasonally adjusted data), so neither model has a seasonal part.',
+    ]);
+  }, 60_000);
+
+  it('has none for annual data and says nothing of seasons', async () => {
+    const record = await fitRecord('test/fixtures/lake-huron.csv', ['--max-p', '1', '--max-q', '1']);
+    expect(record.seasonal).toMatchObject({ period: 1, applied: false });
+    expect(evidenceView(record).seasonal).toBeNull();
+  }, 60_000);
+});
