@@ -46,10 +46,18 @@ export function assumptionsRegister(plan: SeriesPlan, record: AnalysisRecord, co
   }
   for (const kind of TREND_MODELS) {
     const model = record.models[kind];
+    const part = model.seasonal;
+    const seasonalValue =
+      part === null
+        ? ''
+        : `; seasonal: ${part.harmonics} harmonic pair${part.harmonics === 1 ? '' : 's'}, seasonal ARMA (${part.P}, ${part.Q})${part.seasonal_differences ? ', seasonal differences' : ''}`;
+    const fixedPart = record.seasonal?.setting === 'fixed';
     rows.push({
-      choice: `ARMA order of the ${kind} trend`,
-      value: `(${model.p}, ${model.q})`,
-      basis: `lowest AICc over p ≤ ${record.settings.max_p}, q ≤ ${record.settings.max_q}`,
+      choice: part === null ? `ARMA order of the ${kind} trend` : `ARMA order and seasonal part of the ${kind} trend`,
+      value: `(${model.p}, ${model.q})${seasonalValue}`,
+      basis:
+        `lowest AICc over p ≤ ${record.settings.max_p}, q ≤ ${record.settings.max_q}` +
+        (part === null ? '' : fixedPart ? ', the seasonal part as configured' : ', the seasonal part searched with it (seasonal differences by the seasonal test)'),
       set_by: 'default',
     });
   }
