@@ -110,6 +110,11 @@ export const evidenceWording = {
   /** A model's seasonal part in words: the fixed pattern, the drifting part, the seasonal differences. */
   seasonalPart: (kind: TrendModelKind, part: { period: number; harmonics: number; P: number; Q: number; seasonal_differences: boolean }, fixedByConfig: boolean) => {
     const season = part.period === 12 ? 'month' : 'quarter';
+    if (part.harmonics === 0 && part.P + part.Q === 0 && !(kind === 'stochastic' && part.seasonal_differences)) {
+      return fixedByConfig
+        ? 'Seasonal part, as fixed in the configuration: none.'
+        : 'Seasonal part: none. Neither a fixed seasonal pattern nor one that drifts lowered AICc, so the data show no seasonality this model needs.';
+    }
     const pieces = [
       part.harmonics > 0
         ? `a fixed seasonal pattern (${part.harmonics} harmonic pair${part.harmonics === 1 ? '' : 's'}, S(t) in the equation), the same every year`
