@@ -104,6 +104,11 @@ export const evidenceWording = {
       ? `Coefficients, innovation variance (${a.sigma2}) and standard errors by restricted maximum likelihood (REML), less biased than exact maximum likelihood when the trend is estimated alongside the errors. The fit ${a.converged}.`
       : `Coefficients, innovation variance (${a.sigma2}) and standard errors by exact maximum likelihood. The fit ${a.converged}.`),
   seasonalHeading: 'Seasonal pattern',
+  patternColumns: { average: 'Average effect', fixedLine: 'Fixed pattern, deterministic trend' },
+  patternCaption: (transformed: boolean) =>
+    `Seasonal effect of each month or quarter above or below the trend${transformed ? ', on the modelling scale' : ''}: averaged over the whole history and in the first and last complete years (STL decomposition), and the fixed pattern the deterministic trend model estimated, where it has one.`,
+  seasonName: (period: number, season: number) =>
+    period === 12 ? ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'][season - 1] : `Q${season}`,
   seasonalNone: 'The configuration says the series has no seasonal pattern to model (seasonally adjusted data), so neither model has a seasonal part.',
   seasonalDifferencesByConfig: (differences: boolean) =>
     `The configuration fixes the seasonal form: the stochastic model ${differences ? 'takes' : 'does not take'} seasonal differences, whatever the test says.`,

@@ -35,6 +35,14 @@ describe('a quarterly seasonal series', () => {
     expect(view.seasonal?.heading).toBe('Seasonal pattern');
     expect(view.seasonal?.sentences.some((s) => s.includes('seasonal differencing'))).toBe(true);
     expect(view.seasonal?.sentences.some((s) => s.startsWith('The seasonal pattern is strong'))).toBe(true);
+    // The pattern by quarter: the STL effects (STL checked against R's stl() in
+    // test/evidence/stlDecomposition.test.ts), the first and last complete years of the data,
+    // 1960 and 1986, and the deterministic model's fixed pattern where it has harmonics.
+    const pattern = view.seasonal?.pattern;
+    expect(pattern?.rows.map((row) => row.season)).toEqual(['Q1', 'Q2', 'Q3', 'Q4']);
+    const hasFixed = (record.models.deterministic.seasonal?.harmonics ?? 0) > 0;
+    expect(pattern?.columns).toEqual(['Average effect', '1960', '1986', ...(hasFixed ? ['Fixed pattern, deterministic trend'] : [])]);
+    expect(pattern?.rows[0].cells[0]).toBe(record.evidence.seasonal?.pattern?.mean_effect[0].toPrecision(3).replace('-', '\u2212'));
     // The trend-stability refits do not carry a seasonal part, and the memo says so.
     expect(view.unavailable.some((s) => s.includes('not run on models that have one'))).toBe(true);
   });

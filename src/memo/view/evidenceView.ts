@@ -27,7 +27,14 @@ export interface EvidenceView {
   residuals: { model: string; findings: { text: string; flagged: boolean }[] }[];
   unavailable: string[];
   /** The seasonal checks in words, for a monthly or quarterly series; null when there is nothing to say. */
-  seasonal: { heading: string; sentences: string[] } | null;
+  seasonal: { heading: string; sentences: string[]; pattern: SeasonalPatternTable | null } | null;
+}
+
+/** The seasonal effects by month or quarter: the STL average, the first and last complete years, and the fixed line's pattern. */
+export interface SeasonalPatternTable {
+  caption: string;
+  columns: string[];
+  rows: { season: string; cells: string[] }[];
 }
 
 type RowWords = (typeof UNIT_ROOT_ROWS)[keyof typeof UNIT_ROOT_ROWS];
@@ -89,5 +96,29 @@ function seasonalSentences(record: AnalysisRecord): EvidenceView['seasonal'] {
     ...(found?.strength?.text === undefined ? [] : [found.strength.text]),
     ...(found?.unavailable ?? []).map((u) => evidenceWording.unavailable(u.test, u.reason)),
   ];
-  return sentences.length === 0 ? null : { heading: evidenceWording.seasonalHeading, sentences: sentences.map(noLinks) };
+  if (sentences.length === 0) return null;
+  return { heading: evidenceWording.seasonalHeading, sentences: sentences.map(noLinks), pattern: patternTable(record) };
+}
+
+function patternTable(record: AnalysisRecord): SeasonalPatternTable | null {
+  const found = record.evidence.seasonal?.pattern;
+  if (found === undefined || found === null) return null;
+  const fixed = record.models.deterministic.seasonal?.pattern ?? null;
+  const columns = [
+    evidenceWording.patternColumns.average,
+    ...(found.first_year_effect === null || found.first_year === null ? [] : [String(found.first_year)]),
+    ...(found.last_year_effect === null || found.last_year === null ? [] : [String(found.last_year)]),
+    ...(fixed === null ? [] : [evidenceWording.patternColumns.fixedLine]),
+  ];
+  const rows = found.season.map((season, i) => ({
+    season: evidenceWording.seasonName(found.period, season),
+    cells: [
+      formatSignificant(found.mean_effect[i], 3),
+      ...(found.first_year_effect === null || found.first_year === null ? [] : [formatSignificant(found.first_year_effect[i], 3)]),
+      ...(found.last_year_effect === null || found.last_year === null ? [] : [formatSignificant(found.last_year_effect[i], 3)]),
+      // The model's pattern is indexed from January or Q1.
+      ...(fixed === null ? [] : [formatSignificant(fixed[season - 1], 3)]),
+    ],
+  }));
+  return { caption: evidenceWording.patternCaption(record.series.transform.kind !== 'none'), columns, rows };
 }
