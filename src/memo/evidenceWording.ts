@@ -122,11 +122,13 @@ export const evidenceWording = {
     }
     const pieces = [
       part.harmonics > 0
-        ? `a fixed seasonal pattern (${part.harmonics} harmonic pair${part.harmonics === 1 ? '' : 's'}, S(t) in the equation), the same every year`
+        ? `a fixed seasonal pattern (${part.harmonics} harmonic pair${part.harmonics === 1 ? '' : 's'}, S(t) in the equation)`
         : part.seasonal_differences
           ? ''
           : 'no fixed seasonal pattern',
-      part.P + part.Q > 0 ? `a seasonal ${[part.P > 0 ? 'autoregressive' : '', part.Q > 0 ? 'moving-average' : ''].filter(Boolean).join(' and ')} term at lag ${part.period}, so the pattern can drift from year to year` : '',
+      part.P + part.Q > 0
+        ? `a seasonal ${[part.P > 0 ? 'autoregressive' : '', part.Q > 0 ? 'moving-average' : ''].filter(Boolean).join(' and ')} term at lag ${part.period}, which lets the seasonal swings drift from year to year${part.harmonics > 0 ? ' around that pattern' : ''}`
+        : '',
       kind === 'stochastic' && part.seasonal_differences ? `seasonal differences: each ${season} is compared with the same ${season} a year earlier, so the pattern wanders with the trend` : '',
     ].filter((piece) => piece !== '');
     return `Seasonal part, ${fixedByConfig ? 'as fixed in the configuration' : 'chosen from the data with the order'}: ${pieces.join('; ')}.`;
