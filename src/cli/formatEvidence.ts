@@ -13,6 +13,12 @@ export function formatEvidence(record: AnalysisRecord): string[] {
   lines.push(`  ADF, null: unit root (constant + trend) ${adf(evidence.adf.trend)}`);
   lines.push(`  Reading (${evidence.reading.verdict}): ${evidence.reading.text}`);
   for (const problem of evidence.unavailable) lines.push(`  Not available: ${problem.test} (${problem.reason})`);
+  const seasonal = evidence.seasonal;
+  if (seasonal !== undefined) {
+    if (seasonal.unit_root !== null) lines.push(`  Seasonal test: ${seasonal.unit_root.text}`);
+    if (seasonal.strength !== null) lines.push(`  Seasonal strength: ${seasonal.strength.text}`);
+    for (const problem of seasonal.unavailable) lines.push(`  Not available: ${problem.test} (${problem.reason})`);
+  }
   lines.push('');
   lines.push('Residual checks (one-step forecast errors):');
   for (const kind of ['deterministic', 'stochastic'] as const) {

@@ -39,6 +39,21 @@ function modelTable(det: AnalysisRecord['models']['deterministic'], sto: Analysi
   for (let i = 0; i < arOrder; i++) rows.push([`ar${i + 1}`, lagged(det, 'ar', i), lagged(sto, 'ar', i)]);
   const maOrder = Math.max(det.q, sto.q);
   for (let j = 0; j < maOrder; j++) rows.push([`ma${j + 1}`, lagged(det, 'ma', j), lagged(sto, 'ma', j)]);
+  if (det.seasonal !== null || sto.seasonal !== null) {
+    const part = (model: ModelRecord): string => {
+      const seasonal = model.seasonal;
+      if (seasonal === null) return 'none';
+      return `${seasonal.harmonics} pair${seasonal.harmonics === 1 ? '' : 's'}, (${seasonal.P}, ${seasonal.Q}) at lag ${seasonal.period}${seasonal.seasonal_differences ? ', seasonal diff.' : ''}`;
+    };
+    const factor = (model: ModelRecord, which: 'seasonal_ar' | 'seasonal_ma'): string => {
+      const seasonal = model.seasonal;
+      if (seasonal === null || seasonal[which].length === 0) return '';
+      return estimate(seasonal[which][0], seasonal.stderr[which][0]);
+    };
+    rows.push(['seasonal part', part(det), part(sto)]);
+    rows.push(['seasonal AR', factor(det, 'seasonal_ar'), factor(sto, 'seasonal_ar')]);
+    rows.push(['seasonal MA', factor(det, 'seasonal_ma'), factor(sto, 'seasonal_ma')]);
+  }
   const method = (model: typeof det | typeof sto): string => (model.estimation === 'reml' ? 'REML' : 'exact ML') + (model.restricted_fallback === null ? '' : ' (REML not usable)');
   rows.push(['estimated by', method(det), method(sto)]);
   rows.push(['sigma2', num(det.sigma2), num(sto.sigma2)]);

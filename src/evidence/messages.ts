@@ -117,7 +117,7 @@ export function seasonalTestSummary(
   const word = seasonWord(period);
   return differencing
     ? `The seasonal pattern does not hold still: the check for a stable pattern rules one out at the ${level} (${p}), ` +
-        `so the stochastic model also compares each ${word} with the same ${word} a year earlier (seasonal differencing).`
+        `so the stochastic model compares each ${word} with the same ${word} a year earlier instead of with the one before (seasonal differencing).`
     : `The check for a stable seasonal pattern finds nothing against one at the ${level} (${p}), ` +
         'so the stochastic model takes no seasonal difference.';
 }

@@ -123,7 +123,7 @@ describe('the plain-words readings', () => {
     const record = seasonalEvidence(readSeasonalValues('uk-gas.csv', true), 4, { significance: FIVE_PERCENT, start: { season: 1, year: 1960 } });
     expect(record.unit_root?.text).toBe(
       'The seasonal pattern does not hold still: the check for a stable pattern rules one out at the 5% level (p below 0.001), ' +
-        'so the stochastic model also compares each quarter with the same quarter a year earlier (seasonal differencing).',
+        'so the stochastic model compares each quarter with the same quarter a year earlier instead of with the one before (seasonal differencing).',
     );
     expect(record.strength?.text).toContain('and its shape has shifted somewhat: between 1960 and 1986 the effect of the third quarter moved by');
   });
