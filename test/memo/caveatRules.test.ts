@@ -9,6 +9,7 @@ import { fixedLineExtrapolation } from '../../src/memo/caveats/fixedLineExtrapol
 import { horizonLong } from '../../src/memo/caveats/horizonLong.js';
 import { narrowLineIntervals } from '../../src/memo/caveats/narrowLineIntervals.js';
 import { residualPattern } from '../../src/memo/caveats/residualPattern.js';
+import { seasonalPattern } from '../../src/memo/caveats/seasonalPattern.js';
 import { trendBreak } from '../../src/memo/caveats/trendBreak.js';
 import { unitRootEvidence } from '../../src/memo/caveats/unitRootEvidence.js';
 import type { AnalysisRecord } from '../../src/analysis/record.js';
@@ -227,6 +228,38 @@ describe('collectCaveats', () => {
   });
   it('has one rule per id', () => {
     expect(new Set(CAVEAT_RULES.map((r) => r.id)).size).toBe(CAVEAT_RULES.length);
-    expect(CAVEAT_RULES).toHaveLength(8);
+    expect(CAVEAT_RULES).toHaveLength(9);
   });
+});
+
+describe('seasonal-pattern', () => {
+  // UK gas, quarterly 1960-Q1 to 1986-Q4 on the log scale (R datasets::UKgas): the seasonal test
+  // rules out a stable pattern (p below 0.001; test/evidence/seasonalEvidence.test.ts) and the
+  // third quarter's effect moved by 43% of the pattern's range between 1960 and 1986.
+  const gas = (options: string[] = []): Promise<AnalysisRecord> =>
+    fitRecord('test/fixtures/seasonal/uk-gas.csv', ['--transform', 'log', '--max-p', '1', '--max-q', '1', ...options]);
+
+  it('fires on a pattern the seasonal test finds changing, with the share it moved', async () => {
+    const record = await gas();
+    const caveat = seasonalPattern.evaluate({ record });
+    expect(caveat?.severity).toBe('medium');
+    expect(caveat?.numbers).toEqual({ years: 27, change_share: record.evidence.seasonal?.pattern?.change_share, unstable: 'yes' });
+    expect(caveat?.text).toBe(
+      "The seasonal pattern has been changing (one quarter's effect moved by 43% of the pattern's range between the first and last complete years): next year's pattern may differ from the one forecast, and the intervals do not allow for a sudden shift.",
+    );
+  }, 60_000);
+
+  it('fires on few complete years, and is silent without a seasonal part', async () => {
+    const record = await gas();
+    // The same series as if it had four complete years and a stable pattern.
+    const short = structuredClone(record);
+    if (short.evidence.seasonal?.pattern != null && short.evidence.seasonal.unit_root != null) {
+      short.evidence.seasonal.pattern.complete_years = 4;
+      short.evidence.seasonal.pattern.change_share = 0.1;
+      short.evidence.seasonal.unit_root.seasonal_differencing = false;
+    }
+    expect(seasonalPattern.evaluate({ record: short })?.text).toBe("The seasonal pattern rests on only 4 complete years, so each quarter's effect is estimated from a handful of values.");
+    expect(seasonalPattern.evaluate({ record: await gas(['--seasonal', 'none']) })).toBeNull();
+    expect(seasonalPattern.evaluate({ record: bareRecord('lakeHuron') })).toBeNull();
+  }, 60_000);
 });

@@ -8,6 +8,7 @@ import { fixedLineExtrapolation } from './fixedLineExtrapolation.js';
 import { horizonLong } from './horizonLong.js';
 import { narrowLineIntervals } from './narrowLineIntervals.js';
 import { residualPattern } from './residualPattern.js';
+import { seasonalPattern } from './seasonalPattern.js';
 import { trendBreak } from './trendBreak.js';
 import { unitRootEvidence } from './unitRootEvidence.js';
 
@@ -17,6 +18,7 @@ export const CAVEAT_RULES: readonly CaveatRule[] = [
   narrowLineIntervals,
   horizonLong,
   backtestThin,
+  seasonalPattern,
   residualPattern,
   fixedLineExtrapolation,
   backTransformed,

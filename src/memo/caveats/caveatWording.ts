@@ -23,6 +23,16 @@ export const caveatWording = {
     'No backtest was run for this series, so neither model has been checked on forecasts made from past data. The accuracy of both is untested.' +
     (reason === undefined ? '' : ` (${reason})`),
 
+  seasonalPattern: (a: { years: number; few: boolean; changing: boolean; share: number | null; season: string }) =>
+    [
+      a.few ? `The seasonal pattern rests on only ${a.years} complete year${a.years === 1 ? '' : 's'}, so each ${a.season}'s effect is estimated from a handful of values.` : '',
+      a.changing
+        ? `The seasonal pattern has been changing${a.share === null ? '' : ` (one ${a.season}'s effect moved by ${Math.round(a.share * 100)}% of the pattern's range between the first and last complete years)`}: next year's pattern may differ from the one forecast, and the intervals do not allow for a sudden shift.`
+        : '',
+    ]
+      .filter((sentence) => sentence !== '')
+      .join(' '),
+
   backtestThin: (a: { origins: number; minimum: number }) =>
     `The backtest rests on only ${a.origins} forecast origin${a.origins === 1 ? '' : 's'} (fewer than ${a.minimum}), ` +
     'so its accuracy figures and comparison tests are rough guides, not firm evidence for either model.',
