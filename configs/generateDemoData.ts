@@ -75,6 +75,21 @@ export const DEMO_SERIES: readonly DemoSeries[] = [
     seed: 20150103,
     generate: (random, n) => ar1(random, n, 0.7, 2.4).map((u, i) => 212 + 0.09 * (i + 1) + u),
   },
+  {
+    // Bulk deliveries to irrigation districts, as delivered (not adjusted): a summer peak of two
+    // harmonics on a rising line, with AR(1) deviations.
+    name: 'bulk-deliveries',
+    first: '2015-01',
+    n: 120,
+    decimals: 0,
+    seed: 20150110,
+    generate: (random, n) =>
+      ar1(random, n, 0.5, 120).map((u, i) => {
+        // Month m = 0 (January) .. 11; the peak is in July (m = 6).
+        const angle = (2 * Math.PI * ((i % 12) - 6)) / 12;
+        return 3200 + 6 * (i + 1) + 900 * Math.cos(angle) + 250 * Math.cos(2 * angle) + u;
+      }),
+  },
 ];
 
 /** The series as CSV text: a `period,value` header and one line per period, LF endings. */

@@ -44,6 +44,7 @@ describe('demo data', () => {
       ['treatment-cost-index', '2002-Q1', 92],
       ['desalination-output', '2005', 20],
       ['daily-demand', '2015-01', 120],
+      ['bulk-deliveries', '2015-01', 120],
     ]);
   });
 
@@ -70,6 +71,20 @@ describe('demo data', () => {
     expect(record.series).toMatchObject({ frequency: 'annual', first: '2005', last: '2024', n: 20 });
     // Drawn as 1450 + 38·t + u_t (configs/generateDemoData.ts).
     expectNear(record, 'deterministic', 'slope', 38);
+  });
+
+  it('bulk-deliveries: a fixed seasonal pattern of two harmonics on a trend line', async () => {
+    const record = await fitRecord('configs/data/bulk-deliveries.csv', ['--max-p', '2', '--max-q', '2']);
+    expect(record.series).toMatchObject({ frequency: 'monthly', first: '2015-01', last: '2024-12', n: 120 });
+    // Drawn as 3200 + 6·t + 900·cos(2π(m − 6)/12) + 250·cos(4π(m − 6)/12) + u_t, u AR(1) with
+    // φ = 0.5 (configs/generateDemoData.ts): two harmonic pairs, a July peak.
+    expect(record.models.deterministic.seasonal).toMatchObject({ harmonics: 2, P: 0, Q: 0 });
+    expect([record.models.deterministic.p, record.models.deterministic.q]).toEqual([1, 0]);
+    expectNear(record, 'deterministic', 'slope', 6);
+    const pattern = record.models.deterministic.seasonal?.pattern ?? [];
+    expect(pattern.indexOf(Math.max(...pattern))).toBe(6);
+    // The July effect of the drawn pattern: 900 + 250 = 1150 above the line.
+    expect(Math.abs(pattern[6] - 1150)).toBeLessThan(100);
   });
 
   it('daily-demand: a trend-stationary monthly series with AR(1) deviations', async () => {
