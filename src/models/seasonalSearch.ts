@@ -224,9 +224,11 @@ export function searchSeasonalModel(kind: TrendModelKind, w: Float64Array, maxP:
   };
   let first = stageOne(baseP, baseQ);
   // On a series whose trend is a fixed line, the differenced model's MA term at the base order
-  // undoes the differencing for every seasonal part alike, which leaves only the plain part
-  // admissible there; a pure AR base order cannot undo it, so the parts are compared there too.
-  if (baseQ > 0 && (first === undefined || sameChoice(first.choice, plain))) {
+  // undoes the differencing for some seasonal parts (often every part with harmonics), which
+  // leaves only the others admissible there; a pure AR base order cannot undo it, so when any
+  // part was set aside for that reason the parts are compared there too.
+  const undone = choices.some((c) => entryAt(c, baseP, baseQ)?.candidate.reason === 'undoes-differencing');
+  if (baseQ > 0 && (first === undefined || sameChoice(first.choice, plain) || undone)) {
     const second = stageOne(baseP, 0);
     if (second !== undefined && (first === undefined || second.candidate.aicc < first.candidate.aicc)) first = second;
   }
