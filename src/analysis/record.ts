@@ -16,7 +16,7 @@ export type { SeasonalRecord } from './seasonalPlan.js';
 import type { Estimation } from '../base/settings.js';
 import type { RestrictedFallback } from '../models/trendModels.js';
 
-export type { ArmaOrder, BacktestForecast, BacktestRecord, ComparisonRow, ForecastMethod, HorizonScores, OriginRecord } from '../backtest/backtestRecord.js';
+export type { ArmaOrder, BacktestForecast, BacktestMethod, BacktestRecord, ComparisonRow, ForecastMethod, HorizonScores, OriginRecord, YardstickMethod } from '../backtest/backtestRecord.js';
 /** The comparison rows' loss name at an interval level, for readers that look rows up by level. */
 export { intervalScoreLoss } from '../backtest/backtestRecord.js';
 export type { EvidenceRecord } from '../evidence/collectEvidence.js';

@@ -1,9 +1,10 @@
 // The backtest block of the terminal summary: what was run, the notes, accuracy per horizon
 // for each method and the comparison tests. Plain text, fixed-width columns.
-import type { BacktestRecord, ComparisonRow, ForecastMethod, JsonNumber } from '../analysis/record.js';
+import type { BacktestMethod, BacktestRecord, ComparisonRow, JsonNumber } from '../analysis/record.js';
+import { backtestMethods, scoresOf } from '../memo/backtestMethods.js';
 import { levelKey, type RefitPolicy } from '../base/settings.js';
 
-const METHOD_NAMES: Record<ForecastMethod, string> = { deterministic: 'deterministic', stochastic: 'stochastic', naive: 'no change' };
+const METHOD_NAMES: Record<BacktestMethod, string> = { deterministic: 'deterministic', stochastic: 'stochastic', naive: 'no change', seasonal_naive: 'seasonal naive' };
 function lossName(loss: ComparisonRow['loss']): string {
   return loss === 'squared_error' ? 'squared error' : `${loss.slice('interval_score_'.length)}% interval score`;
 }
@@ -24,8 +25,8 @@ export function formatBacktest(record: BacktestRecord): string[] {
   const header = ['h', 'method', 'MAE', 'RMSE', 'MASE', 'MAPE %', ...levels.map((l) => `cover ${l}%`), ...levels.map((l) => `IS ${l}%`), 'CRPS'];
   const rows: string[][] = [header];
   for (let h = 1; h <= settings.horizon; h++) {
-    for (const method of ['deterministic', 'stochastic', 'naive'] as const) {
-      const s = record.per_horizon[method][h - 1];
+    for (const method of backtestMethods(record)) {
+      const s = scoresOf(record, method)[h - 1];
       rows.push([
         String(h),
         METHOD_NAMES[method],

@@ -30,8 +30,8 @@ export const chartWording = {
     subtitle: (origins: number) => `Forecasts made from ${origins} past origins and compared with what happened.`,
     errorPanel: 'Root mean squared error',
     coveragePanel: (level: number) => `Outcomes inside the ${levelPercent(level)} interval`,
-    description: (a: { origins: number; horizon: number; endErrors: string; endCoverage: string; level: number }) =>
-      `Two panels by forecast horizon 1 to ${a.horizon}, from ${a.origins} backtest origins. Left: root mean squared error of the deterministic, stochastic and no-change forecasts; at the last horizon ${a.endErrors}. ` +
+    description: (a: { origins: number; horizon: number; endErrors: string; endCoverage: string; level: number; benchmark: string }) =>
+      `Two panels by forecast horizon 1 to ${a.horizon}, from ${a.origins} backtest origins. Left: root mean squared error of the deterministic and stochastic forecasts and the ${a.benchmark}; at the last horizon ${a.endErrors}. ` +
       `Right: share of outcomes inside each model's ${levelPercent(a.level)} interval, against the ${levelPercent(a.level)} target; at the last horizon ${a.endCoverage}.`,
   },
   residualAcf: {

@@ -3,7 +3,7 @@
 // a reviewer can read every word the memo can say in these three modules.
 import type { Frequency } from '../base/period.js';
 import type { SignOffDecision } from './memoInput.js';
-import type { ForecastMethod } from '../analysis/record.js';
+import type { BacktestMethod } from '../analysis/record.js';
 import type { Transform, TrendModelKind } from '../base/settings.js';
 
 export const MODEL_NAME: Record<TrendModelKind, string> = {
@@ -12,16 +12,18 @@ export const MODEL_NAME: Record<TrendModelKind, string> = {
 };
 
 /** Lower-case model names for use inside sentences. */
-export const MODEL_IN_TEXT: Record<ForecastMethod, string> = {
+export const MODEL_IN_TEXT: Record<BacktestMethod, string> = {
   deterministic: 'deterministic-trend model',
   stochastic: 'stochastic-trend model',
   naive: 'no-change benchmark',
+  seasonal_naive: 'seasonal naive benchmark',
 };
 
-export const METHOD_NAME: Record<ForecastMethod, string> = {
+export const METHOD_NAME: Record<BacktestMethod, string> = {
   deterministic: 'Deterministic',
   stochastic: 'Stochastic',
   naive: 'No change',
+  seasonal_naive: 'Seasonal naive',
 };
 
 /** What each model assumes, in one plain sentence. */

@@ -7,6 +7,8 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import type { AnalysisRecord } from '../../src/analysis/record.js';
 import { evidenceView } from '../../src/memo/view/evidenceView.js';
 import { modelView } from '../../src/memo/view/modelsView.js';
+import { backtestView } from '../../src/memo/view/backtestView.js';
+import { formatBacktest } from '../../src/cli/formatBacktest.js';
 import { fitRecord } from '../support/runCli.js';
 
 const UK_GAS = 'test/fixtures/seasonal/uk-gas.csv';
@@ -51,6 +53,22 @@ describe('a quarterly seasonal series', () => {
     const stochastic = modelView(record, 'stochastic');
     expect(stochastic.notes.some((n) => n.startsWith('Seasonal part, chosen from the data with the order') && n.includes('same quarter a year earlier'))).toBe(true);
   });
+});
+
+describe('the backtest of a seasonal series in the memo', () => {
+  it('names the seasonal naive as the benchmark and shows its scores', async () => {
+    const record = await fitRecord(UK_GAS, ['--transform', 'log', '--backtest', '--max-p', '1', '--max-q', '1', '--origins', '4', '--backtest-horizon', '3']);
+    const backtest = record.backtest;
+    if (backtest === undefined || backtest === null) throw new Error('no backtest');
+    // At least s = 4 origins so every quarter is forecast from (src/backtest/planOrigins.ts).
+    expect(backtest.settings).toMatchObject({ benchmark: 'seasonal_naive', mase_scaling: 'seasonal_naive', period: 4 });
+    const view = backtestView(backtest, 'quarterly', 1, 95);
+    expect(view.benchmarkName).toBe('Seasonal naive');
+    const seasonalRmse = backtest.per_horizon.seasonal_naive?.[0].rmse ?? Number.NaN;
+    expect(Number(view.point[0].methods[2].rmse.replace('\u2212', '-'))).toBeCloseTo(seasonalRmse, 1);
+    expect(view.settings).toContain('in-sample error of the seasonal naive forecast');
+    expect(formatBacktest(backtest).some((line) => line.includes('seasonal naive'))).toBe(true);
+  }, 60_000);
 });
 
 describe('series that keep no seasonal part', () => {

@@ -1,17 +1,16 @@
-// Backtest accuracy by horizon: root mean squared error of the two models and the no-change
-// benchmark, and the share of outcomes inside each model's interval at the widest level
+// Backtest accuracy by horizon: root mean squared error of the two models and the benchmark
+// (no change, or the seasonal naive for a seasonal series), and the share of outcomes inside each model's interval at the widest level
 // against that level as the target.
 import type { TopLevelSpec } from 'vega-lite';
 import { chartWording } from '../chartWording.js';
 import { formatNumber, formatPercent, withUnits } from '../format/formatNumber.js';
 import { atLevel, widestLevel } from '../intervalLevels.js';
-import type { BacktestRecord, ForecastMethod } from '../../analysis/record.js';
-import { METHOD_NAME } from '../wording.js';
+import type { BacktestMethod, BacktestRecord } from '../../analysis/record.js';
+import { backtestMethods, scoresOf } from '../backtestMethods.js';
+import { METHOD_NAME, MODEL_IN_TEXT } from '../wording.js';
 import { CHART_CONFIG, PANEL_WIDTH } from './chartConfig.js';
 import type { LayerPart, PanelSpec } from './chartTypes.js';
 import { INK, MODEL_COLOUR, MODEL_DASH, MODEL_SHAPE } from './palette.js';
-
-const METHODS: readonly ForecastMethod[] = ['deterministic', 'stochastic', 'naive'];
 
 export interface BacktestChartRow {
   method: string;
@@ -23,14 +22,13 @@ export interface BacktestChartRow {
 
 export function backtestRows(backtest: BacktestRecord): BacktestChartRow[] {
   const level = widestLevel(backtest.settings);
-  return METHODS.flatMap((method) =>
-    backtest.per_horizon[method].map((row) => ({ method: METHOD_NAME[method], h: row.h, rmse: row.rmse, coverage: atLevel(row.coverage, level) ?? null })),
+  return backtestMethods(backtest).flatMap((method) =>
+    scoresOf(backtest, method).map((row) => ({ method: METHOD_NAME[method], h: row.h, rmse: row.rmse, coverage: atLevel(row.coverage, level) ?? null })),
   );
 }
 
 // One colour and dash scale over all three methods, shared by both panels (one legend).
-function styleScales() {
-  const methods = METHODS;
+function styleScales(methods: readonly BacktestMethod[]) {
   const domain = methods.map((m) => METHOD_NAME[m]);
   return {
     color: { field: 'method', type: 'nominal' as const, title: null, legend: { symbolType: 'stroke', symbolSize: 320, symbolStrokeWidth: 2 }, scale: { domain, range: methods.map((m) => MODEL_COLOUR[m]) } },
@@ -38,8 +36,8 @@ function styleScales() {
   };
 }
 
-function linePanel(title: string, field: 'rmse' | 'coverage', rows: BacktestChartRow[], methods: readonly ForecastMethod[], yTitle: string | null, extra: LayerPart[]): PanelSpec {
-  const { color, strokeDash } = styleScales();
+function linePanel(title: string, field: 'rmse' | 'coverage', rows: BacktestChartRow[], all: readonly BacktestMethod[], methods: readonly BacktestMethod[], yTitle: string | null, extra: LayerPart[]): PanelSpec {
+  const { color, strokeDash } = styleScales(all);
   const x = { field: 'h', type: 'quantitative' as const, title: 'horizon (steps ahead)', axis: { tickMinStep: 1, format: 'd' } };
   const y = { field, type: 'quantitative' as const, title: yTitle, ...(field === 'coverage' ? { axis: { format: '.0%' }, scale: { domain: [0, 1] } } : {}) };
   const shown = rows.filter((r) => r[field] !== null && methods.some((m) => METHOD_NAME[m] === r.method));
@@ -64,8 +62,9 @@ function linePanel(title: string, field: 'rmse' | 'coverage', rows: BacktestChar
 
 export function backtestChart({ series, units, decimals, backtest }: { series: string; units?: string; decimals: number; backtest: BacktestRecord }): TopLevelSpec {
   const rows = backtestRows(backtest);
+  const methods = backtestMethods(backtest);
   const origins = backtest.origins.length;
-  const endErrors = METHODS.map((m) => `${METHOD_NAME[m].toLowerCase()} ${withUnits(formatNumber(backtest.per_horizon[m].at(-1)?.rmse, decimals), units)}`).join(', ');
+  const endErrors = methods.map((m) => `${METHOD_NAME[m].toLowerCase()} ${withUnits(formatNumber(scoresOf(backtest, m).at(-1)?.rmse, decimals), units)}`).join(', ');
   const level = widestLevel(backtest.settings);
   const endCoverage = (['deterministic', 'stochastic'] as const)
     .map((m) => `${METHOD_NAME[m].toLowerCase()} ${formatPercent(atLevel(backtest.per_horizon[m].at(-1)?.coverage, level))}`)
@@ -77,12 +76,12 @@ export function backtestChart({ series, units, decimals, backtest }: { series: s
   };
   return {
     title: { text: chartWording.backtest.title(series), subtitle: chartWording.backtest.subtitle(origins) },
-    description: chartWording.backtest.description({ origins, horizon: backtest.settings.horizon, endErrors, endCoverage, level }),
+    description: chartWording.backtest.description({ origins, horizon: backtest.settings.horizon, endErrors, endCoverage, level, benchmark: MODEL_IN_TEXT[methods[2]] }),
     config: CHART_CONFIG,
     spacing: 24,
     hconcat: [
-      linePanel(chartWording.backtest.errorPanel, 'rmse', rows, METHODS, units ?? null, []),
-      linePanel(chartWording.backtest.coveragePanel(level), 'coverage', rows, ['deterministic', 'stochastic'], null, [target]),
+      linePanel(chartWording.backtest.errorPanel, 'rmse', rows, methods, methods, units ?? null, []),
+      linePanel(chartWording.backtest.coveragePanel(level), 'coverage', rows, methods, ['deterministic', 'stochastic'], null, [target]),
     ],
   };
 }

@@ -5,7 +5,8 @@
 import type { Frequency } from '../../base/period.js';
 import { evidenceWording } from '../evidenceWording.js';
 import { formatNumber, formatPCell, formatPercent, formatPercentPoints, formatSignificant, MISSING } from '../format/formatNumber.js';
-import { intervalScoreLoss, type BacktestRecord, type ComparisonRow, type ForecastMethod, type HorizonScores } from '../../analysis/record.js';
+import { intervalScoreLoss, type BacktestMethod, type BacktestRecord, type ComparisonRow, type HorizonScores } from '../../analysis/record.js';
+import { backtestMethods, scoresOf } from '../backtestMethods.js';
 import { atLevel } from '../intervalLevels.js';
 import { METHOD_NAME, TEMPLATE_TEXT } from '../wording.js';
 import { modelTable, type ModelTable } from './modelTable.js';
@@ -36,6 +37,8 @@ function comparisonCells(c: ComparisonRow | undefined, significance: number): Co
 
 export interface BacktestView {
   settings: string;
+  /** The benchmark's name over its columns: no change, or the seasonal naive. */
+  benchmarkName: string;
   point: { h: number; n: number; methods: PointAccuracyCells[] }[];
   interval: ModelTable<{ h: number; cells: string[] }>;
   comparisonIntro: string;
@@ -45,10 +48,8 @@ export interface BacktestView {
   notes: string[];
 }
 
-const POINT_METHODS: readonly ForecastMethod[] = ['deterministic', 'stochastic', 'naive'];
-
-function rowAt(backtest: BacktestRecord, method: ForecastMethod, h: number): HorizonScores | undefined {
-  return backtest.per_horizon[method].find((r) => r.h === h);
+function rowAt(backtest: BacktestRecord, method: BacktestMethod, h: number): HorizonScores | undefined {
+  return scoresOf(backtest, method).find((r) => r.h === h);
 }
 
 export function backtestView(backtest: BacktestRecord, frequency: Frequency, decimals: number, scoredLevel: number): BacktestView {
@@ -58,6 +59,7 @@ export function backtestView(backtest: BacktestRecord, frequency: Frequency, dec
   const last = backtest.origins.at(-1);
   const horizons = backtest.per_horizon.deterministic.map((r) => r.h);
   return {
+    benchmarkName: METHOD_NAME[backtestMethods(backtest)[2]],
     settings: evidenceWording.backtestSettings({
       origins: backtest.origins.length,
       firstLength: first?.length ?? 0,
@@ -76,7 +78,7 @@ export function backtestView(backtest: BacktestRecord, frequency: Frequency, dec
     point: horizons.map((h) => ({
       h,
       n: rowAt(backtest, 'deterministic', h)?.n ?? 0,
-      methods: POINT_METHODS.map((m) => {
+      methods: backtestMethods(backtest).map((m) => {
         const row = rowAt(backtest, m, h);
         return { rmse: formatNumber(row?.rmse, decimals), mape: formatPercentPoints(row?.mape), mase: formatNumber(row?.mase, 2) };
       }),
