@@ -44,8 +44,6 @@ export interface SearchOptions extends WorkspaceOptions {
   differenced?: boolean;
   /** A seasonal ARMA part held fixed over the grid. */
   seasonal?: SeasonalPart;
-  /** Fits already made at some orders of this grid (same data and seasonal part), reused as they are. */
-  known?: readonly RegressionArmaFit[];
 }
 
 /**
@@ -94,9 +92,8 @@ export interface GridFit {
  * each started from its neighbours' optima, with its AICc and admissibility.
  */
 export function fitGrid(y: Float64Array, regressors: readonly Float64Array[], maxP: number, maxQ: number, options: SearchOptions = {}): GridFit[] {
-  const { differenced = false, seasonal, known = [], ...workspace } = options;
+  const { differenced = false, seasonal, ...workspace } = options;
   const fits = new Map<string, RegressionArmaFit>();
-  const given = new Map(known.map((fit) => [key(fit.order.p, fit.order.q), fit]));
   const seasonalCount = (seasonal?.P ?? 0) + (seasonal?.Q ?? 0);
   const grid: GridFit[] = [];
   const nobs = countObserved(y);
@@ -104,20 +101,8 @@ export function fitGrid(y: Float64Array, regressors: readonly Float64Array[], ma
     for (let q = 0; q <= maxQ; q++) {
       const parameters = p + q + seasonalCount + regressors.length + 1;
       if (nobs - parameters - 1 <= 0) continue;
-      const starts = [fits.get(key(p - 1, q)), fits.get(key(p, q - 1))]
-        .filter((fit): fit is RegressionArmaFit => fit !== undefined)
-        .map((fit) => padStart(fit, p, q));
-      const diagonal = fits.get(key(p - 1, q - 1));
-      if (diagonal !== undefined) {
-        for (const root of CANCELLING_ROOTS) starts.push(...cancellingStart(diagonal, [-root]));
-      }
-      const second = fits.get(key(p - 2, q - 2));
-      if (second !== undefined) {
-        // A complex pair ρe^{±iω}: (1 − 2ρ cos ω B + ρ² B²).
-        const { modulus, angle } = CANCELLING_PAIR;
-        starts.push(...cancellingStart(second, [-2 * modulus * Math.cos(angle), modulus * modulus]));
-      }
-      const fit = given.get(key(p, q)) ?? fitRegressionArma(y, regressors, p, q, { ...workspace, seasonal, starts });
+      const starts = neighbourStarts((a, b) => fits.get(key(a, b)), p, q);
+      const fit = fitRegressionArma(y, regressors, p, q, { ...workspace, seasonal, starts });
       fits.set(key(p, q), fit);
       const value = aicc(fit.loglik, parameters, fit.nobs);
       const { admissible, reason } = admissibility(fit, differenced);
@@ -125,6 +110,26 @@ export function fitGrid(y: Float64Array, regressors: readonly Float64Array[], ma
     }
   }
   return grid;
+}
+
+/**
+ * Starts for (p, q) from the optima already found at smaller orders of the same model: the
+ * (p − 1, q) and (p, q − 1) optima padded, and the (p − 1, q − 1) and (p − 2, q − 2) optima with
+ * a common factor in both polynomials.
+ */
+export function neighbourStarts(fitAt: (p: number, q: number) => RegressionArmaFit | undefined, p: number, q: number): Float64Array[] {
+  const starts = [fitAt(p - 1, q), fitAt(p, q - 1)].filter((fit): fit is RegressionArmaFit => fit !== undefined).map((fit) => padStart(fit, p, q));
+  const diagonal = fitAt(p - 1, q - 1);
+  if (diagonal !== undefined) {
+    for (const root of CANCELLING_ROOTS) starts.push(...cancellingStart(diagonal, [-root]));
+  }
+  const second = fitAt(p - 2, q - 2);
+  if (second !== undefined) {
+    // A complex pair ρe^{±iω}: (1 − 2ρ cos ω B + ρ² B²).
+    const { modulus, angle } = CANCELLING_PAIR;
+    starts.push(...cancellingStart(second, [-2 * modulus * Math.cos(angle), modulus * modulus]));
+  }
+  return starts;
 }
 
 /**

@@ -24,7 +24,7 @@ import type { TrendModelKind } from '../base/settings.js';
 import { admissibility, type InadmissibleReason } from './admissibility.js';
 import { countObserved, fitRegressionArma, type RegressionArmaFit } from './fitRegressionArma.js';
 import { checkHarmonics } from './harmonics.js';
-import { aicc, fitGrid, padStart, type Candidate, type GridFit } from './orderSearch.js';
+import { aicc, fitGrid, neighbourStarts, padStart, type Candidate, type GridFit } from './orderSearch.js';
 import { designWorkspace, trendDesign, type TrendDesign } from './trendDesign.js';
 
 /** Stage 3 sends the search back to stage 2 at most this many times. */
@@ -176,9 +176,10 @@ export function searchSeasonalModel(kind: TrendModelKind, w: Float64Array, maxP:
     return countObserved(design.response) - (p + q + choice.P + choice.Q + design.regressors.length + 1) - 1 > 0;
   };
   /**
-   * One fit at (p, q), started from its neighbours at this order already fitted: the same
-   * harmonics with a seasonal factor fewer (padded, they reproduce that fit exactly), and the
-   * same seasonal orders with one harmonic pair fewer.
+   * One fit at (p, q), started from its neighbours already fitted: the same part's smaller
+   * orders (orderSearch.ts's starts: padded, and with a common factor), the same harmonics with
+   * a seasonal factor fewer (padded, they reproduce that fit exactly), and the same seasonal
+   * orders with one harmonic pair fewer.
    */
   const fitAt = (choice: SeasonalChoice, p: number, q: number): Entry | undefined => {
     const known = entryAt(choice, p, q);
@@ -190,10 +191,13 @@ export function searchSeasonalModel(kind: TrendModelKind, w: Float64Array, maxP:
       { ...choice, P: choice.P - 1, Q: choice.Q - 1 },
       { ...choice, harmonics: choice.harmonics - 1 },
     ].filter((c) => c.P >= 0 && c.Q >= 0 && c.harmonics >= 0);
-    const starts = neighbours
-      .map((c) => entryAt(c, p, q))
-      .filter((entry): entry is Entry => entry !== undefined)
-      .map((entry) => padStart(entry.fit, p, q, choice.P, choice.Q));
+    const starts = [
+      ...neighbourStarts((a, b) => entryAt(choice, a, b)?.fit, p, q),
+      ...neighbours
+        .map((c) => entryAt(c, p, q))
+        .filter((entry): entry is Entry => entry !== undefined)
+        .map((entry) => padStart(entry.fit, p, q, choice.P, choice.Q)),
+    ];
     const design = designFor(choice.harmonics);
     const fit = fitRegressionArma(design.response, design.regressors, p, q, {
       ...designWorkspace(design),
@@ -217,10 +221,20 @@ export function searchSeasonalModel(kind: TrendModelKind, w: Float64Array, maxP:
   const baseP = Math.min(1, maxP);
   const baseQ = Math.min(1, maxQ);
   // Stage 1.
+  // A part at the base order is started from its own (0, 0) fit too (with a common factor), as
+  // the grid would start it: on US accidental deaths' first differences the plain (1, 1) has
+  // maxima at −568.8, −566.9 and −564.5, and only those starts find the upper two. The parts are
+  // then compared by their better admissible fit of the two: a base order whose best fits sit on
+  // the unit circle for the good parts would otherwise hand stage 2 a poor one (UK gas's
+  // deterministic trend: a seasonal MA part at −107 instead of a seasonal AR part at −170).
+  const atBase = (c: SeasonalChoice, p: number, q: number): Entry | undefined => {
+    const smallest = p > 0 && q > 0 ? fitAt(c, 0, 0) : undefined;
+    return bestOf([smallest, fitAt(c, p, q)]) ?? entryAt(c, p, q);
+  };
   const stageOne = (p: number, q: number): Entry | undefined => {
-    const harmonicsBest = bestOf(choices.filter((c) => c.P + c.Q === 0).map((c) => fitAt(c, p, q)))?.choice.harmonics ?? 0;
+    const harmonicsBest = bestOf(choices.filter((c) => c.P + c.Q === 0).map((c) => atBase(c, p, q)))?.choice.harmonics ?? 0;
     const factorsFirst = choices.filter((c) => c.P + c.Q > 0 && (c.harmonics === harmonicsBest || c.harmonics === 0));
-    return bestOf([...factorsFirst, ...choices.filter((c) => c.P + c.Q === 0)].map((c) => fitAt(c, p, q)));
+    return bestOf([...factorsFirst, ...choices.filter((c) => c.P + c.Q === 0)].map((c) => atBase(c, p, q)));
   };
   let first = stageOne(baseP, baseQ);
   // On a series whose trend is a fixed line, the differenced model's MA term at the base order
@@ -233,18 +247,28 @@ export function searchSeasonalModel(kind: TrendModelKind, w: Float64Array, maxP:
     if (second !== undefined && (first === undefined || second.candidate.aicc < first.candidate.aicc)) first = second;
   }
   let choice = first?.choice ?? plain;
+  // A part's grid runs once, every order with its neighbours' optima as starts, even where an
+  // earlier stage fitted that order already: those fits had fewer starts (US accidental deaths
+  // had candidates 2 log-likelihood units below statsmodels' until the grid refitted them), so
+  // each candidate keeps the better of its fits.
+  const gridded = new Set<string>();
   for (let round = 0; round < MAX_ROUNDS; round++) {
     // Stage 2.
-    const design = designFor(choice.harmonics);
-    const known = [...entries.values()].filter((entry) => sameChoice(entry.choice, choice)).map((entry) => entry.fit);
-    const grid = fitGrid(design.response, design.regressors, maxP, maxQ, {
-      ...designWorkspace(design),
-      differenced,
-      seasonal: { period: spec.period, P: choice.P, Q: choice.Q },
-      known,
-    });
-    for (const { fit } of grid) if (entryAt(choice, fit.order.p, fit.order.q) === undefined) record(choice, fit);
-    const gridBest = bestOf(grid.map(({ fit }) => entryAt(choice, fit.order.p, fit.order.q)));
+    if (!gridded.has(entryKey(choice, 0, 0))) {
+      gridded.add(entryKey(choice, 0, 0));
+      const design = designFor(choice.harmonics);
+      const grid = fitGrid(design.response, design.regressors, maxP, maxQ, {
+        ...designWorkspace(design),
+        differenced,
+        seasonal: { period: spec.period, P: choice.P, Q: choice.Q },
+      });
+      for (const { fit } of grid) {
+        const earlier = entryAt(choice, fit.order.p, fit.order.q);
+        if (earlier === undefined || betterFit(fit, earlier.fit)) record(choice, fit);
+      }
+    }
+    const orders = Array.from({ length: (maxP + 1) * (maxQ + 1) }, (_, i) => entryAt(choice, Math.floor(i / (maxQ + 1)), i % (maxQ + 1)));
+    const gridBest = bestOf(orders);
     if (gridBest === undefined) break;
     // Stage 3.
     const { p, q } = gridBest.fit.order;
@@ -293,6 +317,12 @@ function resultOf(entries: readonly Entry[], best: Entry): Omit<SeasonalSearchRe
         ? null
         : { fit: setAside.fit, aicc: setAside.candidate.aicc, reason: setAside.candidate.reason, choice: setAside.choice },
   };
+}
+
+/** Whether a second fit of one candidate beats the first: converged where the first is not, or a higher log-likelihood. */
+function betterFit(fit: RegressionArmaFit, than: RegressionArmaFit): boolean {
+  if (fit.converged !== than.converged) return fit.converged;
+  return fit.loglik > than.loglik;
 }
 
 /** A part's neighbours: a harmonic pair more or fewer, a seasonal factor added or dropped, no harmonics. */

@@ -1,8 +1,10 @@
 // The seasonal search (src/models/seasonalSearch.ts) on two seasonal open datasets
 // (test/fixtures/seasonal-models/, provenance in test/fixtures/README.md) and a seeded series:
 // what it selects follows its rule (the admissible candidate of lowest AICc among those it
-// fitted, AICc counted as orderSearch.ts defines it), what the model reports follows from
-// the selection, and a fixed pattern put into a series comes back out.
+// fitted, AICc counted as orderSearch.ts defines it), every candidate it fits reaches the
+// likelihood statsmodels' SARIMAX reaches for it (test/fixtures/seasonal-search/, the
+// exhaustive search over every candidate), what the model reports follows from the selection,
+// and a fixed pattern put into a series comes back out.
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import type { TrendModelKind } from '../../src/base/settings.js';
@@ -16,22 +18,35 @@ function readSeries(file: string, log: boolean): Float64Array {
   return Float64Array.from(text.trim().split('\n').slice(1).map((line) => Number(line.split(',')[1])), (v) => (log ? Math.log(v) : v));
 }
 
+interface ExhaustiveCandidate {
+  K: number;
+  p: number;
+  q: number;
+  P: number;
+  Q: number;
+  loglik: number;
+}
+/** statsmodels 0.13.5 SARIMAX fits of every candidate (test/fixtures/seasonal-search/exhaustiveSearch.py). */
+const exhaustive = JSON.parse(readFileSync(new URL('../fixtures/seasonal-search/exhaustive-search.json', import.meta.url), 'utf8')) as {
+  results: { data: string; model: 'deterministic' | 'first-differences' | 'seasonal-differences'; candidates: ExhaustiveCandidate[] }[];
+};
+
 function spec(period: number, seasonalDifferencing: boolean): SeasonalSearchSpec {
   return { period, firstSeason: 0, seasonalDifferencing, maxHarmonics: period / 2, maxSeasonalP: 1, maxSeasonalQ: 1 };
 }
 
-const MODELS: [string, TrendModelKind, boolean][] = [
-  ['deterministic', 'deterministic', false],
-  ['stochastic on first differences', 'stochastic', false],
-  ['stochastic on seasonal differences', 'stochastic', true],
+const MODELS: [string, TrendModelKind, boolean, 'deterministic' | 'first-differences' | 'seasonal-differences'][] = [
+  ['deterministic', 'deterministic', false, 'deterministic'],
+  ['stochastic on first differences', 'stochastic', false, 'first-differences'],
+  ['stochastic on seasonal differences', 'stochastic', true, 'seasonal-differences'],
 ];
 const SERIES: [string, Float64Array, number][] = [
-  ['us-accidental-deaths', readSeries('us-accidental-deaths.csv', false), 12],
-  ['uk-gas (log)', readSeries('uk-gas.csv', true), 4],
+  ['us-accidental-deaths.csv', readSeries('us-accidental-deaths.csv', false), 12],
+  ['uk-gas.csv', readSeries('uk-gas.csv', true), 4],
 ];
 
-describe.each(SERIES)('seasonal search on %s', (_, w, period) => {
-  describe.each(MODELS)('%s', (_model, kind, seasonalDifferencing) => {
+describe.each(SERIES)('seasonal search on %s', (file, w, period) => {
+  describe.each(MODELS)('%s', (_model, kind, seasonalDifferencing, reference) => {
     const model: TrendModelFit = fitTrendModel(kind, w, 3, 3, { estimation: 'ml', seasonal: spec(period, seasonalDifferencing) });
     const seasonal = model.seasonal;
     const regression = (harmonics: number): number => (kind === 'deterministic' ? 2 : 1) + harmonicColumnCount(period, harmonics);
@@ -52,6 +67,17 @@ describe.each(SERIES)('seasonal search on %s', (_, w, period) => {
       // The plain candidate is always fitted, so an admissible one always exists.
       expect(model.candidates.some((c) => c.p + c.q + c.P + c.Q + c.harmonics === 0 && c.admissible)).toBe(true);
       if (seasonalDifferencing) expect(model.candidates.every((c) => c.harmonics === 0)).toBe(true);
+    });
+
+    it("reaches statsmodels' log-likelihood for every candidate it fits", () => {
+      const sm = exhaustive.results.find((r) => r.data === file && r.model === reference);
+      if (sm === undefined) throw new Error(`no exhaustive reference for ${file} ${reference}`);
+      for (const c of model.candidates) {
+        const row = sm.candidates.find((r) => r.K === c.harmonics && r.p === c.p && r.q === c.q && r.P === c.P && r.Q === c.Q);
+        expect(row, `${c.harmonics} (${c.p},${c.q})(${c.P},${c.Q})`).toBeDefined();
+        // statsmodels 0.13.5 SARIMAX fit(method='lbfgs'), best of two starts; a correct engine reaches at least its value − 1e-3 (the convention of the shared reference fits).
+        expect(c.loglik, `${c.harmonics} (${c.p},${c.q})(${c.P},${c.Q})`).toBeGreaterThanOrEqual((row?.loglik ?? Number.POSITIVE_INFINITY) - 1e-3);
+      }
     });
 
     it('reports the selection: orders, coefficients, standard errors and what was set aside', () => {
