@@ -10,7 +10,7 @@
 import { availableParallelism } from 'node:os';
 import { InputError, type InputProblem } from '../base/problem.js';
 import { TREND_MODELS, type AnalysisSettings, type TrendModelKind } from '../base/settings.js';
-import { minimumObservations, type FixedSeasonalPart, type SeasonalSearchSpec } from '../models/trendModels.js';
+import { minimumObservations, type FixedSeasonalPart, type SeasonalOrderSize, type SeasonalSearchSpec } from '../models/trendModels.js';
 import type { ArmaOrder, BacktestRecord } from './backtestRecord.js';
 import { collectForecasts } from './collectForecasts.js';
 import { compareModels } from './compareModels.js';
@@ -60,7 +60,13 @@ export async function runBacktest(input: BacktestInput, settings: AnalysisSettin
   const full = refit === 'reselect' ? undefined : fullSampleModels(data.w, refit, maxP, maxQ, settings.estimation, run.orders);
   // The largest order each model is fitted at: the fixed one, or the top of the search grid.
   const largestOrder = (kind: TrendModelKind): ArmaOrder => full?.orders[kind] ?? { p: maxP, q: maxQ };
-  const needed = Math.max(...TREND_MODELS.map((kind) => minimumObservations(kind, largestOrder(kind).p, largestOrder(kind).q)));
+  // With a seasonal part: the part kept (`reestimate`), or the smallest the search can fall back on.
+  const seasonalSize = (kind: TrendModelKind): SeasonalOrderSize | undefined => {
+    const part = run.seasonal?.[kind];
+    if (part === undefined) return undefined;
+    return 'harmonics' in part ? part : { period: part.period, P: 0, Q: 0, harmonics: 0, seasonalDifferencing: part.seasonalDifferencing };
+  };
+  const needed = Math.max(...TREND_MODELS.map((kind) => minimumObservations(kind, largestOrder(kind).p, largestOrder(kind).q, seasonalSize(kind))));
   if (minTrainingLength < needed) throw new InputError(backtestMessages.trainingTooShort(minTrainingLength, needed));
   const planned = planOrigins(n, { horizon, origins, step: ORIGIN_STEP, window, minTrainingLength, period });
   // A forecast starts from an observed value: origins whose last training value is missing are left out.

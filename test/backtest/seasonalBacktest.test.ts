@@ -157,6 +157,21 @@ describe('seasonal origins the series cannot all give', () => {
   });
 });
 
+describe('training windows too short for the seasonal part', () => {
+  const deaths = readSeasonal('us-accidental-deaths.csv');
+
+  it('refuses them as bad settings before any window is fitted', async () => {
+    // Seasonal differences lose a whole cycle: the stochastic model at (1, 0) with its drift
+    // needs 1 + 1 + 1 (σ²) + 2 (AICc) + 12 = 17 observations (minimumObservations), more than 15.
+    const settings = settingsFor({ max_p: 1, max_q: 0, backtest: { refit: 'reselect', origins: 4, horizon: 3, min_train: 15 } });
+    const spec = { period: 12, firstSeason: 0, seasonalDifferencing: true, maxHarmonics: 0, maxSeasonalP: 0, maxSeasonalQ: 0 };
+    const error = await runBacktest(deaths, settings, { threads: 1, period: 12, seasonal: { deterministic: { ...spec, seasonalDifferencing: false }, stochastic: spec } }).catch((e: unknown) => e);
+    expect(error).toBeInstanceOf(InputError);
+    expect((error as InputError).problems).toEqual([expect.objectContaining({ code: 'backtest.training-too-short', field: 'backtest.min_train', message: expect.stringContaining('15 observations') })]);
+    expect((error as InputError).problems[0].hint).toBe('give at least 17, or lower max_p and max_q');
+  });
+});
+
 describe('the seasonal period at 1 and refused values', () => {
   const nile = readSeriesCsv(new URL('../fixtures/nile.csv', import.meta.url).pathname, { missing: 'error' });
 
