@@ -66,6 +66,11 @@ export interface RegressionArmaFit {
 export interface FitOptions extends LikelihoodOptions {
   /** Extra unconstrained starting points of length p + q (+ P + Q with a seasonal part). */
   starts?: readonly Float64Array[];
+  /**
+   * Start from `starts` alone, each run to the end: for a refit whose optimum is known to be
+   * near (REML from the exact-ML optimum), where the usual starts would find it again.
+   */
+  startsOnly?: boolean;
 }
 
 export function fitRegressionArma(
@@ -90,11 +95,9 @@ export function fitRegressionArma(
   const objective = (x: Float64Array): number => -likelihood.atUnconstrained(x) / nobs;
   const { order } = likelihood;
   const count = parameterCount(order);
-  const plainStarts = startFromHannanRissanen(ols.residuals, p, q).map((x) => padSeasonal(x, count));
-  const edges = seasonalEdgeStarts(order, plainStarts[0]);
-  const base = [new Float64Array(count), ...plainStarts, ...startFromSeasonalAutocorrelation(ols.residuals, order, plainStarts[0]), ...edges.full];
+  const { base, racing } = options.startsOnly === true ? { base: [...(options.starts ?? [])], racing: [] } : defaultStarts(ols.residuals, order, count, options.starts ?? []);
   const baseStarts = base.length;
-  const starts = [...base, ...edges.racing, ...(options.starts ?? [])];
+  const starts = [...base, ...racing];
   // Race the extra starts: a few iterations each, then only the most promising run to the
   // end. The zero and Hannan-Rissanen starts always run to the end.
   let evaluations = 0;
@@ -198,6 +201,16 @@ function residualSum(innovations: Float64Array, f: Float64Array, beta: Float64Ar
 }
 
 /** Observations that are not missing (NaN). */
+/** Zeros, Hannan-Rissanen and the seasonal starts run to the end; the seasonal edges and the caller's race. */
+function defaultStarts(residuals: Float64Array, order: SeasonalArmaOrder, count: number, given: readonly Float64Array[]): { base: Float64Array[]; racing: Float64Array[] } {
+  const plainStarts = startFromHannanRissanen(residuals, order.p, order.q).map((x) => padSeasonal(x, count));
+  const edges = seasonalEdgeStarts(order, plainStarts[0]);
+  return {
+    base: [new Float64Array(count), ...plainStarts, ...startFromSeasonalAutocorrelation(residuals, order, plainStarts[0]), ...edges.full],
+    racing: [...edges.racing, ...given],
+  };
+}
+
 export function countObserved(y: Float64Array): number {
   let count = 0;
   for (let t = 0; t < y.length; t++) if (!Number.isNaN(y[t])) count++;

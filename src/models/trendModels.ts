@@ -215,7 +215,9 @@ function restrictedFit(kind: TrendModelKind, design: TrendDesign, ml: Regression
     ...designWorkspace(design),
     estimation: 'reml',
     seasonal,
+    // REML moves the optimum a little from exact ML's; the usual starts would only find it again.
     starts: [ml.unconstrained],
+    startsOnly: true,
   });
   if (!fit.converged) return 'not-converged';
   const verdict = admissibility(fit, kind === 'stochastic');
