@@ -105,8 +105,8 @@ export const evidenceWording = {
       : `Coefficients, innovation variance (${a.sigma2}) and standard errors by exact maximum likelihood. The fit ${a.converged}.`),
   seasonalHeading: 'Seasonal pattern',
   patternColumns: { average: 'Average effect', fixedLine: 'Fixed pattern, deterministic trend' },
-  patternCaption: (transformed: boolean) =>
-    `Seasonal effect of each month or quarter above or below the trend${transformed ? ', on the modelling scale' : ''}: averaged over the whole history and in the first and last complete years (STL decomposition), and the fixed pattern the deterministic trend model estimated, where it has one.`,
+  patternCaption: (transformed: boolean, period: number) =>
+    `Seasonal effect of each ${period === 12 ? 'month' : 'quarter'} above or below the trend${transformed ? ', on the modelling scale' : ''}: averaged over the whole history and in the first and last complete years (STL decomposition), and the fixed pattern the deterministic trend model estimated, where it has one.`,
   seasonName: (period: number, season: number) =>
     period === 12 ? ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'][season - 1] : `Q${season}`,
   seasonalNone: 'The configuration says the series has no seasonal pattern to model (seasonally adjusted data), so neither model has a seasonal part.',
@@ -118,7 +118,7 @@ export const evidenceWording = {
     if (part.harmonics === 0 && part.P + part.Q === 0 && !(kind === 'stochastic' && part.seasonal_differences)) {
       return fixedByConfig
         ? 'Seasonal part, as fixed in the configuration: none.'
-        : 'Seasonal part: none. Neither a fixed seasonal pattern nor one that drifts lowered AICc, so the data show no seasonality this model needs.';
+        : 'Seasonal part: none. No selectable fit with a seasonal pattern, fixed or drifting, had a lower AICc, so the data show no seasonality this model needs.';
     }
     const pieces = [
       part.harmonics > 0

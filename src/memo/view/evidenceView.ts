@@ -120,5 +120,5 @@ function patternTable(record: AnalysisRecord): SeasonalPatternTable | null {
       ...(fixed === null ? [] : [formatSignificant(fixed[season - 1], 3)]),
     ],
   }));
-  return { caption: evidenceWording.patternCaption(record.series.transform.kind !== 'none'), columns, rows };
+  return { caption: evidenceWording.patternCaption(record.series.transform.kind !== 'none', found.period), columns, rows };
 }
