@@ -26,6 +26,15 @@ export type Estimation = (typeof ESTIMATION_METHODS)[number];
 /** The back-transformed median, or the bias-adjusted mean. */
 export type PointForecast = (typeof POINT_FORECASTS)[number];
 
+/**
+ * What a monthly or quarterly series' figure for a whole calendar year is: the sum of its
+ * months or quarters (a flow: deliveries, sales) or their average (a level or a rate: a price,
+ * a temperature, a stock). The tool cannot tell which a series is; the default is the one that
+ * means something for both (builtInSettings.ts).
+ */
+export const YEAR_FIGURES = ['total', 'average'] as const;
+export type YearFigure = (typeof YEAR_FIGURES)[number];
+
 export const MISSING_POLICIES = ['error', 'allow'] as const;
 export type MissingPolicy = (typeof MISSING_POLICIES)[number];
 
@@ -84,6 +93,8 @@ export interface AnalysisSettings {
   /** Whether the intervals include the uncertainty of the estimated trend coefficients. */
   readonly coefficient_uncertainty: boolean;
   readonly point: PointForecast;
+  /** A monthly or quarterly series' figure for the next full calendar year: the total or the average of its periods (unused for annual series). */
+  readonly year_figure: YearFigure;
   /** How the chosen order's coefficients are estimated; the order is chosen by AICc on the exact likelihood either way. */
   readonly estimation: Estimation;
   readonly seasonal: SeasonalSetting;

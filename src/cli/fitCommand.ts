@@ -29,6 +29,10 @@ Options:
                             (default: ${BUILT_IN.levels.join(',')})
   --no-coef-uncertainty     intervals from the ARMA process alone, without coefficient uncertainty
   --point median|mean       back-transformed median (default) or bias-adjusted mean
+  --year-figure total|average
+                            monthly and quarterly series: the next full year's figure, its
+                            periods added up (a flow) or their average (a level or a rate;
+                            default)
   --seasonal auto|none      monthly and quarterly series: a seasonal part chosen from the data
                             (default), or none for seasonally adjusted data
   --estimation reml|ml      the chosen order's coefficients by restricted maximum likelihood

@@ -11,6 +11,11 @@ export const BUILT_IN_SETTINGS = {
   levels: [80, 95],
   coefficient_uncertainty: true,
   point: 'median',
+  // The average of a year's months means something for a flow too (its mean month, in the
+  // series' own units); the total of a level or a rate (twelve temperatures added up) means
+  // nothing. So a series that says nothing gets the figure that is never wrong, and a flow's
+  // config asks for its total.
+  year_figure: 'average',
   estimation: 'reml',
   seasonal: 'auto',
   max_p: 3,

@@ -66,6 +66,7 @@ export function resolveSettings(written: WrittenSettings, series: SeriesFacts, p
     levels,
     coefficient_uncertainty: written.coefficient_uncertainty ?? BUILT_IN.coefficient_uncertainty,
     point: written.point ?? BUILT_IN.point,
+    year_figure: written.year_figure ?? BUILT_IN.year_figure,
     estimation: written.estimation ?? BUILT_IN.estimation,
     seasonal: toSeasonal(written.seasonal ?? BUILT_IN.seasonal, series.frequency, placeOf),
     max_p: reading.max_p,

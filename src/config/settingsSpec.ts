@@ -1,5 +1,5 @@
 // The settings a config may give once under `defaults` and override per series.
-import { ESTIMATION_METHODS, MIN_BACKTEST_ORIGINS, MISSING_POLICIES, POINT_FORECASTS, RECOMMENDATION_RULES, REFIT_POLICIES, TREND_MODELS, WINDOW_KINDS } from '../base/settings.js';
+import { ESTIMATION_METHODS, MIN_BACKTEST_ORIGINS, MISSING_POLICIES, POINT_FORECASTS, RECOMMENDATION_RULES, REFIT_POLICIES, TREND_MODELS, WINDOW_KINDS, YEAR_FIGURES } from '../base/settings.js';
 import { BUILT_IN_SETTINGS as BUILT_IN, HORIZON_BY_FREQUENCY, MIN_TRAIN_FLOOR, MIN_TRAIN_PER_PARAMETER } from './builtInSettings.js';
 import { choice, decimal, flag, list, object, shapes, text, whole } from './keySpec.js';
 
@@ -103,6 +103,11 @@ export const SETTINGS_FIELDS = {
     default: BUILT_IN.coefficient_uncertainty,
   }),
   point: choice('Point forecast: the back-transformed median, or the bias-adjusted mean.', POINT_FORECASTS, { default: BUILT_IN.point }),
+  year_figure: choice(
+    "Monthly and quarterly series: the memo's figure for the next full calendar year. total: its months or quarters added up, for a flow (deliveries, sales); average: their mean, for a level or a rate (a price, a temperature, a stock), and the default because it means something for a flow too. Annual series have no such figure.",
+    YEAR_FIGURES,
+    { default: BUILT_IN.year_figure },
+  ),
   estimation: choice(
     "How the chosen order's coefficients are estimated: restricted maximum likelihood (reml), less biased when a trend is estimated from a short series, or exact maximum likelihood (ml). The order is chosen by AICc on the exact likelihood either way.",
     ESTIMATION_METHODS,

@@ -13,6 +13,7 @@ const CHOICES: Record<string, string> = {
   levels: 'Prediction interval levels',
   coefficient_uncertainty: 'Coefficient uncertainty in the intervals',
   point: 'Point forecast',
+  year_figure: 'Figure for a whole year',
   estimation: 'Estimation of the coefficients',
   seasonal: 'Seasonal part',
   max_p: 'Largest AR order searched',
@@ -123,6 +124,12 @@ function appliedValue(key: string, record: AnalysisRecord): string | undefined {
     }
     case 'point':
       return settings.point === 'median' ? 'median (back-transformed)' : 'mean (bias-adjusted)';
+    case 'year_figure': {
+      const periods = record.settings.seasonal.period;
+      if (periods === 1) return 'not used (each forecast of an annual series is a year)';
+      const unit = periods === 12 ? 'months' : 'quarters';
+      return settings.year_figure === 'total' ? `total of the ${periods} ${unit}` : `average of the ${periods} ${unit}`;
+    }
     case 'max_p':
       return String(settings.max_p);
     case 'max_q':

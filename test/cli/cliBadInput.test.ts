@@ -97,6 +97,11 @@ describe('bad commands and options', () => {
     expect(line).toContain('box-cox:LAMBDA');
   });
 
+  it('refuses a year figure that is neither total nor average', async () => {
+    const [line] = await expectProblems(['fit', LAKE_HURON, '--year-figure', 'sum'], ['--year-figure: ']);
+    expect(line).toContain('total, average');
+  });
+
   it('reports several bad options in one run, one line each', async () => {
     await expectProblems(
       ['fit', LAKE_HURON, '--bogus', '--horizon', '0', '--max-p', '99', '--levels', '120', '--transform', 'box-cox:abc', '--point', 'mode'],

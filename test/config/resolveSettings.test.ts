@@ -13,6 +13,7 @@ describe('resolveSettings', () => {
       levels: [80, 95],
       coefficient_uncertainty: true,
       point: 'median',
+      year_figure: 'average',
       estimation: 'reml',
       seasonal: { kind: 'none', period: 1 },
       max_p: 3,
@@ -77,6 +78,14 @@ describe('resolveSettings', () => {
       ]);
     }
     expect(resolveSettings({ seasonal: { ...form, harmonics: 6 } }, { frequency: 'monthly', n: 60 }).seasonal).toMatchObject({ kind: 'fixed', harmonics: 6 });
+  });
+
+  it("gives the year's figure as written, else the average, which means something for a flow and a level alike", () => {
+    // A flow's year is its total, a level's or a rate's its average (common practice): the config says which.
+    expect(resolveSettings({}, { frequency: 'monthly', n: 100 }).year_figure).toBe('average');
+    expect(resolveSettings({ year_figure: 'total' }, { frequency: 'quarterly', n: 100 }).year_figure).toBe('total');
+    // Accepted on an annual series (under defaults it applies to every series); the analysis gives such a series no yearly figure.
+    expect(resolveSettings({ year_figure: 'total' }, { frequency: 'annual', n: 100 }).year_figure).toBe('total');
   });
 
   it('turns the transform as written into the form the models take', () => {

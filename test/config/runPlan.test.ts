@@ -55,6 +55,7 @@ describe('merging defaults and overrides', () => {
       'levels',
       'coefficient_uncertainty',
       'point',
+      'year_figure',
       'estimation',
       'seasonal',
       'max_p',

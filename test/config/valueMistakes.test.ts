@@ -97,6 +97,11 @@ describe('numbers out of range', () => {
 describe('choices, periods, ids and dates', () => {
   it('suggests the closest choice', () => {
     expect(onlyProblem(seriesWith('point: meen')).text).toBe("memo.yaml:7:12: series[0].point: 'meen' is not one of median, mean; did you mean 'mean'?");
+    expect(onlyProblem(seriesWith('year_figure: sum'))).toEqual({
+      where: '7:18 series[0].year_figure',
+      code: 'config.bad-choice',
+      text: "memo.yaml:7:18: series[0].year_figure: 'sum' is not one of total, average; write one of total, average",
+    });
   });
 
   it('refuses a period that is none of the three forms, and accepts a bare year', () => {
