@@ -200,17 +200,27 @@ function residualSum(innovations: Float64Array, f: Float64Array, beta: Float64Ar
   return sum;
 }
 
-/** Observations that are not missing (NaN). */
-/** Zeros, Hannan-Rissanen and the seasonal starts run to the end; the seasonal edges and the caller's race. */
+/**
+ * Which starts run to the end (`base`) and which race. Zeros, Hannan-Rissanen, the seasonal
+ * autocorrelation start and the full seasonal edge run to the end, the other edges and the
+ * caller's race; but a seasonal fit given neighbours' optima (the searches' fits past the first)
+ * runs only the zeros and the full edge to the end and races the rest: run alone, the
+ * Hannan-Rissanen and autocorrelation starts found no optimum the race missed on the three
+ * seasonal open datasets (every candidate of all nine searches at the same log-likelihood to
+ * 1e-4, against statsmodels' exhaustive fits where we have them), and the searches took 40% less
+ * time. The full edge keeps its run: raced, UK gas's (2,1)(1,1) on seasonal differences ended
+ * 0.35 below statsmodels' fit.
+ */
 function defaultStarts(residuals: Float64Array, order: SeasonalArmaOrder, count: number, given: readonly Float64Array[]): { base: Float64Array[]; racing: Float64Array[] } {
   const plainStarts = startFromHannanRissanen(residuals, order.p, order.q).map((x) => padSeasonal(x, count));
   const edges = seasonalEdgeStarts(order, plainStarts[0]);
-  return {
-    base: [new Float64Array(count), ...plainStarts, ...startFromSeasonalAutocorrelation(residuals, order, plainStarts[0]), ...edges.full],
-    racing: [...edges.racing, ...given],
-  };
+  const moments = [...plainStarts, ...startFromSeasonalAutocorrelation(residuals, order, plainStarts[0])];
+  const zero = new Float64Array(count);
+  if (given.length > 0 && order.P + order.Q > 0) return { base: [zero, ...edges.full], racing: [...moments, ...edges.racing, ...given] };
+  return { base: [zero, ...moments, ...edges.full], racing: [...edges.racing, ...given] };
 }
 
+/** Observations that are not missing (NaN). */
 export function countObserved(y: Float64Array): number {
   let count = 0;
   for (let t = 0; t < y.length; t++) if (!Number.isNaN(y[t])) count++;

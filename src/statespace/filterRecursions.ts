@@ -292,19 +292,51 @@ export function filterColumnsScalar(ws: FilterWorkspace, columns: readonly Float
   if (ncol > 2) writeState(state, 2 * r, r, c0, c1, c2, c3);
 }
 
-/** The same recursion for state dimensions above four. */
-export function filterColumnGeneric(ws: FilterWorkspace, y: Float64Array, c: number, steadyFrom: number): void {
-  const { n, stride, phi, gains, r, state } = ws;
+/**
+ * The same recursion for state dimensions above four, or more than three columns: every
+ * column at once, time step by time step. The states sit interleaved (entry i of every column
+ * in one row of `columnStates`) in a ring of r rows: the companion transition shifts the state
+ * up by one, which the ring does by moving its head, so a step adds φ_i a_0 + K_i v to each row
+ * in place and writes the new last row.
+ */
+export function filterColumnsGeneric(ws: FilterWorkspace, columns: readonly Float64Array[], steadyFrom: number): void {
+  const { n, ncol, stride, phi, gains, r, state, weights, columnStates: ring, columnScratch: scratch } = ws;
   const out = ws.innovations;
-  const offset = c * n;
-  const base = c * r;
-  for (let i = 0; i < r; i++) state[base + i] = 0;
+  // scratch[c]: a_0 of column c before the step; scratch[ncol + c]: its innovation.
+  ring.fill(0, 0, r * ncol);
+  let head = 0;
   for (let t = 0; t < n; t++) {
-    const v = ws.weights[t] === 0 ? 0 : y[t] - state[base];
-    out[offset + t] = v;
-    const row = Math.min(t, steadyFrom) * stride;
-    const a0 = state[base];
-    for (let i = 0; i < r; i++) state[base + i] = phi[i] * a0 + (i + 1 < r ? state[base + i + 1] : 0) + gains[row + i] * v;
+    const observed = weights[t] !== 0;
+    const at = head * ncol;
+    for (let c = 0; c < ncol; c++) {
+      const a0 = ring[at + c];
+      scratch[c] = a0;
+      const value = observed ? columns[c][t] - a0 : 0;
+      scratch[ncol + c] = value;
+      out[c * n + t] = value;
+    }
+    const row = (t < steadyFrom ? t : steadyFrom) * stride;
+    // Logical row i + 1 becomes row i: physical row (head + 1 + i) mod r.
+    for (let i = 0; i < r - 1; i++) {
+      let physical = head + 1 + i;
+      if (physical >= r) physical -= r;
+      const base = physical * ncol;
+      const g = gains[row + i];
+      const f = phi[i];
+      for (let c = 0; c < ncol; c++) ring[base + c] += f * scratch[c] + g * scratch[ncol + c];
+    }
+    // The old first row becomes the last: nothing shifts into it.
+    const g = gains[row + r - 1];
+    const f = phi[r - 1];
+    for (let c = 0; c < ncol; c++) ring[at + c] = f * scratch[c] + g * scratch[ncol + c];
+    head = head + 1 === r ? 0 : head + 1;
+  }
+  for (let c = 0; c < ncol; c++) {
+    for (let i = 0; i < r; i++) {
+      let physical = head + i;
+      if (physical >= r) physical -= r;
+      state[c * r + i] = ring[physical * ncol + c];
+    }
   }
 }
 

@@ -26,6 +26,10 @@ export interface FilterWorkspace {
   readonly innovations: Float64Array;
   /** Predicted state means a_{n+1|n}, column c at [c·r, (c+1)·r). */
   readonly state: Float64Array;
+  /** The generic column pass's ring of states, r rows of ncol (filterRecursions.ts). */
+  readonly columnStates: Float64Array;
+  /** The generic column pass's a_0 and v of every column, 2·ncol. */
+  readonly columnScratch: Float64Array;
   /** Σ v_c v_d / F, ncol×ncol row-major (upper triangle filled). */
   readonly cross: Float64Array;
   readonly lyapunovScratch: Float64Array;

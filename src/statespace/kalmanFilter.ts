@@ -10,7 +10,7 @@
 // then the states and cross-products), gapFilter.ts (gaps in a differenced series).
 
 import { choleskyInto, choleskySolveInPlace } from '../linalg/smallSpd.js';
-import { accumulateCross, filterColumnGeneric, filterColumnsScalar, runChandrasekhar, runCovariance, SCALAR_STATE } from './filterRecursions.js';
+import { accumulateCross, filterColumnsGeneric, filterColumnsScalar, runChandrasekhar, runCovariance, SCALAR_STATE } from './filterRecursions.js';
 import { firstColumnScratchSize, lyapunovScratchSize, momentsScratchSize, stationaryCovariance, stationaryCovarianceFromMoments, stationaryFirstColumn } from './armaStateSpace.js';
 import type { FilterWorkspace, WorkspaceOptions } from './filterWorkspace.js';
 import { createGapScratch, runGapFilter } from './gapFilter.js';
@@ -37,6 +37,8 @@ export function createWorkspace(r: number, columns: readonly Float64Array[], opt
     weights: new Float64Array(n),
     innovations: new Float64Array(Math.max(ncol, 3) * n),
     state: new Float64Array(r * ncol),
+    columnStates: new Float64Array(r * ncol),
+    columnScratch: new Float64Array(2 * ncol),
     cross: new Float64Array(ncol * ncol),
     lyapunovScratch: new Float64Array(r > SCALAR_STATE ? momentsScratchSize(r, r) : Math.max(lyapunovScratchSize(r), firstColumnScratchSize(r, r))),
     zeros: new Float64Array(n),
@@ -95,7 +97,7 @@ export function runFilter(ws: FilterWorkspace, columns: readonly Float64Array[],
   if (ws.r <= SCALAR_STATE && ws.ncol <= 3) {
     filterColumnsScalar(ws, columns, steadyFrom);
   } else {
-    for (let c = 0; c < ws.ncol; c++) filterColumnGeneric(ws, columns[c], c, steadyFrom);
+    filterColumnsGeneric(ws, columns, steadyFrom);
     accumulateCross(ws);
   }
   return true;
