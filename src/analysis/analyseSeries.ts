@@ -1,6 +1,6 @@
 // One series → one AnalysisRecord, at settings resolved beforehand (src/config/resolveSettings.ts):
 //
-//   Series ─transform─▶ w ─fitTrendModel × 2 (order search each)─▶ fits ─┬─ forecasts (back-transformed)
+//   Series ─transform─▶ w ─fitTrendModel × 2 (order search each)─▶ fits ─┬─ forecasts (back-transformed), the next full year's figure
 //                                                                        ├─ collectEvidence
 //                                                                        ├─ runBacktest (when asked)
 //                                                                        └─ recommendModel
@@ -15,6 +15,7 @@ import type { BacktestRecord } from '../backtest/backtestRecord.js';
 import type { BacktestRun } from '../backtest/runBacktest.js';
 import { collectEvidence, type EvidenceOptions, type FittedResiduals } from '../evidence/collectEvidence.js';
 import { planSeasonal, type SeasonalPlan } from './seasonalPlan.js';
+import { nextYear } from './nextYear.js';
 import { smallestMaRootModulus, smallestRootModulus } from '../linalg/rootModulus.js';
 import { fitTrendModel, forecastTrendModel, minimumObservations, type FixedSeasonalPart, type SeasonalSearchSpec, type TrendModelFit } from '../models/trendModels.js';
 import { describeEquation } from './describeEquation.js';
@@ -71,6 +72,7 @@ export async function analyseSeries(series: Series, settings: AnalysisSettings, 
   const backtest = run.backtest ? await backtestOrReason(series, settings, fitted, run, seasonal) : undefined;
   const deterministic = modelRecord('deterministic', fitted.deterministic) as ModelRecord<DeterministicCoefficients>;
   const stochastic = modelRecord('stochastic', fitted.stochastic) as ModelRecord<StochasticCoefficients>;
+  const forecasts = { deterministic: forecastRows(fitted.deterministic, series.last, settings), stochastic: forecastRows(fitted.stochastic, series.last, settings) };
   return {
     schema: RECORD_SCHEMA,
     tool: toolVersion(),
@@ -86,10 +88,8 @@ export async function analyseSeries(series: Series, settings: AnalysisSettings, 
     },
     settings,
     models: { deterministic, stochastic },
-    forecasts: {
-      deterministic: forecastRows(fitted.deterministic, series.last, settings),
-      stochastic: forecastRows(fitted.stochastic, series.last, settings),
-    },
+    forecasts,
+    next_year: nextYear(series, settings, fitted, forecasts),
     evidence,
     seasonal: seasonal.record,
     ...(backtest === undefined

@@ -13,6 +13,8 @@ import type { InadmissibleReason } from '../models/admissibility.js';
 import type { StandardErrorMethod } from '../models/standardErrors.js';
 import type { SeasonalRecord } from './seasonalPlan.js';
 export type { SeasonalRecord } from './seasonalPlan.js';
+import type { NextYearRecord } from './nextYear.js';
+export type { NextYearRecord, YearForecast } from './nextYear.js';
 import type { Estimation } from '../base/settings.js';
 import type { RestrictedFallback } from '../models/trendModels.js';
 
@@ -186,6 +188,8 @@ export interface AnalysisRecord {
   settings: AnalysisSettings;
   models: { deterministic: ModelRecord<DeterministicCoefficients>; stochastic: ModelRecord<StochasticCoefficients> };
   forecasts: { deterministic: ForecastRow[]; stochastic: ForecastRow[] };
+  /** Monthly and quarterly series: the forecast for the next full calendar year, its total or average (`settings.year_figure`), under both models; null for annual series. */
+  next_year: NextYearRecord | null;
   evidence: EvidenceRecord;
   /** The seasonal part asked for, whether it was applied, and who decided the seasonal differences. */
   seasonal: SeasonalRecord;
