@@ -19,8 +19,8 @@ const dist = resolve(root, process.argv[2] ?? 'dist');
 rmSync(resolve(dist, 'bundle'), { recursive: true, force: true });
 await build({
   absWorkingDir: root,
-  // The command line, and the two modules worker threads load by file name.
-  entryPoints: ['cli.js', 'backtest/forecastAtOrigin.js', 'run/analysePlannedSeries.js'].map((entry) => resolve(dist, entry)),
+  // The command line, and the three modules worker threads load by file name.
+  entryPoints: ['cli.js', 'backtest/forecastAtOrigin.js', 'run/analysePlannedSeries.js', 'analysis/fitModelTask.js'].map((entry) => resolve(dist, entry)),
   outdir: resolve(dist, 'bundle'),
   entryNames: '[name]',
   chunkNames: 'chunk-[hash]',

@@ -17,7 +17,8 @@ import { collectEvidence, type EvidenceOptions, type FittedResiduals } from '../
 import { planSeasonal, type SeasonalPlan } from './seasonalPlan.js';
 import { nextYear } from './nextYear.js';
 import { smallestMaRootModulus, smallestRootModulus } from '../linalg/rootModulus.js';
-import { fitTrendModel, forecastTrendModel, minimumObservations, type FixedSeasonalPart, type SeasonalSearchSpec, type TrendModelFit } from '../models/trendModels.js';
+import { fitBothModels, type ModelTask } from './fitModelTask.js';
+import { forecastTrendModel, minimumObservations, type FixedSeasonalPart, type SeasonalSearchSpec, type TrendModelFit } from '../models/trendModels.js';
 import { describeEquation } from './describeEquation.js';
 import { RECORD_SCHEMA, type AnalysisRecord, type DeterministicCoefficients, type ForecastRow, type JsonNumber, type ModelRecord, type StochasticCoefficients } from './record.js';
 import { recommendationInput, recommendModel } from './recommendModel.js';
@@ -33,7 +34,7 @@ export interface SeriesIdentity {
 export interface AnalysisRun {
   /** Run the rolling-origin backtest and apply the recommendation rule (true), or fit and forecast only. */
   backtest: boolean;
-  /** Threads and pool for the backtest; the record does not depend on them. */
+  /** Threads for the two models' searches and the backtest, and a pool for the backtest; the record does not depend on them. */
   threads?: BacktestRun['threads'];
   pool?: BacktestRun['pool'];
   /** KPSS lag truncation (reference checks only). */
@@ -48,9 +49,14 @@ export function requiredObservations(maxP: number, maxQ: number): number {
 export async function analyseSeries(series: Series, settings: AnalysisSettings, identity: SeriesIdentity, run: AnalysisRun): Promise<AnalysisRecord> {
   const w = series.values.map((y) => transformValue(settings.transform, y));
   const seasonal = planSeasonal(series, w, settings);
-  const fitModel = (kind: TrendModelKind): TrendModelFit =>
-    fitTrendModel(kind, w, settings.max_p, settings.max_q, { estimation: settings.estimation, ...(seasonal.specs === undefined ? {} : { seasonal: seasonal.specs[kind] }) });
-  const fitted = { deterministic: fitModel('deterministic'), stochastic: fitModel('stochastic') };
+  const task = (kind: TrendModelKind): ModelTask => ({
+    kind,
+    w,
+    maxP: settings.max_p,
+    maxQ: settings.max_q,
+    options: { estimation: settings.estimation, ...(seasonal.specs === undefined ? {} : { seasonal: seasonal.specs[kind] }) },
+  });
+  const fitted = await fitBothModels({ deterministic: task('deterministic'), stochastic: task('stochastic') }, run.threads);
   const fittedResiduals = (model: TrendModelFit): FittedResiduals => ({
     residuals: model.fit.residuals,
     p: model.fit.order.p,
