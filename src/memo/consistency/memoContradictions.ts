@@ -9,10 +9,12 @@
 // - the stochastic trend's "uncertainty grows with the horizon" holds: its widest interval at
 //   the last horizon is more than MATERIAL wider than at the first;
 // - when the two models' intervals at the end of the horizon are within MATERIAL of each
-//   other, the memo says so.
+//   other, the memo says so;
+// - what it says of the next full calendar year is the record's (yearClaims.ts).
 import type { AnalysisRecord, ForecastRow } from '../../analysis/record.js';
 import { atLevel, widestLevel } from '../intervalLevels.js';
 import { consistencyWording as w } from './consistencyWording.js';
+import { yearClaims } from './yearClaims.js';
 
 /** Relative differences within this are "about the same"; beyond it a memo may call two widths different. */
 export const MATERIAL = 0.02;
@@ -41,7 +43,7 @@ export function memoContradictions(records: readonly AnalysisRecord[], html: str
   const sections = chunks(html, '<section class="series" id="', '</section>');
   return records.flatMap((record, i) => {
     const text = plainText(`${cards[i] ?? ''} ${sections[i] ?? ''}`);
-    return [...significanceClaims(text), ...narrowerClaims(record, text), ...growthClaims(record, text), ...agreementClaims(record, text)].map((problem) =>
+    return [...significanceClaims(text), ...narrowerClaims(record, text), ...growthClaims(record, text), ...agreementClaims(record, text), ...yearClaims(record, text)].map((problem) =>
       w.problem(record.series.id, problem),
     );
   });

@@ -67,7 +67,7 @@ export async function buildMemoView(input: MemoInput): Promise<MemoView> {
       reviewers: memo.reviewers.map((r) => ({ name: noLinks(r.name), role: noLinks(r.role) })),
     },
     status: { ...status, detail: noLinks(status.detail), draft: status.state === 'draft' },
-    summary: { intro: summaryIntro(sharedLevels(input)), cards: series.map((s) => s.summary) },
+    summary: { intro: summaryIntro(sharedLevels(input), series.some((s) => s.summary.year !== null)), cards: series.map((s) => s.summary) },
     series,
     revisions: await revisionsView(input),
     assumptions: input.series.map((entry, i) => ({

@@ -21,6 +21,7 @@ import { modelView, scaleNote, type ModelView } from './modelsView.js';
 import { stabilityView, type StabilityView } from './stabilityView.js';
 import { agreement } from './agreement.js';
 import { summaryCard, type SummaryCard } from './summaryView.js';
+import { yearNote } from './yearView.js';
 
 export interface SeriesView {
   anchor: string;
@@ -55,6 +56,8 @@ export interface SeriesView {
     stability: FigureView | null;
   };
   forecastTable: ForecastTable;
+  /** How the next full year's figure on page 1 was had; empty without one. */
+  yearNote: string;
   backtest: BacktestView | null;
   evidence: EvidenceView;
   models: ModelView[];
@@ -117,6 +120,7 @@ export async function seriesView(entry: MemoSeries, index: number): Promise<Seri
       stability: stability === undefined ? null : await figureView(`${anchor}-stability`, stabilityChart({ ...chartInput, stability })),
     },
     forecastTable: forecastTableView(record, decimals, units ?? ''),
+    yearNote: yearNote(record, decimals),
     backtest: backtest === undefined ? null : backtestView(backtest, record.series.frequency, decimals, scoredLevel(record)),
     evidence: evidenceView(record),
     models: [modelView(record, 'deterministic'), modelView(record, 'stochastic')],

@@ -1,5 +1,6 @@
 // One card per series for the client's summary page: the recommended model, the forecast at
-// the end of the horizon under both models with an interval per level, and the top caveat.
+// the end of the horizon under both models with an interval per level, for a monthly or
+// quarterly series the next full calendar year's figure (yearView.ts), and the top caveat.
 import type { Caveat } from '../caveats/caveat.js';
 import type { AnalysisRecord } from '../../analysis/record.js';
 import type { TrendModelKind } from '../../base/settings.js';
@@ -8,6 +9,7 @@ import { LABELS, METHOD_NAME, MODEL_GLOSS, MODEL_NAME, NOT_RUN, TEMPLATE_TEXT } 
 import { forecastCells, forecastHeads, type ForecastCells } from './forecastTableView.js';
 import { agreement } from './agreement.js';
 import { rowsFit, SHEET_WIDTH } from './tableWidth.js';
+import { summaryYear, type SummaryYear } from './yearView.js';
 
 export interface SummaryCard {
   anchor: string;
@@ -25,6 +27,8 @@ export interface SummaryCard {
   /** True when the table is too wide to sit beside the text. */
   tableBelow: boolean;
   models: (ForecastCells & { name: string; recommended: boolean })[];
+  /** The next full calendar year under both models, or why the horizon gives none; null for annual series. */
+  year: SummaryYear | null;
   caveat: { label: string; severity: Caveat['severity']; text: string } | null;
 }
 
@@ -44,10 +48,13 @@ export function summaryCard(a: { anchor: string; title: string; units?: string; 
     recommended: kind === model,
     ...forecastCells(record, kind, last, a.decimals),
   }));
+  const year = summaryYear(record, a.decimals);
+  // The recommended row carries a marker after its name.
+  const modelRows = (list: typeof models) => list.map((row) => ({ cells: [row.recommended ? `${row.name} \u25C6` : row.name, row.point, ...row.intervals], bold: row.recommended }));
   const rows = [
     { cells: [atEnd, ...heads], bold: true },
-    // The recommended row carries a marker after its name.
-    ...models.map((row) => ({ cells: [row.recommended ? `${row.name} \u25C6` : row.name, row.point, ...row.intervals], bold: row.recommended })),
+    ...modelRows(models),
+    ...(year === null || year.models.length === 0 ? [] : [{ cells: [year.head, ...heads], bold: true }, ...modelRows(year.models)]),
   ];
   return {
     anchor: a.anchor,
@@ -66,6 +73,7 @@ export function summaryCard(a: { anchor: string; title: string; units?: string; 
     heads,
     tableBelow: !rowsFit(rows, BESIDE_TEXT),
     models,
+    year,
     caveat: top === undefined ? null : { label: LABELS.severity[top.severity], severity: top.severity, text: top.text },
   };
 }
