@@ -1,6 +1,7 @@
 // The readable terminal summary of an AnalysisRecord: both models side by side, then the
-// forecast table. Plain text, fixed-width columns.
-import type { AnalysisRecord, ModelRecord } from '../analysis/record.js';
+// forecast table and, for a monthly or quarterly series, the next full calendar year. Plain
+// text, fixed-width columns.
+import type { AnalysisRecord, ModelRecord, NextYearRecord } from '../analysis/record.js';
 import { levelKey } from '../base/settings.js';
 import { formatEvidence } from './formatEvidence.js';
 import { formatBacktest } from './formatBacktest.js';
@@ -20,6 +21,7 @@ export function formatSummary(record: AnalysisRecord): string {
   lines.push(...formatEvidence(record));
   lines.push('');
   lines.push(...forecastTable(record));
+  if (record.next_year !== null && record.next_year !== undefined) lines.push('', ...yearTable(record, record.next_year));
   if (record.backtest !== undefined && record.backtest !== null) lines.push('', ...formatBacktest(record.backtest));
   if (record.backtest === null) lines.push('', `Backtest not run: ${record.backtest_unavailable ?? 'the series is too short'}`);
   if (record.recommendation !== undefined) {
@@ -83,6 +85,22 @@ function forecastTable(record: AnalysisRecord): string[] {
   });
   const scale = record.settings.coefficient_uncertainty ? 'with' : 'without';
   return [`Forecasts (intervals ${scale} coefficient uncertainty; point = ${record.settings.point}):`, ...alignRows(rows)];
+}
+
+/** The next full year's total or average under both models, or why the horizon gives none. */
+function yearTable(record: AnalysisRecord, year: NextYearRecord): string[] {
+  if (!year.available) return [`Next full year ${year.year}: the horizon ends at ${year.horizon_end}, before the year is complete, so no figure is given.`];
+  const levels = record.settings.levels.map(levelKey);
+  const rows: string[][] = [['', 'point', ...levels.map((level) => `${level}%`)]];
+  for (const kind of ['deterministic', 'stochastic'] as const) {
+    const figure = year[kind];
+    if (figure !== null) rows.push([kind, num(figure.point, 6), ...levels.map((level) => `${num(figure.intervals[level][0], 6)} to ${num(figure.intervals[level][1], 6)}`)]);
+  }
+  const how =
+    year.method === 'simulation'
+      ? `simulated from the joint model-scale forecasts, ${year.draws ?? 0} draws; point = ${record.settings.point === 'median' ? 'median of the draws' : 'the period means combined'}`
+      : 'exact, from the joint forecast errors';
+  return [`Next full year ${year.year}, the ${year.figure} of ${year.first_period} to ${year.last_period} (${how}):`, ...alignRows(rows)];
 }
 
 function estimate(value: number, se: number | null): string {

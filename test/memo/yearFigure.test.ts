@@ -11,7 +11,7 @@ import { renderMemoHtml } from '../../src/memo/renderMemoHtml.js';
 import { summaryCard } from '../../src/memo/view/summaryView.js';
 import { yearNote } from '../../src/memo/view/yearView.js';
 import { assumptionsRegister } from '../../src/run/assumptionsRegister.js';
-import { fitRecord } from '../support/runCli.js';
+import { fitRecord, runCli } from '../support/runCli.js';
 import { handMadeRecommendation } from './handMadeParts.js';
 import { sampleInput } from './sampleInput.js';
 
@@ -63,6 +63,16 @@ describe('a monthly flow, its total', () => {
     const row = assumptionsRegister(plan, record, 'memo.yaml').find((entry) => entry.choice === 'Figure for a whole year');
     expect(row).toEqual({ choice: 'Figure for a whole year', value: 'total of the 12 months', basis: 'memo.yaml, line 17 (series[0].year_figure)', set_by: 'config' });
   });
+
+  it("is in fit's terminal summary too", async () => {
+    const run = await runCli(['fit', DEATHS, '--year-figure', 'total', '--max-p', '1', '--max-q', '1']);
+    expect(run.code).toBe(0);
+    const lines = run.stdout.split('\n');
+    const at = lines.indexOf('Next full year 1979, the total of 1979-01 to 1979-12 (exact, from the joint forecast errors):');
+    expect(at).toBeGreaterThan(0);
+    expect(lines[at + 1].trim().split(/\s+/)).toEqual(['point', '80%', '95%']);
+    expect(lines[at + 3].startsWith('stochastic')).toBe(true);
+  }, 60_000);
 
   it('says plainly when the horizon stops inside the year, and gives no partial year', async () => {
     const short = await fitRecord(DEATHS, ['--year-figure', 'total', '--max-p', '1', '--max-q', '1', '--horizon', '11']);
