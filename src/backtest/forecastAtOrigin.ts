@@ -1,10 +1,12 @@
 // One model at one backtest origin: refit on the training window by the refit policy and
 // forecast B steps on the model scale. A pure function of its task, so it runs unchanged
-// inline or on a worker thread (the pool calls this module's `forecastAtOrigin` export),
-// and the results do not depend on which thread ran it.
+// inline or on a worker thread (the pool calls this module's `forecastChain` export),
+// and the results do not depend on which thread ran it. Tasks of one chain (consecutive
+// origins of one model) run in order, each seasonal search warm from the previous origin's
+// candidates (seasonalSearch.ts); chains are fixed by the plan, never by the thread count.
 import { createProfileLikelihood } from '../models/profileLikelihood.js';
 import type { Estimation, RefitPolicy, TrendModelKind } from '../base/settings.js';
-import { fitTrendModel, fitTrendModelAtOrder, forecastTrendModel, trendDesign, type FixedSeasonalPart, type SeasonalSearchSpec } from '../models/trendModels.js';
+import { fitTrendModel, fitTrendModelAtOrder, forecastTrendModel, trendDesign, type CandidateOptima, type FixedSeasonalPart, type SeasonalSearchSpec } from '../models/trendModels.js';
 import { forecastRegressionArma, type ForecastMoments } from '../statespace/forecast.js';
 import type { ArmaOrder } from './backtestRecord.js';
 
@@ -34,6 +36,12 @@ export interface OriginTask {
   order?: ArmaOrder;
   /** The parameters under `fixed`. */
   parameters?: FixedParameters;
+  /**
+   * Tasks with the same chain run in task order in one thread, a reselecting seasonal search
+   * starting warm from the previous task's candidates (the previous origin of the same model);
+   * absent: the task runs alone, cold.
+   */
+  chain?: number;
 }
 
 export interface OriginForecast {
@@ -48,12 +56,26 @@ export interface OriginForecast {
 }
 
 export function forecastAtOrigin(task: OriginTask): OriginForecast {
-  if (task.refit === 'fixed') return forecastWithFixedParameters(task);
+  return forecastWarm(task, undefined).forecast;
+}
+
+/** The tasks of one chain, in order, each search warm from the one before. */
+export function forecastChain(tasks: readonly OriginTask[]): OriginForecast[] {
+  let optima: CandidateOptima | undefined;
+  return tasks.map((task) => {
+    const result = forecastWarm(task, optima);
+    optima = result.optima;
+    return result.forecast;
+  });
+}
+
+function forecastWarm(task: OriginTask, warm: CandidateOptima | undefined): { forecast: OriginForecast; optima?: CandidateOptima } {
+  if (task.refit === 'fixed') return { forecast: forecastWithFixedParameters(task) };
   const model =
     task.refit === 'reselect'
-      ? fitTrendModel(task.kind, task.w, task.maxP, task.maxQ, { estimation: task.estimation, ...(task.seasonal === undefined ? {} : { seasonal: task.seasonal }) })
+      ? fitTrendModel(task.kind, task.w, task.maxP, task.maxQ, { estimation: task.estimation, ...(task.seasonal === undefined ? {} : { seasonal: task.seasonal }), warm })
       : fitTrendModelAtOrder(task.kind, task.w, requireOrder(task).p, requireOrder(task).q, { estimation: task.estimation, ...(task.seasonal === undefined ? {} : { seasonal: fixedPart(task.seasonal) }) });
-  return originForecast(model.fit, forecastTrendModel(model, task.horizon));
+  return { forecast: originForecast(model.fit, forecastTrendModel(model, task.horizon)), optima: model.optima };
 }
 
 /** The part `reestimate` keeps: the full-series choice, given as a fixed part. */

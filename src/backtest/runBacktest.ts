@@ -24,6 +24,14 @@ import { scoreHorizon } from './scoreHorizon.js';
 
 /** Origins are one observation apart. */
 const ORIGIN_STEP = 1;
+/**
+ * Longest chain of origins whose seasonal searches run warm, each from the one before: the
+ * first of a chain searches cold. Each model's origins are cut into two chains (the two
+ * cores of a small machine each get one of each model), of at most this many, so that a
+ * candidate that a warm start keeps at a lesser optimum is searched afresh within ten origins.
+ * The chains depend on the plan alone, never on the thread count.
+ */
+const MAX_CHAIN = 10;
 
 export interface BacktestRun {
   /** Orders chosen on the full sample, kept by the `reestimate` and `fixed` policies; searched on the full sample when absent. */
@@ -75,8 +83,10 @@ export async function runBacktest(input: BacktestInput, settings: AnalysisSettin
   const plan = { ...planned, origins: observedOrigins };
   if (plan.origins.length === 0) throw new InputError(backtestMessages.seriesTooShort(n, horizon, minTrainingLength));
 
-  const tasks: OriginTask[] = plan.origins.flatMap(({ start, end }) =>
-    TREND_MODELS.map((kind) => ({
+  // A reselecting seasonal search at each origin starts warm from the previous origin's (forecastAtOrigin.ts).
+  const chainLength = refit === 'reselect' && run.seasonal !== undefined ? Math.min(MAX_CHAIN, Math.ceil(plan.origins.length / 2)) : 0;
+  const tasks: OriginTask[] = plan.origins.flatMap(({ start, end }, o) =>
+    TREND_MODELS.map((kind, m) => ({
       kind,
       w: data.w.slice(start, end),
       horizon,
@@ -87,6 +97,7 @@ export async function runBacktest(input: BacktestInput, settings: AnalysisSettin
       ...(run.seasonal === undefined ? {} : { seasonal: { ...run.seasonal[kind], firstSeason: (run.seasonal[kind].firstSeason + start) % run.seasonal[kind].period } }),
       order: full?.orders[kind],
       parameters: full?.parameters === undefined ? undefined : parametersForWindow(kind, full.parameters[kind], start),
+      ...(chainLength === 0 ? {} : { chain: m * plan.origins.length + Math.floor(o / chainLength) }),
     })),
   );
   const threads = run.threads ?? Math.min(availableParallelism(), plan.origins.length);

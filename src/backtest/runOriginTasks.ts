@@ -1,13 +1,13 @@
 // Runs the origin tasks inline (one thread) or on a pool of worker threads. Each task is a
-// pure function of its input and results are returned in task order, so the output does
-// not depend on the thread count. The worker module sits next to this one (see
-// parallel/workerModule.ts).
+// pure function of its input, tasks of one chain run in order in one thread (forecastAtOrigin.ts),
+// and results are returned in task order, so the output does not depend on the thread count.
+// The worker module sits next to this one (see base/workerModule.ts).
 //
 // A caller that runs many backtests (a batch of memos) opens one pool and passes it to
 // every runBacktest, so threads start once; otherwise each backtest opens its own.
 import Tinypool from 'tinypool';
 import { workerModule } from '../base/workerModule.js';
-import { forecastAtOrigin, type OriginForecast, type OriginTask } from './forecastAtOrigin.js';
+import { forecastChain, type OriginForecast, type OriginTask } from './forecastAtOrigin.js';
 
 export interface OriginPool {
   readonly threads: number;
@@ -17,21 +17,51 @@ export interface OriginPool {
 
 /** A pool of `threads` workers for origin tasks; close it when done. */
 export function openOriginPool(threads: number): OriginPool {
-  const pool = new Tinypool({ filename: workerModule(import.meta.url, 'forecastAtOrigin', 'forecastAtOrigin'), name: 'forecastAtOrigin', minThreads: threads, maxThreads: threads });
+  const pool = new Tinypool({ filename: workerModule(import.meta.url, 'forecastAtOrigin', 'forecastChain'), name: 'forecastChain', minThreads: threads, maxThreads: threads });
   return {
     threads,
-    run: (tasks) => Promise.all(tasks.map((task): Promise<OriginForecast> => pool.run(task))),
+    run: (tasks) => inChains(tasks, (chain) => pool.run(chain) as Promise<OriginForecast[]>),
     close: () => pool.destroy(),
   };
 }
 
 export async function runOriginTasks(tasks: readonly OriginTask[], threads: number, shared?: OriginPool): Promise<OriginForecast[]> {
-  if (shared !== undefined && tasks.length > 1) return shared.run(tasks);
-  if (threads <= 1 || tasks.length <= 1) return tasks.map(forecastAtOrigin);
-  const pool = openOriginPool(Math.min(threads, tasks.length));
+  const chains = chainsOf(tasks);
+  if (shared !== undefined && chains.length > 1) return shared.run(tasks);
+  if (threads <= 1 || chains.length <= 1) return inChains(tasks, (chain) => Promise.resolve(forecastChain(chain)));
+  const pool = openOriginPool(Math.min(threads, chains.length));
   try {
     return await pool.run(tasks);
   } finally {
     await pool.close();
   }
+}
+
+/** The tasks' chains, each in task order: tasks sharing a `chain` together, every other task alone. */
+function chainsOf(tasks: readonly OriginTask[]): number[][] {
+  const byChain = new Map<number, number[]>();
+  const chains: number[][] = [];
+  tasks.forEach((task, index) => {
+    if (task.chain === undefined) {
+      chains.push([index]);
+      return;
+    }
+    const chain = byChain.get(task.chain);
+    if (chain !== undefined) chain.push(index);
+    else {
+      const fresh = [index];
+      byChain.set(task.chain, fresh);
+      chains.push(fresh);
+    }
+  });
+  return chains;
+}
+
+/** Runs each chain with `run` and puts the forecasts back in task order. */
+async function inChains(tasks: readonly OriginTask[], run: (chain: OriginTask[]) => Promise<OriginForecast[]>): Promise<OriginForecast[]> {
+  const chains = chainsOf(tasks);
+  const results = new Array<OriginForecast>(tasks.length);
+  const done = await Promise.all(chains.map((chain) => run(chain.map((index) => tasks[index]))));
+  chains.forEach((chain, c) => chain.forEach((index, i) => (results[index] = done[c][i])));
+  return results;
 }

@@ -29,6 +29,7 @@ import {
   fixedPartDesign,
   searchSeasonalModel,
   searchWithSeasonalPart,
+  type CandidateOptima,
   type FixedSeasonalPart,
   type SeasonalCandidate,
   type SeasonalChoice,
@@ -37,7 +38,7 @@ import {
 import { designWorkspace, trendDesign, type TrendDesign } from './trendDesign.js';
 
 export { designWorkspace, trendDesign, type DesignSeasonality, type SeasonalLevels, type TrendDesign } from './trendDesign.js';
-export type { FixedSeasonalPart, SeasonalCandidate, SeasonalChoice, SeasonalSearchSpec } from './seasonalSearch.js';
+export type { CandidateOptima, FixedSeasonalPart, SeasonalCandidate, SeasonalChoice, SeasonalSearchSpec } from './seasonalSearch.js';
 
 /** The seasonal side of a model's order, for `minimumObservations`. */
 export interface SeasonalOrderSize {
@@ -68,6 +69,8 @@ export interface TrendModelOptions {
    * analyst (then only (p, q) is searched). Absent: no seasonal part.
    */
   seasonal?: SeasonalSearchSpec | FixedSeasonalPart;
+  /** A seasonal search's candidates start from these optima of the same search on a neighbouring series (`searchSeasonalModel`). */
+  warm?: CandidateOptima;
 }
 
 export interface FixedOrderOptions {
@@ -119,6 +122,8 @@ export interface TrendModelFit {
     aicc: number;
     reason: InadmissibleReason;
   } & Partial<SeasonalChoice & { seasonalAr: number[]; seasonalMa: number[] }>;
+  /** A seasonal search's candidates' optima, for a warm search of a neighbouring series; absent otherwise. */
+  optima?: CandidateOptima;
   /** Standard errors for the regression coefficients (GLS) and the ARMA factors (observed information). */
   stderr: { regression: Record<string, number>; ar: number[]; ma: number[]; seasonalAr: number[]; seasonalMa: number[]; method: StandardErrorMethod };
 }
@@ -142,9 +147,9 @@ function fitSeasonalTrendModel(
   spec: SeasonalSearchSpec | FixedSeasonalPart,
   options: TrendModelOptions,
 ): TrendModelFit {
-  const search = 'harmonics' in spec ? searchWithSeasonalPart(kind, w, maxP, maxQ, spec) : searchSeasonalModel(kind, w, maxP, maxQ, spec);
+  const search = 'harmonics' in spec ? searchWithSeasonalPart(kind, w, maxP, maxQ, spec) : searchSeasonalModel(kind, w, maxP, maxQ, spec, options.warm);
   const part = { ...seasonalPart(search.design, search.choice), droppedFactors: search.droppedFactors };
-  const model = describeFit(kind, search.design, search.best, search.bestAicc, search.candidates, part, options);
+  const model = { ...describeFit(kind, search.design, search.best, search.bestAicc, search.candidates, part, options), optima: search.optima };
   const { setAside } = search;
   if (setAside === null) return model;
   const { factors, order } = setAside.fit;
