@@ -24,6 +24,9 @@ export const backtestNotes = {
     return `${count} of the ${fits} origin fits stopped before the optimiser converged; their forecasts are scored as they are.`;
   },
   mapeUnavailable: 'MAPE is not given where an actual value is zero or negative.',
+  warmSearches(chainLength: number): string {
+    return `To save time, the origins' seasonal searches are grouped in runs of up to ${chainLength} consecutive origins: the first of each run searches from the usual starting values, each later one starts every candidate from its estimate at the origin before (data up to that origin only, so no look-ahead).`;
+  },
   originsRaised(requested: number, planned: number, period: number): string {
     const reach = planned >= period ? `one ending in each of the ${period} seasons` : `as many of the ${period} seasons as the series allows`;
     return `${requested} origin${requested === 1 ? ' was' : 's were'} asked for; ${planned} are used so that the origins cover the seasonal cycle (${reach}).`;

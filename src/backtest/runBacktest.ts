@@ -114,6 +114,7 @@ export async function runBacktest(input: BacktestInput, settings: AnalysisSettin
   if (plan.available < plan.requested) notes.push(backtestNotes.originsCut(plan.requested, plan.origins.length, minTrainingLength));
   if (plan.planned > plan.requested) notes.push(backtestNotes.originsRaised(plan.requested, plan.planned, period));
   if (full !== undefined) notes.push(backtestNotes.lookAhead(refit));
+  if (chainLength > 1) notes.push(backtestNotes.warmSearches(chainLength));
   if (skippedOrigins > 0) notes.push(backtestNotes.missingOrigins(skippedOrigins));
   if (seasonsCovered < period) notes.push(backtestNotes.seasonsMissed(seasonsCovered, period));
   const unconverged = results.filter((result) => !result.converged).length;
