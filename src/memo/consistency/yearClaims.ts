@@ -10,6 +10,7 @@
 //   or why there is none.
 import type { AnalysisRecord, NextYearRecord, YearForecast } from '../../analysis/record.js';
 import type { TrendModelKind } from '../../base/settings.js';
+import { MISSING } from '../format/formatNumber.js';
 import { atLevel } from '../intervalLevels.js';
 import { consistencyWording as w } from './consistencyWording.js';
 
@@ -26,9 +27,10 @@ function printed(value: string): { value: number; slack: number } {
   return { value: Number(plain), slack: 0.5 * 10 ** -decimals };
 }
 
-/** Whether the printed text is `actual` rounded (with room for the binary representation). */
+/** Whether the printed text is `actual` rounded (with room for the binary representation), or the mark for no number where there is none. */
 function shows(text: string, actual: number | null | undefined): boolean {
-  if (actual === null || actual === undefined || !Number.isFinite(actual)) return false;
+  // An interval end a Box-Cox inverse ran off its range is infinite in the record, null in its JSON, and printed as the missing mark.
+  if (actual === null || actual === undefined || !Number.isFinite(actual)) return text === MISSING;
   const { value, slack } = printed(text);
   return Math.abs(value - actual) <= slack * (1 + 1e-9) + 1e-12 * Math.abs(actual);
 }
