@@ -35,6 +35,7 @@ export type {
   Transform,
   TrendModelKind,
   WindowKind,
+  YearFigure,
 } from './base/settings.js';
 
 export { loadConfig } from './config/loadConfig.js';
