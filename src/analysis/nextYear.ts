@@ -49,6 +49,12 @@ export interface YearForecast {
   sd: number;
   /** The same were the periods' forecast errors independent (the same draws' method): how much the joint distribution matters. */
   sd_if_independent: number;
+  /**
+   * With a simulation, the largest 95% Monte Carlo margin of an interval end, half the distance
+   * between the order statistics that bound its quantile, as a share of that interval's
+   * half-width; null when the figure is exact.
+   */
+  simulation_error: number | null;
 }
 
 export interface NextYearRecord {
@@ -168,7 +174,7 @@ function normalFigure(year: YearForecasts, settings: FigureSettings): YearForeca
     const z = normalInv(0.5 + level / 200);
     intervals[levelKey(level)] = [point - z * sd, point + z * sd];
   }
-  return { point, intervals, from_points: a * year.points.reduce((sum, value) => sum + value, 0), sd, sd_if_independent: a * Math.sqrt(diagonal) };
+  return { point, intervals, from_points: a * year.points.reduce((sum, value) => sum + value, 0), sd, sd_if_independent: a * Math.sqrt(diagonal), simulation_error: null };
 }
 
 /** With a transform: seeded draws from the joint Gaussian on the model scale, back-transformed and combined. */
@@ -191,7 +197,32 @@ function simulatedFigure(year: YearForecasts, settings: FigureSettings): YearFor
     from_points: fromPoints,
     sd: standardDeviation(joint),
     sd_if_independent: standardDeviation(apart),
+    simulation_error: simulationError(sorted, intervals, settings.levels),
   };
+}
+
+/**
+ * How far another seed could move the interval's ends: for the p-quantile of N draws, the order
+ * statistics N·p ± z·√(N p (1 − p)) bound the true quantile with probability about 95% whatever
+ * the distribution (the binomial count of draws below it; common practice, e.g. Conover 1999,
+ * §3.2, from memory). Half their distance, over the interval's half-width, the largest over
+ * every end and level.
+ */
+function simulationError(sorted: Float64Array, intervals: IntervalsByLevel, levels: readonly number[]): number {
+  const n = sorted.length;
+  const z = normalInv(0.975);
+  let largest = 0;
+  for (const level of levels) {
+    const [low, high] = intervals[levelKey(level)];
+    const halfWidth = (high - low) / 2;
+    for (const p of [0.5 - level / 200, 0.5 + level / 200]) {
+      const spread = z * Math.sqrt(n * p * (1 - p));
+      const below = sorted[Math.max(0, Math.floor(n * p - spread))];
+      const above = sorted[Math.min(n - 1, Math.ceil(n * p + spread))];
+      largest = Math.max(largest, (above - below) / 2 / halfWidth);
+    }
+  }
+  return largest;
 }
 
 /** YEAR_DRAWS figures a·Σ T⁻¹(μ + L z), z from the fixed seed (the same z for every call). */

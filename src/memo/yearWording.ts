@@ -55,7 +55,8 @@ export const yearWording = {
     /** Whether those shares are all below 100% (the errors add up), all above (they offset), or neither. */
     dependence: 'adds' | 'offsets' | 'neither';
     /** Null without a transform. */
-    simulation: { scale: string; draws: string; point: 'median' | 'mean'; fromPoints: Record<TrendModelKind, string> } | null;
+    /** `error`: the larger model's simulation error as a percentage of the interval's half-width. */
+    simulation: { scale: string; draws: string; point: 'median' | 'mean'; fromPoints: Record<TrendModelKind, string>; error: string } | null;
   }) => {
     const { parts } = a;
     const why =
@@ -76,7 +77,7 @@ export const yearWording = {
         : `The point is ${pointConvention(a.figure, parts, 'mean')}.`;
     return (
       `${opening} Modelled on the ${simulation.scale} scale, the ${a.figure} of back-transformed values has no formula, so it is simulated: ${simulation.draws} draws of the ${parts.periods} ${parts.part}s together from each fitted model, each back-transformed and ${a.figure === 'total' ? 'added up' : 'averaged'}, the interval running between the draws\u2019 matching percentiles. ` +
-      `The draws are the same on every run (a fixed seed); other seeds move the interval\u2019s ends by about 1% of its half-width. ${pointText}`
+      `The draws are the same on every run (a fixed seed); by their own order statistics, another seed would move the interval\u2019s ends by up to ${simulation.error}% of its half-width (95% bounds). ${pointText}`
     );
   },
 } as const;

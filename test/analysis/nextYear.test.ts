@@ -82,6 +82,7 @@ describe('without a transform: exact', () => {
       expectRelative(figure.intervals['80'][0], figure.point - Z80 * figure.sd, 1e-14);
       // The errors of neighbouring months share their shocks: the joint sd is well above the independent one.
       expect(figure.sd).toBeGreaterThan(1.5 * figure.sd_if_independent);
+      expect(figure.simulation_error).toBeNull();
     }
   });
 
@@ -132,6 +133,23 @@ describe.each(lognormal.cases)('with a log transform: simulated ($id)', (c) => {
     // The median of the sum is not the sum of the medians (the log-normal's right skew adds up).
     expect(figure.from_points).toBeCloseTo(medians.reduce((sum, value) => sum + value, 0), 9);
     expect(figure.point).toBeGreaterThan(figure.from_points);
+  });
+
+  it('bounds its own Monte Carlo error by the order statistics, and the reference lies within those bounds', () => {
+    // Over 30 seeds the 95% ends moved by 0.7–1.4% of the half-width (one standard deviation;
+    // test/fixtures/README.md), so 95% margins of about 1.5–3% are expected.
+    const error = figure.simulation_error ?? Number.NaN;
+    expect(error).toBeGreaterThan(0.005);
+    expect(error).toBeLessThan(0.05);
+    for (const [level, low, high] of [
+      ['95', '0.025', '0.975'],
+      ['80', '0.1', '0.9'],
+    ] as const) {
+      const [ours0, ours1] = figure.intervals[level];
+      const margin = (error * (ours1 - ours0)) / 2;
+      expect(Math.abs(ours0 - c.quantiles[low])).toBeLessThanOrEqual(margin);
+      expect(Math.abs(ours1 - c.quantiles[high])).toBeLessThanOrEqual(margin);
+    }
   });
 
   it("has the sum's exact standard deviation within the draws' error, and uses the correlations", () => {

@@ -107,6 +107,8 @@ describe('in the rendered memo', () => {
     expect(html).toContain('2010 as a whole (the average of its 4 quarters): ');
     expect(html).toContain('(the median of the simulated averages, as the quarterly figures are medians)');
     expect(html).toContain('it is simulated: 20,000 draws of the 4 quarters together from each fitted model');
+    const error = 100 * Math.max(gdp().next_year?.deterministic?.simulation_error ?? 0, gdp().next_year?.stochastic?.simulation_error ?? 0);
+    expect(html).toContain(`another seed would move the interval\u2019s ends by up to ${error.toFixed(1)}% of its half-width (95% bounds)`);
     expect(html).toContain('<tbody class="year-rows">');
     // Lake Huron and the Nile are annual: one set of year rows in the memo, GDP's.
     expect(html.split('<tbody class="year-rows">')).toHaveLength(2);
@@ -132,6 +134,7 @@ describe('in the rendered memo', () => {
     expect(altered((record) => record.next_year?.deterministic && (record.next_year.deterministic.sd_if_independent *= 1.2))).toEqual([
       'series us-real-gdp: the note on the figure for 2010 does not agree with the record\'s figures',
     ]);
+    expect(altered((record) => record.next_year?.stochastic && (record.next_year.stochastic.simulation_error = 0.5))).toEqual([expect.stringContaining("the memo puts the simulation's error at")]);
     expect(altered((record) => record.next_year && (record.next_year.year = '2011'))).toContainEqual('series us-real-gdp: the record has a figure for 2011 and the summary does not give the recommended model\'s');
   });
 });

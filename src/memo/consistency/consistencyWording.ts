@@ -18,6 +18,8 @@ export const consistencyWording = {
   yearHorizonShort: /The forecast horizon ends at (\S+), before (\d{4}) is complete/g,
   yearNote:
     /The figure for (\d{4}) on the first page is the (total|average) of its \d+ (?:month|quarter)s: (\S+) under the deterministic trend and (\S+) under the stochastic trend\. .*?Had the (?:month|quarter)s been taken as independent, the (?:total|average)\u2019s standard deviation would be (\S+)% of the one used under the deterministic trend and (\S+)% under the stochastic trend(: the errors of later)?/g,
+  yearSimulationError: /another seed would move the interval\u2019s ends by up to (\S+)% of its half-width/g,
+  yearSimulationWrong: (said: string) => `the memo puts the simulation's error at ${said}% of the interval's half-width, which is not the record's`,
   yearFigure: (year: string, model: string, said: string) => `the memo gives ${said} for ${year} under the ${model} trend, which is not the record's figure`,
   yearWithoutFigure: (year: string) => `the memo gives a figure for ${year}, for which the record has none`,
   yearNotShort: (year: string, end: string) => `the memo says the horizon ends at ${end}, before ${year} is complete, which the record does not say`,

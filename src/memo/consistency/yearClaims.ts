@@ -4,8 +4,8 @@
 //   summary sentence are the record's, at the printed precision;
 // - the horizon-short sentence appears only where the record has no figure, and names the
 //   horizon's end;
-// - the method note's points and independence shares are the record's, and it says the errors
-//   add up only where every share is below 100%;
+// - the method note's points, independence shares and simulation error are the record's, and it
+//   says the errors add up only where every share is below 100%;
 // - a monthly or quarterly series' card says one or the other: the recommended model's figure,
 //   or why there is none.
 import type { AnalysisRecord, NextYearRecord, YearForecast } from '../../analysis/record.js';
@@ -17,7 +17,7 @@ import { consistencyWording as w } from './consistencyWording.js';
 /** Each contradiction between `text` (a series' card and section as plain text) and its record's year figure. */
 export function yearClaims(record: AnalysisRecord, text: string): string[] {
   const year = record.next_year ?? null;
-  return [...summaryClaims(year, text), ...horizonClaims(year, text), ...noteClaims(year, text), ...missingClaims(record, year, text)];
+  return [...summaryClaims(year, text), ...horizonClaims(year, text), ...noteClaims(year, text), ...simulationClaims(year, text), ...missingClaims(record, year, text)];
 }
 
 /** A number as the memo prints it ("47,837", "−1.25") and half a unit of its last printed digit. */
@@ -71,6 +71,15 @@ function noteClaims(year: NextYearRecord | null, text: string): string[] {
       shows(shareStochastic, share(stochastic)) &&
       (adds === undefined || (share(deterministic) < 100 && share(stochastic) < 100));
     return right ? [] : [w.yearNoteWrong(label)];
+  });
+}
+
+/** The simulation's error, the larger of the two models', as a percentage. */
+function simulationClaims(year: NextYearRecord | null, text: string): string[] {
+  return [...text.matchAll(w.yearSimulationError)].flatMap(([, said]) => {
+    const errors = [year?.deterministic?.simulation_error, year?.stochastic?.simulation_error];
+    const largest = errors.every((error) => typeof error === 'number') ? 100 * Math.max(...(errors as number[])) : null;
+    return shows(said, largest) ? [] : [w.yearSimulationWrong(said)];
   });
 }
 

@@ -78,6 +78,7 @@ export function yearNote(record: AnalysisRecord, decimals: number): string {
             draws: formatNumber(year.draws, 0),
             point: record.settings.point,
             fromPoints: both((figure) => formatNumber(figure.from_points, decimals)),
+            error: formatNumber(100 * Math.max(deterministic.simulation_error ?? Number.NaN, stochastic.simulation_error ?? Number.NaN), 1),
           }
         : null,
   });
