@@ -1,7 +1,16 @@
-// Seasonal engine benchmarks on the seasonal open datasets (test/fixtures/seasonal-models/):
-// single fits with a seasonal ARMA factor (state dimension 13 to 16 on the filter's general
-// path), the seasonal search for each model, and the search on a series with missing levels.
-import { readFileSync } from 'node:fs';
+// Seasonal benchmarks. Whole processes of the compiled tool (start-up included): `fit` on the
+// Nottingham temperatures (monthly, n = 240; both models, seasonal and order search,
+// evidence), the same with a 12-origin reselecting backtest, and a memo of four invented
+// monthly series (n = 120 to 240) with the default backtest, HTML and PDF. Then the engine on
+// the seasonal open datasets (test/fixtures/seasonal-models/): single fits with a seasonal
+// ARMA factor (state dimension 13 to 16 on the filter's general path), the seasonal search
+// for each model, and the search on a series with missing levels.
+import { execFileSync } from 'node:child_process';
+import { mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join, resolve } from 'node:path';
+import { seededNormals } from '../evidence/seededNormals.js';
+import { timeChild } from './childProcess.js';
 import { fitRegressionArma } from '../../src/models/fitRegressionArma.js';
 import { fitTrendModel, trendDesign, type SeasonalSearchSpec } from '../../src/models/trendModels.js';
 import { median, timeRuns, type BenchRow } from './timing.js';
@@ -16,8 +25,41 @@ function spec(period: number, seasonalDifferencing: boolean): SeasonalSearchSpec
   return { period, firstSeason: 0, seasonalDifferencing, maxHarmonics: period / 2, maxSeasonalP: 1, maxSeasonalQ: 1 };
 }
 
+/** Four invented monthly series (trend, two harmonics, AR(1) noise) and a config for their memo. */
+function writeMonthlyMemo(root: string): string {
+  const draw = seededNormals(20261202);
+  mkdirSync(join(root, 'data'));
+  const entries = [240, 192, 156, 120].map((n, s) => {
+    let noise = 0;
+    const lines = ['period,value'];
+    for (let t = 0; t < n; t++) {
+      noise = 0.5 * noise + draw();
+      const month = t % 12;
+      const value = 500 + 1.5 * t + 40 * Math.cos((2 * Math.PI * month) / 12) + 15 * Math.sin((4 * Math.PI * month) / 12) + 12 * noise;
+      lines.push(`${2005 + Math.floor(t / 12)}-${String(month + 1).padStart(2, '0')},${value.toFixed(1)}`);
+    }
+    writeFileSync(join(root, 'data', `m${s}.csv`), `${lines.join('\n')}\n`);
+    return `  - id: m${s}\n    file: data/m${s}.csv`;
+  });
+  writeFileSync(join(root, 'monthly.yaml'), `memo:\n  id: monthly-bench\n  title: Invented monthly memo\nseries:\n${entries.join('\n')}\noutput:\n  folder: out\n  formats: [html, pdf]\n`);
+  return 'monthly.yaml';
+}
+
 export function seasonalBench(): BenchRow[] {
+  execFileSync('npm', ['run', 'build'], { stdio: 'ignore' });
   const rows: BenchRow[] = [];
+  const nottingham = resolve('test/fixtures/seasonal-models/nottingham-temperature.csv');
+  const fit = median([0, 1, 2].map(() => timeChild(['fit', nottingham], process.cwd()).ms));
+  rows.push({ name: 'fit, monthly n = 240 (Nottingham temperature), whole process', ms: fit, target: 2_000 });
+  const backtest = timeChild(['fit', nottingham, '--origins', '12'], process.cwd());
+  rows.push({ name: 'fit with a 12-origin reselecting backtest, monthly n = 240, whole process', ms: backtest.ms, target: 15_000, extra: { 'peak MB': backtest.peakMb } });
+  const root = mkdtempSync(join(tmpdir(), 'tb-monthly-'));
+  try {
+    const memo = timeChild(['run', writeMonthlyMemo(root), '--quiet'], root);
+    rows.push({ name: 'memo of 4 monthly series (n = 120..240, default backtest), HTML + PDF, whole process', ms: memo.ms, target: 30_000, extra: { 'peak MB': memo.peakMb } });
+  } finally {
+    rmSync(root, { recursive: true, force: true });
+  }
   const temperature = readSeries('nottingham-temperature.csv', false);
   const deaths = readSeries('us-accidental-deaths.csv', false);
   const gas = readSeries('uk-gas.csv', true);
