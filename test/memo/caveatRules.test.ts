@@ -262,4 +262,17 @@ describe('seasonal-pattern', () => {
     expect(seasonalPattern.evaluate({ record: await gas(['--seasonal', 'none']) })).toBeNull();
     expect(seasonalPattern.evaluate({ record: bareRecord('lakeHuron') })).toBeNull();
   }, 60_000);
+
+  it('is silent when neither model forecasts a pattern, however much a weak one moved', async () => {
+    // The same series as if the search had found no seasonal part worth its terms in either
+    // model: the forecasts carry no pattern, so a pattern that moved cannot make them wrong.
+    const record = structuredClone(await gas());
+    for (const model of Object.values(record.models)) {
+      if (model.seasonal != null) Object.assign(model.seasonal, { harmonics: 0, P: 0, Q: 0, seasonal_differences: false });
+    }
+    if (record.evidence.seasonal?.unit_root != null) record.evidence.seasonal.unit_root.seasonal_differencing = false;
+    expect(record.evidence.seasonal?.pattern?.change_share).toBeGreaterThan(0.4);
+    if (record.evidence.seasonal?.pattern != null) record.evidence.seasonal.pattern.change_share = 1.5;
+    expect(seasonalPattern.evaluate({ record })).toBeNull();
+  }, 60_000);
 });

@@ -1,4 +1,5 @@
-// Fires for a series with a seasonal part when the pattern rests on few complete years (fewer
+// Fires for a series whose forecasts carry a seasonal part (harmonics, a seasonal factor or
+// seasonal differences in either model) when the pattern rests on few complete years (fewer
 // than FEW_SEASONAL_YEARS: medium) or has been changing (the seasonal test rules out a stable
 // pattern, or one season's effect moved by half the pattern's range or more between the first
 // and last complete years: medium). A pattern estimated from few years, or one that is
@@ -14,10 +15,17 @@ const CHANGING_SHARE = 0.5;
 
 export const seasonalPattern: CaveatRule = {
   id: ID,
-  fires: `a seasonal part with fewer than ${FEW_SEASONAL_YEARS} complete years, or a seasonal pattern the data show changing`,
+  fires: `a seasonal part in either model's forecasts, with fewer than ${FEW_SEASONAL_YEARS} complete years, or a seasonal pattern the data show changing`,
   evaluate({ record }): Caveat | null {
     const seasonal = record.seasonal;
     if (seasonal === undefined || !seasonal.applied) return null;
+    // A pattern neither model forecasts (the search found no seasonal part worth its terms)
+    // cannot be wrong next year in the forecasts: nothing to warn about.
+    const carried = Object.values(record.models).some((model) => {
+      const part = model.seasonal;
+      return part != null && (part.harmonics > 0 || part.P + part.Q > 0 || part.seasonal_differences);
+    });
+    if (!carried) return null;
     const found = record.evidence.seasonal;
     const years = found?.pattern?.complete_years ?? Math.floor(record.series.n / seasonal.period);
     const share = found?.pattern?.change_share ?? null;
