@@ -153,5 +153,7 @@ export function seasonalStrengthSummary(strength: Pick<SeasonalStrength, 'season
     return `${opening} and stable: ${years} no ${seasonWord(pattern.period)}'s effect moved by more than ${change}, ${share}.${trend}`;
   }
   const how = pattern.change_share <= 0.5 ? 'has shifted somewhat' : 'has changed considerably';
-  return `${opening}, and its shape ${how}: ${years} the effect of ${season} moved by ${change}, ${share}.${trend}`;
+  // A weak pattern's effects in a single year are mostly the irregular part, so their change says little.
+  const noise = strengthWord(strength.seasonal) === 'weak' ? ' With a pattern this weak, one year\'s effects are mostly noise, so the change says little.' : '';
+  return `${opening}, and its shape ${how}: ${years} the effect of ${season} moved by ${change}, ${share}.${noise}${trend}`;
 }

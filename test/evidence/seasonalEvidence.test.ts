@@ -8,6 +8,7 @@
 import { describe, expect, it } from 'vitest';
 import { collectEvidence } from '../../src/evidence/collectEvidence.js';
 import { seasonalEvidence } from '../../src/evidence/seasonalEvidence.js';
+import { seasonalStrengthSummary } from '../../src/evidence/messages.js';
 import { stlDecomposition } from '../../src/evidence/stlDecomposition.js';
 import { expectRelative } from './expectRelative.js';
 import { readSeasonalFixture, readSeasonalValues, type SeasonalDataset } from './seasonalFixtures.js';
@@ -206,5 +207,31 @@ describe('collectEvidence with a period', () => {
     const start = { season: 1, year: 1973 };
     const computed = collectEvidence(w, fits, { significance: FIVE_PERCENT, period: 12, seasonStart: start });
     expect(computed.seasonal).toEqual(seasonalEvidence(w, 12, { significance: FIVE_PERCENT, start }));
+  });
+});
+
+describe('the strength summary of a weak pattern', () => {
+  // The demo's quarterly cost index has no seasonal pattern put into it (configs/generateDemoData.ts):
+  // STL finds a weak one whose single-year effects are mostly noise, so a large "change" is said to mean little.
+  const pattern = {
+    period: 4,
+    season: [1, 2, 3, 4],
+    mean_effect: [-0.009, 0.169, -0.085, -0.083],
+    amplitude: 0.254,
+    complete_years: 23,
+    first_year: 2002,
+    last_year: 2024,
+    first_year_effect: [0.163, -0.077, -0.051, -0.067],
+    last_year_effect: [0.186, 0.306, -0.322, -0.162],
+    largest_change: 0.383,
+    largest_change_season: 2,
+    change_share: 1.51,
+  };
+
+  it("says a weak pattern's change says little, and a moderate one's nothing of the kind", () => {
+    expect(seasonalStrengthSummary({ seasonal: 0.22, trend: 0.99 }, pattern)).toBe(
+      "The seasonal pattern is weak (seasonal strength 0.22 on a scale from 0 to 1), and its shape has changed considerably: between 2002 and 2024 the effect of the second quarter moved by 0.383, 151% of the pattern's range of 0.254. With a pattern this weak, one year's effects are mostly noise, so the change says little. The trend's strength on the same scale is 0.99.",
+    );
+    expect(seasonalStrengthSummary({ seasonal: 0.55, trend: 0.99 }, pattern)).not.toContain('mostly noise');
   });
 });
