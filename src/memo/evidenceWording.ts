@@ -48,6 +48,7 @@ export const evidenceWording = {
     horizon: number;
     frequency: Frequency;
     refit: RefitPolicy;
+    seasonal: boolean;
     window: WindowKind;
     step: number;
     minTraining: number;
@@ -55,7 +56,7 @@ export const evidenceWording = {
   }) =>
     `Each model was fitted to the history up to a past date (an origin) and its forecasts compared with what then happened. ` +
     `There were ${a.origins} origins, ${countPeriods(a.step, a.frequency)} apart, from ${a.firstPeriod} (${a.firstLength} observations) to ${a.lastPeriod} (${a.lastLength} observations), each forecast up to ${countPeriods(a.horizon, a.frequency)} ahead. ` +
-    `${REFIT_WORDS[a.refit]} ${a.window === 'expanding' ? 'Each fit used all the history up to its origin.' : `Each fit used a sliding window of at least ${a.minTraining} observations.`} ` +
+    `${(a.seasonal ? SEASONAL_REFIT_WORDS : REFIT_WORDS)[a.refit]} ${a.window === 'expanding' ? 'Each fit used all the history up to its origin.' : `Each fit used a sliding window of at least ${a.minTraining} observations.`} ` +
     (a.maseScaling === 'seasonal_naive'
       ? `MASE divides each error by the in-sample error of the seasonal naive forecast, which repeats the value of the same ${a.frequency === 'quarterly' ? 'quarter' : 'month'} a year earlier; a MASE below 1 beats that benchmark.`
       : 'The no-change benchmark forecasts the last observed value at every horizon; a MASE below 1 beats the in-sample one-step error of that benchmark.'),
@@ -143,6 +144,12 @@ const REFIT_WORDS: Record<RefitPolicy, string> = {
   reselect: 'At every origin both models were refitted, their ARMA orders chosen afresh by AICc.',
   reestimate: 'At every origin the coefficients were re-estimated, with the ARMA orders held at the full-history choice.',
   fixed: 'The full-history fits were used at every origin without re-estimation, so the scores are optimistic.',
+};
+
+const SEASONAL_REFIT_WORDS: Record<RefitPolicy, string> = {
+  reselect: 'At every origin both models were refitted, their ARMA orders and seasonal parts chosen afresh by AICc.',
+  reestimate: 'At every origin the coefficients were re-estimated, with the ARMA orders and seasonal parts held at the full-history choice.',
+  fixed: REFIT_WORDS.fixed,
 };
 
 function capitalise(text: string): string {

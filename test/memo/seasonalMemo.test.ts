@@ -67,6 +67,9 @@ describe('the backtest of a seasonal series in the memo', () => {
     const seasonalRmse = backtest.per_horizon.seasonal_naive?.[0].rmse ?? Number.NaN;
     expect(Number(view.point[0].methods[2].rmse.replace('\u2212', '-'))).toBeCloseTo(seasonalRmse, 1);
     expect(view.settings).toContain('in-sample error of the seasonal naive forecast');
+    expect(view.settings).toContain('their ARMA orders and seasonal parts chosen afresh by AICc.');
+    // Four origins make two warm runs of two per model (src/backtest/runBacktest.ts), and the record says so.
+    expect(backtest.notes.some((note) => note.startsWith("To save time, the origins' seasonal searches are grouped in runs of up to 2 consecutive origins"))).toBe(true);
     expect(formatBacktest(backtest).some((line) => line.includes('seasonal naive'))).toBe(true);
   }, 60_000);
 });

@@ -69,6 +69,8 @@ export function backtestView(backtest: BacktestRecord, frequency: Frequency, dec
       horizon: backtest.settings.horizon,
       frequency,
       refit: backtest.settings.refit,
+      // A seasonal period in the backtest: the models carried a seasonal part, searched or kept by the policy.
+      seasonal: (backtest.settings.period ?? 1) > 1,
       window: backtest.settings.window,
       step: backtest.settings.step,
       minTraining: backtest.settings.min_training_length,
