@@ -1,5 +1,6 @@
 // Quasi-Newton minimisation: BFGS with a backtracking Armijo line search and forward-
-// difference gradients (Nocedal & Wright 2006, Algorithm 6.1 and §8.1). The objective may
+// difference gradients, or the caller's gradient where it has one (Nocedal & Wright 2006,
+// Algorithm 6.1 and §8.1). The objective may
 // return NaN or ±Infinity for infeasible points; the line search treats those as +∞.
 
 export type Objective = (x: Float64Array) => number;
@@ -10,6 +11,11 @@ export interface MinimizeOptions {
   maxIterations?: number;
   /** Largest step in the unconstrained space, to keep the first steps from overshooting. */
   maxStep?: number;
+  /**
+   * The objective's gradient at x (where the objective was just evaluated, with value fx) into
+   * `out`; false where it cannot be had, and forward differences are used instead.
+   */
+  gradient?: (x: Float64Array, fx: number, out: Float64Array) => boolean;
 }
 
 export interface MinimizeResult {
@@ -53,7 +59,11 @@ export function minimizeBfgs(objective: Objective, start: ArrayLike<number>, opt
   const hy = new Float64Array(k);
   const hinv = new Float64Array(k * k);
   resetIdentity(hinv, k);
-  forwardGradient(evaluate, x, fx, grad);
+  const gradientAt = (point: Float64Array, value: number, out: Float64Array): void => {
+    if (options.gradient !== undefined && options.gradient(point, value, out)) return;
+    forwardGradient(evaluate, point, value, out);
+  };
+  gradientAt(x, fx, grad);
   let gnorm = maxAbs(grad);
   let iterations = 0;
   let freshHessian = true;
@@ -98,7 +108,7 @@ export function minimizeBfgs(objective: Objective, start: ArrayLike<number>, opt
       freshHessian = true;
       continue;
     }
-    forwardGradient(evaluate, trial, ftrial, nextGrad);
+    gradientAt(trial, ftrial, nextGrad);
     for (let i = 0; i < k; i++) {
       s[i] = trial[i] - x[i];
       yv[i] = nextGrad[i] - grad[i];

@@ -3,6 +3,8 @@
 // the full (exact ML) one, or the restricted one that REML maximises. With a seasonal part,
 // η follows the multiplicative ARMA of seasonalArma.ts and the filter runs its expansion.
 import { createWorkspace, profileLoglik, restrictedLoglik, runFilter, setArma } from '../statespace/kalmanFilter.js';
+import { createAdjointScratch, createSensitivities, filterSensitivities } from '../statespace/filterAdjoint.js';
+import { runChandrasekhar, SCALAR_STATE } from '../statespace/filterRecursions.js';
 import { stateDimension } from '../statespace/armaStateSpace.js';
 import { isStationary } from './constraints.js';
 import { type FilterWorkspace, type WorkspaceOptions } from '../statespace/filterWorkspace.js';
@@ -55,6 +57,13 @@ export interface ProfileLikelihood {
   atParameters(theta: Float64Array): number;
   /** Log-likelihood at unconstrained parameters in the same layout. */
   atUnconstrained(x: ArrayLike<number>): number;
+  /**
+   * The gradient of `atUnconstrained` at x into `out`, by the filter's adjoint (filterAdjoint.ts)
+   * and forward differences of the data-free part alone; false where that route does not apply
+   * (missing values, or the scalar column pass of small models), and the caller differences the
+   * whole likelihood instead.
+   */
+  gradientAtUnconstrained(x: Float64Array, out: Float64Array): boolean;
   /** The process's AR and MA coefficients for unconstrained `x`. */
   coefficientsOf(x: ArrayLike<number>): { ar: Float64Array; ma: Float64Array };
   /** The factors' coefficients for unconstrained `x`. */
@@ -82,7 +91,9 @@ export function createProfileLikelihood(
   const factors = emptyFactors(order);
   const work = new Float64Array(Math.max(p, q, order.P, order.Q, 1));
 
+  let evaluatedAt: Float64Array | undefined;
   const atCoefficients = (arCoef: ArrayLike<number>, maCoef: ArrayLike<number>, keepCovariance = false): number => {
+    evaluatedAt?.fill(Number.NaN);
     if (!setArma(workspace, arCoef, process.p, maCoef, process.q, !keepCovariance && workspace.complete)) return Number.NaN;
     if (!runFilter(workspace, columns, keepCovariance)) return Number.NaN;
     return loglikOf(workspace);
@@ -90,6 +101,26 @@ export function createProfileLikelihood(
   const fill = (x: ArrayLike<number>): void => {
     constrainFactors(x, order, factors, work);
     expandFactors(factors, order.period, ar, ma);
+  };
+  // The adjoint route needs the Chandrasekhar run of a complete series and the generic column pass.
+  const adjoint =
+    workspace.complete && workspace.gaps === undefined && (workspace.r > SCALAR_STATE || workspace.ncol > 3)
+      ? { gainRun: createWorkspace(workspace.r, [y]), sensitivities: createSensitivities(workspace.r, workspace.n), scratch: createAdjointScratch(workspace.r, workspace.ncol, workspace.n) }
+      : undefined;
+  if (adjoint !== undefined) evaluatedAt = new Float64Array(parameterCount(order)).fill(Number.NaN);
+  /** Σ of the sensitivities times the data-free quantities of a run (`source`: its coefficients, gains and variances). */
+  const linearised = (source: FilterWorkspace, steadyFrom: number): number => {
+    const { sensitivities } = adjoint as NonNullable<typeof adjoint>;
+    const { r, stride, n } = workspace;
+    let total = 0;
+    for (let i = 0; i < r; i++) total += sensitivities.phi[i] * source.phi[i];
+    for (let t = 0; t < n; t++) {
+      const row = (t < steadyFrom ? t : steadyFrom) * stride;
+      const at = t * r;
+      for (let i = 0; i < r; i++) total += sensitivities.gains[at + i] * source.gains[row + i];
+      total += sensitivities.variances[t] * source.variances[t];
+    }
+    return total;
   };
   return {
     p: process.p,
@@ -112,7 +143,34 @@ export function createProfileLikelihood(
     },
     atUnconstrained(x) {
       fill(x);
-      return atCoefficients(ar, ma);
+      const value = atCoefficients(ar, ma);
+      evaluatedAt?.set(x);
+      return value;
+    },
+    gradientAtUnconstrained(x, out) {
+      if (adjoint === undefined) return false;
+      // The workspace must hold the run at x: the optimiser asks right after evaluating there.
+      let same = evaluatedAt !== undefined;
+      for (let j = 0; j < x.length; j++) if (evaluatedAt?.[j] !== x[j]) same = false;
+      if (!same && !Number.isFinite(this.atUnconstrained(x))) return false;
+      if (!(workspace.steadyFrom >= 0)) return false;
+      filterSensitivities(workspace, columns, estimation, adjoint.scratch, adjoint.sensitivities);
+      const base = linearised(workspace, workspace.steadyFrom);
+      const shifted = Float64Array.from(x);
+      const { gainRun } = adjoint;
+      for (let j = 0; j < x.length; j++) {
+        const h = 1e-7 * Math.max(1, Math.abs(x[j]));
+        shifted[j] = x[j] + h;
+        fill(shifted);
+        shifted[j] = x[j];
+        if (!setArma(gainRun, ar, process.p, ma, process.q, true)) return false;
+        const steadyFrom = runChandrasekhar(gainRun);
+        if (steadyFrom < 0) return false;
+        out[j] = (linearised(gainRun, steadyFrom) - base) / h;
+      }
+      // `ar` and `ma` back at x, as after an evaluation there.
+      fill(x);
+      return true;
     },
     coefficientsOf(x) {
       fill(x);

@@ -44,6 +44,8 @@ export interface FilterWorkspace {
   /** Present when missing values are gaps in a differenced series (see gapFilter.ts). */
   readonly gaps: GapScratch | undefined;
   sumLogF: number;
+  /** After a run: the time from which the steady gain (its row) applies, n if never (−1 before any run, or after the gap filter). */
+  steadyFrom: number;
   /** Observations that entered the likelihood (non-missing y). */
   nobs: number;
 }

@@ -48,6 +48,7 @@ export function createWorkspace(r: number, columns: readonly Float64Array[], opt
     complete: !hasMissing(columns[0]),
     gaps: options.accumulateGaps === true && hasMissing(columns[0]) ? createGapScratch(r, ncol, n, options.gapPeriod ?? 1, options.gapRestarts ?? []) : undefined,
     sumLogF: 0,
+    steadyFrom: -1,
     nobs: 0,
   };
 }
@@ -90,10 +91,12 @@ export function setArma(
  * forecasting); otherwise, on a complete series, the cheaper Chandrasekhar form is used.
  */
 export function runFilter(ws: FilterWorkspace, columns: readonly Float64Array[], keepCovariance = false): boolean {
+  ws.steadyFrom = -1;
   if (ws.gaps !== undefined) return runGapFilter(ws, ws.gaps, columns);
   const fast = !keepCovariance && ws.complete;
   const steadyFrom = fast ? runChandrasekhar(ws) : runCovariance(ws, columns[0]);
   if (steadyFrom < 0) return false;
+  ws.steadyFrom = steadyFrom;
   if (ws.r <= SCALAR_STATE && ws.ncol <= 3) {
     filterColumnsScalar(ws, columns, steadyFrom);
   } else {

@@ -1,0 +1,52 @@
+// The adjoint gradient of the profile and restricted log-likelihoods (src/statespace/
+// filterAdjoint.ts, profileLikelihood.ts) against central differences of the likelihood itself
+// (the usual gradient check; common practice), on the Nottingham temperatures (monthly,
+// test/fixtures/seasonal-models/, provenance in test/fixtures/README.md) with harmonic columns
+// and seasonal factors, at points away from any optimum.
+import { readFileSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
+import type { Estimation, TrendModelKind } from '../../src/base/settings.js';
+import { olsFit } from '../../src/models/fitRegressionArma.js';
+import { createProfileLikelihood } from '../../src/models/profileLikelihood.js';
+import { trendDesign } from '../../src/models/trendDesign.js';
+
+const text = readFileSync(new URL('../fixtures/seasonal-models/nottingham-temperature.csv', import.meta.url), 'utf8');
+const w = Float64Array.from(text.trim().split('\n').slice(1), (line) => Number(line.split(',')[1]));
+
+const CASES: [TrendModelKind, number, number, number, number, number, Estimation][] = [
+  ['stochastic', 4, 3, 3, 1, 1, 'ml'],
+  ['deterministic', 6, 1, 1, 1, 1, 'reml'],
+  ['deterministic', 2, 2, 0, 1, 0, 'ml'],
+  ['stochastic', 0, 1, 1, 0, 1, 'reml'],
+  ['deterministic', 3, 2, 1, 0, 0, 'reml'],
+];
+
+describe('the adjoint gradient', () => {
+  it.each(CASES)('%s model, %i harmonic pairs, (%i,%i)(%i,%i)12, %s: matches central differences', (kind, harmonics, p, q, P, Q, estimation) => {
+    const design = trendDesign(kind, w, { period: 12, firstSeason: 0, harmonics, seasonalDifferencing: false });
+    const likelihood = createProfileLikelihood(olsFit(design.response, design.regressors).residuals, design.regressors, p, q, { seasonal: { period: 12, P, Q }, estimation });
+    const count = p + q + P + Q;
+    const x = Float64Array.from({ length: count }, (_, i) => 0.3 * Math.sin(i + 1));
+    likelihood.atUnconstrained(x);
+    const gradient = new Float64Array(count);
+    expect(likelihood.gradientAtUnconstrained(x, gradient)).toBe(true);
+    for (let j = 0; j < count; j++) {
+      const h = 1e-5;
+      const up = Float64Array.from(x);
+      const down = Float64Array.from(x);
+      up[j] += h;
+      down[j] -= h;
+      const central = (likelihood.atUnconstrained(up) - likelihood.atUnconstrained(down)) / (2 * h);
+      // Forward differences of the data-free part leave an error of order 1e-7 relative; central ones of the whole, 1e-10.
+      expect(Math.abs(gradient[j] - central)).toBeLessThan(1e-5 * Math.max(1, Math.abs(central)));
+    }
+  });
+
+  it('declines where it does not apply: the scalar column pass of a small plain model', () => {
+    const design = trendDesign('deterministic', w);
+    const likelihood = createProfileLikelihood(olsFit(design.response, design.regressors).residuals, design.regressors, 1, 1);
+    const x = Float64Array.from([0.2, -0.1]);
+    likelihood.atUnconstrained(x);
+    expect(likelihood.gradientAtUnconstrained(x, new Float64Array(2))).toBe(false);
+  });
+});
