@@ -154,7 +154,7 @@ export function createProfileLikelihood(
       for (let j = 0; j < x.length; j++) if (evaluatedAt?.[j] !== x[j]) same = false;
       if (!same && !Number.isFinite(this.atUnconstrained(x))) return false;
       if (!(workspace.steadyFrom >= 0)) return false;
-      filterSensitivities(workspace, columns, estimation, adjoint.scratch, adjoint.sensitivities);
+      filterSensitivities(workspace, columns, estimation, process.p, adjoint.scratch, adjoint.sensitivities);
       const base = linearised(workspace, workspace.steadyFrom);
       const shifted = Float64Array.from(x);
       const { gainRun } = adjoint;

@@ -40,23 +40,26 @@ export interface AdjointScratch {
   direct: Float64Array;
   column: Float64Array;
   shifted: Float64Array;
+  innovation: Float64Array;
+  predicted: Float64Array;
   solve: Float64Array;
 }
 
 export function createAdjointScratch(r: number, ncol: number, n: number): AdjointScratch {
-  return { ring: new Float64Array(r * ncol), direct: new Float64Array(ncol * n), column: new Float64Array(ncol), shifted: new Float64Array(ncol), solve: new Float64Array(Math.max(1, ncol - 1)) };
+  return { ring: new Float64Array(r * ncol), direct: new Float64Array(ncol * n), column: new Float64Array(ncol), shifted: new Float64Array(ncol), innovation: new Float64Array(ncol), predicted: new Float64Array(ncol), solve: new Float64Array(Math.max(1, ncol - 1)) };
 }
 
 /**
  * Fills `out` for the workspace's last run (complete series, covariance not kept), whose
  * log-likelihood was computed by `estimation`'s function (so ws.gramRhs holds β̂ and
- * ws.gramFactor the Cholesky factor of G).
+ * ws.gramFactor the Cholesky factor of G). `arLength`: the AR coefficients that can be
+ * nonzero (the process's p); ∂ℓ/∂φ_i stays 0 beyond them.
  */
-export function filterSensitivities(ws: FilterWorkspace, columns: readonly Float64Array[], estimation: Estimation, scratch: AdjointScratch, out: FilterSensitivities): void {
+export function filterSensitivities(ws: FilterWorkspace, columns: readonly Float64Array[], estimation: Estimation, arLength: number, scratch: AdjointScratch, out: FilterSensitivities): void {
   const { n, ncol, r, stride, phi, gains, variances, innovations: v, gramRhs: beta, gramFactor, steadyFrom } = ws;
   const k = ncol - 1;
   const m = ws.nobs;
-  const { ring, direct, column, shifted, solve } = scratch;
+  const { ring, direct, column, shifted, innovation, predicted, solve } = scratch;
   // e_t and S.
   let ssr = 0;
   for (let t = 0; t < n; t++) {
@@ -96,8 +99,11 @@ export function filterSensitivities(ws: FilterWorkspace, columns: readonly Float
   for (let t = n - 1; t >= 0; t--) {
     const row = (t < steadyFrom ? t : steadyFrom) * stride;
     for (let c = 0; c < ncol; c++) {
+      const vc = v[c * n + t];
       column[c] = direct[c * n + t];
       shifted[c] = 0;
+      innovation[c] = vc;
+      predicted[c] = columns[c][t] - vc;
     }
     const sensitivity = t * r;
     for (let i = 0; i < r; i++) {
@@ -107,17 +113,24 @@ export function filterSensitivities(ws: FilterWorkspace, columns: readonly Float
       const g = gains[row + i];
       const f = phi[i];
       let dg = 0;
-      let dphi = 0;
-      for (let c = 0; c < ncol; c++) {
-        const lambda = ring[base + c];
-        const vc = v[c * n + t];
-        dg += lambda * vc;
-        dphi += lambda * (columns[c][t] - vc);
-        column[c] += g * lambda;
-        shifted[c] += f * lambda;
+      if (i < arLength) {
+        let dphi = 0;
+        for (let c = 0; c < ncol; c++) {
+          const lambda = ring[base + c];
+          dg += lambda * innovation[c];
+          dphi += lambda * predicted[c];
+          column[c] += g * lambda;
+          shifted[c] += f * lambda;
+        }
+        out.phi[i] += dphi;
+      } else {
+        for (let c = 0; c < ncol; c++) {
+          const lambda = ring[base + c];
+          dg += lambda * innovation[c];
+          column[c] += g * lambda;
+        }
       }
       out.gains[sensitivity + i] = dg;
-      out.phi[i] += dphi;
     }
     // λ_t: rows shift down one (the head moves back), and the new row 0 takes the row that held logical r − 1.
     head = head === 0 ? r - 1 : head - 1;
