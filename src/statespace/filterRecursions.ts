@@ -323,7 +323,8 @@ export function filterColumnsGeneric(ws: FilterWorkspace, columns: readonly Floa
       const base = physical * ncol;
       const g = gains[row + i];
       const f = phi[i];
-      for (let c = 0; c < ncol; c++) ring[base + c] += f * scratch[c] + g * scratch[ncol + c];
+      // In the order of the one-column recursion, φ_i a_0 + a_{i+1} + g_i v, so the sums round alike.
+      for (let c = 0; c < ncol; c++) ring[base + c] = f * scratch[c] + ring[base + c] + g * scratch[ncol + c];
     }
     // The old first row becomes the last: nothing shifts into it.
     const g = gains[row + r - 1];
