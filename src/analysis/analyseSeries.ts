@@ -64,6 +64,7 @@ export async function analyseSeries(series: Series, settings: AnalysisSettings, 
     P: model.fit.order.P,
     Q: model.fit.order.Q,
     estimation: model.fit.estimation,
+    ...(model.seasonal === null ? {} : { seasonal: { design: model.design, fit: model.fit } }),
   });
   const evidence = collectEvidence(
     w,
@@ -72,7 +73,7 @@ export async function analyseSeries(series: Series, settings: AnalysisSettings, 
       significance: settings.significance,
       kpssLagRule: run.kpssLagRule,
       periodOf: (index) => series.periods[index] ?? addPeriods(series.first, index),
-      ...(seasonal.evidence === undefined ? {} : { period: seasonal.record.period, seasonal: seasonal.evidence, seasonStart: seasonal.start, seasonalModels: true }),
+      ...(seasonal.evidence === undefined ? {} : { period: seasonal.record.period, seasonal: seasonal.evidence, seasonStart: seasonal.start }),
     },
   );
   const backtest = run.backtest ? await backtestOrReason(series, settings, fitted, run, seasonal) : undefined;

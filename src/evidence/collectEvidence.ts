@@ -1,14 +1,15 @@
 // The `evidence` part of an AnalysisRecord: unit-root tests on the model-scale levels, their
-// combined reading, residual checks of both fitted models, and the stability of the trend; for
-// a seasonal series (period > 1) also the seasonal evidence, and residual checks over at least
-// two seasonal cycles of lags.
+// combined reading, residual checks of both fitted models, and the stability of the trend (for
+// models with a seasonal part, with that part kept in every refit); for a seasonal series
+// (period > 1) also the seasonal evidence, and residual checks over at least two seasonal cycles
+// of lags.
 import type { Estimation } from '../base/settings.js';
 import { adfTest } from './adfTest.js';
 import { kpssTest } from './kpssTest.js';
 import { residualChecks, type ResidualChecks } from './residualChecks.js';
 import { seasonalEvidence, type SeasonalEvidenceOptions, type SeasonalEvidenceRecord } from './seasonalEvidence.js';
 import { breakTestSummary, evidenceNotes } from './messages.js';
-import { trendStability } from './trendStability.js';
+import { seasonalTrendStability, trendStability, type SeasonalTrendFit } from './trendStability.js';
 import { trendVerdict } from './trendVerdict.js';
 import type { AdfResult, KpssLagRule, KpssResult, StabilityRecord, TrendVerdictKind } from './types.js';
 
@@ -25,11 +26,6 @@ export interface EvidenceOptions {
   seasonal?: SeasonalEvidenceRecord;
   /** Where the series starts in the calendar, for the seasonal pattern when `seasonal` is not given. */
   seasonStart?: SeasonalEvidenceOptions['start'];
-  /**
-   * The models have a seasonal part: the trend-stability checks, which refit the plain trend
-   * designs on growing stretches, do not describe them, so they are not run (and say so).
-   */
-  seasonalModels?: boolean;
 }
 
 export interface EvidenceRecord {
@@ -56,6 +52,8 @@ export interface FittedResiduals {
   Q?: number;
   /** How the fit was estimated; the stability windows are estimated the same way. */
   estimation?: Estimation;
+  /** A model with a seasonal part: its design and fit, which the trend-stability checks keep whole. */
+  seasonal?: SeasonalTrendFit;
 }
 
 export function collectEvidence(
@@ -104,11 +102,16 @@ export function collectEvidence(
       deterministic: checkResiduals(fits.deterministic, significance, period),
       stochastic: checkResiduals(fits.stochastic, significance, period),
     },
-    stability: options.seasonalModels === true ? skipStability(unavailable, evidenceNotes.stabilityNotSeasonal) : missing > 0 ? skipStability(unavailable, evidenceNotes.stabilityNeedsComplete) : attempt('stability', () => {
-      const stability = trendStability(w, {
-        deterministic: { p: fits.deterministic.p, q: fits.deterministic.q, estimation: fits.deterministic.estimation },
-        stochastic: { p: fits.stochastic.p, q: fits.stochastic.q, estimation: fits.stochastic.estimation },
-      });
+    stability: missing > 0 ? skipStability(unavailable, evidenceNotes.stabilityNeedsComplete) : attempt('stability', () => {
+      const deterministic = fits.deterministic.seasonal;
+      const stochastic = fits.stochastic.seasonal;
+      const stability =
+        deterministic !== undefined && stochastic !== undefined
+          ? seasonalTrendStability(w, { deterministic, stochastic })
+          : trendStability(w, {
+              deterministic: { p: fits.deterministic.p, q: fits.deterministic.q, estimation: fits.deterministic.estimation },
+              stochastic: { p: fits.stochastic.p, q: fits.stochastic.q, estimation: fits.stochastic.estimation },
+            });
       const periodOf = options.periodOf;
       if (periodOf === undefined) return stability;
       for (const kind of ['deterministic', 'stochastic'] as const) {

@@ -74,7 +74,6 @@ export const evidenceNotes = {
     return `${count} missing value${count === 1 ? ' was' : 's were'} left out of the unit-root tests, which then treat the remaining values as consecutive; read them as approximate.`;
   },
   stabilityNeedsComplete: 'the trend-stability checks need a series without missing values',
-  stabilityNotSeasonal: 'the trend-stability checks refit the trend without its seasonal part, so they are not run on models that have one',
   seasonalNeedsComplete: 'the seasonal checks need a series without missing values',
 };
 

@@ -1,13 +1,18 @@
 // Trend stability for both models, on the model-scale series w:
 //   w ──fit at the given orders──▶ full-sample fits ─┬─expandingEstimates─▶ windows
 //                                                     └─trendBreakTest─────▶ break_test
+// A model with a seasonal part brings its own full-sample fit and design
+// (`seasonalTrendStability`): the windows keep the whole seasonal part, and the break test
+// whitens at the model's seasonal ARMA with the harmonic terms as regressors that do not break.
 import { fitRegressionArma, type RegressionArmaFit } from '../models/fitRegressionArma.js';
-import { minimumObservations, trendDesign } from '../models/trendModels.js';
-import { expandingEstimates, expandingWindowSchedule } from './expandingWindows.js';
+import { minimumObservations, trendDesign, type TrendDesign } from '../models/trendModels.js';
+import { expandingEstimates, expandingWindowSchedule, seasonalExpandingEstimates, type SeasonalTrendFit, type WindowEstimate } from './expandingWindows.js';
 import { finiteSeries } from './finiteSeries.js';
 import { trendBreakTest } from './trendBreakTest.js';
 import type { BreakTestResult, StabilityRecord } from './types.js';
-import { type Estimation, type TrendModelKind } from '../base/settings.js';
+import { TREND_MODELS, type Estimation, type TrendModelKind } from '../base/settings.js';
+
+export type { SeasonalTrendFit } from './expandingWindows.js';
 
 export interface ArmaOrder {
   p: number;
@@ -49,6 +54,49 @@ export function trendStability(w: ArrayLike<number>, orders: StabilityOrders): S
   const stochastic = fitted('stochastic');
   const slopes = expandingEstimates('deterministic', series, schedule.ends, deterministic.fit);
   const drifts = expandingEstimates('stochastic', series, schedule.ends, stochastic.fit);
+  return stabilityRecord(schedule, slopes, drifts, { deterministic: deterministic.test, stochastic: stochastic.test });
+}
+
+/**
+ * Trend stability of two models with a seasonal part, each given as fitted to the whole of w:
+ * its design (with its seasonality) and its fit, whose orders (p, q)(P, Q)s and estimation the
+ * windows keep. The full-sample window is the model's own fit.
+ */
+export function seasonalTrendStability(w: ArrayLike<number>, models: Record<TrendModelKind, SeasonalTrendFit>): StabilityRecord {
+  const series = finiteSeries(w, 'seasonalTrendStability');
+  const n = series.length;
+  let fewest = 0;
+  for (const kind of TREND_MODELS) {
+    const { design, fit } = models[kind];
+    checkModel(kind, series, design, fit);
+    const seasonality = design.seasonality;
+    const { p, q, P, Q } = fit.order;
+    const needed = seasonality === undefined ? minimumObservations(kind, p, q) : minimumObservations(kind, p, q, { ...seasonality, P, Q });
+    fewest = Math.max(fewest, needed);
+  }
+  const schedule = expandingWindowSchedule(n, fewest);
+  const slopes = seasonalExpandingEstimates('deterministic', series, schedule.ends, models.deterministic);
+  const drifts = seasonalExpandingEstimates('stochastic', series, schedule.ends, models.stochastic);
+  const test = (kind: TrendModelKind): BreakTestResult => trendBreakTest(kind, models[kind].design, models[kind].fit);
+  return stabilityRecord(schedule, slopes, drifts, { deterministic: test('deterministic'), stochastic: test('stochastic') });
+}
+
+/** A model given to the seasonal checks must be a fit of w's own design with its seasonality. */
+function checkModel(kind: TrendModelKind, series: Float64Array, design: TrendDesign, fit: RegressionArmaFit): void {
+  const seasonality = design.seasonality;
+  if (seasonality === undefined) throw new Error(`seasonalTrendStability needs the ${kind} model's design with its seasonality`);
+  const conditioned = kind === 'deterministic' ? 0 : seasonality.seasonalDifferencing ? seasonality.period : 1;
+  if (design.response.length !== series.length - conditioned || fit.residuals.length !== design.response.length || fit.beta.length !== design.regressors.length) {
+    throw new Error(`seasonalTrendStability needs the ${kind} model fitted to the whole series`);
+  }
+}
+
+function stabilityRecord(
+  schedule: { minWindow: number; step: number },
+  slopes: WindowEstimate[],
+  drifts: WindowEstimate[],
+  breakTest: StabilityRecord['break_test'],
+): StabilityRecord {
   return {
     windows: {
       deterministic: slopes.map(({ end, estimate, se }) => ({ end, slope: estimate, se })),
@@ -56,6 +104,6 @@ export function trendStability(w: ArrayLike<number>, orders: StabilityOrders): S
       min_window: schedule.minWindow,
       step: schedule.step,
     },
-    break_test: { deterministic: deterministic.test, stochastic: stochastic.test },
+    break_test: breakTest,
   };
 }
