@@ -67,15 +67,31 @@ export const evidenceWording = {
   comparisonOutcome: (better: TrendModelKind | null, available: boolean, reason: string | null) =>
     !available ? `not tested: ${reason ?? 'no reason recorded'}` : better === null ? 'equal average loss' : `${MODEL_NAME[better].toLowerCase()} lower`,
 
-  breakTest: (a: { model: TrendModelKind; rejects5: boolean; rejects10: boolean; period: string; stat: string; critical5: string; pBound: string }) => {
-    const what = a.model === 'deterministic' ? 'the level or slope of the trend line' : 'the drift (the average change per period)';
+  /** `yearSteps`: the stochastic model works on seasonal differences over this many periods (a year); absent otherwise. */
+  breakTest: (a: { model: TrendModelKind; rejects5: boolean; rejects10: boolean; period: string; stat: string; critical5: string; pBound: string; yearSteps?: number }) => {
+    const what =
+      a.model === 'deterministic'
+        ? 'the level or slope of the trend line'
+        : a.yearSteps === undefined
+          ? 'the drift (the average change per period)'
+          : `the drift (the average change per period, measured as the average change over a year divided by ${a.yearSteps})`;
     if (a.rejects5) return `${MODEL_NAME[a.model]}: a break is likely. ${capitalise(what)} appears to shift from ${a.period} (statistic ${a.stat} against a 5% critical value of ${a.critical5}; ${a.pBound}).`;
     if (a.rejects10) return `${MODEL_NAME[a.model]}: broadly stable, with weak signs of a shift in ${what} from ${a.period} (statistic ${a.stat} against a 5% critical value of ${a.critical5}; ${a.pBound}).`;
     return `${MODEL_NAME[a.model]}: no break stands out. The largest shift in ${what}, from ${a.period}, gives a statistic of ${a.stat}, below the 5% critical value of ${a.critical5} (${a.pBound}).`;
   },
   breakMethod: (method: string, source: string, trimming: string) => `Method: ${method}; candidate dates exclude ${trimming} of the sample at each end. Critical values: ${source}.`,
-  stabilitySettings: (a: { minWindow: number; step: number; windows: number }) =>
-    `Both trends were re-estimated on ${a.windows} growing stretches of history, the first of ${a.minWindow} observations and each then longer by ${a.step}, with the ARMA orders held at their full-history choice.`,
+  stabilitySettings: (a: { minWindow: number; step: number; windows: number; seasonal: boolean }) =>
+    `Both trends were re-estimated on ${a.windows} growing stretches of history, the first of ${a.minWindow} observations and each then longer by ${a.step}, with the ARMA orders${a.seasonal ? ' and each model\u2019s seasonal part' : ''} held at their full-history choice.`,
+  /** Said under the break tests when a model has a fixed seasonal pattern (harmonics) or seasonal ARMA terms. */
+  breakSeasonal: (a: { pattern: boolean; seasonalTerms: boolean }) =>
+    [
+      a.pattern
+        ? 'A model with a fixed seasonal pattern keeps it in the test: the pattern is estimated alongside the trend, the same before and after the break, and the critical values are those for a break in the trend alone, which a pattern that does not break leaves unchanged in large samples.'
+        : '',
+      a.seasonalTerms ? 'The errors are whitened with their seasonal terms, held at the full-history estimates like the other ARMA terms.' : '',
+    ]
+      .filter((sentence) => sentence !== '')
+      .join(' '),
 
   recommendation: (model: TrendModelKind) => `We recommend the ${MODEL_IN_TEXT[model]}.`,
   /** Who settled the choice, in one short sentence for page 1 and the series section. */

@@ -8,6 +8,7 @@ import type { AnalysisRecord } from '../../src/analysis/record.js';
 import { evidenceView } from '../../src/memo/view/evidenceView.js';
 import { modelView } from '../../src/memo/view/modelsView.js';
 import { backtestView } from '../../src/memo/view/backtestView.js';
+import { stabilityView } from '../../src/memo/view/stabilityView.js';
 import { formatBacktest } from '../../src/cli/formatBacktest.js';
 import { fitRecord } from '../support/runCli.js';
 
@@ -45,8 +46,26 @@ describe('a quarterly seasonal series', () => {
     const hasFixed = (record.models.deterministic.seasonal?.harmonics ?? 0) > 0;
     expect(pattern?.columns).toEqual(['Average effect', '1960', '1986', ...(hasFixed ? ['Fixed pattern, deterministic trend'] : [])]);
     expect(pattern?.rows[0].cells[0]).toBe(record.evidence.seasonal?.pattern?.mean_effect[0].toPrecision(3).replace('-', '\u2212'));
-    // The trend-stability refits do not carry a seasonal part, and the memo says so.
-    expect(view.unavailable.some((s) => s.includes('not run on models that have one'))).toBe(true);
+  });
+
+  it('runs the trend-stability checks with each model\u2019s seasonal part and says so', () => {
+    const stability = record.evidence.stability;
+    if (stability === null) throw new Error(`no stability: ${JSON.stringify(record.evidence.unavailable)}`);
+    expect(record.evidence.unavailable.map((entry) => entry.test)).not.toContain('stability');
+    // The full-history window is the model itself (src/evidence/expandingWindows.ts).
+    expect(stability.windows.deterministic.at(-1)?.slope).toBe(record.models.deterministic.coefficients.slope);
+    expect(stability.windows.stochastic.at(-1)?.drift).toBe(record.models.stochastic.coefficients.drift);
+    // On seasonal differences the drift's test runs on the changes over a year, and a regime of
+    // τ of them reaches the levels up to position τ + 3: the break is dated in levels.
+    const stochastic = stability.break_test.stochastic;
+    expect(stochastic.method).toBe('sup-Wald for a break in the drift on the differences over a year, GLS-whitened, 15% trimming');
+    expect(stochastic.break_index).toBeGreaterThanOrEqual(Math.ceil(0.15 * (108 - 4)) + 4);
+    expect(stochastic.break_index).toBeLessThanOrEqual(Math.floor(0.85 * (108 - 4)) + 4);
+    const view = stabilityView(stability, record.series.first, { deterministic: record.models.deterministic.seasonal, stochastic: record.models.stochastic.seasonal });
+    expect(view.settings).toContain('with the ARMA orders and each model\u2019s seasonal part held at their full-history choice');
+    expect(view.breaks[1].text).toContain('the drift (the average change per period, measured as the average change over a year divided by 4)');
+    const harmonics = record.models.deterministic.seasonal?.harmonics ?? 0;
+    expect(view.method.some((note) => note.startsWith('A model with a fixed seasonal pattern keeps it in the test'))).toBe(harmonics > 0);
   });
 
   it('describes each model\u2019s seasonal part beside its coefficients', () => {

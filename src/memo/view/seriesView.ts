@@ -126,7 +126,7 @@ export async function seriesView(entry: MemoSeries, index: number): Promise<Seri
     models: [modelView(record, 'deterministic'), modelView(record, 'stochastic')],
     modelScale: scaleNote(record),
     aiccNote: AICC_NOTE,
-    stability: stability === undefined ? null : stabilityView(stability, record.series.first),
+    stability: stability === undefined ? null : stabilityView(stability, record.series.first, { deterministic: record.models.deterministic.seasonal, stochastic: record.models.stochastic.seasonal }),
     caveats: caveats.map((c) => ({ id: c.id, severity: c.severity, label: LABELS.severity[c.severity], text: noLinks(c.text) })),
     summary: summaryCard({ anchor, title, units, record, decimals, caveats }),
   };

@@ -4,7 +4,7 @@ import { addPeriods } from '../../base/period.js';
 import { evidenceWording } from '../evidenceWording.js';
 import { formatPercent, formatSignificant } from '../format/formatNumber.js';
 import { noLinks } from '../format/noLinks.js';
-import type { StabilityRecord } from '../../analysis/record.js';
+import type { ModelRecord, StabilityRecord } from '../../analysis/record.js';
 import type { TrendModelKind } from '../../base/settings.js';
 
 export interface StabilityView {
@@ -15,10 +15,15 @@ export interface StabilityView {
 
 const MODELS: readonly TrendModelKind[] = ['deterministic', 'stochastic'];
 
-export function stabilityView(stability: StabilityRecord, first: string): StabilityView {
+/** `seasonal`: each model's seasonal part (null without one), which the checks kept in every window and in the break test. */
+export function stabilityView(stability: StabilityRecord, first: string, seasonal: Record<TrendModelKind, ModelRecord['seasonal']>): StabilityView {
   const { windows, break_test } = stability;
+  const parts = MODELS.flatMap((model) => seasonal[model] ?? []);
+  const hasSeasonal = parts.length > 0;
+  const seasonalNote = evidenceWording.breakSeasonal({ pattern: parts.some((part) => part.harmonics > 0), seasonalTerms: parts.some((part) => part.P + part.Q > 0) });
+  const yearSteps = seasonal.stochastic?.seasonal_differences === true ? seasonal.stochastic.period : undefined;
   return {
-    settings: evidenceWording.stabilitySettings({ minWindow: windows.min_window, step: windows.step, windows: windows.deterministic.length }),
+    settings: evidenceWording.stabilitySettings({ minWindow: windows.min_window, step: windows.step, windows: windows.deterministic.length, seasonal: hasSeasonal }),
     breaks: MODELS.map((model) => {
       const test = break_test[model];
       return {
@@ -31,12 +36,16 @@ export function stabilityView(stability: StabilityRecord, first: string): Stabil
           stat: formatSignificant(test.stat, 3),
           critical5: formatSignificant(test.critical['5'], 3),
           pBound: test.p_bound,
+          ...(model === 'stochastic' && yearSteps !== undefined ? { yearSteps } : {}),
         }),
       };
     }),
-    method: MODELS.map((model) => {
-      const test = break_test[model];
-      return noLinks(evidenceWording.breakMethod(test.method, test.source, formatPercent(test.trimming)));
-    }),
+    method: [
+      ...MODELS.map((model) => {
+        const test = break_test[model];
+        return noLinks(evidenceWording.breakMethod(test.method, test.source, formatPercent(test.trimming)));
+      }),
+      ...(seasonalNote === '' ? [] : [seasonalNote]),
+    ],
   };
 }
