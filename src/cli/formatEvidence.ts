@@ -35,14 +35,20 @@ export function formatEvidence(record: AnalysisRecord): string[] {
   if (stability === null) {
     lines.push('  not available');
   } else {
+    // A model with a seasonal part keeps it in every window and in the break test; on seasonal
+    // differences the drift is still per period, the mean change over a year divided by s.
+    const seasonal = record.models.deterministic.seasonal !== null || record.models.stochastic.seasonal !== null;
+    const yearSteps = record.models.stochastic.seasonal?.seasonal_differences === true ? record.models.stochastic.seasonal.period : undefined;
     for (const kind of ['deterministic', 'stochastic'] as const) {
       const test = stability.break_test[kind];
       const at = addPeriods(record.series.first, test.break_index);
-      lines.push(`  ${kind.padEnd(13)} sup-Wald ${test.stat.toFixed(2)} (${test.restrictions} restriction${test.restrictions > 1 ? 's' : ''}), ${test.p_bound}, most likely break from ${at}`);
+      const over = kind === 'stochastic' && yearSteps !== undefined ? ', on the changes over a year' : '';
+      lines.push(`  ${kind.padEnd(13)} sup-Wald ${test.stat.toFixed(2)} (${test.restrictions} restriction${test.restrictions > 1 ? 's' : ''}${over}), ${test.p_bound}, most likely break from ${at}`);
     }
     const slope = stability.windows.deterministic;
     const drift = stability.windows.stochastic;
-    lines.push(`  expanding windows (${slope.length}): slope ${range(slope.map((w) => w.slope))}, drift ${range(drift.map((w) => w.drift))}`);
+    const driftUnit = yearSteps === undefined ? '' : ` per period (change over a year / ${yearSteps})`;
+    lines.push(`  expanding windows (${slope.length}${seasonal ? ', seasonal parts kept' : ''}): slope ${range(slope.map((w) => w.slope))}, drift ${range(drift.map((w) => w.drift))}${driftUnit}`);
   }
   return lines;
 }
