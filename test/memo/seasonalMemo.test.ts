@@ -10,6 +10,7 @@ import { modelView } from '../../src/memo/view/modelsView.js';
 import { backtestView } from '../../src/memo/view/backtestView.js';
 import { stabilityView } from '../../src/memo/view/stabilityView.js';
 import { formatBacktest } from '../../src/cli/formatBacktest.js';
+import { formatEvidence } from '../../src/cli/formatEvidence.js';
 import { fitRecord } from '../support/runCli.js';
 
 const UK_GAS = 'test/fixtures/seasonal/uk-gas.csv';
@@ -66,6 +67,10 @@ describe('a quarterly seasonal series', () => {
     expect(view.breaks[1].text).toContain('the drift (the average change per period, measured as the average change over a year divided by 4)');
     const harmonics = record.models.deterministic.seasonal?.harmonics ?? 0;
     expect(view.method.some((note) => note.startsWith('A model with a fixed seasonal pattern keeps it in the test'))).toBe(harmonics > 0);
+    // The terminal's block says the same.
+    const lines = formatEvidence(record);
+    expect(lines.some((line) => line.startsWith('  stochastic    sup-Wald') && line.includes('(1 restriction, on the changes over a year)'))).toBe(true);
+    expect(lines.some((line) => line.startsWith('  expanding windows (') && line.includes(', seasonal parts kept)') && line.endsWith('per period (change over a year / 4)'))).toBe(true);
   });
 
   it('describes each model\u2019s seasonal part beside its coefficients', () => {
