@@ -18,7 +18,8 @@ const MODELS: readonly TrendModelKind[] = ['deterministic', 'stochastic'];
 /** `seasonal`: each model's seasonal part (null without one), which the checks kept in every window and in the break test. */
 export function stabilityView(stability: StabilityRecord, first: string, seasonal: Record<TrendModelKind, ModelRecord['seasonal']>): StabilityView {
   const { windows, break_test } = stability;
-  const parts = MODELS.flatMap((model) => seasonal[model] ?? []);
+  // A part the search chose as none (no pattern, no seasonal terms, no seasonal differences) is not worth a mention.
+  const parts = MODELS.flatMap((model) => seasonal[model] ?? []).filter((part) => part.harmonics > 0 || part.P + part.Q > 0 || part.seasonal_differences);
   const hasSeasonal = parts.length > 0;
   const seasonalNote = evidenceWording.breakSeasonal({ pattern: parts.some((part) => part.harmonics > 0), seasonalTerms: parts.some((part) => part.P + part.Q > 0) });
   const yearSteps = seasonal.stochastic?.seasonal_differences === true ? seasonal.stochastic.period : undefined;
