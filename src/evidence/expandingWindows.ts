@@ -77,9 +77,9 @@ export interface SeasonalTrendFit {
  * alone rather than from the usual starts. On Nottingham temperatures (monthly) and UK gas
  * (quarterly, log), 136 windows of both models, this reached the optimum of a cold fit (zero,
  * Hannan-Rissanen, seasonal autocorrelation and edge starts, and for REML the model's own path,
- * ML first and REML from its optimum) or a higher one in every window, at a quarter to a tenth
- * of its cost; the full-sample optimum alone ended 0.63 below in one UK gas window.
- * DEVELOPERS.md, "Trend stability", has the figures.
+ * ML first and REML from its optimum) in 129 windows and a higher one in the other 7, at a fifth
+ * to two fifths of its cost; the full-sample optimum alone ended 0.63 below in one UK gas
+ * window. DEVELOPERS.md, "Trend stability", has the figures.
  */
 export function seasonalExpandingEstimates(kind: TrendModelKind, w: Float64Array, ends: readonly number[], model: SeasonalTrendFit): WindowEstimate[] {
   return ends.map((end) => {
