@@ -17,7 +17,7 @@ import { collectEvidence, type EvidenceOptions, type FittedResiduals } from '../
 import { planSeasonal, type SeasonalPlan } from './seasonalPlan.js';
 import { nextYear } from './nextYear.js';
 import { smallestMaRootModulus, smallestRootModulus } from '../linalg/rootModulus.js';
-import { fitBothModels, type ModelTask } from './fitModelTask.js';
+import { fitBothModels, type ModelFit, type ModelTask } from './fitModelTask.js';
 import { forecastTrendModel, minimumObservations, type FixedSeasonalPart, type SeasonalSearchSpec, type TrendModelFit } from '../models/trendModels.js';
 import { describeEquation } from './describeEquation.js';
 import { RECORD_SCHEMA, type AnalysisRecord, type DeterministicCoefficients, type ForecastRow, type JsonNumber, type ModelRecord, type StochasticCoefficients } from './record.js';
@@ -57,14 +57,14 @@ export async function analyseSeries(series: Series, settings: AnalysisSettings, 
     options: { estimation: settings.estimation, ...(seasonal.specs === undefined ? {} : { seasonal: seasonal.specs[kind] }) },
   });
   const fitted = await fitBothModels({ deterministic: task('deterministic'), stochastic: task('stochastic') }, run.threads);
-  const fittedResiduals = (model: TrendModelFit): FittedResiduals => ({
+  const fittedResiduals = (model: ModelFit): FittedResiduals => ({
     residuals: model.fit.residuals,
     p: model.fit.order.p,
     q: model.fit.order.q,
     P: model.fit.order.P,
     Q: model.fit.order.Q,
     estimation: model.fit.estimation,
-    ...(model.seasonal === null ? {} : { seasonal: { design: model.design, fit: model.fit } }),
+    ...(model.seasonal === null ? {} : { seasonal: { design: model.design, fit: model.fit }, windows: model.windows }),
   });
   const evidence = collectEvidence(
     w,

@@ -8,6 +8,7 @@ import { availableParallelism } from 'node:os';
 import { isMainThread, parentPort, Worker, workerData } from 'node:worker_threads';
 import type { TrendModelKind } from '../base/settings.js';
 import { workerModule } from '../base/workerModule.js';
+import { seasonalModelWindows, type ModelWindows } from '../evidence/trendStability.js';
 import { fitTrendModel, trendDesign, type TrendModelFit, type TrendModelOptions } from '../models/trendModels.js';
 
 export interface ModelTask {
@@ -18,16 +19,24 @@ export interface ModelTask {
   options: TrendModelOptions;
 }
 
-/** A model fit without its design, which the caller builds again (`withDesign`). */
-export type ModelTaskResult = Omit<TrendModelFit, 'design'>;
+/** A model fit without its design, which the caller builds again (`withDesign`), and its stability windows if computed. */
+export type ModelTaskResult = Omit<ModelFit, 'design'>;
+
+/** A model's fit and, for a complete seasonal series, its trend-stability windows computed beside the search. */
+export interface ModelFit extends TrendModelFit {
+  windows?: ModelWindows;
+}
 
 export function fitModelTask(task: ModelTask): ModelTaskResult {
-  const { design: _design, ...model } = fitTrendModel(task.kind, task.w, task.maxP, task.maxQ, task.options);
-  return model;
+  const { design, ...model } = fitTrendModel(task.kind, task.w, task.maxP, task.maxQ, task.options);
+  // The windows are the costliest evidence of a seasonal model: fitted here, they run side by
+  // side with the other model's (collectEvidence takes them when the joint schedule agrees).
+  if (model.seasonal === null || task.w.some(Number.isNaN)) return model;
+  return { ...model, windows: seasonalModelWindows(task.kind, task.w, { design, fit: model.fit }) };
 }
 
 /** The model with the design its search fitted: the plain one, or the one of its seasonal part. */
-function withDesign(task: ModelTask, model: ModelTaskResult): TrendModelFit {
+function withDesign(task: ModelTask, model: ModelTaskResult): ModelFit {
   const part = model.seasonal;
   const firstSeason = task.options.seasonal?.firstSeason;
   if (part === null || firstSeason === undefined) return { ...model, design: trendDesign(task.kind, task.w) };
@@ -39,7 +48,7 @@ function withDesign(task: ModelTask, model: ModelTaskResult): TrendModelFit {
  * Both models, the stochastic one in a worker thread when there are threads to spare and the
  * searches are seasonal (a plain search takes milliseconds, less than a worker's start).
  */
-export async function fitBothModels(tasks: Record<TrendModelKind, ModelTask>, threads: number | undefined): Promise<Record<TrendModelKind, TrendModelFit>> {
+export async function fitBothModels(tasks: Record<TrendModelKind, ModelTask>, threads: number | undefined): Promise<Record<TrendModelKind, ModelFit>> {
   const seasonal = tasks.deterministic.options.seasonal !== undefined;
   if (!seasonal || (threads ?? availableParallelism()) < 2) {
     return { deterministic: withDesign(tasks.deterministic, fitModelTask(tasks.deterministic)), stochastic: withDesign(tasks.stochastic, fitModelTask(tasks.stochastic)) };

@@ -9,7 +9,7 @@ import { kpssTest } from './kpssTest.js';
 import { residualChecks, type ResidualChecks } from './residualChecks.js';
 import { seasonalEvidence, type SeasonalEvidenceOptions, type SeasonalEvidenceRecord } from './seasonalEvidence.js';
 import { breakTestSummary, evidenceNotes } from './messages.js';
-import { seasonalTrendStability, trendStability, type SeasonalTrendFit } from './trendStability.js';
+import { seasonalTrendStability, trendStability, type ModelWindows, type SeasonalTrendFit } from './trendStability.js';
 import { trendVerdict } from './trendVerdict.js';
 import type { AdfResult, KpssLagRule, KpssResult, StabilityRecord, TrendVerdictKind } from './types.js';
 
@@ -54,6 +54,8 @@ export interface FittedResiduals {
   estimation?: Estimation;
   /** A model with a seasonal part: its design and fit, which the trend-stability checks keep whole. */
   seasonal?: SeasonalTrendFit;
+  /** Its stability windows, if computed ahead (`seasonalModelWindows`). */
+  windows?: ModelWindows;
 }
 
 export function collectEvidence(
@@ -107,7 +109,7 @@ export function collectEvidence(
       const stochastic = fits.stochastic.seasonal;
       const stability =
         deterministic !== undefined && stochastic !== undefined
-          ? seasonalTrendStability(w, { deterministic, stochastic })
+          ? seasonalTrendStability(w, { deterministic, stochastic }, { deterministic: fits.deterministic.windows, stochastic: fits.stochastic.windows })
           : trendStability(w, {
               deterministic: { p: fits.deterministic.p, q: fits.deterministic.q, estimation: fits.deterministic.estimation },
               stochastic: { p: fits.stochastic.p, q: fits.stochastic.q, estimation: fits.stochastic.estimation },

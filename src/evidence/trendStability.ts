@@ -62,23 +62,52 @@ export function trendStability(w: ArrayLike<number>, orders: StabilityOrders): S
  * its design (with its seasonality) and its fit, whose orders (p, q)(P, Q)s and estimation the
  * windows keep. The full-sample window is the model's own fit.
  */
-export function seasonalTrendStability(w: ArrayLike<number>, models: Record<TrendModelKind, SeasonalTrendFit>): StabilityRecord {
+export function seasonalTrendStability(w: ArrayLike<number>, models: Record<TrendModelKind, SeasonalTrendFit>, ahead: Partial<Record<TrendModelKind, ModelWindows>> = {}): StabilityRecord {
   const series = finiteSeries(w, 'seasonalTrendStability');
   const n = series.length;
   let fewest = 0;
   for (const kind of TREND_MODELS) {
     const { design, fit } = models[kind];
     checkModel(kind, series, design, fit);
-    const seasonality = design.seasonality;
-    const { p, q, P, Q } = fit.order;
-    const needed = seasonality === undefined ? minimumObservations(kind, p, q) : minimumObservations(kind, p, q, { ...seasonality, P, Q });
-    fewest = Math.max(fewest, needed);
+    fewest = Math.max(fewest, seasonalWindowNeeds(kind, models[kind]));
   }
   const schedule = expandingWindowSchedule(n, fewest);
-  const slopes = seasonalExpandingEstimates('deterministic', series, schedule.ends, models.deterministic);
-  const drifts = seasonalExpandingEstimates('stochastic', series, schedule.ends, models.stochastic);
+  // Windows computed ahead on the model's own schedule serve when the joint one is the same (it
+  // almost always is: the first window is at least 40% of the series).
+  const estimates = (kind: TrendModelKind): WindowEstimate[] => {
+    const done = ahead[kind];
+    const same = done !== undefined && done.ends.length === schedule.ends.length && done.ends.every((end, i) => end === schedule.ends[i]);
+    return same ? done.estimates : seasonalExpandingEstimates(kind, series, schedule.ends, models[kind]);
+  };
+  const slopes = estimates('deterministic');
+  const drifts = estimates('stochastic');
   const test = (kind: TrendModelKind): BreakTestResult => trendBreakTest(kind, models[kind].design, models[kind].fit);
   return stabilityRecord(schedule, slopes, drifts, { deterministic: test('deterministic'), stochastic: test('stochastic') });
+}
+
+/** One model's expanding-window estimates on the schedule its own orders need, computed ahead. */
+export interface ModelWindows {
+  ends: number[];
+  estimates: WindowEstimate[];
+}
+
+/** Fewest observations a window of this model needs (its orders and seasonal part). */
+function seasonalWindowNeeds(kind: TrendModelKind, model: SeasonalTrendFit): number {
+  const seasonality = model.design.seasonality;
+  const { p, q, P, Q } = model.fit.order;
+  return seasonality === undefined ? minimumObservations(kind, p, q) : minimumObservations(kind, p, q, { ...seasonality, P, Q });
+}
+
+/**
+ * One model's windows on its own schedule, for `seasonalTrendStability` to take: computed right
+ * after the model's search, in the thread that ran it, so the two models' windows are fitted side
+ * by side. w must be the complete series the model was fitted to.
+ */
+export function seasonalModelWindows(kind: TrendModelKind, w: ArrayLike<number>, model: SeasonalTrendFit): ModelWindows {
+  const series = finiteSeries(w, 'seasonalModelWindows');
+  checkModel(kind, series, model.design, model.fit);
+  const { ends } = expandingWindowSchedule(series.length, seasonalWindowNeeds(kind, model));
+  return { ends, estimates: seasonalExpandingEstimates(kind, series, ends, model) };
 }
 
 /** A model given to the seasonal checks must be a fit of w's own design with its seasonality. */
