@@ -4,6 +4,7 @@ import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { fitBothModels, type ModelTask } from '../../src/analysis/fitModelTask.js';
 import type { TrendModelKind } from '../../src/base/settings.js';
+import { seasonalTrendStability } from '../../src/evidence/trendStability.js';
 
 // UK gas consumption, quarterly (test/fixtures/seasonal-models/, provenance in test/fixtures/README.md), on the log scale.
 const text = readFileSync(new URL('../fixtures/seasonal-models/uk-gas.csv', import.meta.url), 'utf8');
@@ -37,6 +38,14 @@ describe('fitBothModels', () => {
     // The stochastic model on seasonal differences keeps its seasonal part through the worker.
     expect(sideBySide.stochastic.seasonal?.seasonalDifferencing).toBe(true);
     expect(sideBySide.stochastic.design.seasonality?.seasonalDifferencing).toBe(true);
+  });
+
+  it("brings each seasonal model's stability windows, the same as the evidence computes them", async () => {
+    const models = await fitBothModels(tasks(true), 2);
+    const fits = { deterministic: { design: models.deterministic.design, fit: models.deterministic.fit }, stochastic: { design: models.stochastic.design, fit: models.stochastic.fit } };
+    expect(models.deterministic.windows?.estimates.length).toBeGreaterThan(10);
+    const ahead = { deterministic: models.deterministic.windows, stochastic: models.stochastic.windows };
+    expect(seasonalTrendStability(w, fits, ahead)).toEqual(seasonalTrendStability(w, fits));
   });
 
   it('fits a series without a seasonal part in this thread, as before', async () => {
