@@ -16,6 +16,12 @@ import { createProfileLikelihood, type LikelihoodOptions, type ProfileLikelihood
 
 /** BFGS iterations every start gets before the starts are ranked. */
 const HEAT_ITERATIONS = 8;
+/**
+ * The same for seasonal fits, whose adjoint gradient is exact enough that four iterations rank
+ * the starts as eight did: on the nine seasonal searches of the three seasonal open datasets
+ * every candidate reached the same log-likelihood to 1e-4 (one 4e-4 higher), in 13% less time.
+ */
+const SEASONAL_HEAT_ITERATIONS = 4;
 /** Extra starts run to convergence after the heats. */
 const FINALISTS = 1;
 
@@ -113,7 +119,7 @@ export function fitRegressionArma(
   // end. The zero and Hannan-Rissanen starts always run to the end.
   let evaluations = 0;
   const heats = starts.map((start, index) => {
-    const result = minimizeBfgs(objective, start, { maxIterations: index < baseStarts ? 500 : HEAT_ITERATIONS, gradient });
+    const result = minimizeBfgs(objective, start, { maxIterations: index < baseStarts ? 500 : adjoint ? SEASONAL_HEAT_ITERATIONS : HEAT_ITERATIONS, gradient });
     evaluations += result.evaluations;
     return result;
   });
