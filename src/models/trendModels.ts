@@ -220,9 +220,11 @@ function restrictedFit(kind: TrendModelKind, design: TrendDesign, ml: Regression
     ...designWorkspace(design),
     estimation: 'reml',
     seasonal,
-    // REML moves the optimum a little from exact ML's; the usual starts would only find it again.
+    // REML moves the optimum a little from exact ML's; for a seasonal design the usual starts
+    // would only find it again (27% of those fits' time). A plain design keeps them, so annual
+    // and seasonally adjusted series are estimated exactly as before seasonal parts existed.
     starts: [ml.unconstrained],
-    startsOnly: true,
+    startsOnly: design.seasonality !== undefined,
   });
   if (!fit.converged) return 'not-converged';
   const verdict = admissibility(fit, kind === 'stochastic');
