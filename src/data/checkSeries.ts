@@ -1,6 +1,6 @@
 // Checks on the values of a series that concern its later use rather than the file's format.
 
-import { type InputProblem } from '../base/problem.js';
+import { type InputLocation, type InputProblem } from '../base/problem.js';
 import { dataMessages } from './messages.js';
 import type { Transform } from '../base/settings.js';
 import { describeTransform, transformValue } from '../base/transform.js';
@@ -81,4 +81,43 @@ export function checkSeries(series: SeriesValues, rules: SeriesRules = {}): Inpu
   }
   if (n >= 2 && !constant && inDomain) problems.push(...scaleProblems(series, transform));
   return problems;
+}
+
+/** Relative to the series' range, a spread of differences below this is no variation at all (rounding of an exact formula). */
+const EXACT_TOLERANCE = 1e-9;
+
+/**
+ * A series that a straight line, or a straight line plus a fixed seasonal pattern, fits without
+ * error on the model scale: it has no random variation, so no model of it has an error variance
+ * and no interval means anything (the likelihood grows without bound as σ² → 0). Found without
+ * fitting: a line has equal changes per period between successive observations, and a line plus
+ * a pattern repeating every `period` observations has equal changes over a year (every pair of
+ * observations `period` apart). `values` are on the model scale, NaN where missing; `scale` names
+ * the transform that took them there, if any.
+ */
+export function exactPatternProblem(values: ArrayLike<number>, period: number, at: InputLocation, scale: string | null = null): InputProblem | undefined {
+  let lowest = Number.POSITIVE_INFINITY;
+  let highest = Number.NEGATIVE_INFINITY;
+  for (let t = 0; t < values.length; t++) {
+    if (Number.isNaN(values[t])) continue;
+    lowest = Math.min(lowest, values[t]);
+    highest = Math.max(highest, values[t]);
+  }
+  const tolerance = EXACT_TOLERANCE * (highest - lowest);
+  if (!(tolerance > 0)) return undefined;
+  /** Whether every pair's change (per period between them when `perStep`) is the same, over at least `fewest` pairs. */
+  const equalChanges = (pairs: [number, number][], fewest: number, perStep: boolean): boolean => {
+    if (pairs.length < fewest) return false;
+    const changes = pairs.map(([from, to]) => (values[to] - values[from]) / (perStep ? to - from : 1));
+    const first = changes[0];
+    return changes.every((change) => Math.abs(change - first) <= tolerance);
+  };
+  const observed: number[] = [];
+  for (let t = 0; t < values.length; t++) if (!Number.isNaN(values[t])) observed.push(t);
+  const successive = observed.slice(1).map((t, i): [number, number] => [observed[i], t]);
+  if (equalChanges(successive, 2, true)) return dataMessages.exactLine(at, observed.length, scale);
+  if (period === 1) return undefined;
+  const yearApart = observed.filter((t) => t >= period && !Number.isNaN(values[t - period])).map((t): [number, number] => [t - period, t]);
+  // A pattern needs every season seen twice, a year apart, before it can be called exact.
+  return equalChanges(yearApart, period, false) ? dataMessages.exactPattern(at, observed.length, period, scale) : undefined;
 }

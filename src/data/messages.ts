@@ -195,6 +195,23 @@ export const dataMessages = {
       at,
     );
   },
+  /** `scale`: the transform's name when the values were transformed first, else null. */
+  exactLine(at: InputLocation, count: number, scale: string | null): InputProblem {
+    return problem(
+      'series.exact-line',
+      `all ${count} values lie exactly on a straight line${scale === null ? '' : ` after the ${scale} transform`}`,
+      'a series without random variation has no error for the models to measure, so no interval could mean anything; check that the column holds observed values, not a plan, a target path or an interpolation',
+      at,
+    );
+  },
+  exactPattern(at: InputLocation, count: number, period: number, scale: string | null): InputProblem {
+    return problem(
+      'series.exact-pattern',
+      `all ${count} values are exactly a straight line plus a pattern that repeats every ${period} periods${scale === null ? '' : ` after the ${scale} transform`}`,
+      'a series without random variation has no error for the models to measure, so no interval could mean anything; check that the column holds observed values, not a plan, a budget profile or an interpolation',
+      at,
+    );
+  },
   nonPositive(at: InputLocation, value: number, transform: string): InputProblem {
     return problem(
       'series.non-positive',

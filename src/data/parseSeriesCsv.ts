@@ -6,9 +6,10 @@ import { createHash } from 'node:crypto';
 import { InputError, type InputLocation, type InputProblem } from '../base/problem.js';
 import { dataMessages } from './messages.js';
 import { checkPeriods, type DatedLine } from './checkPeriods.js';
-import { checkSeries } from './checkSeries.js';
+import { checkSeries, exactPatternProblem } from './checkSeries.js';
 import { limitProblems } from '../base/limitProblems.js';
-import { formatPeriod, parsePeriod, periodFromIndex, periodIndex, type Frequency } from '../base/period.js';
+import { formatPeriod, parsePeriod, periodFromIndex, periodIndex, periodsPerYear, type Frequency } from '../base/period.js';
+import { describeTransform, transformValue } from '../base/transform.js';
 import { parseValue } from './parseValue.js';
 import { readCsvTable, type CsvRow } from './readCsvTable.js';
 import { selectColumns, type ColumnChoice } from './selectColumns.js';
@@ -101,6 +102,11 @@ export function parseSeriesCsv(text: string, file: string, options: SeriesOption
 
   if (problems.length > 0 || periods.frequency === undefined) throw new InputError(limitProblems(problems));
   const { labels, values } = allowMissing ? fillGaps(observations, periods.frequency) : { labels: observations.map((entry) => formatPeriod(entry.period)), values: observed };
+  // A series with no random variation on the scale the models see is refused here, with the file's name.
+  const transform = options.transform !== undefined && options.transform.kind !== 'none' ? options.transform : undefined;
+  const modelScale = transform === undefined ? values : values.map((value) => (Number.isNaN(value) ? value : transformValue(transform, value)));
+  const exact = exactPatternProblem(modelScale, periodsPerYear(periods.frequency), { file, field: choice.column }, transform === undefined ? null : describeTransform(transform));
+  if (exact !== undefined) throw new InputError([exact]);
   return {
     file,
     column: choice.column,

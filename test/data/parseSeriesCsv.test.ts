@@ -1,5 +1,9 @@
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { parseSeriesCsv, type SeriesOptions } from '../../src/data/parseSeriesCsv.js';
+import { runCli } from '../support/runCli.js';
 import { codesAndLines, problemsOf } from './problemsOf.js';
 
 const parse = (text: string, options: Partial<SeriesOptions> = {}) => parseSeriesCsv(text, 'in.csv', { missing: 'error', ...options });
@@ -28,12 +32,13 @@ describe('parseSeriesCsv on valid input', () => {
   });
 
   it('picks columns by name, in any position', () => {
-    const text = 'gdp,period,cpi\n10,2001-11,1.5\n11,2001-12,1.75\n12,2002-01,2\n';
+    // Neither column an exact straight line, which would be refused (series.exact-line).
+    const text = 'gdp,period,cpi\n10,2001-11,1.5\n11,2001-12,1.75\n13,2002-01,2.5\n';
     const series = parse(text, { periodColumn: 'period', column: 'cpi' });
     expect(series).toMatchObject({ periodColumn: 'period', column: 'cpi', frequency: 'monthly', first: '2001-11', last: '2002-01' });
-    expect([...series.values]).toEqual([1.5, 1.75, 2]);
+    expect([...series.values]).toEqual([1.5, 1.75, 2.5]);
     // With only the period column named, the values come from the first other column.
-    expect([...parse(text, { periodColumn: 'period' }).values]).toEqual([10, 11, 12]);
+    expect([...parse(text, { periodColumn: 'period' }).values]).toEqual([10, 11, 13]);
   });
 
   it('reads signed, exponent and leading-point numbers', () => {
@@ -153,5 +158,29 @@ describe('parseSeriesCsv cells', () => {
     expect(found[19]).toMatchObject({ code: 'csv.bad-value', line: 21 });
     expect(found[20]).toMatchObject({ code: 'csv.bad-value', line: 22, field: 'value' });
     expect(found[20].message).toBe('and 10 more lines with this kind of problem: 22, 23, 24, 25, 26, ..., 31 (10 in all)');
+  });
+});
+
+describe('a series without random variation', () => {
+  it('is refused with the file and column named, on the scale the models see', () => {
+    const line = `period,value\n${Array.from({ length: 12 }, (_, i) => `${2000 + i},${100 + 2.5 * i}`).join('\n')}\n`;
+    expect(() => parse(line)).toThrow('in.csv: value: all 12 values lie exactly on a straight line;');
+    // Growth of exactly 3% a year is a straight line after the log transform, and only then.
+    const growth = `period,value\n${Array.from({ length: 12 }, (_, i) => `${2000 + i},${(100 * 1.03 ** i).toPrecision(15)}`).join('\n')}\n`;
+    expect(() => parse(growth, { transform: { kind: 'log' } })).toThrow('all 12 values lie exactly on a straight line after the log transform');
+    expect([...parse(growth).values]).toHaveLength(12);
+  });
+});
+
+describe('fit on a series without random variation', () => {
+  it('exits 2 naming the file, where it used to stop with an internal error', async () => {
+    const file = join(mkdtempSync(join(tmpdir(), 'tb-exact-')), 'plan.csv');
+    // Three years of a monthly plan: a fixed profile plus one unit a year, with no variation.
+    const profile = [10, 12, 15, 14, 18, 20, 22, 21, 19, 16, 13, 11];
+    writeFileSync(file, `period,value\n${Array.from({ length: 36 }, (_, t) => `${2020 + Math.floor(t / 12)}-${String((t % 12) + 1).padStart(2, '0')},${profile[t % 12] + Math.floor(t / 12)}`).join('\n')}\n`);
+    const run = await runCli(['fit', file]);
+    expect(run.code).toBe(2);
+    expect(run.stderr).toContain('plan.csv: value: all 36 values are exactly a straight line plus a pattern that repeats every 12 periods;');
+    expect(run.stderr).not.toContain('internal error');
   });
 });
