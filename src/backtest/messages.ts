@@ -74,6 +74,14 @@ export const backtestMessages = {
       { field: 'backtest.min_train' },
     );
   },
+  seasonUnseen(windowEnd: string): InputProblem {
+    return problem(
+      'backtest.season-unseen',
+      `the training window ending ${windowEnd} has a season with no observed value, so the fixed seasonal pattern cannot be estimated there`,
+      'raise backtest.min_train so that every training window sees each season, or use fewer harmonics in the seasonal part',
+      { field: 'backtest.min_train' },
+    );
+  },
   fixedWithSeasonalPart(): InputProblem {
     return problem(
       'backtest.fixed-seasonal',

@@ -10,6 +10,8 @@
 import { availableParallelism } from 'node:os';
 import { InputError, type InputProblem } from '../base/problem.js';
 import { TREND_MODELS, type AnalysisSettings, type TrendModelKind } from '../base/settings.js';
+import { regressorsIdentified } from '../models/fitRegressionArma.js';
+import { fixedPartDesign } from '../models/seasonalSearch.js';
 import { minimumObservations, type FixedSeasonalPart, type SeasonalOrderSize, type SeasonalSearchSpec } from '../models/trendModels.js';
 import type { ArmaOrder, BacktestRecord } from './backtestRecord.js';
 import { collectForecasts } from './collectForecasts.js';
@@ -100,6 +102,16 @@ export async function runBacktest(input: BacktestInput, settings: AnalysisSettin
       ...(chainLength === 0 ? {} : { chain: m * plan.origins.length + Math.floor(o / chainLength) }),
     })),
   );
+  // A fixed seasonal part needs each window to identify its pattern (a season always missing in a
+  // short window does not); the auto search leaves out the harmonic counts a window cannot carry.
+  tasks.forEach((task, index) => {
+    const part = task.seasonal;
+    if (part === undefined || !('harmonics' in part) || part.harmonics === 0) return;
+    const { design } = fixedPartDesign(task.kind, task.w, part);
+    if (regressorsIdentified(design.response, design.regressors)) return;
+    const { end } = plan.origins[Math.floor(index / TREND_MODELS.length)];
+    throw new InputError(backtestMessages.seasonUnseen(data.periods?.[end - 1] ?? `at observation ${end}`));
+  });
   const threads = run.threads ?? Math.min(availableParallelism(), plan.origins.length);
   const results = await runOriginTasks(tasks, threads, run.pool);
   const collected = collectForecasts(data, plan.origins, results, settings, period);

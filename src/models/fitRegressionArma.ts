@@ -250,6 +250,20 @@ export interface OlsPart {
   residuals: Float64Array;
 }
 
+/**
+ * Whether the regressors are linearly independent on the observed y (a design with every
+ * harmonic pair needs each season observed at least once: in a short window with a season
+ * always missing it is not).
+ */
+export function regressorsIdentified(y: Float64Array, regressors: readonly Float64Array[]): boolean {
+  const k = regressors.length;
+  if (k === 0) return true;
+  const observed: number[] = [];
+  for (let t = 0; t < y.length; t++) if (!Number.isNaN(y[t])) observed.push(t);
+  if (observed.length <= k) return false;
+  return leastSquares(observed.map((t) => y[t]), regressors.map((column) => observed.map((t) => column[t]))) !== undefined;
+}
+
 /** OLS of y on the regressors, skipping missing y. */
 export function olsFit(y: Float64Array, regressors: readonly Float64Array[]): OlsPart {
   const k = regressors.length;

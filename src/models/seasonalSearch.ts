@@ -22,7 +22,7 @@
 // at (0, 0) is always fitted, so an admissible fit always exists.
 import type { TrendModelKind } from '../base/settings.js';
 import { admissibility, type InadmissibleReason } from './admissibility.js';
-import { countObserved, fitRegressionArma, type RegressionArmaFit } from './fitRegressionArma.js';
+import { countObserved, fitRegressionArma, regressorsIdentified, type RegressionArmaFit } from './fitRegressionArma.js';
 import { checkHarmonics } from './harmonics.js';
 import { aicc, fitGrid, neighbourStarts, padStart, type Candidate, type GridFit } from './orderSearch.js';
 import { designWorkspace, trendDesign, type TrendDesign } from './trendDesign.js';
@@ -187,9 +187,17 @@ export function searchSeasonalModel(kind: TrendModelKind, w: Float64Array, maxP:
     entries.set(entryKey(choice, fit.order.p, fit.order.q), entry);
     return entry;
   };
+  // A harmonic count whose columns the observed values cannot tell apart (a season never observed) is not tried.
+  const identified = new Map<number, boolean>();
   const fits = (choice: SeasonalChoice, p: number, q: number): boolean => {
     const design = designFor(choice.harmonics);
-    return countObserved(design.response) - (p + q + choice.P + choice.Q + design.regressors.length + 1) - 1 > 0;
+    if (countObserved(design.response) - (p + q + choice.P + choice.Q + design.regressors.length + 1) - 1 <= 0) return false;
+    let known = identified.get(choice.harmonics);
+    if (known === undefined) {
+      known = regressorsIdentified(design.response, design.regressors);
+      identified.set(choice.harmonics, known);
+    }
+    return known;
   };
   /**
    * One fit at (p, q), started from its neighbours already fitted: the same part's smaller

@@ -172,6 +172,23 @@ describe('training windows too short for the seasonal part', () => {
   });
 });
 
+describe('a fixed seasonal pattern in a window that misses a season', () => {
+  it('is refused as a setting, naming the window, before any window is fitted', async () => {
+    // US accidental deaths with every February of the first four years removed: the first
+    // training windows never see a February, so twelve months of fixed pattern are not
+    // identified there (common practice: a seasonal dummy set needs each season observed).
+    const deaths = readSeasonal('us-accidental-deaths.csv');
+    const values = deaths.values.map((v, t) => (t % 12 === 1 && t < 48 ? Number.NaN : v));
+    const settings = settingsFor({ max_p: 1, max_q: 0, backtest: { refit: 'reestimate', origins: 30, horizon: 3, min_train: 36 } });
+    const part = { period: 12, firstSeason: 0, seasonalDifferencing: false, harmonics: 6, P: 0, Q: 0 };
+    const run = { orders: ORDERS, threads: 1, period: 12, seasonal: { deterministic: part, stochastic: part } };
+    const error = await runBacktest({ values, periods: deaths.periods }, settings, run).catch((e: unknown) => e);
+    expect(error).toBeInstanceOf(InputError);
+    expect((error as InputError).problems).toEqual([expect.objectContaining({ code: 'backtest.season-unseen', field: 'backtest.min_train' })]);
+    expect((error as InputError).problems[0].message).toMatch(/^the training window ending 1976-04 has a season with no observed value/);
+  });
+});
+
 describe('the seasonal period at 1 and refused values', () => {
   const nile = readSeriesCsv(new URL('../fixtures/nile.csv', import.meta.url).pathname, { missing: 'error' });
 

@@ -173,3 +173,24 @@ describe('seasonal search inputs', () => {
     expect(minimumObservations('stochastic', 1, 1)).toBe(1 + 1 + 1 + 1 + 2 + 1);
   });
 });
+
+describe('a season never observed', () => {
+  // Five years of seeded monthly data with every February of the first three missing: on the
+  // first 30 months the twelve-month design is not identified (common practice: a dummy or
+  // harmonic set needs each season observed), so the search leaves out the harmonic counts the
+  // observed months cannot carry instead of failing.
+  const draw = seededNormals(7);
+  let eta = 0;
+  const w = Float64Array.from({ length: 60 }, (_, t) => {
+    eta = 0.5 * eta + draw();
+    const missing = t % 12 === 1 && t < 36;
+    return missing ? Number.NaN : 50 + 0.2 * t + 5 * Math.cos((2 * Math.PI * (t % 12)) / 12) + eta;
+  });
+
+  it('searches the window without the harmonic counts it cannot identify', () => {
+    const model = fitTrendModel('deterministic', w.slice(0, 30), 1, 1, { estimation: 'ml', seasonal: spec(12, false) });
+    // With eleven months observed, the full set of six pairs (twelve columns with the intercept) is out of reach.
+    expect(model.candidates.every((c) => c.harmonics < 6)).toBe(true);
+    expect(model.candidates.some((c) => c.harmonics > 0)).toBe(true);
+  });
+});
