@@ -218,6 +218,14 @@ export const configMessages = {
   tooManyHarmonics(at: InputLocation, harmonics: number, most: number, frequency: string): InputProblem {
     return problem('config.seasonal-harmonics', `${harmonics} harmonic pairs are more than a ${frequency} series has (at most ${most})`, `give harmonics from 0 to ${most}`, at);
   },
+  harmonicsUnseen(at: InputLocation, harmonics: number, seen: number, period: number, needed: number): InputProblem {
+    return problem(
+      'config.seasonal-unseen',
+      `${harmonics} harmonic pairs need at least ${needed} of the ${period} seasons observed, and the series has values in only ${seen}`,
+      `give at most ${Math.max(0, Math.floor((seen - 1) / 2))} harmonic pairs, or supply the missing seasons`,
+      at,
+    );
+  },
   scoredLevelNotListed(at: InputLocation, level: number, levels: readonly number[]): InputProblem {
     return problem(
       'config.scored-level',

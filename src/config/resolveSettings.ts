@@ -42,6 +42,8 @@ export interface SeriesFacts {
   frequency: Frequency;
   /** Periods from first to last. */
   n: number;
+  /** The values (NaN where missing), when known: a fixed seasonal pattern is checked against the seasons observed. */
+  values?: ArrayLike<number>;
 }
 
 /**
@@ -68,7 +70,7 @@ export function resolveSettings(written: WrittenSettings, series: SeriesFacts, p
     point: written.point ?? BUILT_IN.point,
     year_figure: written.year_figure ?? BUILT_IN.year_figure,
     estimation: written.estimation ?? BUILT_IN.estimation,
-    seasonal: toSeasonal(written.seasonal ?? BUILT_IN.seasonal, series.frequency, placeOf),
+    seasonal: toSeasonal(written.seasonal ?? BUILT_IN.seasonal, series, placeOf),
     max_p: reading.max_p,
     max_q: reading.max_q,
     significance: written.significance ?? BUILT_IN.significance,
@@ -107,12 +109,21 @@ function backtestHorizon(horizon: number, n: number, minTrain: number): number {
 }
 
 /** The seasonal setting with its period; a fixed form must suit the frequency. */
-function toSeasonal(written: NonNullable<WrittenSettings['seasonal']>, frequency: Frequency, placeOf: PlaceOf): SeasonalSetting {
+function toSeasonal(written: NonNullable<WrittenSettings['seasonal']>, series: SeriesFacts, placeOf: PlaceOf): SeasonalSetting {
+  const { frequency } = series;
   const period = periodsPerYear(frequency);
   if (typeof written === 'string') return { kind: period === 1 ? 'none' : written, period };
   if (period === 1) throw new InputError(configMessages.seasonalFormAnnual(placeOf('seasonal')));
   const most = Math.floor(period / 2);
   if (written.harmonics > most) throw new InputError(configMessages.tooManyHarmonics(placeOf('seasonal'), written.harmonics, most, frequency));
+  // K pairs are 2K columns (s − 1 at K = s/2, whose last sine vanishes); with the level they
+  // need as many distinct seasons observed (trigonometric interpolation on distinct points).
+  const columns = 2 * written.harmonics === period ? period - 1 : 2 * written.harmonics;
+  const values = series.values;
+  if (values === undefined) return { kind: 'fixed', period, ...written };
+  const seen = new Set<number>();
+  for (let t = 0; t < values.length; t++) if (!Number.isNaN(values[t])) seen.add(t % period);
+  if (seen.size < columns + 1) throw new InputError(configMessages.harmonicsUnseen(placeOf('seasonal'), written.harmonics, seen.size, period, columns + 1));
   return { kind: 'fixed', period, ...written };
 }
 

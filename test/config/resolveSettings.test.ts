@@ -80,6 +80,29 @@ describe('resolveSettings', () => {
     expect(resolveSettings({ seasonal: { ...form, harmonics: 6 } }, { frequency: 'monthly', n: 60 }).seasonal).toMatchObject({ kind: 'fixed', harmonics: 6 });
   });
 
+  it('refuses more harmonic pairs than the seasons observed can identify', () => {
+    // Every February missing: 11 of 12 months observed. K pairs are 2K columns (11 at K = 6, whose
+    // last sine vanishes) and need K·2 + 1 distinct seasons with the level (trigonometric
+    // interpolation; common practice).
+    const values = Float64Array.from({ length: 60 }, (_, t) => (t % 12 === 1 ? Number.NaN : 100 + t));
+    const form = { harmonics: 6, seasonal_ar: 0, seasonal_ma: 0, seasonal_differences: false };
+    const place = (key: string) => ({ file: 'memo.yaml', line: 7, field: `series[0].${key}` });
+    try {
+      resolveSettings({ seasonal: form }, { frequency: 'monthly', n: 60, values }, place);
+      expect.unreachable();
+    } catch (error) {
+      expect((error as InputError).problems).toEqual([
+        expect.objectContaining({
+          code: 'config.seasonal-unseen',
+          field: 'series[0].seasonal',
+          message: '6 harmonic pairs need at least 12 of the 12 seasons observed, and the series has values in only 11',
+          hint: 'give at most 5 harmonic pairs, or supply the missing seasons',
+        }),
+      ]);
+    }
+    expect(resolveSettings({ seasonal: { ...form, harmonics: 5 } }, { frequency: 'monthly', n: 60, values }, place).seasonal).toMatchObject({ harmonics: 5 });
+  });
+
   it("gives the year's figure as written, else the average, which means something for a flow and a level alike", () => {
     // A flow's year is its total, a level's or a rate's its average (common practice): the config says which.
     expect(resolveSettings({}, { frequency: 'monthly', n: 100 }).year_figure).toBe('average');
