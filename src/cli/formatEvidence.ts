@@ -48,7 +48,8 @@ export function formatEvidence(record: AnalysisRecord): string[] {
     const slope = stability.windows.deterministic;
     const drift = stability.windows.stochastic;
     const driftUnit = yearSteps === undefined ? '' : ` per period (change over a year / ${yearSteps})`;
-    lines.push(`  expanding windows (${slope.length}${seasonal ? ', seasonal parts kept' : ''}): slope ${range(slope.map((w) => w.slope))}, drift ${range(drift.map((w) => w.drift))}${driftUnit}`);
+    if (slope.length <= 1) lines.push(`  expanding windows: none, the series is no longer than the shortest window (${stability.windows.min_window} observations)`);
+    else lines.push(`  expanding windows (${slope.length}${seasonal ? ', seasonal parts kept' : ''}): slope ${range(slope.map((w) => w.slope))}, drift ${range(drift.map((w) => w.drift))}${driftUnit}`);
   }
   return lines;
 }

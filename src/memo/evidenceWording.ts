@@ -81,7 +81,9 @@ export const evidenceWording = {
   },
   breakMethod: (method: string, source: string, trimming: string) => `Method: ${method}; candidate dates exclude ${trimming} of the sample at each end. Critical values: ${source}.`,
   stabilitySettings: (a: { minWindow: number; step: number; windows: number; seasonal: boolean }) =>
-    `Both trends were re-estimated on ${a.windows} growing stretches of history, the first of ${a.minWindow} observations and each then longer by ${a.step}, with the ARMA orders${a.seasonal ? ' and each model\u2019s seasonal part' : ''} held at their full-history choice.`,
+    a.windows <= 1
+      ? `The history is too short for growing stretches: the shortest the check uses is ${a.minWindow} observations, the whole series, so the charts show the full-history estimates alone and only the break tests speak to stability.`
+      : `Both trends were re-estimated on ${a.windows} growing stretches of history, the first of ${a.minWindow} observations and each then longer by ${a.step}, with the ARMA orders${a.seasonal ? ' and each model\u2019s seasonal part' : ''} held at their full-history choice.`,
   /** Said under the break tests when a model has a fixed seasonal pattern (harmonics) or seasonal ARMA terms. */
   breakSeasonal: (a: { pattern: boolean; seasonalTerms: boolean }) =>
     [
