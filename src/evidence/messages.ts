@@ -152,7 +152,7 @@ export function seasonalStrengthSummary(strength: Pick<SeasonalStrength, 'season
     return `${opening} and stable: ${years} no ${seasonWord(pattern.period)}'s effect moved by more than ${change}, ${share}.${trend}`;
   }
   const how = pattern.change_share <= 0.5 ? 'has shifted somewhat' : 'has changed considerably';
-  // A weak pattern's effects in a single year are mostly the irregular part, so their change says little.
-  const noise = strengthWord(strength.seasonal) === 'weak' ? ' With a pattern this weak, one year\'s effects are mostly noise, so the change says little.' : '';
+  // A weak pattern's effects at the series' ends (STL's seasonal component there) are mostly estimation error, so their change says little.
+  const noise = strengthWord(strength.seasonal) === 'weak' ? ' With a pattern this weak, its effects at either end of the series are poorly determined, so the change says little.' : '';
   return `${opening}, and its shape ${how}: ${years} the effect of ${season} moved by ${change}, ${share}.${noise}${trend}`;
 }

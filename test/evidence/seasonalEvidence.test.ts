@@ -212,7 +212,7 @@ describe('collectEvidence with a period', () => {
 
 describe('the strength summary of a weak pattern', () => {
   // The demo's quarterly cost index has no seasonal pattern put into it (configs/generateDemoData.ts):
-  // STL finds a weak one whose single-year effects are mostly noise, so a large "change" is said to mean little.
+  // STL finds a weak one whose effects at the ends are poorly determined, so a large "change" is said to mean little.
   const pattern = {
     period: 4,
     season: [1, 2, 3, 4],
@@ -230,8 +230,8 @@ describe('the strength summary of a weak pattern', () => {
 
   it("says a weak pattern's change says little, and a moderate one's nothing of the kind", () => {
     expect(seasonalStrengthSummary({ seasonal: 0.22, trend: 0.99 }, pattern)).toBe(
-      "The seasonal pattern is weak (seasonal strength 0.22 on a scale from 0 to 1), and its shape has changed considerably: between 2002 and 2024 the effect of the second quarter moved by 0.383, 151% of the pattern's range of 0.254. With a pattern this weak, one year's effects are mostly noise, so the change says little. The trend's strength on the same scale is 0.99.",
+      "The seasonal pattern is weak (seasonal strength 0.22 on a scale from 0 to 1), and its shape has changed considerably: between 2002 and 2024 the effect of the second quarter moved by 0.383, 151% of the pattern's range of 0.254. With a pattern this weak, its effects at either end of the series are poorly determined, so the change says little. The trend's strength on the same scale is 0.99.",
     );
-    expect(seasonalStrengthSummary({ seasonal: 0.55, trend: 0.99 }, pattern)).not.toContain('mostly noise');
+    expect(seasonalStrengthSummary({ seasonal: 0.55, trend: 0.99 }, pattern)).not.toContain('poorly determined');
   });
 });
