@@ -1,9 +1,9 @@
 // One trend model's search and estimates, as a task a worker thread can run: a seasonal
 // series' two searches are the analysis's largest cost and independent of each other, so
 // `fitBothModels` runs one in a worker while the main thread runs the other. A task is a pure
-// function of its input and both paths go through it, so the record does not depend on the
-// thread count. The design holds a function (its future rows) and cannot cross threads; it is
-// built again from the data and the chosen seasonal part, exactly as the search built it.
+// function of its input and both paths go through `fitModel`, so the record does not depend on
+// the thread count. The design holds a function (its future rows) and cannot cross threads; the
+// worker's is built again from the data and the chosen seasonal part, exactly as the search built it.
 import { availableParallelism } from 'node:os';
 import { isMainThread, parentPort, Worker, workerData } from 'node:worker_threads';
 import type { TrendModelKind } from '../base/settings.js';
@@ -27,12 +27,19 @@ export interface ModelFit extends TrendModelFit {
   windows?: ModelWindows;
 }
 
-export function fitModelTask(task: ModelTask): ModelTaskResult {
-  const { design, ...model } = fitTrendModel(task.kind, task.w, task.maxP, task.maxQ, task.options);
+/** The model and, for a complete seasonal series, its stability windows. */
+function fitModel(task: ModelTask): ModelFit {
+  const model = fitTrendModel(task.kind, task.w, task.maxP, task.maxQ, task.options);
   // The windows are the costliest evidence of a seasonal model: fitted here, they run side by
   // side with the other model's (collectEvidence takes them when the joint schedule agrees).
   if (model.seasonal === null || task.w.some(Number.isNaN)) return model;
-  return { ...model, windows: seasonalModelWindows(task.kind, task.w, { design, fit: model.fit }) };
+  return { ...model, windows: seasonalModelWindows(task.kind, task.w, model) };
+}
+
+/** `fitModel` for a worker thread: the result without its design, which cannot cross threads. */
+export function fitModelTask(task: ModelTask): ModelTaskResult {
+  const { design: _design, ...model } = fitModel(task);
+  return model;
 }
 
 /** The model with the design its search fitted: the plain one, or the one of its seasonal part. */
@@ -51,7 +58,7 @@ function withDesign(task: ModelTask, model: ModelTaskResult): ModelFit {
 export async function fitBothModels(tasks: Record<TrendModelKind, ModelTask>, threads: number | undefined): Promise<Record<TrendModelKind, ModelFit>> {
   const seasonal = tasks.deterministic.options.seasonal !== undefined;
   if (!seasonal || (threads ?? availableParallelism()) < 2) {
-    return { deterministic: withDesign(tasks.deterministic, fitModelTask(tasks.deterministic)), stochastic: withDesign(tasks.stochastic, fitModelTask(tasks.stochastic)) };
+    return { deterministic: fitModel(tasks.deterministic), stochastic: fitModel(tasks.stochastic) };
   }
   // A thread of its own rather than a pool: it gets the task with its start, so it works while
   // this thread runs the other search without yielding to the event loop.
@@ -64,9 +71,8 @@ export async function fitBothModels(tasks: Record<TrendModelKind, ModelTask>, th
   // A failure in this thread must not leave the worker's promise unobserved.
   elsewhere.catch(() => undefined);
   try {
-    const deterministic = fitModelTask(tasks.deterministic);
-    const stochastic = await elsewhere;
-    return { deterministic: withDesign(tasks.deterministic, deterministic), stochastic: withDesign(tasks.stochastic, stochastic) };
+    const deterministic = fitModel(tasks.deterministic);
+    return { deterministic, stochastic: withDesign(tasks.stochastic, await elsewhere) };
   } finally {
     await worker.terminate();
   }

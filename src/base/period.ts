@@ -71,3 +71,8 @@ export function addPeriods(label: string, k: number): string {
   if (!Number.isInteger(k)) throw new RangeError(`addPeriods needs an integer step, got ${k}`);
   return formatPeriod(periodFromIndex(period.frequency, periodIndex(period) + k));
 }
+
+/** Columns of K harmonic pairs for period s: 2K, less the zero sine at k = s/2. */
+export function harmonicColumnCount(period: number, harmonics: number): number {
+  return 2 * harmonics - (2 * harmonics === period ? 1 : 0);
+}

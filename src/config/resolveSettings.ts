@@ -9,7 +9,7 @@
 // The series must be read before the horizon can be resolved (its frequency may come from the
 // data), yet reading it needs the transform, the missing-value policy and the order limits:
 // `readingSettings` resolves those four, and `resolveSettings` builds the rest on them.
-import { periodsPerYear, type Frequency } from '../base/period.js';
+import { harmonicColumnCount, periodsPerYear, type Frequency } from '../base/period.js';
 import { InputError, type InputLocation } from '../base/problem.js';
 import { MIN_BACKTEST_ORIGINS, type AnalysisSettings, type SeasonalSetting, type Transform } from '../base/settings.js';
 import { BUILT_IN_SETTINGS as BUILT_IN, HORIZON_BY_FREQUENCY, MIN_TRAIN_FLOOR, MIN_TRAIN_PER_PARAMETER } from './builtInSettings.js';
@@ -116,9 +116,9 @@ function toSeasonal(written: NonNullable<WrittenSettings['seasonal']>, series: S
   if (period === 1) throw new InputError(configMessages.seasonalFormAnnual(placeOf('seasonal')));
   const most = Math.floor(period / 2);
   if (written.harmonics > most) throw new InputError(configMessages.tooManyHarmonics(placeOf('seasonal'), written.harmonics, most, frequency));
-  // K pairs are 2K columns (s − 1 at K = s/2, whose last sine vanishes); with the level they
-  // need as many distinct seasons observed (trigonometric interpolation on distinct points).
-  const columns = 2 * written.harmonics === period ? period - 1 : 2 * written.harmonics;
+  // With the level, K pairs' columns need as many distinct seasons observed, and one more
+  // (trigonometric interpolation on distinct points).
+  const columns = harmonicColumnCount(period, written.harmonics);
   const values = series.values;
   if (values === undefined) return { kind: 'fixed', period, ...written };
   const seen = new Set<number>();

@@ -256,20 +256,22 @@ export interface OlsPart {
  * always missing it is not).
  */
 export function regressorsIdentified(y: Float64Array, regressors: readonly Float64Array[]): boolean {
-  const k = regressors.length;
-  if (k === 0) return true;
+  if (regressors.length === 0) return true;
+  if (countObserved(y) <= regressors.length) return false;
+  return observedLeastSquares(y, regressors) !== undefined;
+}
+
+/** Least squares of y on the regressors over the observed y; undefined when they are collinear there. */
+function observedLeastSquares(y: Float64Array, regressors: readonly Float64Array[]): ReturnType<typeof leastSquares> {
   const observed: number[] = [];
   for (let t = 0; t < y.length; t++) if (!Number.isNaN(y[t])) observed.push(t);
-  if (observed.length <= k) return false;
-  return leastSquares(observed.map((t) => y[t]), regressors.map((column) => observed.map((t) => column[t]))) !== undefined;
+  return leastSquares(observed.map((t) => y[t]), regressors.map((column) => observed.map((t) => column[t])));
 }
 
 /** OLS of y on the regressors, skipping missing y. */
 export function olsFit(y: Float64Array, regressors: readonly Float64Array[]): OlsPart {
   const k = regressors.length;
-  const observed: number[] = [];
-  for (let t = 0; t < y.length; t++) if (!Number.isNaN(y[t])) observed.push(t);
-  const fit = k > 0 ? leastSquares(observed.map((t) => y[t]), regressors.map((column) => observed.map((t) => column[t]))) : undefined;
+  const fit = k > 0 ? observedLeastSquares(y, regressors) : undefined;
   if (k > 0 && fit === undefined) throw new Error('fitRegressionArma: the regressors are collinear');
   const coefficients = fit?.coefficients ?? new Float64Array(0);
   const residuals = y.map((value, t) => {

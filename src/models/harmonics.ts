@@ -8,10 +8,9 @@
 // first observation, makes the coefficients, and the pattern they describe, mean the same
 // whatever window a fit sees.
 
-/** Columns of K harmonic pairs for period s: 2K, less the zero sine at k = s/2. */
-export function harmonicColumnCount(period: number, harmonics: number): number {
-  return 2 * harmonics - (2 * harmonics === period ? 1 : 0);
-}
+import { harmonicColumnCount } from '../base/period.js';
+
+export { harmonicColumnCount };
 
 /** Most harmonic pairs a period has: ⌊s/2⌋. */
 export function maxHarmonics(period: number): number {

@@ -102,6 +102,12 @@ export function createProfileLikelihood(
     constrainFactors(x, order, factors, work);
     expandFactors(factors, order.period, ar, ma);
   };
+  const atUnconstrained = (x: ArrayLike<number>): number => {
+    fill(x);
+    const value = atCoefficients(ar, ma);
+    evaluatedAt?.set(x);
+    return value;
+  };
   // The adjoint route needs the Chandrasekhar run of a complete series and the generic column pass.
   const adjoint =
     workspace.complete && workspace.gaps === undefined && (workspace.r > SCALAR_STATE || workspace.ncol > 3)
@@ -141,18 +147,13 @@ export function createProfileLikelihood(
       expandFactors(given, order.period, expandedAr, expandedMa);
       return atCoefficients(expandedAr, expandedMa);
     },
-    atUnconstrained(x) {
-      fill(x);
-      const value = atCoefficients(ar, ma);
-      evaluatedAt?.set(x);
-      return value;
-    },
+    atUnconstrained,
     gradientAtUnconstrained(x, out) {
       if (adjoint === undefined) return false;
       // The workspace must hold the run at x: the optimiser asks right after evaluating there.
       let same = evaluatedAt !== undefined;
       for (let j = 0; j < x.length; j++) if (evaluatedAt?.[j] !== x[j]) same = false;
-      if (!same && !Number.isFinite(this.atUnconstrained(x))) return false;
+      if (!same && !Number.isFinite(atUnconstrained(x))) return false;
       if (!(workspace.steadyFrom >= 0)) return false;
       filterSensitivities(workspace, columns, estimation, process.p, adjoint.scratch, adjoint.sensitivities);
       const base = linearised(workspace, workspace.steadyFrom);
