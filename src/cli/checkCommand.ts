@@ -29,8 +29,8 @@ function describeSeries(id: string, series: Series): string {
   return `${id} ${series.first} to ${series.last} (${series.n} ${series.frequency})`;
 }
 
-/** The OK line, or every problem of the config and its series files. */
-function checkOne(file: string): { ok: string } | { problems: readonly InputProblem[] } {
+/** The OK line with any warnings (data ending well before memo.as_of), or every problem of the config and its series files. */
+function checkOne(file: string): { ok: string; warnings: InputProblem[] } | { problems: readonly InputProblem[] } {
   let plan: RunPlan;
   try {
     plan = loadConfig(file);
@@ -39,14 +39,18 @@ function checkOne(file: string): { ok: string } | { problems: readonly InputProb
     throw error;
   }
   let described: string[];
+  const warnings: InputProblem[] = [];
   try {
-    described = readAllSeries(plan).map(({ plan: series, series: read }) => describeSeries(series.id, read));
+    described = readAllSeries(plan).map(({ plan: series, series: read, asOfGap }) => {
+      if (asOfGap !== undefined) warnings.push(asOfGap.warning);
+      return describeSeries(series.id, read);
+    });
   } catch (error) {
     if (error instanceof InputError) return { problems: error.problems };
     throw error;
   }
   const count = plan.series.length === 1 ? '1 series' : `${plan.series.length} series`;
-  return { ok: `${file}: ok, memo ${plan.memo.id}, ${count}: ${described.join('; ')}` };
+  return { ok: `${file}: ok, memo ${plan.memo.id}, ${count}: ${described.join('; ')}`, warnings };
 }
 
 export async function runCheck(args: readonly string[], io: Io): Promise<number> {
@@ -61,6 +65,7 @@ export async function runCheck(args: readonly string[], io: Io): Promise<number>
   for (const file of positionals) {
     const result = checkOne(file);
     if ('ok' in result) {
+      for (const warning of result.warnings) io.stderr(`${formatProblem(warning)}\n`);
       io.stdout(`${result.ok}\n`);
       continue;
     }

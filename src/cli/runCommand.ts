@@ -121,6 +121,7 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
       const { result, error } = await settled[index];
       if (index + window < positionals.length) launch(index + window);
       if (result !== undefined) {
+        for (const warning of result.warnings) io.stderr(`${formatProblem(warning)}\n`);
         progress.memoDone(result.memoId, true);
         outcomes.push({ config, memo: result.memoId, series: result.series, result: `written (${result.files.join(', ')})`, folder: shownPath(result.folder) });
         continue;

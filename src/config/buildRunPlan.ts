@@ -34,6 +34,7 @@ export function buildRunPlan(doc: ConfigDocument, source: PlanSource): RunPlan {
       preparedBy: memo.prepared_by,
       reference: memo.reference,
       asOf: memo.as_of,
+      asOfAt: memo.as_of === undefined ? undefined : placeOf('memo.as_of'),
       author: memo.author,
       reviewers: memo.reviewers ?? [],
       signOff: memo.sign_off ?? [],

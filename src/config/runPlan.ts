@@ -58,6 +58,8 @@ export interface MemoDetails {
   reference?: string;
   /** A period label: 2026, 2026-Q3 or 2026-10. */
   asOf?: string;
+  /** Where memo.as_of is written, for the messages that compare it with the data. */
+  asOfAt?: ConfigPlace;
   author?: string;
   reviewers: Reviewer[];
   signOff: SignOff[];

@@ -48,6 +48,18 @@ export interface HistoryPoint {
   value: number | null;
 }
 
+/** A series whose data end more than one period before what the memo's as-of period could include. */
+export interface DataEnd {
+  /** The last observed period. */
+  last: string;
+  /** The memo's as-of period. */
+  as_of: string;
+  /** The latest period of the series' frequency that ends by the end of the as-of period. */
+  reachable: string;
+  /** Periods from `last` to `reachable` (more than one). */
+  missing: number;
+}
+
 export interface MemoSeries {
   record: AnalysisRecord;
   /** Observed values oldest first; the record does not carry them. Without it the history chart is left out with a note. */
@@ -56,6 +68,8 @@ export interface MemoSeries {
   units?: string;
   notes?: string;
   assumptions: Assumption[];
+  /** Set when the data end well before the as-of period (src/run/checkAsOf.ts). */
+  data_end?: DataEnd;
 }
 
 export interface FileDigest {

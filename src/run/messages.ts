@@ -1,6 +1,8 @@
 // What a run says about its output folders, the monthly as-of folders and `verify` (problems
 // exit with 2), and the lines of verify's report.
-import { abbreviateList, problem, type InputLocation, type InputProblem } from '../base/problem.js';
+import type { Frequency } from '../base/period.js';
+import { abbreviateList, plural, problem, type InputLocation, type InputProblem } from '../base/problem.js';
+import type { DataEnd } from '../memo/memoInput.js';
 
 const OUTPUT_FOLDER_HINT = 'choose a folder, or a path where one can be created';
 const TEMPLATES_HINT = 'correct the path, or remove output.templates to use the built-in templates';
@@ -40,6 +42,29 @@ export const runMessages = {
   },
 };
 
+
+/** Period words for counts in messages: 1 month, 14 quarters. */
+const PERIOD_NOUN: Record<Frequency, string> = { annual: 'year', quarterly: 'quarter', monthly: 'month' };
+
+/** A series' data against memo.as_of (src/run/checkAsOf.ts); `at` is where memo.as_of is written. */
+export const asOfMessages = {
+  dataPastAsOf(at: InputLocation, seriesId: string, file: string, last: string, asOf: string, reachable: string): InputProblem {
+    return problem(
+      'run.data-past-as-of',
+      `series '${seriesId}' (${file}) has observations up to ${last}, after the as-of period ${asOf}`,
+      `set memo.as_of to ${last} or later, or leave the observations after ${reachable} out of ${file}`,
+      at,
+    );
+  },
+  dataEndEarly(at: InputLocation, seriesId: string, file: string, end: DataEnd, frequency: Frequency): InputProblem {
+    return problem(
+      'run.data-end-early',
+      `warning: series '${seriesId}' (${file}) ends in ${end.last}, ${plural(end.missing, PERIOD_NOUN[frequency])} before ${end.reachable}, the last period the as-of period ${end.as_of} can include`,
+      `check that ${file} holds the latest observations, or set memo.as_of to the period the data speak for; the run goes on and the memo notes the gap`,
+      at,
+    );
+  },
+};
 
 const VERIFY_HELP = 'see trendbrief verify --help';
 

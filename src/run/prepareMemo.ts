@@ -6,6 +6,7 @@
 //   ─compareRecords (earlier as-of record)─▶ MemoInput ─renderMemoHtml / printer─▶ OutputFile[]
 import { basename, resolve } from 'node:path';
 import type { AnalysisRecord } from '../analysis/record.js';
+import type { InputProblem } from '../base/problem.js';
 import { toolVersion } from '../base/toolVersion.js';
 import type { OutputFormat, RunPlan } from '../config/runPlan.js';
 import type { MemoInput } from '../memo/memoInput.js';
@@ -46,6 +47,8 @@ export interface PreparedMemo {
   files: OutputFile[];
   records: AnalysisRecord[];
   document: RecordDocument;
+  /** Warnings that do not stop the run: series whose data end well before memo.as_of. */
+  warnings: InputProblem[];
 }
 
 export async function prepareMemo(plan: RunPlan, options: PrepareMemoOptions): Promise<PreparedMemo> {
@@ -84,12 +87,13 @@ export async function prepareMemo(plan: RunPlan, options: PrepareMemoOptions): P
   const input: MemoInput = {
     memo,
     paper: plan.output.paper,
-    series: loaded.map(({ plan: seriesPlan }, i) => ({
+    series: loaded.map(({ plan: seriesPlan, asOfGap }, i) => ({
       record: records[i],
       history: history[i],
       units: seriesPlan.units,
       notes: seriesPlan.notes,
       assumptions: assumptionsRegister(seriesPlan, records[i], configName),
+      ...(asOfGap === undefined ? {} : { data_end: asOfGap.dataEnd }),
     })),
     reproducibility: {
       tool: toolVersion().name,
@@ -124,5 +128,5 @@ export async function prepareMemo(plan: RunPlan, options: PrepareMemoOptions): P
   if (earlier !== null) inputs.push({ role: 'earlier-record', path: `${earlier.asOf}/record.json`, from_output: from(earlier.file), sha256: earlier.sha256 });
   const manifest = buildManifest({ tool: toolVersion(), run_date: date, command: options.command, inputs }, files);
   files.push({ name: 'manifest.json', content: manifestText(manifest) });
-  return { files, records, document };
+  return { files, records, document, warnings: loaded.flatMap(({ asOfGap }) => (asOfGap === undefined ? [] : [asOfGap.warning])) };
 }

@@ -10,11 +10,14 @@ import { readingSettings, resolveSettings } from '../config/resolveSettings.js';
 import type { RunPlan, SeriesPlan } from '../config/runPlan.js';
 import { dataMessages } from '../data/messages.js';
 import { readSeriesCsv } from '../data/readSeriesCsv.js';
+import { checkAsOf, type AsOfCheck } from './checkAsOf.js';
 
 export interface PlannedSeries {
   plan: SeriesPlan;
   series: Series;
   settings: AnalysisSettings;
+  /** Set when the data end more than one period before the memo's as-of period (checkAsOf). */
+  asOfGap?: NonNullable<AsOfCheck['gap']>;
 }
 
 /** `configFile` names the config in messages about the series file as a whole (missing, too large) and about its settings. */
@@ -40,13 +43,20 @@ export function readPlannedSeries(plan: SeriesPlan, configFile: string): Planned
   return { plan, series, settings: resolveSettings(plan.settings, series, placeOf) };
 }
 
-/** Every series of a config read and its settings resolved, the problems of all of them collected before failing. */
+/**
+ * Every series of a config read and its settings resolved, the problems of all of them collected
+ * before failing; with memo.as_of each series' last observation is checked against it.
+ */
 export function readAllSeries(plan: RunPlan): PlannedSeries[] {
   const problems: InputProblem[] = [];
   const loaded: PlannedSeries[] = [];
   for (const seriesPlan of plan.series) {
     try {
-      loaded.push(readPlannedSeries(seriesPlan, plan.configFile));
+      const planned = readPlannedSeries(seriesPlan, plan.configFile);
+      const { asOf, asOfAt } = plan.memo;
+      const check = asOf === undefined ? null : checkAsOf(asOf, { file: plan.configFile, ...(asOfAt ?? { field: 'memo.as_of' }) }, seriesPlan.id, seriesPlan.fileAsWritten, planned.series);
+      if (check?.refusal != null) problems.push(check.refusal);
+      loaded.push(check?.gap == null ? planned : { ...planned, asOfGap: check.gap });
     } catch (error) {
       if (!(error instanceof InputError)) throw error;
       problems.push(...error.problems);

@@ -4,7 +4,7 @@
 //   ─writeOutputFolder─▶ the folder (complete, or the previous one left as it was)
 import { loadConfig } from '../config/loadConfig.js';
 import type { OutputFormat } from '../config/runPlan.js';
-import { InputError } from '../base/problem.js';
+import { InputError, type InputProblem } from '../base/problem.js';
 import { monthlyMessages } from './messages.js';
 import type { PdfPrinter } from '../memo/print/pdfPrinter.js';
 import { checkRunPaths, writeFailure } from './checkRunPaths.js';
@@ -39,6 +39,8 @@ export interface MemoRunResult {
   files: string[];
   /** The as-of period of the memo compared with, when there was one. */
   comparedWith?: string;
+  /** Warnings that did not stop the run (series whose data end well before memo.as_of). */
+  warnings: InputProblem[];
 }
 
 export async function runMemo(configFile: string, options: RunMemoOptions = {}): Promise<MemoRunResult> {
@@ -53,7 +55,7 @@ export async function runMemo(configFile: string, options: RunMemoOptions = {}):
   if (monthly.length > 0) throw new InputError(monthlyMessages.asOfFoldersWouldBeReplaced({ file: plan.configFile, field: 'memo.as_of' }, shownPath(paths.idFolder), monthly));
   const date = runDate();
   const earlier = asOf === undefined ? null : findEarlierRecord(paths.idFolder, plan.memo.id, asOf);
-  const { files, records } = await prepareMemo(plan, {
+  const { files, records, warnings } = await prepareMemo(plan, {
     folder: paths.memoFolder,
     formats: options.formats ?? plan.output.formats,
     printer: options.printer,
@@ -76,5 +78,6 @@ export async function runMemo(configFile: string, options: RunMemoOptions = {}):
     series: records.length,
     files: files.map((file) => file.name),
     comparedWith: earlier?.asOf,
+    warnings,
   };
 }

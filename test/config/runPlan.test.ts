@@ -113,7 +113,7 @@ describe('paths', () => {
 describe('memo details and analysis options', () => {
   it('carries the memo details over with the reviewers and sign-offs', () => {
     const { memo } = loadConfig(FULL);
-    expect(memo).toMatchObject({ id: 'brackenfold-water-2026', asOf: '2026-Q3', preparedBy: 'Forecasting desk', reference: 'BWB-2026-07' });
+    expect(memo).toMatchObject({ id: 'brackenfold-water-2026', asOf: '2025-Q1', preparedBy: 'Forecasting desk', reference: 'BWB-2026-07' });
     expect(memo.title).toBe('Brackenfold Water Board – supply outlook <draft> & notes');
     expect(memo.reviewers).toEqual([{ name: 'Ada Quill', role: 'engagement lead' }, { name: 'Ben Moss' }]);
     expect(memo.signOff.map((s) => [s.reviewer, s.date, s.decision])).toEqual([

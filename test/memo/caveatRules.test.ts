@@ -228,7 +228,7 @@ describe('collectCaveats', () => {
   });
   it('has one rule per id', () => {
     expect(new Set(CAVEAT_RULES.map((r) => r.id)).size).toBe(CAVEAT_RULES.length);
-    expect(CAVEAT_RULES).toHaveLength(9);
+    expect(CAVEAT_RULES).toHaveLength(10);
   });
 });
 

@@ -21,7 +21,9 @@ describe('a memo with an as-of period', () => {
   it('goes to <memo id>/<as-of>/, records the observed values, and says when there is nothing to compare with', async () => {
     const root = monthlyFolder('2025-11');
     const run = await runCli(['run', join(root, 'memo.yaml'), '--quiet']);
-    expect(run.stderr).toBe('');
+    // Lake Huron ends in 1972, long before 2025-11: the one line on stderr is the as-of warning (src/run/checkAsOf.ts).
+    expect(run.errorLines).toHaveLength(1);
+    expect(run.errorLines[0]).toMatch(/memo\.yaml:5:10: memo\.as_of: warning: series 'lake-level' \(data\/lake-huron\.csv\) ends in 1972, 52 years before 2024/);
     expect(run.code).toBe(0);
     expect(readdirSync(join(root, 'out/lake-outlook'))).toEqual(['2025-11']);
     const folder = join(root, 'out/lake-outlook/2025-11');

@@ -1,5 +1,6 @@
 // A caveat is a warning the memo derives from the record's numbers by a small named rule.
 import type { AnalysisRecord } from '../../analysis/record.js';
+import type { DataEnd } from '../memoInput.js';
 
 export type CaveatSeverity = 'high' | 'medium' | 'low';
 
@@ -18,6 +19,8 @@ export interface Caveat {
 export interface CaveatContext {
   record: AnalysisRecord;
   units?: string;
+  /** Set when the data end well before the memo's as-of period. */
+  dataEnd?: DataEnd;
 }
 
 export interface CaveatRule {

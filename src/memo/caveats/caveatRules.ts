@@ -4,6 +4,7 @@
 import { SEVERITY_ORDER, type Caveat, type CaveatContext, type CaveatRule } from './caveat.js';
 import { backTransformed } from './backTransformed.js';
 import { backtestThin } from './backtestThin.js';
+import { dataEndsEarly } from './dataEndsEarly.js';
 import { fixedLineExtrapolation } from './fixedLineExtrapolation.js';
 import { horizonLong } from './horizonLong.js';
 import { narrowLineIntervals } from './narrowLineIntervals.js';
@@ -13,6 +14,7 @@ import { trendBreak } from './trendBreak.js';
 import { unitRootEvidence } from './unitRootEvidence.js';
 
 export const CAVEAT_RULES: readonly CaveatRule[] = [
+  dataEndsEarly,
   trendBreak,
   unitRootEvidence,
   narrowLineIntervals,

@@ -3,6 +3,13 @@ import type { TrendModelKind } from '../../base/settings.js';
 import { levelPercent, MODEL_IN_TEXT } from '../wording.js';
 
 export const caveatWording = {
+  dataEndsEarly: (a: { last: string; asOf: string; missing: string; from: string; to: string; allBefore: boolean; count: number }) =>
+    `The data end in ${a.last}, but the memo is as of ${a.asOf}: the ${a.missing} from ${a.from} to ${a.to} are not in the data. ` +
+    (a.allBefore
+      ? `The forecasts start after ${a.last}, so every one of them is for a period that has ended by the as-of period; `
+      : `The forecasts start after ${a.last}, so the first ${a.count} of them are for periods that have ended by the as-of period; `) +
+    'compare them with the values published since, and bring the data up to date before relying on the memo.',
+
   horizonLong: (a: { horizon: string; history: string; share: string }) =>
     `The forecast runs ${a.horizon} ahead from a history of ${a.history}: the horizon is ${a.share} of the history's length. ` +
     'Over a horizon that long both models extend patterns the data have shown only a few times, so read the later periods as a range of plausible paths rather than an estimate.',

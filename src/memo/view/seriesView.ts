@@ -75,7 +75,7 @@ export async function seriesView(entry: MemoSeries, index: number): Promise<Seri
   const units = entry.units === undefined ? undefined : noLinks(entry.units);
   const decimals = seriesDecimals(record);
   const chartInput = { series: title, units, decimals, record };
-  const caveats = collectCaveats({ record, units });
+  const caveats = collectCaveats({ record, units, dataEnd: entry.data_end });
   const backtest = record.backtest ?? undefined;
   const { recommendation } = record;
   const stability = record.evidence.stability ?? undefined;
