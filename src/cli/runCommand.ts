@@ -12,6 +12,7 @@ import { runMessages } from '../run/messages.js';
 import type { PdfPrinter } from '../memo/print/pdfPrinter.js';
 import { runMemo, type MemoRunResult } from '../run/runMemo.js';
 import { openSeriesPool } from '../run/seriesPool.js';
+import { batchOrder, type BatchEntry } from './batchOrder.js';
 import { progressReporter } from './progressReporter.js';
 import { splitOptions } from './splitOptions.js';
 import { shownPath } from '../base/shownPath.js';
@@ -33,7 +34,8 @@ Options:
   -h, --help                this text
 
 With several configs (e.g. configs/*.yaml) every memo is attempted; one that fails does not
-stop the others, and the summary at the end says which failed and why.
+stop the others, and the summary at the end says which failed and why. As-of memos of one
+memo id run in period order, so each sees the earlier ones of the same run.
 `;
 
 interface Io {
@@ -87,8 +89,11 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
   const pool = threads > 1 && totalSeries > 1 ? openSeriesPool(Math.min(threads, totalSeries)) : undefined;
   const outcomes: MemoOutcome[] = [];
   let exitCode: number = EXIT.ok;
+  const { order, after } = batchOrder(previews);
   const runOne = async (index: number): Promise<MemoRunResult> => {
     const config = positionals[index];
+    // The earlier periods of this memo are written first (they never reject: see `launch`).
+    await Promise.all(after[index].map((earlier) => settled[earlier]));
     // Two configs of one batch writing the same memo folder would silently replace each other.
     const folder = previews[index].folder;
     const first = folder === undefined ? undefined : claimed.get(folder);
@@ -116,10 +121,11 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
     );
   };
   try {
-    for (let index = 0; index < Math.min(window, positionals.length); index++) launch(index);
-    for (const [index, config] of positionals.entries()) {
+    for (let step = 0; step < Math.min(window, order.length); step++) launch(order[step]);
+    for (const [step, index] of order.entries()) {
+      const config = positionals[index];
       const { result, error } = await settled[index];
-      if (index + window < positionals.length) launch(index + window);
+      if (step + window < order.length) launch(order[step + window]);
       if (result !== undefined) {
         for (const warning of result.warnings) io.stderr(`${formatProblem(warning)}\n`);
         progress.memoDone(result.memoId, true);
@@ -149,12 +155,17 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
   return exitCode;
 }
 
-/** The series count (for progress) and the memo folder (to catch two configs writing one folder); nothing for a config that does not load. */
-function previewConfig(config: string, outputFolder: string | undefined): { series: number; folder?: string } {
+/**
+ * The series count (for progress), the memo folder (to catch two configs writing one folder) and
+ * the memo id's folder with the as-of period (for the batch's order); nothing for a config that
+ * does not load.
+ */
+function previewConfig(config: string, outputFolder: string | undefined): { series: number; folder?: string } & BatchEntry {
   try {
     const plan = loadConfig(config);
-    const folder = join(outputFolder ?? plan.output.folder, plan.memo.id, plan.memo.asOf ?? '');
-    return { series: plan.series.length, folder };
+    const idFolder = join(outputFolder ?? plan.output.folder, plan.memo.id);
+    const folder = join(idFolder, plan.memo.asOf ?? '');
+    return { series: plan.series.length, folder, idFolder, asOf: plan.memo.asOf };
   } catch {
     return { series: 0 };
   }
