@@ -3,6 +3,7 @@
 // Plain data, independent of the config code: whoever runs the analysis fills it in.
 import type { AnalysisRecord } from '../analysis/record.js';
 import type { Revisions } from './revisionsPart.js';
+import type { TrackRecord } from './trackRecordPart.js';
 
 export type Paper = 'A4' | 'Letter';
 
@@ -93,4 +94,6 @@ export interface MemoInput {
   reproducibility: Reproducibility;
   /** This memo against the previous as-of memo; absent for a memo without an as-of period. */
   revisions?: Revisions;
+  /** How the earlier as-of memos' forecasts fared (src/run/trackRecord.ts); absent without an as-of period. */
+  track_record?: TrackRecord;
 }

@@ -11,6 +11,8 @@ export interface ComparableForecast {
   h: number;
   period: string;
   point: number | null;
+  /** Interval ends by level key; read by the track record, absent in hand-made documents. */
+  intervals?: Record<string, [number | null, number | null]>;
 }
 
 export interface ComparableRecord {
@@ -53,7 +55,12 @@ function perModel(check: Check): Check {
   return (value) => isObject(value) && MODELS.every((model) => Object.hasOwn(value, model) && check(value[model]));
 }
 
-const isForecast: Check = (value) => has(value, { h: isWhole, period: isText, point: isNumberOrNull });
+const isInterval: Check = (value) => Array.isArray(value) && value.length === 2 && value.every(isNumberOrNull);
+
+const isForecast: Check = (value) =>
+  has(value, { h: isWhole, period: isText, point: isNumberOrNull }) &&
+  isObject(value) &&
+  (value.intervals === undefined || (isObject(value.intervals) && Object.values(value.intervals).every(isInterval)));
 
 const isRecord: Check = (value) =>
   has(value, {

@@ -1,7 +1,8 @@
-// The most recent earlier as-of memo beside this one: among the sibling folders of
-// <output folder>/<memo id>/ whose names are period labels before this memo's as-of period,
-// the latest whose record.json is a record document of the same memo. "Earlier" is by period
-// order, never by file time, so a rerun of an old month compares with the same memo as before.
+// The earlier as-of memos beside this one: among the sibling folders of <output folder>/<memo id>/
+// whose names are period labels before this memo's as-of period, those whose record.json is a
+// record document of the same memo; the most recent of them is the one the revisions compare
+// with. "Earlier" is by period order, never by file time, so a rerun of an old month compares
+// with the same memos as before.
 import { readdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { parsePeriod, periodsPerYear } from '../base/period.js';
@@ -45,19 +46,30 @@ export function isEarlierAsOf(label: string, asOf: string): boolean {
   return span !== null && own !== null && span[1] < own[1];
 }
 
-export function findEarlierRecord(memoIdFolder: string, memoId: string, asOf: string): EarlierRecord | null {
+/**
+ * Every earlier as-of memo beside this one whose record.json is a record document of the same
+ * memo and as-of period, the most recent first: the revisions read the first, the track record
+ * all of them.
+ */
+export function findEarlierRecords(memoIdFolder: string, memoId: string, asOf: string): EarlierRecord[] {
   let entries: string[];
   try {
     entries = readdirSync(memoIdFolder);
   } catch {
-    return null;
+    return [];
   }
-  for (const label of entries.filter((entry) => isEarlierAsOf(entry, asOf)).sort(byRecency)) {
-    const file = join(memoIdFolder, label, 'record.json');
-    const read = readComparableDocument(file);
-    if (read !== null && read.document.memo.id === memoId && read.document.memo.as_of === label) return { asOf: label, file, ...read };
-  }
-  return null;
+  return entries
+    .filter((entry) => isEarlierAsOf(entry, asOf))
+    .sort(byRecency)
+    .flatMap((label) => {
+      const file = join(memoIdFolder, label, 'record.json');
+      const read = readComparableDocument(file);
+      return read !== null && read.document.memo.id === memoId && read.document.memo.as_of === label ? [{ asOf: label, file, ...read }] : [];
+    });
+}
+
+export function findEarlierRecord(memoIdFolder: string, memoId: string, asOf: string): EarlierRecord | null {
+  return findEarlierRecords(memoIdFolder, memoId, asOf)[0] ?? null;
 }
 
 /**

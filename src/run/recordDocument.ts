@@ -6,6 +6,7 @@
 import type { AnalysisRecord } from '../analysis/record.js';
 import type { Series } from '../base/series.js';
 import type { HistoryPoint, MemoDetails } from '../memo/memoInput.js';
+import type { TrackRecord } from '../memo/trackRecordPart.js';
 
 export const RECORD_DOCUMENT_SCHEMA = 'trendbrief.memo/1';
 
@@ -22,6 +23,8 @@ export interface RecordDocument {
   records: AnalysisRecord[];
   /** In the order of `records`. Documents written before the as-of folders existed lack it. */
   history: SeriesHistory[];
+  /** How the earlier as-of memos' forecasts fared (trackRecord.ts); only in a memo with an as-of period. */
+  track_record?: TrackRecord;
 }
 
 /** A series' observations as the memo and the record document hold them. */

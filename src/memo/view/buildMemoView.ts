@@ -6,6 +6,7 @@ import { cssMargin, PAPER_SIZES } from '../print/paperSize.js';
 import { CAUTIONS, HEADINGS, LABELS, METHOD_NAME, MODEL_NAME, SIGN_OFF_NOTE, summaryIntro, TEMPLATE_TEXT } from '../wording.js';
 import { memoStatus, type MemoStatus } from './memoStatus.js';
 import { revisionsView, type RevisionsView } from './revisionsView.js';
+import { trackRecordView, type TrackRecordView } from './trackRecordView.js';
 import { seriesView, type SeriesView } from './seriesView.js';
 import { signOffView, type SignOffRow } from './signOffView.js';
 import type { SummaryCard } from './summaryView.js';
@@ -17,6 +18,8 @@ export interface MemoView {
   summary: { intro: string; cards: SummaryCard[] };
   series: SeriesView[];
   revisions: RevisionsView | null;
+  /** How the earlier as-of memos' forecasts fared; `summary` is one sentence for page 1. Absent without earlier memos. */
+  trackRecord?: TrackRecordView;
   assumptions: { anchor: string; title: string; rows: { choice: string; value: string; basis: string; setBy: string }[] }[];
   cautions: readonly string[];
   signOff: { note: string; rows: SignOffRow[] };
@@ -52,6 +55,7 @@ export async function buildMemoView(input: MemoInput): Promise<MemoView> {
   const series: SeriesView[] = [];
   // One series at a time: vega views are created and finalised in turn, never all at once.
   for (const [i, entry] of input.series.entries()) series.push(await seriesView(entry, i));
+  const trackRecord = await trackRecordView(input);
   const status = memoStatus(memo);
   const digest = (d: { file: string; sha256: string }) => ({ file: noLinks(d.file), sha256: noLinks(d.sha256) });
   return {
@@ -70,6 +74,7 @@ export async function buildMemoView(input: MemoInput): Promise<MemoView> {
     summary: { intro: summaryIntro(sharedLevels(input), series.some((s) => s.summary.year !== null)), cards: series.map((s) => s.summary) },
     series,
     revisions: await revisionsView(input),
+    ...(trackRecord === undefined ? {} : { trackRecord }),
     assumptions: input.series.map((entry, i) => ({
       anchor: series[i].anchor,
       title: series[i].title,
