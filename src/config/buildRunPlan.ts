@@ -98,6 +98,8 @@ function seriesPlan(
     title: entry.title ?? entry.id,
     units: entry.units,
     notes: entry.notes,
+    source: entry.source,
+    vintage: entry.vintage,
     file: resolvePath(baseDir, entry.file),
     fileAsWritten: entry.file,
     periodColumn: entry.period_column,

@@ -21,6 +21,9 @@ export interface SeriesPlan {
   title: string;
   units?: string;
   notes?: string;
+  /** Where the data come from and which release; shown on page 1. */
+  source?: string;
+  vintage?: string;
   /** Absolute path of the CSV file. */
   file: string;
   /** The path as written in the config. */
@@ -39,6 +42,8 @@ export interface SeriesPlan {
 export interface Reviewer {
   name: string;
   role?: string;
+  /** PEM text of an Ed25519 public key; checked to parse as one. */
+  public_key?: string;
 }
 
 export interface SignOff {

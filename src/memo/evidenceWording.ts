@@ -3,8 +3,9 @@
 // numbers arrive formatted; these functions only choose the words.
 import type { Frequency } from '../base/period.js';
 import type { Estimation, TrendModelKind } from '../base/settings.js';
-import { countPeriods, levelPercent, MODEL_IN_TEXT, MODEL_NAME } from './wording.js';
+import { countPeriods, levelPercent, listInWords, MODEL_IN_TEXT, MODEL_NAME } from './wording.js';
 import { type RefitPolicy, type WindowKind } from '../base/settings.js';
+import type { ResidualCheckName } from '../evidence/residualChecks.js';
 
 export const UNIT_ROOT_ROWS = {
   kpssLevel: { name: 'KPSS: steady level', holds: 'no evidence against a steady level', rejects: 'rules out a steady level' },
@@ -56,16 +57,33 @@ export const evidenceWording = {
   }) =>
     `Each model was fitted to the history up to a past date (an origin) and its forecasts compared with what then happened. ` +
     `There were ${a.origins} origins, ${countPeriods(a.step, a.frequency)} apart, from ${a.firstPeriod} (${a.firstLength} observations) to ${a.lastPeriod} (${a.lastLength} observations), each forecast up to ${countPeriods(a.horizon, a.frequency)} ahead. ` +
-    `${(a.seasonal ? SEASONAL_REFIT_WORDS : REFIT_WORDS)[a.refit]} ${a.window === 'expanding' ? 'Each fit used all the history up to its origin.' : `Each fit used a sliding window of at least ${a.minTraining} observations.`} ` +
-    (a.maseScaling === 'seasonal_naive'
-      ? `MASE divides each error by the in-sample error of the seasonal naive forecast, which repeats the value of the same ${a.frequency === 'quarterly' ? 'quarter' : 'month'} a year earlier; a MASE below 1 beats that benchmark.`
-      : 'The no-change benchmark forecasts the last observed value at every horizon; a MASE below 1 beats the in-sample one-step error of that benchmark.'),
+    `${(a.seasonal ? SEASONAL_REFIT_WORDS : REFIT_WORDS)[a.refit]} ${a.window === 'expanding' ? 'Each fit used all the history up to its origin.' : `Each fit used a sliding window of at least ${a.minTraining} observations.`}`,
   backtestUnavailable: (reason: string) => `Why: ${reason}`,
   /** `level`: the one the recommendation rule scores, the only level the comparison tests run at. */
   comparisonIntro: (level: number) =>
     `At each horizon a Diebold-Mariano test of equal accuracy compares the two models\u2019 backtest losses: squared error for the point forecasts and the ${levelPercent(level)} interval score for the intervals. The outcome names the model with the lower average loss; a small p-value means the difference is unlikely to be chance.`,
-  comparisonOutcome: (better: TrendModelKind | null, available: boolean, reason: string | null) =>
-    !available ? `not tested: ${reason ?? 'no reason recorded'}` : better === null ? 'equal average loss' : `${MODEL_NAME[better].toLowerCase()} lower`,
+  comparisonOutcome: (better: TrendModelKind | null, available: boolean) =>
+    !available ? 'not tested' : better === null ? 'equal average loss' : `${MODEL_NAME[better].toLowerCase().replace(' trend', '')} lower`,
+  noReason: 'no reason recorded',
+  stabilitySummary: (likely: TrendModelKind[], weak: TrendModelKind[]) => {
+    const names = (models: TrendModelKind[]) => listInWords(models.map((m) => MODEL_NAME[m].toLowerCase()));
+    const where = '(chart and tests in the technical appendix)';
+    if (likely.length > 0) return `Trend stability: a break is likely in the ${names(likely)} at the 5% level${weak.length > 0 ? `, with weak signs of one in the ${names(weak)}` : ''} ${where}.`;
+    if (weak.length > 0) return `Trend stability: no break at the 5% level; weak signs of one in the ${names(weak)} at the 10% level ${where}.`;
+    return `Trend stability: neither trend shows a break at the 10% level ${where}.`;
+  },
+  residualSummary: (models: { model: TrendModelKind; flagged: ResidualCheckName[] }[]) => {
+    const what: Record<ResidualCheckName, string> = {
+      ljung_box: 'leftover pattern over several lags (Ljung-Box)',
+      acf: 'single autocorrelations beyond their bounds',
+      normality: 'errors not bell-shaped (Jarque-Bera), so the normal-based intervals may misstate the chance of large surprises',
+    };
+    const flagged = models.filter((m) => m.flagged.length > 0);
+    if (flagged.length === 0) return 'Checks of the one-step forecast errors find no problem in either model (detail in the technical appendix).';
+    const parts = flagged.map((m) => `${MODEL_NAME[m.model].toLowerCase()}: ${listInWords(m.flagged.map((c) => what[c]))}`);
+    const clean = models.filter((m) => m.flagged.length === 0).map((m) => MODEL_NAME[m.model].toLowerCase());
+    return `Checks of the one-step forecast errors flag ${parts.join('; ')}${clean.length > 0 ? `; nothing for the ${clean[0]}` : ''} (detail in the technical appendix).`;
+  },
 
   /** `yearSteps`: the stochastic model works on seasonal differences over this many periods (a year); absent otherwise. */
   breakTest: (a: { model: TrendModelKind; rejects5: boolean; rejects10: boolean; period: string; stat: string; critical5: string; pBound: string; yearSteps?: number }) => {
@@ -79,7 +97,7 @@ export const evidenceWording = {
     if (a.rejects10) return `${MODEL_NAME[a.model]}: broadly stable, with weak signs of a shift in ${what} from ${a.period} (statistic ${a.stat} against a 5% critical value of ${a.critical5}; ${a.pBound}).`;
     return `${MODEL_NAME[a.model]}: no break stands out. The largest shift in ${what}, from ${a.period}, gives a statistic of ${a.stat}, below the 5% critical value of ${a.critical5} (${a.pBound}).`;
   },
-  breakMethod: (method: string, source: string, trimming: string) => `Method: ${method}; candidate dates exclude ${trimming} of the sample at each end. Critical values: ${source}.`,
+  breakMethod: (method: string, source: string, trimming: string) => `Method: ${method}; candidate dates exclude ${trimming} of the sample at each end. ${sourceSentence(source)}`,
   stabilitySettings: (a: { minWindow: number; step: number; windows: number; seasonal: boolean }) =>
     a.windows <= 1
       ? `The history is too short for growing stretches: the shortest the check uses is ${a.minWindow} observations, the whole series, so the charts show the full-history estimates alone and only the break tests speak to stability.`
@@ -169,6 +187,13 @@ const SEASONAL_REFIT_WORDS: Record<RefitPolicy, string> = {
   reestimate: 'At every origin the coefficients were re-estimated, with the ARMA orders and seasonal parts held at the full-history choice.',
   fixed: REFIT_WORDS.fixed,
 };
+
+/** The break test's sources as a sentence: "statistic: A; critical values: B" reads "The statistic follows A; its critical values are B." */
+function sourceSentence(source: string): string {
+  const parts = /^statistic: (.*?); critical values: (.*)$/.exec(source);
+  if (parts === null) return `Critical values: ${source}.`;
+  return `The statistic follows ${parts[1]}; its critical values are the ${parts[2]}.`;
+}
 
 function capitalise(text: string): string {
   return text.charAt(0).toUpperCase() + text.slice(1);

@@ -2,6 +2,7 @@
 // AnalysisRecord plus what the analyst wrote about it) and the reproducibility facts.
 // Plain data, independent of the config code: whoever runs the analysis fills it in.
 import type { AnalysisRecord } from '../analysis/record.js';
+import type { RecordedSignOff, Supersedes } from './reviewPart.js';
 import type { Revisions } from './revisionsPart.js';
 import type { TrackRecord } from './trackRecordPart.js';
 
@@ -33,6 +34,7 @@ export interface MemoDetails {
   as_of: string;
   author: string;
   reviewers: Reviewer[];
+  /** Sign-offs typed into the config: shown as declared, not recorded; they never sign a memo off. */
   sign_off: SignOff[];
 }
 
@@ -40,7 +42,8 @@ export interface Assumption {
   choice: string;
   value: string;
   basis: string;
-  set_by: 'config' | 'default';
+  /** Who settled it: the config, the tool's default, or the data (a choice the analysis made, such as the ARMA order). */
+  set_by: 'config' | 'default' | 'data';
 }
 
 export interface HistoryPoint {
@@ -68,6 +71,9 @@ export interface MemoSeries {
   /** Unit of the values, e.g. "ML/day"; shown after numbers. */
   units?: string;
   notes?: string;
+  /** Where the data come from and which release, as the config gives them (shown on page 1). */
+  source?: string;
+  vintage?: string;
   assumptions: Assumption[];
   /** Set when the data end well before the as-of period (src/run/checkAsOf.ts). */
   data_end?: DataEnd;
@@ -96,4 +102,10 @@ export interface MemoInput {
   revisions?: Revisions;
   /** How the earlier as-of memos' forecasts fared (src/run/trackRecord.ts); absent without an as-of period. */
   track_record?: TrackRecord;
+  /** SHA-256 of the memo's content (src/run/contentDigest.ts), which sign-offs are bound to. */
+  digest?: string;
+  /** The sign-offs recorded in the memo folder, in log order, each judged against `digest`. */
+  sign_offs?: RecordedSignOff[];
+  /** For a revised memo: the revision it supersedes and what changed. */
+  supersedes?: Supersedes;
 }

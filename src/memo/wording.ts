@@ -67,15 +67,6 @@ export const DECISION_NAME: Record<SignOffDecision, string> = {
   rejected: 'Rejected',
 };
 
-export const STATUS = {
-  draft: 'Draft',
-  signedOff: 'Signed off',
-  noReviewers: 'No reviewers are listed, so the memo cannot be signed off.',
-  awaiting: (names: string[]) => `Awaiting sign-off from ${listInWords(names)}.`,
-  rejectedBy: (names: string[]) => `Not approved by ${listInWords(names)}.`,
-  complete: 'Every listed reviewer has signed off.',
-} as const;
-
 export const HEADINGS = {
   summary: 'Summary for the client',
   history: 'History',
@@ -84,13 +75,14 @@ export const HEADINGS = {
   backtest: 'Backtest accuracy',
   evidence: 'What the data say about the trend',
   models: 'The two models',
-  residualAcf: 'Leftover pattern in the forecast errors',
+  residualChecks: 'Checks of each model\u2019s one-step forecast errors',
   stability: 'Trend stability',
   caveats: 'Caveats',
   assumptions: 'Assumptions register',
-  cautions: 'Important cautions',
+  cautions: 'Standing cautions',
   signOff: 'Review and sign-off',
   reproducibility: 'Appendix: reproducing this memo',
+  detail: 'Technical appendix: models and checks in detail',
 } as const;
 
 export const LABELS = {
@@ -108,13 +100,18 @@ export const LABELS = {
   units: 'Units',
   span: 'History',
   transform: 'Modelling scale',
+  source: 'Source',
   notes: 'Notes',
-  severity: { high: 'Important', medium: 'Caution', low: 'Note' },
+  severity: { high: 'Weighs on the decision', medium: 'Bear in mind', low: 'For the record' },
   choice: 'Choice',
   value: 'Value',
   basis: 'Basis',
   setBy: 'Set by',
-  setByValue: { config: 'Configuration', default: 'Tool default' },
+  setByValue: { config: 'Config', default: 'Default', data: 'Data' },
+  allSeries: 'Every series, unless its own list below says otherwise',
+  contentDigest: 'Content digest',
+  openComment: 'Open comment',
+  registerIntro: 'Each choice behind the memo, its value, where it comes from and who settled it: the config, the tool\u2019s default, or the data (a choice the analysis made by a documented rule). Each choice is listed once with the entry most series share; each series then lists only what is its own.',
   name: 'Name',
   role: 'Role',
   date: 'Date',
@@ -158,22 +155,57 @@ export const TEMPLATE_TEXT = {
   noAssumptions: 'No assumptions were recorded for this series.',
   forecastCaption: (units: string) => (units === '' ? 'Forecasts by period' : `Forecasts by period (${units})`),
   pointCaption: (units: string) => (units === '' ? 'Point accuracy by horizon' : `Point accuracy by horizon (RMSE in ${units})`),
-  intervalCaption: (units: string, transformed: boolean) =>
-    units === ''
-      ? `Interval accuracy by horizon${transformed ? ' (CRPS on the modelling scale)' : ''}`
-      : `Interval accuracy by horizon (width and score in ${units}; CRPS ${transformed ? 'on the modelling scale' : `in ${units}`})`,
   comparisonCaption: 'Comparison tests by horizon',
-  pointColumns: ['RMSE', 'MAPE', 'MASE'],
+  notTested: 'not tested',
+  methodShort: { deterministic: 'Det.', stochastic: 'Stoch.', naive: 'Bench.', seasonal_naive: 'Bench.' } as Record<BacktestMethod, string>,
+  coverHead: (level: number) => `${levelPercent(level)} cover`,
+  backtestTableNote: (benchmark: string) =>
+    `Det.: deterministic trend. Stoch.: stochastic trend. Bench.: the ${benchmark.toLowerCase()} benchmark. RMSE: root mean squared error. MASE: mean absolute error over a fixed in-sample yardstick (lower is better; above 1 at longer horizons is usual for every method). Cover: share of outcomes inside the interval. Interval score: width plus a penalty for misses (lower is better). MAPE, widths and CRPS at every horizon are in record.json.`,
+  ruleStudyPointer: 'How this rule behaves in simulation: see the technical appendix.',
+  rowsShown: (shown: readonly number[]) => `Rows shown: steps ${listInWords(shown.map(String))}; every step is in forecasts.csv and record.json.`,
+  backtestRowsShown: (shown: readonly number[]) => `Rows shown: steps ${listInWords(shown.map(String))}; every step is in record.json.`,
+  widthFlat: (level: number, low: string, high: string) =>
+    low === high
+      ? `The deterministic model's ${levelPercent(level)} interval is ${low} times as wide as the stochastic model's at every horizon: the two models' uncertainty hardly differs.`
+      : `The deterministic model's ${levelPercent(level)} interval is ${low} to ${high} times as wide as the stochastic model's at every horizon: the two models' uncertainty hardly differs.`,
+  widthRange: (level: number, first: { period: string; ratio: string }, last: { period: string; ratio: string }, low: string, high: string) => {
+    const direction = Number(high) < 1 ? 'narrower at every horizon' : Number(low) > 1 ? 'wider at every horizon' : 'narrower at some horizons and wider at others';
+    return `Width ratio: the deterministic model's ${levelPercent(level)} interval divided by the stochastic model's, ${first.ratio} at ${first.period} and ${last.ratio} at ${last.period} (${direction}).`;
+  },
   /** Coverage at every level; width and score at the level the recommendation rule scores. */
-  intervalColumns: (levels: readonly number[], scored: number) => [
-    ...levels.map((level) => `${levelPercent(level)} cover`),
-    `${levelPercent(scored)} width`,
-    `${levelPercent(scored)} score`,
-    'CRPS',
-  ],
-  accuracyNote:
-    'RMSE: root mean squared error. MAPE: mean absolute percentage error. MASE: mean absolute error divided by the in-sample error of the benchmark each backtest names (the no-change forecast, or for a seasonal series the same season a year earlier). ' +
-    'Cover: share of outcomes inside the interval. Score: interval score, the width plus a penalty for outcomes outside it (lower is better). CRPS: continuous ranked probability score (lower is better).',
+} as const;
+
+/** Page 1: the reviewer's overview of every series. */
+export const PAGE_ONE = {
+  heading: 'At a glance',
+  issued: 'Issued',
+  data: (span: string, last: string) => `${span}; last observation ${last}`,
+  source: (source: string, vintage: string) =>
+    source === '' && vintage === '' ? 'Source and vintage: not given in the config.' : `${source === '' ? 'Source not given' : `Source: ${source}`}${vintage === '' ? '' : `; vintage: ${vintage}`}.`,
+  annual: 'next full year: as next period',
+  yearBeyond: (year: string | number) => `${year}: beyond the horizon`,
+  nextHead: 'Next period',
+  yearHead: 'Next full year',
+  endHead: 'End of horizon',
+  widestInterval: 'Widest interval',
+  noRecommendation: 'No recommendation was recorded; both models are shown.',
+  recommendation: (model: string, decidedBy: string, reason: string, agreement: string) =>
+    `Recommended: ${model.toLowerCase()} trend. ${decidedBy}${reason === '' ? '' : ` Main reason: ${reason.replace(/\.$/, '')}.`}${agreement === '' ? '' : ` ${agreement}`}`,
+  caveats: (all: number, high: number, highLabel: string) =>
+    all === 0 ? 'No caveats.' : `${all} caveat${all === 1 ? '' : 's'} on the series page${high === 0 ? '' : `, ${high} marked \u201c${highLabel.toLowerCase()}\u201d`}.`,
+  noEarlier: (asOf: string) => `Since the last memo: no earlier memo (as of a period before ${asOf}) was found beside this one.`,
+  changes: (a: { earlier: string; recommendation: string[]; orders: string[]; data: string[]; added: string[]; dropped: string[] }) => {
+    const parts = [
+      a.recommendation.length === 0 ? 'no recommendation changed' : `the recommendation changed for ${listInWords(a.recommendation)}`,
+      a.orders.length === 0 ? 'no model order changed' : `model orders changed for ${listInWords(a.orders)}`,
+      a.data.length === 0 ? 'no observation was revised' : `observations were revised for ${listInWords(a.data)}`,
+      ...(a.added.length === 0 ? [] : [`new: ${listInWords(a.added)}`]),
+      ...(a.dropped.length === 0 ? [] : [`dropped: ${listInWords(a.dropped)}`]),
+    ];
+    return `Since the memo as of ${a.earlier}: ${parts.join('; ')}. Forecast revisions are in the section that follows.`;
+  },
+  legend: (level: string) =>
+    `\u25C6 marks the recommended model, whose row is set in bold. Each figure is a point forecast with its ${level} prediction interval beneath. Severity chips on the series pages: \u201cweighs on the decision\u201d, \u201cbear in mind\u201d, \u201cfor the record\u201d, from most to least serious.`,
 } as const;
 
 export const PAGE_FOOTER = { page: 'Page', of: 'of' } as const;

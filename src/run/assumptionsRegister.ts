@@ -1,6 +1,6 @@
 // The assumptions register of one series: every modelling choice, its value as applied (from
 // the record's settings, or the backtest's own record of what it ran), its basis, and who set
-// it (the config, or the tool's default).
+// it (the config, the tool's default, or the data for what the analysis chose).
 import type { AnalysisRecord } from '../analysis/record.js';
 import { TREND_MODELS } from '../base/settings.js';
 import type { SeriesPlan } from '../config/runPlan.js';
@@ -59,15 +59,17 @@ export function assumptionsRegister(plan: SeriesPlan, record: AnalysisRecord, co
       basis:
         `lowest AICc over p ≤ ${record.settings.max_p}, q ≤ ${record.settings.max_q}` +
         (part === null ? '' : fixedPart ? ', the seasonal part as configured' : ', the seasonal part searched with it (seasonal differences by the seasonal test)'),
-      set_by: 'default',
+      set_by: 'data',
     });
   }
   if (record.recommendation !== undefined) {
     rows.push({
       choice: 'Model recommended',
       value: `${record.recommendation.model} trend`,
-      basis: record.recommendation.fixed_by_config ? `fixed by the config: ${record.recommendation.justification ?? ''}` : record.recommendation.rule_text,
-      set_by: record.recommendation.fixed_by_config ? 'config' : 'default',
+      basis: record.recommendation.fixed_by_config
+        ? `fixed by the config: ${record.recommendation.justification ?? ''}`
+        : `the ${record.settings.recommendation.rule} rule applied to this series' evidence (the rule and the evidence are on the series page)`,
+      set_by: record.recommendation.fixed_by_config ? 'config' : 'data',
     });
   }
   return rows;

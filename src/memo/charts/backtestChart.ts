@@ -44,7 +44,7 @@ function linePanel(title: string, field: 'rmse' | 'coverage', rows: BacktestChar
   return {
     title: { text: title, fontSize: 11 },
     width: PANEL_WIDTH,
-    height: 180,
+    height: 88,
     layer: [
       ...extra,
       { data: { values: shown }, mark: { type: 'line', strokeWidth: 1.6 }, encoding: { x, y, color, strokeDash } },
@@ -58,6 +58,19 @@ function linePanel(title: string, field: 'rmse' | 'coverage', rows: BacktestChar
       ),
     ],
   };
+}
+
+/** Relative difference below which two RMSE lines print as one. */
+const COINCIDE = 0.005;
+
+/** Whether the two models' RMSE lines lie on top of each other at every horizon, so the chart must say so. */
+export function linesCoincide(backtest: BacktestRecord): boolean {
+  const stochastic = backtest.per_horizon.stochastic;
+  return backtest.per_horizon.deterministic.every((row, i) => {
+    const a = row.rmse;
+    const b = stochastic[i]?.rmse;
+    return a !== null && b !== null && b !== undefined && Math.abs(a - b) <= COINCIDE * Math.max(Math.abs(a), Math.abs(b));
+  });
 }
 
 export function backtestChart({ series, units, decimals, backtest }: { series: string; units?: string; decimals: number; backtest: BacktestRecord }): TopLevelSpec {
@@ -75,7 +88,7 @@ export function backtestChart({ series, units, decimals, backtest }: { series: s
     encoding: { y: { field: 'coverage', type: 'quantitative' } },
   };
   return {
-    title: { text: chartWording.backtest.title(series), subtitle: chartWording.backtest.subtitle(origins) },
+    title: { text: chartWording.backtest.title(series), subtitle: chartWording.backtest.subtitle(origins, level, linesCoincide(backtest)) },
     description: chartWording.backtest.description({ origins, horizon: backtest.settings.horizon, endErrors, endCoverage, level, benchmark: MODEL_IN_TEXT[methods[2]] }),
     config: CHART_CONFIG,
     spacing: 24,

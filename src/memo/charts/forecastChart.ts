@@ -22,9 +22,9 @@ export interface ForecastChartInput {
   history?: HistoryPoint[];
 }
 
-/** Observations shown before the forecasts: four horizons' worth, at least 24, at most all. */
+/** Observations shown before the forecasts: six horizons' worth, at least 40, at most all (the section has no separate history chart). */
 export function recentLength(horizon: number, n: number): number {
-  return Math.min(n, Math.max(24, 4 * horizon));
+  return Math.min(n, Math.max(40, 6 * horizon));
 }
 
 /** A forecast row with the ends of each level's interval in fields of its own (`bandFields`). */
@@ -57,7 +57,7 @@ function panel(model: TrendModelKind, levels: readonly number[], rows: ForecastC
   return {
     title: { text: chartWording.forecast.panel(model), fontSize: 11 },
     width: PANEL_WIDTH,
-    height: 210,
+    height: 104,
     layer: [
       // Widest first, so each narrower band is drawn over the wider ones.
       ...[...levels].reverse().map((level): LayerPart => {

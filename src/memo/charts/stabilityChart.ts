@@ -7,7 +7,10 @@ import { chartWording } from '../chartWording.js';
 import { formatSignificant } from '../format/formatNumber.js';
 import type { AnalysisRecord, StabilityRecord } from '../../analysis/record.js';
 import type { TrendModelKind } from '../../base/settings.js';
-import { CHART_CONFIG, PANEL_WIDTH } from './chartConfig.js';
+import { CHART_CONFIG } from './chartConfig.js';
+
+/** The appendix sets this chart in one of its two text columns: about half the page's width. */
+const COLUMN_WIDTH = 270;
 import type { PanelSpec } from './chartTypes.js';
 import { BAND_OPACITY, INK, MODEL_COLOUR } from './palette.js';
 import { periodPosition, timeAxis } from './periodPosition.js';
@@ -40,8 +43,8 @@ function panel(model: TrendModelKind, rows: StabilityRow[], full: number | undef
   const colour = MODEL_COLOUR[model];
   return {
     title: { text: chartWording.stability.panel[model], fontSize: 11 },
-    width: PANEL_WIDTH,
-    height: 160,
+    width: COLUMN_WIDTH,
+    height: 62,
     layer: [
       { data: { values: rows }, mark: { type: 'area', color: colour, opacity: BAND_OPACITY.outer + 0.06 }, encoding: { x, y: { ...y, field: 'low' }, y2: { field: 'high' } } },
       { data: { values: rows }, mark: { type: 'line', color: colour, strokeWidth: 1.6 }, encoding: { x, y } },
@@ -68,8 +71,9 @@ export function stabilityChart({ series, record, stability }: { series: string; 
       drift: formatSignificant(full.stochastic, 3),
     }),
     config: CHART_CONFIG,
-    spacing: 24,
+    spacing: 14,
     resolve: { scale: { y: 'independent' } },
-    hconcat: (['deterministic', 'stochastic'] as const).map((model) => panel(model, rows[model], full[model])),
+    // One panel above the other, to the width of the appendix's text column.
+    vconcat: (['deterministic', 'stochastic'] as const).map((model) => panel(model, rows[model], full[model])),
   };
 }

@@ -39,7 +39,7 @@ export function modelsAgree(record: Pick<AnalysisRecord, 'forecasts' | 'settings
 
 /** Each contradiction in words; empty when the memo agrees with its records. */
 export function memoContradictions(records: readonly AnalysisRecord[], html: string): string[] {
-  const cards = chunks(html, '<article class="summary-card', '</article>');
+  const cards = chunks(html, '<tbody class="summary-card', '</tbody>');
   const sections = chunks(html, '<section class="series" id="', '</section>');
   return records.flatMap((record, i) => {
     const text = plainText(`${cards[i] ?? ''} ${sections[i] ?? ''}`);

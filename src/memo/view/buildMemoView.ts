@@ -3,12 +3,17 @@
 import { noLinks } from '../format/noLinks.js';
 import type { MemoInput } from '../memoInput.js';
 import { cssMargin, PAPER_SIZES } from '../print/paperSize.js';
-import { CAUTIONS, HEADINGS, LABELS, METHOD_NAME, MODEL_NAME, SIGN_OFF_NOTE, summaryIntro, TEMPLATE_TEXT } from '../wording.js';
-import { memoStatus, type MemoStatus } from './memoStatus.js';
+import { CAUTIONS, HEADINGS, PAGE_ONE, LABELS, METHOD_NAME, MODEL_NAME, SIGN_OFF_NOTE, summaryIntro, TEMPLATE_TEXT } from '../wording.js';
+import { commentResolutions, memoStatus, type MemoStatus } from './memoStatus.js';
 import { revisionsView, type RevisionsView } from './revisionsView.js';
 import { trackRecordView, type TrackRecordView } from './trackRecordView.js';
 import { seriesView, type SeriesView } from './seriesView.js';
-import { signOffView, type SignOffRow } from './signOffView.js';
+import { registerView, type RegisterView } from './registerView.js';
+import { changesLine, intervalHead, pageOneSeries, type PageOneSeries } from './pageOneView.js';
+import { seriesDecimals } from '../format/seriesDecimals.js';
+import { signOffView, type SignOffView } from './signOffView.js';
+import { supersedesView, type SupersedesView } from './supersedesView.js';
+import { REVIEW_TEXT } from '../signOffWording.js';
 import type { SummaryCard } from './summaryView.js';
 
 export interface MemoView {
@@ -16,13 +21,29 @@ export interface MemoView {
   details: { id: string; title: string; client: string; preparedBy: string; reference: string; asOf: string; author: string; reviewers: { name: string; role: string }[] };
   status: MemoStatus & { draft: boolean };
   summary: { intro: string; cards: SummaryCard[] };
+  pageOne: {
+    heading: string;
+    heads: { next: string; year: string; end: string; interval: string };
+    series: PageOneSeries[];
+    changes: string;
+    legend: string;
+    issued: { label: string; date: string };
+  };
   series: SeriesView[];
+  /** How the rule and the checks work, said once for the whole memo (each series' detail refers to it). */
+  methods: string[];
   revisions: RevisionsView | null;
   /** How the earlier as-of memos' forecasts fared; `summary` is one sentence for page 1. Absent without earlier memos. */
   trackRecord?: TrackRecordView;
-  assumptions: { anchor: string; title: string; rows: { choice: string; value: string; basis: string; setBy: string }[] }[];
+  assumptions: RegisterView;
   cautions: readonly string[];
-  signOff: { note: string; rows: SignOffRow[] };
+  signOff: SignOffView & { note: string };
+  /** SHA-256 of the memo's content, which recorded sign-offs are bound to; '' when the memo was rendered without one. */
+  digest: string;
+  /** Comments of valid approvals with changes that no later sign-off has resolved yet. */
+  openComments: Array<{ number: number; reviewer: string; date: string; comment: string }>;
+  /** For a revised memo: the revision it supersedes, why, and one sentence for page 1. */
+  supersedes?: SupersedesView;
   reproducibility: {
     tool: string;
     version: string;
@@ -33,6 +54,7 @@ export interface MemoView {
     sources: { title: string; file: string; column: string; sha256: string }[];
   };
   headings: typeof HEADINGS;
+  review: typeof REVIEW_TEXT;
   labels: typeof LABELS;
   modelNames: typeof MODEL_NAME;
   methodNames: typeof METHOD_NAME;
@@ -46,8 +68,7 @@ const TEMPLATE_STRINGS = {
   assumes: TEMPLATE_TEXT.assumes,
   noAssumptions: TEMPLATE_TEXT.noAssumptions,
   comparisonCaption: TEMPLATE_TEXT.comparisonCaption,
-  accuracyNote: TEMPLATE_TEXT.accuracyNote,
-  pointColumns: [...TEMPLATE_TEXT.pointColumns, ...TEMPLATE_TEXT.pointColumns, ...TEMPLATE_TEXT.pointColumns],
+  ruleStudyPointer: TEMPLATE_TEXT.ruleStudyPointer,
 };
 
 export async function buildMemoView(input: MemoInput): Promise<MemoView> {
@@ -56,7 +77,8 @@ export async function buildMemoView(input: MemoInput): Promise<MemoView> {
   // One series at a time: vega views are created and finalised in turn, never all at once.
   for (const [i, entry] of input.series.entries()) series.push(await seriesView(entry, i));
   const trackRecord = await trackRecordView(input);
-  const status = memoStatus(memo);
+  const signOffs = input.sign_offs ?? [];
+  const status = memoStatus(memo.reviewers, signOffs);
   const digest = (d: { file: string; sha256: string }) => ({ file: noLinks(d.file), sha256: noLinks(d.sha256) });
   return {
     page: { size: PAPER_SIZES[input.paper].css, margin: cssMargin() },
@@ -70,18 +92,38 @@ export async function buildMemoView(input: MemoInput): Promise<MemoView> {
       author: noLinks(memo.author),
       reviewers: memo.reviewers.map((r) => ({ name: noLinks(r.name), role: noLinks(r.role) })),
     },
-    status: { ...status, detail: noLinks(status.detail), draft: status.state === 'draft' },
+    status: { ...status, detail: noLinks(status.detail), draft: status.state !== 'signed-off' },
     summary: { intro: summaryIntro(sharedLevels(input), series.some((s) => s.summary.year !== null)), cards: series.map((s) => s.summary) },
+    pageOne: {
+      heading: PAGE_ONE.heading,
+      heads: { next: PAGE_ONE.nextHead, year: PAGE_ONE.yearHead, end: PAGE_ONE.endHead, interval: intervalHead(input.series.map((e) => e.record)) },
+      series: input.series.map((entry, i) => pageOneSeries(entry, series[i], seriesDecimals(entry.record))),
+      changes: noLinks(changesLine(input.revisions)),
+      legend: PAGE_ONE.legend(intervalHead(input.series.map((e) => e.record)).replace(' interval', '').toLowerCase()),
+      issued: { label: PAGE_ONE.issued, date: noLinks(reproducibility.run_date) },
+    },
     series,
+    methods: [
+      ...new Set(
+        series.flatMap((s) => [
+          ...(s.recommendation === null || s.recommendation.fixedByConfig !== '' ? [] : [s.recommendation.rule]),
+          ...(s.recommendation?.ruleStudy ? [s.recommendation.ruleStudy] : []),
+          s.aiccNote,
+          s.evidence.intro,
+          s.evidence.residualsIntro,
+          ...(s.backtest === null ? [] : [s.backtest.comparisonIntro]),
+          ...(s.stability?.method ?? []),
+        ]),
+      ),
+    ],
     revisions: await revisionsView(input),
     ...(trackRecord === undefined ? {} : { trackRecord }),
-    assumptions: input.series.map((entry, i) => ({
-      anchor: series[i].anchor,
-      title: series[i].title,
-      rows: entry.assumptions.map((a) => ({ choice: noLinks(a.choice), value: noLinks(a.value), basis: noLinks(a.basis), setBy: LABELS.setByValue[a.set_by] })),
-    })),
+    assumptions: registerView(input, series),
     cautions: CAUTIONS,
-    signOff: { note: SIGN_OFF_NOTE, rows: signOffView(memo) },
+    signOff: { note: SIGN_OFF_NOTE, ...signOffView(memo, signOffs) },
+    digest: noLinks(input.digest ?? ''),
+    openComments: commentResolutions(signOffs).open.map((entry) => ({ number: entry.number, reviewer: noLinks(entry.reviewer), date: noLinks(entry.date), comment: noLinks(entry.comment) })),
+    ...(input.supersedes === undefined ? {} : { supersedes: supersedesView(input.supersedes) }),
     reproducibility: {
       tool: noLinks(reproducibility.tool),
       version: noLinks(reproducibility.version),
@@ -97,6 +139,7 @@ export async function buildMemoView(input: MemoInput): Promise<MemoView> {
       })),
     },
     headings: HEADINGS,
+    review: REVIEW_TEXT,
     labels: LABELS,
     modelNames: MODEL_NAME,
     methodNames: METHOD_NAME,

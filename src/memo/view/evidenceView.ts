@@ -24,6 +24,8 @@ export interface EvidenceView {
   verdict: string;
   tests: UnitRootRow[];
   residualsIntro: string;
+  /** One sentence for the series' main page: which checks flagged which model's errors. */
+  residualSummary: string;
   residuals: { model: string; findings: { text: string; flagged: boolean }[] }[];
   unavailable: string[];
   /** The seasonal checks in words, for a monthly or quarterly series; null when there is nothing to say. */
@@ -73,6 +75,9 @@ export function evidenceView(record: AnalysisRecord): EvidenceView {
       row(UNIT_ROOT_ROWS.adfTrend, adf.trend, adf.trend !== null && adf.trend.p_value < level),
     ].flat(),
     residualsIntro: evidenceWording.residualsIntro,
+    residualSummary: evidenceWording.residualSummary(
+      models.map((model) => ({ model, flagged: residuals[model].findings.filter((f) => f.flagged).map((f) => f.check) })),
+    ),
     residuals: models.map((model) => ({
       model: MODEL_NAME[model],
       findings: residuals[model].findings.map((f) => ({ text: noLinks(f.text), flagged: f.flagged })),

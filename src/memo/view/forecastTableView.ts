@@ -1,10 +1,13 @@
-// The forecast table: both models at every horizon with an interval per level, and the width
-// ratio at the widest level (named in the width-ratio chart that follows the table).
+// The forecast table: both models with an interval per level, and the width ratio at the
+// widest level (named in the sentence under the table), at every horizon up to
+// FORECAST_TABLE_ROWS and at the horizons shownHorizons picks beyond.
 import { formatNumber } from '../format/formatNumber.js';
 import { atLevel } from '../intervalLevels.js';
 import type { AnalysisRecord } from '../../analysis/record.js';
 import type { TrendModelKind } from '../../base/settings.js';
-import { widthRatios } from '../charts/widthRatioChart.js';
+import { periodsPerYear } from '../../base/period.js';
+import { shownHorizons } from './shownHorizons.js';
+import { widthRatios } from './widthRatios.js';
 import { LABELS, MODEL_NAME, TEMPLATE_TEXT } from '../wording.js';
 import { modelTable, type ModelTable } from './modelTable.js';
 
@@ -14,7 +17,10 @@ export interface ForecastCells {
   intervals: string[];
 }
 
-export type ForecastTable = ModelTable<{ h: number; period: string; cells: string[] }> & { caption: string };
+export type ForecastTable = ModelTable<{ h: number; period: string; cells: string[] }> & { caption: string; /** Which rows are left out, or empty when every horizon is shown. */ rowsNote: string };
+
+/** Longer horizons print a selection of rows (shownHorizons). */
+export const FORECAST_TABLE_ROWS = 12;
 
 /** "575.36 – 580.31". */
 export function intervalText(interval: [number, number] | undefined, decimals: number): string {
@@ -37,6 +43,8 @@ export function forecastHeads(record: AnalysisRecord): string[] {
 
 export function forecastTableView(record: AnalysisRecord, decimals: number, units: string): ForecastTable {
   const ratios = widthRatios(record);
+  const horizon = record.forecasts.deterministic.length;
+  const shown = new Set(shownHorizons(horizon, FORECAST_TABLE_ROWS, periodsPerYear(record.series.frequency)));
   const cells = (model: TrendModelKind, i: number): string[] => {
     const { point, intervals } = forecastCells(record, model, i, decimals);
     return [point, ...intervals];
@@ -48,12 +56,12 @@ export function forecastTableView(record: AnalysisRecord, decimals: number, unit
     modelHeads: forecastHeads(record),
     trailingHeads: [LABELS.ratio],
     rows: (models) =>
-      record.forecasts.deterministic.map((row, i) => ({
+      record.forecasts.deterministic.flatMap((row, i) => (shown.has(row.h) ? [row] : []).map(() => ({
         h: row.h,
         period: row.period,
         cells: [...models.flatMap((model) => cells(model, i)), formatNumber(ratios[i]?.ratio, 2)],
-      })),
+      }))),
     cellsOf: (row) => [String(row.h), row.period, ...row.cells],
   });
-  return { caption: TEMPLATE_TEXT.forecastCaption(units), ...table };
+  return { caption: TEMPLATE_TEXT.forecastCaption(units), rowsNote: shown.size === horizon ? '' : TEMPLATE_TEXT.rowsShown([...shown]), ...table };
 }

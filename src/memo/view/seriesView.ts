@@ -3,10 +3,7 @@ import type { Caveat } from '../caveats/caveat.js';
 import { collectCaveats } from '../caveats/caveatRules.js';
 import { backtestChart } from '../charts/backtestChart.js';
 import { forecastChart } from '../charts/forecastChart.js';
-import { historyChart } from '../charts/historyChart.js';
-import { residualAcfChart } from '../charts/residualAcfChart.js';
 import { stabilityChart } from '../charts/stabilityChart.js';
-import { widthRatioChart } from '../charts/widthRatioChart.js';
 import { evidenceWording } from '../evidenceWording.js';
 import { noLinks } from '../format/noLinks.js';
 import { seriesDecimals } from '../format/seriesDecimals.js';
@@ -22,6 +19,7 @@ import { stabilityView, type StabilityView } from './stabilityView.js';
 import { agreement } from './agreement.js';
 import { summaryCard, type SummaryCard } from './summaryView.js';
 import { yearNote } from './yearView.js';
+import { widthNote } from './widthRatios.js';
 
 export interface SeriesView {
   anchor: string;
@@ -46,16 +44,15 @@ export interface SeriesView {
   } | null;
   notRun: typeof NOT_RUN;
   backtestUnavailable: string;
-  captions: { point: string; interval: string };
+  captions: { point: string };
   figures: {
-    history: FigureView | null;
     forecast: FigureView;
-    widthRatio: FigureView;
     backtest: FigureView | null;
-    residualAcf: FigureView;
     stability: FigureView | null;
   };
   forecastTable: ForecastTable;
+  /** How the two models' interval widths compare, in one sentence (the width ratio column's reading). */
+  widthNote: string;
   /** How the next full year's figure on page 1 was had; empty without one. */
   yearNote: string;
   backtest: BacktestView | null;
@@ -109,17 +106,14 @@ export async function seriesView(entry: MemoSeries, index: number): Promise<Seri
     backtestUnavailable: record.backtest_unavailable === undefined ? '' : noLinks(evidenceWording.backtestUnavailable(record.backtest_unavailable)),
     captions: {
       point: TEMPLATE_TEXT.pointCaption(units ?? ''),
-      interval: TEMPLATE_TEXT.intervalCaption(units ?? '', record.series.transform.kind !== 'none'),
     },
     figures: {
-      history: history === undefined || history.length === 0 ? null : await figureView(`${anchor}-history`, historyChart({ ...chartInput, history })),
       forecast: await figureView(`${anchor}-forecast`, forecastChart({ ...chartInput, history })),
-      widthRatio: await figureView(`${anchor}-ratio`, widthRatioChart(chartInput)),
       backtest: backtest === undefined ? null : await figureView(`${anchor}-backtest`, backtestChart({ ...chartInput, backtest })),
-      residualAcf: await figureView(`${anchor}-acf`, residualAcfChart(chartInput)),
       stability: stability === undefined ? null : await figureView(`${anchor}-stability`, stabilityChart({ ...chartInput, stability })),
     },
     forecastTable: forecastTableView(record, decimals, units ?? ''),
+    widthNote: widthNote(record),
     yearNote: yearNote(record, decimals),
     backtest: backtest === undefined ? null : backtestView(backtest, record.series.frequency, decimals, scoredLevel(record)),
     evidence: evidenceView(record),

@@ -11,6 +11,8 @@ export interface StabilityView {
   settings: string;
   breaks: { text: string; rejects: boolean }[];
   method: string[];
+  /** One sentence for the series' main page; the chart and the tests are in the technical appendix. */
+  summary: string;
 }
 
 const MODELS: readonly TrendModelKind[] = ['deterministic', 'stochastic'];
@@ -41,6 +43,7 @@ export function stabilityView(stability: StabilityRecord, first: string, seasona
         }),
       };
     }),
+    summary: evidenceWording.stabilitySummary(MODELS.filter((model) => break_test[model].reject['5']), MODELS.filter((model) => break_test[model].reject['10'] && !break_test[model].reject['5'])),
     method: [
       ...MODELS.map((model) => {
         const test = break_test[model];

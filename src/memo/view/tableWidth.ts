@@ -1,11 +1,11 @@
 // How wide a table's rows run on the page, estimated from the memo's table font, so a view can
 // choose a layout that fits instead of letting the printer shrink or clip the page. The
-// figures are templates/memo.css's: tables at 7.8 pt with 1.6 mm of padding on each side of a
+// figures are templates/memo.css's: tables at 7.2 pt with 1.6 mm of padding on each side of a
 // cell, on a sheet 176 mm wide (A4 less 17 mm margins each side).
 import { estimateTextWidth } from '../charts/textWidth.js';
 
 const POINTS_PER_MM = 72 / 25.4;
-const TABLE_FONT_SIZE = 7.8;
+const TABLE_FONT_SIZE = 7.2;
 const CELL_PADDING = 3.2 * POINTS_PER_MM;
 /**
  * estimateTextWidth holds Arial's widths; where none of the stylesheet's first sans fonts is

@@ -1,0 +1,107 @@
+// Page 1 as a reviewer reads it: per series the data behind it (period, last observation,
+// source and vintage), the recommendation with its one-line reason, and both models' figures for
+// the next period, the next full calendar year and the end of the horizon, each with the
+// interval at the series' widest level; then what changed since the previous memo.
+import type { AnalysisRecord } from '../../analysis/record.js';
+import { TREND_MODELS, type TrendModelKind } from '../../base/settings.js';
+import { evidenceWording } from '../evidenceWording.js';
+import { formatNumber } from '../format/formatNumber.js';
+import { noLinks } from '../format/noLinks.js';
+import { atLevel, widestLevel } from '../intervalLevels.js';
+import type { MemoSeries } from '../memoInput.js';
+import type { Revisions } from '../revisionsPart.js';
+import { yearWording } from '../yearWording.js';
+import { LABELS, METHOD_NAME, PAGE_ONE, TEMPLATE_TEXT } from '../wording.js';
+import { intervalText } from './forecastTableView.js';
+import { agreement } from './agreement.js';
+import type { SeriesView } from './seriesView.js';
+
+export interface FigureCell {
+  point: string;
+  interval: string;
+}
+
+export interface PageOneSeries {
+  anchor: string;
+  title: string;
+  units: string;
+  /** "Annual, 1955–2024, 70 observations; last observation 2024". */
+  data: string;
+  /** "Source: …; vintage: …", or empty. */
+  source: string;
+  /** The period labels over the three figure columns. */
+  labels: { next: string; year: string; end: string };
+  rows: { name: string; recommended: boolean; next: FigureCell; year: FigureCell | null; end: FigureCell }[];
+  /** The recommendation and its one-line reason; or why there is none. */
+  recommendation: string;
+  /** How many caveats the series page carries and how many weigh on the decision. */
+  caveats: string;
+  /** The recommended model's next full year in words, or why the horizon gives none; empty for annual series. */
+  yearSentence: string;
+}
+
+function cell(point: number | undefined, interval: [number, number] | undefined, decimals: number): FigureCell {
+  return { point: formatNumber(point, decimals), interval: interval === undefined ? '' : intervalText(interval, decimals) };
+}
+
+/** The recommendation in one line: the model, who settled it, and the first reason the rule gave. */
+function recommendationLine(record: AnalysisRecord): string {
+  const { recommendation } = record;
+  if (recommendation === undefined) return PAGE_ONE.noRecommendation;
+  const reason = recommendation.evidence[0]?.finding ?? recommendation.reasons[0] ?? '';
+  return PAGE_ONE.recommendation(METHOD_NAME[recommendation.model], evidenceWording.decidedBy[recommendation.decided_by], noLinks(reason), agreement(record).join(' '));
+}
+
+export function pageOneSeries(entry: MemoSeries, view: SeriesView, decimals: number): PageOneSeries {
+  const { record } = entry;
+  const level = widestLevel(record.settings);
+  const model: TrendModelKind | undefined = record.recommendation?.model;
+  const last = record.forecasts.deterministic.length - 1;
+  const year = record.next_year ?? null;
+  const yearShown = year !== null && year.available;
+  const high = view.caveats.filter((c) => c.severity === 'high').length;
+  return {
+    anchor: view.anchor,
+    title: view.title,
+    units: view.units,
+    data: PAGE_ONE.data(view.span, record.series.last),
+    source: PAGE_ONE.source(noLinks(entry.source ?? ''), noLinks(entry.vintage ?? '')),
+    labels: {
+      next: record.forecasts.deterministic[0]?.period ?? '',
+      year: year === null ? PAGE_ONE.annual : year.available ? yearWording.head(year.year, year.figure) : PAGE_ONE.yearBeyond(year.year),
+      end: record.forecasts.deterministic[last]?.period ?? '',
+    },
+    rows: TREND_MODELS.map((kind) => {
+      const rows = record.forecasts[kind];
+      const figure = yearShown ? year[kind] : null;
+      return {
+        name: METHOD_NAME[kind],
+        recommended: kind === model,
+        next: cell(rows[0]?.point, atLevel(rows[0]?.intervals, level), decimals),
+        year: figure === null ? null : cell(figure.point, atLevel(figure.intervals, level), decimals),
+        end: cell(rows[last]?.point, atLevel(rows[last]?.intervals, level), decimals),
+      };
+    }),
+    recommendation: recommendationLine(record),
+    caveats: PAGE_ONE.caveats(view.caveats.length, high, LABELS.severity.high),
+    yearSentence: view.summary.year?.sentence ?? '',
+  };
+}
+
+/** What changed since the previous memo, in one or two sentences; empty for a memo without an as-of period. */
+export function changesLine(revisions: Revisions | undefined): string {
+  if (revisions === undefined) return '';
+  if (revisions.earlier === null) return PAGE_ONE.noEarlier(revisions.as_of);
+  const changed = (pick: (s: Revisions['series'][number]) => boolean) => revisions.series.filter(pick).map((s) => noLinks(s.title));
+  const recommendation = changed((s) => s.recommendation !== null && s.recommendation.now !== s.recommendation.earlier);
+  const orders = changed((s) => s.orders.some((o) => o.now.p !== o.earlier.p || o.now.q !== o.earlier.q));
+  const data = changed((s) => (s.data ?? []).length > 0);
+  const added = changed((s) => !s.in_earlier);
+  return PAGE_ONE.changes({ earlier: revisions.earlier.as_of, recommendation, orders, data, added, dropped: revisions.dropped.map((d) => noLinks(d.title)) });
+}
+
+/** The interval column's head: one level for every series, or "widest level" when they differ. */
+export function intervalHead(records: readonly AnalysisRecord[]): string {
+  const levels = [...new Set(records.map((r) => widestLevel(r.settings)))];
+  return levels.length === 1 ? TEMPLATE_TEXT.intervalHead(levels[0]) : PAGE_ONE.widestInterval;
+}
