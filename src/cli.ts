@@ -22,6 +22,7 @@ const COMMANDS: Readonly<Record<string, () => Promise<Command>>> = {
   check: async () => (await import('./cli/checkCommand.js')).runCheck,
   fit: async () => (await import('./cli/fitCommand.js')).runFit,
   verify: async () => (await import('./cli/verifyCommand.js')).runVerify,
+  review: async () => (await import('./cli/reviewCommand.js')).runReview,
   init: async () => (await import('./cli/initCommand.js')).runInit,
 };
 const GLOBAL_OPTIONS = ['--help', '--version'] as const;
@@ -33,6 +34,8 @@ Usage:
   trendbrief fit FILE.csv [options]   fit both trend models to one series and forecast
   trendbrief check CONFIG.yaml...     check configs and their series files without fitting
   trendbrief verify MEMO_FOLDER       check an issued memo against its inputs and a rerun
+  trendbrief review MEMO_FOLDER --reviewer NAME --decision approve|approve-with-changes|return
+                                      record a reviewer's decision, bound to the memo's content
   trendbrief init [DIR]               write a starter config and an example series
   trendbrief --help                   this text
   trendbrief --version                the tool's version

@@ -21,6 +21,13 @@ export const DATE_PATTERN = '^[0-9]{4}-(0[1-9]|1[0-2])-(0[1-9]|[12][0-9]|3[01])$
 /** The three period forms of src/data/period.ts: 2026, 2026-Q3, 2026-10. */
 export const PERIOD_PATTERN = '^[0-9]{4}(-Q[1-4]|-(0[1-9]|1[0-2]))?$';
 
+/** True when a text matching DATE_PATTERN names a day the calendar has (no 2026-02-30). */
+export function isCalendarDay(value: string): boolean {
+  const [year, month, day] = value.split('-').map(Number);
+  const date = new Date(Date.UTC(year, month - 1, day));
+  return date.getUTCMonth() === month - 1 && date.getUTCDate() === day;
+}
+
 /** Smallest and largest year that may be written as a bare number for a period. */
 export const PERIOD_YEAR_RANGE = { min: 1000, max: 9999 } as const;
 

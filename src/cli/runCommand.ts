@@ -24,12 +24,18 @@ Analyses every series of each config (both trend models, evidence, backtest, rec
 and writes the memo into <output folder>/<memo id>/<as-of>/ (<output folder>/<memo id>/ without
 memo.as_of): memo.html, memo.pdf, record.json, forecasts.csv and manifest.json. A memo with an
 as-of period compares itself with the latest earlier as-of memo beside it. A folder appears
-only when all its files are complete.
+only when all its files are complete, and carries copies of its config and data under inputs/.
+
+A memo is issued once a reviewer's decision is recorded on it (trendbrief review). A rerun
+with the same content keeps its sign-offs; one that would change its content is refused
+unless --new-revision is given.
 
 Options:
   --out DIR                 write into DIR instead of the config's output folder
   --formats LIST            comma-separated subset of ${OUTPUT_FORMATS.join(', ')} (default: the config's)
   --threads N               worker threads for the series (default: the machine's cores)
+  --new-revision            over an issued memo whose content would change, keep it as a
+                            numbered revision (revisions/N/) and write a new draft
   --quiet                   print nothing but problems
   -h, --help                this text
 
@@ -59,7 +65,14 @@ interface MemoOutcome {
 export async function runRun(args: readonly string[], io: Io): Promise<number> {
   const { values, positionals, problems } = splitOptions(
     args,
-    { out: { type: 'string' }, formats: { type: 'string' }, threads: { type: 'string' }, quiet: { type: 'boolean' }, help: { type: 'boolean', short: 'h' } },
+    {
+      out: { type: 'string' },
+      formats: { type: 'string' },
+      threads: { type: 'string' },
+      'new-revision': { type: 'boolean' },
+      quiet: { type: 'boolean' },
+      help: { type: 'boolean', short: 'h' },
+    },
     'run',
   );
   if (values.get('help') === true) {
@@ -105,6 +118,7 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
       pool,
       threads: threads > 1 ? undefined : 1,
       onSeriesDone: (memoId, seriesId) => progress.seriesDone(memoId, seriesId),
+      newRevision: values.get('new-revision') === true,
     });
   };
   previews.forEach((preview, index) => {
@@ -129,7 +143,7 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
       if (result !== undefined) {
         for (const warning of result.warnings) io.stderr(`${formatProblem(warning)}\n`);
         progress.memoDone(result.memoId, true);
-        outcomes.push({ config, memo: result.memoId, series: result.series, result: `written (${result.files.join(', ')})`, folder: shownPath(result.folder) });
+        outcomes.push({ config, memo: result.memoId, series: result.series, result: outcomeText(result), folder: shownPath(result.folder) });
         continue;
       }
       progress.finish();
@@ -169,6 +183,13 @@ function previewConfig(config: string, outputFolder: string | undefined): { seri
   } catch {
     return { series: 0 };
   }
+}
+
+/** The run's line in the summary: what happened to the memo folder. */
+function outcomeText(result: MemoRunResult): string {
+  if (result.outcome === 'kept') return `kept (same content as the issued memo; ${result.signOffs} sign-off${result.signOffs === 1 ? '' : 's'} carried, nothing changed)`;
+  if (result.outcome === 'revised') return `revised (revision ${String(result.revision)} kept; ${result.files.join(', ')})`;
+  return `written (${result.files.join(', ')})`;
 }
 
 function parseThreads(value: string | true | undefined, problems: InputProblem[]): number {

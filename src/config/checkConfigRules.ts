@@ -1,6 +1,8 @@
 // Rules that span several keys, which a JSON Schema cannot state: series ids unique across the
-// list, reviewers listed once, and every sign-off by a listed reviewer. They read the partial
-// document validation leaves, so they still run when other keys are wrong.
+// list, reviewers listed once, every sign-off by a listed reviewer, and a reviewer's public key
+// that parses as an Ed25519 key. They read the partial document validation leaves, so they
+// still run when other keys are wrong.
+import { createPublicKey } from 'node:crypto';
 import { closestName } from '../base/closestName.js';
 import { configMessages } from './messages.js';
 import type { ConfigDocument, Loose } from './configSpec.js';
@@ -14,6 +16,11 @@ export function checkConfigRules(doc: Loose<ConfigDocument>, v: Validation): voi
     (at, id, firstField, firstLine) => configMessages.duplicateSeriesId(at, id, firstField, firstLine),
   );
   const reviewers = doc.memo?.reviewers ?? [];
+  reviewers.forEach((entry, index) => {
+    const field = `memo.reviewers[${index}].public_key`;
+    const at = v.positions.get(field);
+    if (entry?.public_key !== undefined && at !== undefined && !isEd25519PublicKey(entry.public_key)) v.problems.push(configMessages.badPublicKey({ file: v.file, ...at, field }));
+  });
   const names = reviewers.map((entry) => entry?.name);
   checkUnique(names, (index) => `memo.reviewers[${index}].name`, v, (at, name, _field, firstLine) => configMessages.duplicateReviewer(at, name, firstLine));
   // A reviewer whose own entry is broken is already reported; checking sign-offs against a
@@ -47,4 +54,13 @@ function checkUnique(
     const earlierAt = v.positions.get(fieldOf(earlier));
     v.problems.push(report({ file: v.file, ...at, field: fieldOf(index) }, value, fieldOf(earlier), earlierAt?.line ?? at.line));
   });
+}
+
+/** True when `pem` is an Ed25519 public key in PEM form (node:crypto reads it). */
+export function isEd25519PublicKey(pem: string): boolean {
+  try {
+    return createPublicKey(pem).asymmetricKeyType === 'ed25519';
+  } catch {
+    return false;
+  }
 }

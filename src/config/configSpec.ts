@@ -12,7 +12,14 @@ const path = (doc: string, options: { default?: string; defaultText?: string } =
 
 const reviewer = object(
   'A person who reviews the memo.',
-  { name: text('Full name, as it appears on the sign-off.'), role: text('Role, e.g. engagement lead.') },
+  {
+    name: text('Full name, as it appears on the sign-off.'),
+    role: text('Role, e.g. engagement lead.'),
+    public_key: text(
+      "The reviewer's Ed25519 public key in PEM form (trendbrief review --new-key writes one); when set, the reviewer's recorded sign-offs count only when signed with the matching private key.",
+      { form: 'block', maxLength: 1000 },
+    ),
+  },
   { required: ['name'], example: '{name: Ada Quill, role: engagement lead}' },
 );
 
@@ -38,7 +45,7 @@ const memo = object(
     as_of: period('Period the memo speaks as of.'),
     author: text('Analyst who wrote the memo.'),
     reviewers: list('People who review the memo.', reviewer, { maxItems: 20, example: '[{name: Ada Quill, role: engagement lead}]' }),
-    sign_off: list("Reviewers' decisions, each by a listed reviewer.", signOff, {
+    sign_off: list("Reviewers' decisions typed into the config, each by a listed reviewer: shown as declared, not recorded; they never sign a memo off (trendbrief review records a decision).", signOff, {
       maxItems: 50,
       example: '[{reviewer: Ada Quill, date: 2026-10-05, decision: approved}]',
     }),
@@ -60,6 +67,8 @@ const seriesEntry = object(
     column: text('Column holding the values.', { defaultText: 'the first column after the period column' }),
     frequency: FREQUENCY,
     notes: text('Notes printed with the series.', { form: 'block' }),
+    source: text('Where the data come from (publisher, table or system), printed on page 1 and the series page.'),
+    vintage: text('Which release of the data this is (a publication or extraction date), printed on page 1.'),
     ...SETTINGS_FIELDS,
   },
   { required: ['id', 'file'], example: '{id: daily-demand, file: data/daily-demand.csv}' },

@@ -212,6 +212,14 @@ export const configMessages = {
     const hint = suggestion !== undefined ? `did you mean ${quoted(suggestion)}?` : 'add this person to memo.reviewers, or correct the name';
     return problem('config.unknown-reviewer', `${quoted(name)} signs off but is not a listed reviewer; ${listed}`, hint, at);
   },
+  badPublicKey(at: InputLocation): InputProblem {
+    return problem(
+      'config.bad-public-key',
+      'is not an Ed25519 public key in PEM form',
+      "paste the whole public key file (-----BEGIN PUBLIC KEY----- to -----END PUBLIC KEY-----) that trendbrief review --new-key wrote, as a block (public_key: |)",
+      at,
+    );
+  },
   seasonalFormAnnual(at: InputLocation): InputProblem {
     return problem('config.seasonal-annual', 'a seasonal form is set for an annual series, which has no seasons', 'leave seasonal out (or write none) for annual data', at);
   },

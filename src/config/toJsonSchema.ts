@@ -66,7 +66,7 @@ export function configSchemaText(): string {
     title: 'trendbrief config',
     ...toJsonSchema(CONFIG_SPEC),
     $comment:
-      'Generated from src/config/configSpec.ts by npm run schema. trendbrief check also requires unique series ids, reviewers listed once, sign-offs by listed reviewers, dates that exist in the calendar and a recommendation.scored_level among the levels.',
+      'Generated from src/config/configSpec.ts by npm run schema. trendbrief check also requires unique series ids, reviewers listed once, sign-offs by listed reviewers, dates that exist in the calendar, public keys of reviewers that read as Ed25519 keys and a recommendation.scored_level among the levels.',
   };
   return `${JSON.stringify(schema, null, 2)}\n`;
 }

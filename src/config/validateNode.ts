@@ -7,7 +7,7 @@ import { type InputLocation, type InputProblem } from '../base/problem.js';
 import { configMessages, type ExpectedValue, type FoundValue } from './messages.js';
 import { numberFault, type ChoiceSpec, type KeySpec, type ListSpec, type NumericSpec, type ObjectSpec, type ShapesSpec, type TextSpec } from './keySpec.js';
 import type { Position, YamlNode } from './readYamlTree.js';
-import { firstRefusedCharacter, PERIOD_PATTERN, PERIOD_YEAR_RANGE, textPattern } from '../base/textPatterns.js';
+import { firstRefusedCharacter, isCalendarDay, PERIOD_PATTERN, PERIOD_YEAR_RANGE, textPattern } from '../base/textPatterns.js';
 
 export interface Validation {
   file: string;
@@ -90,12 +90,6 @@ function wrongType(v: Validation, node: YamlNode, field: string, expected: Expec
 function reject(v: Validation, problem: InputProblem): undefined {
   v.problems.push(problem);
   return undefined;
-}
-
-function isCalendarDay(value: string): boolean {
-  const [year, month, day] = value.split('-').map(Number);
-  const date = new Date(Date.UTC(year, month - 1, day));
-  return date.getUTCMonth() === month - 1 && date.getUTCDate() === day;
 }
 
 function validateText(spec: TextSpec, node: YamlNode, field: string, v: Validation): Checked {

@@ -1,7 +1,8 @@
 // manifest.json: SHA-256 of every input and output of a run, so `verify` and a reviewer can
-// check that nothing changed since the memo was issued. Each input is located twice: as the
-// config wrote it, and relative to the memo folder (`from_output`), which is how verify finds
-// it again without a machine path in the output.
+// check that nothing changed since the memo was issued. Each input is located three times: as
+// the config wrote it, relative to the memo folder (`from_output`, the original), and as the
+// copy the memo folder carries (`copy`, under inputs/), which is what verify reruns from, so an
+// archived folder verifies wherever it lies. No machine path appears in the output.
 import { createHash } from 'node:crypto';
 import { relative, sep } from 'node:path';
 import type { OutputFile } from './writeOutputFolder.js';
@@ -22,6 +23,12 @@ export interface ManifestInput {
   from_output: string;
   /** Of the file's bytes; for the config, of its text (a byte-order mark is not part of it). */
   sha256: string;
+  /**
+   * The copy inside the memo folder (`inputs/data/lake-huron.csv`), relative to it, with forward
+   * slashes; byte for byte the original. Absent in manifests written before folders carried
+   * their inputs.
+   */
+  copy?: string;
 }
 
 export interface ManifestOutput {
@@ -41,6 +48,16 @@ export interface Manifest {
 
 export function sha256(content: string | Uint8Array): string {
   return createHash('sha256').update(content).digest('hex');
+}
+
+/** The digest a run records for an input: of the bytes, and for the config of its text, as the config stage hashes it. */
+export function inputDigest(role: InputRole, bytes: Uint8Array): string {
+  if (role !== 'config') return sha256(bytes);
+  try {
+    return sha256(new TextDecoder('utf-8', { fatal: true }).decode(bytes));
+  } catch {
+    return sha256(bytes);
+  }
 }
 
 /** `to` relative to the folder `from`, with forward slashes whatever the system. */

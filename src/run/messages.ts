@@ -136,6 +136,143 @@ export const verifyReport = {
   outputMissing: (file: string) => `${file}: listed in the manifest but missing`,
   bytesDiffer: (file: string, line: number) => `${file}: the rerun differs from the stored file from line ${line}`,
   numberDiffers: (path: string, stored: string, rerun: string) => `${path}: ${stored} vs ${rerun}`,
+  originals: (found: number, missing: number) =>
+    `originals: ${found} found unchanged at their places${missing > 0 ? `, ${missing} not found (the memo folder's copies were used)` : ''}`,
+  digest: (digest: string) => `content digest: ${digest}`,
+  signOffs: (count: number, valid: number) => `sign-offs: ${count} recorded, ${valid} valid on this content`,
+  signOff: (where: string, number: number, reviewer: string, decision: string, date: string, verdict: string) => `  ${where}No. ${number} ${reviewer}, ${decision}, ${date}: ${verdict}`,
+  revisionPrefix: (revision: number) => `revision ${revision}, `,
+  unreadableSignOff: (where: string, line: number) => `  ${where}line ${line} of the sign-off log: void (not a sign-off entry)`,
+  valid: 'valid',
+  voidBecause: (reason: string) => `void (${reason})`,
+  templatesMissing: (folder: string) => `memo.html not rebuilt: its templates folder ${folder} (output.templates) is missing; its recorded hash is checked above`,
   match: (folder: string) => `ok: ${folder} is what its inputs give`,
   mismatch: (folder: string, count: number) => `mismatch: ${folder} differs from what its inputs give in ${count} place${count === 1 ? '' : 's'}`,
+};
+
+/** The copies of a memo's inputs (src/run/inputCopies.ts) and the files that make it self-contained. */
+export const copyMessages = {
+  unreadable(file: string, role: string): InputProblem {
+    return problem('run.input-copy', `the ${role} cannot be read to copy it into the memo folder`, 'check that the file is still there and readable, then run again', { file });
+  },
+  changed(file: string, role: string, expected: string): InputProblem {
+    return problem(
+      'run.input-copy',
+      `the ${role} no longer has the SHA-256 the memo records (${expected}): it changed while the memo was made, or its copy was altered`,
+      'run again, or restore the file; trendbrief verify names what changed',
+      { file },
+    );
+  },
+  badSupersedes(file: string): InputProblem {
+    return problem('run.bad-supersedes', 'is not the supersession note a run writes', 'restore the memo folder from its archived copy; trendbrief verify names what changed', { file });
+  },
+};
+
+const REVIEW_HELP = 'see trendbrief review --help';
+
+/** `trendbrief review`: every refusal exits with 2 and changes nothing. */
+export const reviewMessages = {
+  noFolder(): InputProblem {
+    return problem('review.no-folder', 'review needs the memo folder to sign off', 'give one, e.g. trendbrief review out/lake-outlook/2026-01 --reviewer NAME --decision approve');
+  },
+  extraArguments(extra: readonly string[]): InputProblem {
+    return problem('review.extra-arguments', `unexpected argument${extra.length > 1 ? 's' : ''} ${extra.join(' ')}`, `give one memo folder; ${REVIEW_HELP}`);
+  },
+  notAMemo(folder: string): InputProblem {
+    return problem('review.not-a-memo', `'${folder}' has no manifest.json, so it is not a memo folder`, 'give the folder a run wrote, the one with manifest.json in it', { file: folder });
+  },
+  notSelfContained(file: string): InputProblem {
+    return problem(
+      'review.no-input-copies',
+      'lists inputs without copies in the memo folder (written by an earlier version)',
+      'rerun the memo with this version so that it carries its inputs, then record the sign-off',
+      { file, field: 'inputs' },
+    );
+  },
+  outputChanged(file: string, expected: string, actual: string): InputProblem {
+    return problem(
+      'review.content-changed',
+      `has changed since the run: SHA-256 ${actual}, the manifest records ${expected}`,
+      'a sign-off must be given on the memo as issued: restore the folder, or rerun the memo; trendbrief verify lists the differences',
+      { file },
+    );
+  },
+  missingOption(option: string, example: string): InputProblem {
+    return problem('review.missing-option', 'is needed', `give it, e.g. ${option} ${example}; ${REVIEW_HELP}`, { field: option });
+  },
+  unknownReviewer(name: string, listed: readonly string[], suggestion: string | undefined, config: string): InputProblem {
+    const who = listed.length === 0 ? 'the config lists no reviewers' : `the reviewers are ${listed.map((n) => `'${n}'`).join(', ')}`;
+    const hint = suggestion !== undefined ? `did you mean '${suggestion}'?` : `add the reviewer to memo.reviewers in ${config} and rerun the memo (a new revision), or correct the name`;
+    return problem('review.unknown-reviewer', `'${name}' is not a reviewer of this memo; ${who}`, hint, { field: '--reviewer' });
+  },
+  badDecision(value: string, choices: readonly string[]): InputProblem {
+    return problem('review.bad-decision', `'${value}' is not a decision`, `give one of ${choices.join(', ')}`, { field: '--decision' });
+  },
+  commentNeeded(decision: string): InputProblem {
+    return problem('review.comment-needed', `a decision of ${decision} needs a comment`, 'say what must change, e.g. --comment "State the drought caveat on page 1."', { field: '--comment' });
+  },
+  badDate(value: string): InputProblem {
+    return problem('review.bad-date', `'${value}' is not a day of the calendar written YYYY-MM-DD`, 'give the date of the decision, e.g. --date 2026-01-15, or leave it out for today', { field: '--date' });
+  },
+  badResolves(value: string): InputProblem {
+    return problem('review.bad-resolves', `'${value}' is not a list of sign-off numbers`, 'give the numbers of the comments resolved, separated by commas, e.g. --resolves 2,3', { field: '--resolves' });
+  },
+  notOpen(number: number, open: readonly number[]): InputProblem {
+    const which = open.length === 0 ? 'no comment is open' : `the open comments are ${open.map((n) => `No. ${n}`).join(', ')}`;
+    return problem('review.not-open', `No. ${number} is not an open comment of this memo; ${which}`, 'give only numbers of open comments, as the memo lists them', { field: '--resolves' });
+  },
+  keyNeeded(name: string): InputProblem {
+    return problem('review.key-needed', `'${name}' has a public key in the config, so the sign-off must be signed`, `give --key with ${name}'s private key file`, { field: '--key' });
+  },
+  keyNotListed(name: string): InputProblem {
+    return problem(
+      'review.key-not-listed',
+      `'${name}' has no public_key in the config, so a signature could not be checked`,
+      'leave out --key, or add the public key to memo.reviewers and rerun the memo (a new revision)',
+      { field: '--key' },
+    );
+  },
+  badKey(file: string): InputProblem {
+    return problem('review.bad-key', 'is not an Ed25519 private key in PEM form', 'give the private key file trendbrief review --new-key wrote', { file, field: '--key' });
+  },
+  keyMismatch(file: string, name: string): InputProblem {
+    return problem('review.key-mismatch', `does not match the public key the config lists for '${name}'`, `give ${name}'s own private key file`, { file, field: '--key' });
+  },
+  keyFileExists(file: string): InputProblem {
+    return problem('review.key-exists', 'already exists, and --new-key never overwrites a key', 'choose another folder, or move the old key away first', { file });
+  },
+  keyFolderUnwritable(folder: string, reason: string): InputProblem {
+    return problem('review.key-unwritable', `the key pair cannot be written (${reason})`, 'choose a folder you may write in', { file: folder });
+  },
+  newKeyWithDecision(): InputProblem {
+    return problem('review.new-key-alone', '--new-key makes a key pair and records nothing', `give --new-key DIR alone; ${REVIEW_HELP}`, { field: '--new-key' });
+  },
+  templatesMissing(folder: string): InputProblem {
+    return problem(
+      'review.templates-missing',
+      `the memo's templates folder '${folder}' (output.templates) is missing, so the memo cannot be rendered in its house style`,
+      'restore the templates folder where the config names it, then record the sign-off',
+      { field: 'output.templates' },
+    );
+  },
+  contentNotRebuilt(folder: string): InputProblem {
+    return problem(
+      'review.content-differs',
+      `the memo in '${folder}' wrote no record.json, and analysing its copied inputs again does not give its forecasts.csv`,
+      'run trendbrief verify on the folder to see the differences',
+      { file: folder },
+    );
+  },
+};
+
+/** A rerun over an issued memo (src/run/issuedMemo.ts). */
+export const issuedMessages = {
+  wouldReplace(at: InputLocation, folder: string, signOffs: number, before: string, after: string): InputProblem {
+    return problem(
+      'run.issued-memo',
+      `the memo in '${folder}' is issued (${plural(signOffs, 'sign-off')} recorded) and this run would change its content (digest ${before.slice(0, 12)}… to ${after.slice(0, 12)}…)`,
+      'run again with --new-revision to keep it as a numbered revision and issue a new draft, or write elsewhere with --out',
+      at,
+    );
+  },
 };

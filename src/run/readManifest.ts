@@ -1,7 +1,10 @@
-// manifest.json read back for verify: every field verify relies on is checked, and a manifest
-// from before inputs carried `from_output` is named as such rather than half-verified.
+// manifest.json read back for verify and review: every field they rely on is checked, and a
+// manifest from before inputs carried `from_output` is named as such rather than half-verified.
+// An input's `copy` is optional (manifests written before memo folders carried their inputs
+// lack it) but, when present, must lie under inputs/ in the memo folder.
 import { readFileSync } from 'node:fs';
 import { InputError, type InputProblem } from '../base/problem.js';
+import { INPUTS_FOLDER } from './inputCopies.js';
 import { verifyMessages } from './messages.js';
 import { MANIFEST_SCHEMA, type InputRole, type Manifest, type ManifestInput, type ManifestOutput } from './manifest.js';
 
@@ -22,6 +25,11 @@ function isRole(value: unknown): value is InputRole {
 
 function isHash(value: unknown): value is string {
   return typeof value === 'string' && HASH.test(value);
+}
+
+/** A copy lies inside the memo folder, under inputs/: nothing a manifest says can point verify elsewhere. */
+function isCopyPlace(value: unknown): value is string {
+  return typeof value === 'string' && value.startsWith(`${INPUTS_FOLDER}/`) && !value.includes('\\') && value.split('/').every((part) => part !== '' && part !== '.' && part !== '..');
 }
 
 export function readManifest(file: string, shown: string): Manifest {
@@ -50,8 +58,11 @@ export function readManifest(file: string, shown: string): Manifest {
         bad(field, 'an input with a role, a path and a SHA-256');
       } else if (!text(input.from_output)) {
         problems.push(verifyMessages.noInputLocation(shown, field));
+      } else if (input.copy !== undefined && !isCopyPlace(input.copy)) {
+        bad(`${field}.copy`, `a place under ${INPUTS_FOLDER}/ in the memo folder`);
       } else {
-        inputs.push({ role: input.role, path: input.path, from_output: input.from_output, sha256: input.sha256 });
+        const copy = input.copy === undefined ? {} : { copy: input.copy };
+        inputs.push({ role: input.role, path: input.path, from_output: input.from_output, sha256: input.sha256, ...copy });
       }
     });
     if (problems.length === 0 && inputs.filter((input) => input.role === 'config').length !== 1) bad('inputs', 'a list with one config');

@@ -1,6 +1,7 @@
 // One config → one memo folder:
 //   loadConfig ─▶ RunPlan ─checkRunPaths─▶ <output>/<memo id>/<as-of>/ (or <output>/<memo id>/)
-//   ─findEarlierRecord (the previous as-of memo beside it)─▶ prepareMemo ─▶ files
+//   ─findEarlierRecord (the previous as-of memo beside it)─▶ prepareMemo ─▶ record document
+//   ─contentDigest─▶ publication (an issued memo kept, revised or left alone) ─assembleMemo─▶ files
 //   ─writeOutputFolder─▶ the folder (complete, or the previous one left as it was)
 import { loadConfig } from '../config/loadConfig.js';
 import type { OutputFormat } from '../config/runPlan.js';
@@ -9,7 +10,12 @@ import { monthlyMessages } from './messages.js';
 import type { PdfPrinter } from '../memo/print/pdfPrinter.js';
 import { checkRunPaths, writeFailure } from './checkRunPaths.js';
 import { asOfFolders, findEarlierRecord } from './findEarlierRecord.js';
+import { assembleMemo, contentFiles } from './assembleMemo.js';
+import { contentDigest } from './contentDigest.js';
+import { inputCopyFiles } from './inputCopies.js';
+import { publication, type Publication } from './issuedMemo.js';
 import { prepareMemo } from './prepareMemo.js';
+import { runInputs } from './runInputs.js';
 import { recordedCommand } from './recordedCommand.js';
 import { runDate } from './runDate.js';
 import type { SeriesPool } from './seriesPool.js';
@@ -29,6 +35,8 @@ export interface RunMemoOptions {
   pool?: SeriesPool;
   /** Called as each series finishes, for progress reports. */
   onSeriesDone?: (memoId: string, seriesId: string) => void;
+  /** Over an issued memo whose content would change: keep it as a numbered revision and write a new draft (otherwise the run is refused). */
+  newRevision?: boolean;
 }
 
 export interface MemoRunResult {
@@ -39,6 +47,12 @@ export interface MemoRunResult {
   files: string[];
   /** The as-of period of the memo compared with, when there was one. */
   comparedWith?: string;
+  /** Written afresh, kept (an issued memo with the same content digest) or revised (the issued memo kept as a revision). */
+  outcome: Publication['outcome'];
+  /** The number the superseded memo was kept under, when revised. */
+  revision?: number;
+  /** Sign-offs carried into the rewritten folder, when kept. */
+  signOffs: number;
   /** Warnings that did not stop the run (series whose data end well before memo.as_of). */
   warnings: InputProblem[];
 }
@@ -54,20 +68,27 @@ export async function runMemo(configFile: string, options: RunMemoOptions = {}):
   const monthly = asOf === undefined ? asOfFolders(paths.idFolder) : [];
   if (monthly.length > 0) throw new InputError(monthlyMessages.asOfFoldersWouldBeReplaced({ file: plan.configFile, field: 'memo.as_of' }, shownPath(paths.idFolder), monthly));
   const date = runDate();
+  // The revisions compare with the most recent earlier memo; the track record reads them all.
   const earlier = asOf === undefined ? null : findEarlierRecord(paths.idFolder, plan.memo.id, asOf);
-  const { files, records, warnings } = await prepareMemo(plan, {
-    folder: paths.memoFolder,
-    formats: options.formats ?? plan.output.formats,
+  const { loaded, records, document, warnings } = await prepareMemo(plan, { runDate: date, threads: options.threads, pool: options.pool, onSeriesDone: options.onSeriesDone });
+  const formats = options.formats ?? plan.output.formats;
+  const inputs = runInputs(plan, loaded, paths.memoFolder, earlier === null ? [] : [earlier]);
+  const content = contentFiles(document, formats);
+  const digest = contentDigest(inputs, new Map(content.map((file) => [file.name, file.content])));
+  // An issued memo is kept, revised or left alone (exit 2) before anything is rendered.
+  const publish = publication(paths.memoFolder, { inputs, document, content, digest }, options.newRevision === true);
+  const { files } = await assembleMemo(plan, loaded, document, {
+    formats,
     printer: options.printer,
     command: recordedCommand(plan, options),
-    runDate: date,
-    threads: options.threads,
-    pool: options.pool,
-    onSeriesDone: options.onSeriesDone,
-    earlier,
+    earlier: earlier?.document ?? null,
+    inputs,
+    copies: inputCopyFiles(paths.memoFolder, inputs, 'original'),
+    signOffs: publish.log,
+    supersedes: publish.supersedes,
   });
   try {
-    writeOutputFolder(paths.memoFolder, files);
+    writeOutputFolder(paths.memoFolder, [...files, ...publish.carried]);
   } catch (error) {
     throw writeFailure(error, paths);
   }
@@ -76,8 +97,11 @@ export async function runMemo(configFile: string, options: RunMemoOptions = {}):
     memoId: plan.memo.id,
     folder: paths.memoFolder,
     series: records.length,
-    files: files.map((file) => file.name),
+    files: files.filter((file) => !file.name.includes('/')).map((file) => file.name),
     comparedWith: earlier?.asOf,
+    outcome: publish.outcome,
+    revision: publish.revision,
+    signOffs: publish.signOffs,
     warnings,
   };
 }

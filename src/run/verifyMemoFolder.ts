@@ -1,23 +1,30 @@
-// `verify`: a memo folder checked against what its inputs give today.
-//   manifest.json ─readManifest─▶ inputs (from_output, SHA-256: changed or missing → exit 2)
-//   ─▶ outputs still as the manifest records them ─▶ loadConfig + prepareMemo with the recorded
-//   command, run date and earlier record ─▶ record.json and forecasts.csv compared number by
-//   number (compareJson's tolerance), memo.html byte for byte.
-// The rerun goes through prepareMemo, the code `run` uses, and writes nothing.
+// `verify`: a memo folder checked against what its inputs give today, from the copies of the
+// inputs it carries, so an archived folder verifies wherever it lies.
+//   manifest.json ─readManifest─▶ inputs: each copy must have its recorded SHA-256 (else exit 2);
+//   an original still at its place must too (a changed one is exit 2, a missing one is fine)
+//   ─▶ outputs still as the manifest records them ─▶ the copied config and data (planFromCopies)
+//   ─prepareMemo + assembleMemo with the recorded command, run date, earlier record, sign-off
+//   log and supersession─▶ record.json and forecasts.csv compared number by number
+//   (compareJson's tolerance), memo.html byte for byte ─▶ every recorded sign-off, and those of
+//   the revisions the folder keeps, reported valid or void on the stored content.
+// The rerun goes through the code `run` uses, and writes nothing. Void sign-offs do not change
+// the exit code: the rendered status is rebuilt from the valid ones, so a void one shown as
+// counting is a memo.html difference (exit 3).
 import { existsSync, readFileSync } from 'node:fs';
-import { join, resolve } from 'node:path';
+import { resolve } from 'node:path';
 import { parse } from 'csv-parse/sync';
 import { toolVersion } from '../base/toolVersion.js';
-import { loadConfig } from '../config/loadConfig.js';
 import { InputError, type InputProblem } from '../base/problem.js';
-import { verifyMessages, verifyReport } from './messages.js';
-import { readComparableDocument } from './comparableDocument.js';
-import { compareJson, TOLERANCE_TEXT, type Difference } from './compareJson.js';
-import { asOfFolders, type EarlierRecord } from './findEarlierRecord.js';
-import { sha256, type Manifest, type ManifestInput } from './manifest.js';
-import { prepareMemo } from './prepareMemo.js';
-import { readManifest } from './readManifest.js';
 import { shownPath } from '../base/shownPath.js';
+import { assembleMemo } from './assembleMemo.js';
+import { compareJson, TOLERANCE_TEXT, type Difference } from './compareJson.js';
+import { asOfFolders } from './findEarlierRecord.js';
+import { inputDigest, sha256, type Manifest, type ManifestInput } from './manifest.js';
+import { verifyMessages, verifyReport } from './messages.js';
+import { earlierFromCopies, planFromCopies } from './planFromCopies.js';
+import { prepareMemo } from './prepareMemo.js';
+import { signOffReport } from './signOffReport.js';
+import { readStoredMemo, storedFormats } from './storedMemo.js';
 
 export interface VerifyResult {
   /** The report without its differences. */
@@ -28,60 +35,45 @@ export interface VerifyResult {
 
 const ROLE_NAME: Record<ManifestInput['role'], string> = { config: 'config', data: 'data file', 'earlier-record': 'earlier record' };
 
-/** The digest a run records: of the bytes, and for the config of its text, as the config stage hashes it. */
-function inputDigest(input: ManifestInput, bytes: Buffer): string {
-  if (input.role !== 'config') return sha256(bytes);
+function readBytes(path: string): Buffer | null {
   try {
-    return sha256(new TextDecoder('utf-8', { fatal: true }).decode(bytes));
+    return readFileSync(path);
   } catch {
-    return sha256(bytes);
+    return null;
   }
 }
 
-function checkInputs(folder: string, manifest: Manifest, shown: string): void {
+/** Copies must be there with their digest; originals that are there must have it too. Returns the originals found and missing. */
+function checkInputs(folder: string, manifest: Manifest, shown: string): { found: number; missing: number } {
   const problems: InputProblem[] = [];
+  let found = 0;
+  let missing = 0;
   manifest.inputs.forEach((input, i) => {
     const field = `inputs[${i}]`;
     const what = ROLE_NAME[input.role];
-    const path = resolve(folder, input.from_output);
-    let bytes: Buffer;
-    try {
-      bytes = readFileSync(path);
-    } catch {
-      problems.push(verifyMessages.inputMissing(shown, field, what, shownPath(path), input.sha256));
-      return;
+    const check = (path: string, role: string, bytes: Buffer) => {
+      const actual = inputDigest(input.role, bytes);
+      if (actual !== input.sha256) problems.push(verifyMessages.inputChanged(shown, field, role, shownPath(path), input.sha256, actual));
+    };
+    if (input.copy !== undefined) {
+      const path = resolve(folder, input.copy);
+      const bytes = readBytes(path);
+      if (bytes === null) problems.push(verifyMessages.inputMissing(shown, field, `copy of the ${what}`, shownPath(path), input.sha256));
+      else check(path, `copy of the ${what}`, bytes);
     }
-    const actual = inputDigest(input, bytes);
-    if (actual !== input.sha256) problems.push(verifyMessages.inputChanged(shown, field, what, shownPath(path), input.sha256, actual));
+    const original = resolve(folder, input.from_output);
+    const bytes = readBytes(original);
+    if (bytes !== null) {
+      found += 1;
+      check(original, what, bytes);
+    } else if (input.copy === undefined) {
+      problems.push(verifyMessages.inputMissing(shown, field, what, shownPath(original), input.sha256));
+    } else {
+      missing += 1;
+    }
   });
   if (problems.length > 0) throw new InputError(problems);
-}
-
-function checkOutputs(folder: string, manifest: Manifest): { differences: string[]; stored: Map<string, Buffer> } {
-  const differences: string[] = [];
-  const stored = new Map<string, Buffer>();
-  for (const output of manifest.outputs) {
-    const path = join(folder, output.file);
-    if (!existsSync(path)) {
-      differences.push(verifyReport.outputMissing(output.file));
-      continue;
-    }
-    const bytes = readFileSync(path);
-    stored.set(output.file, bytes);
-    const actual = sha256(bytes);
-    if (actual !== output.sha256) differences.push(verifyReport.outputChanged(output.file, output.sha256, actual));
-  }
-  return { differences, stored };
-}
-
-function earlierRecord(folder: string, manifest: Manifest, shown: string): EarlierRecord | null {
-  const index = manifest.inputs.findIndex((input) => input.role === 'earlier-record');
-  if (index < 0) return null;
-  const input = manifest.inputs[index];
-  const file = resolve(folder, input.from_output);
-  const read = readComparableDocument(file);
-  if (read === null) throw new InputError(verifyMessages.earlierRecordUnreadable(shown, `inputs[${index}]`, input.from_output));
-  return { asOf: read.document.memo.as_of, file, ...read };
+  return { found, missing };
 }
 
 const NUMBER = /^-?\d+(\.\d+)?(e[+-]?\d+)?$/i;
@@ -111,40 +103,50 @@ function parsedJson(bytes: Buffer): unknown {
 export async function verifyMemoFolder(folderArgument: string): Promise<VerifyResult> {
   const folder = resolve(folderArgument);
   const shown = shownPath(folder);
-  const manifestFile = join(folder, 'manifest.json');
-  if (!existsSync(manifestFile)) throw new InputError(verifyMessages.noManifest(shown, asOfFolders(folder)));
-  const manifest = readManifest(manifestFile, join(shown, 'manifest.json'));
-  checkInputs(folder, manifest, join(shown, 'manifest.json'));
+  const memo = readStoredMemo(folder);
+  if (memo === null) throw new InputError(verifyMessages.noManifest(shown, asOfFolders(folder)));
+  const { manifest, manifestFile } = memo;
+  const originals = checkInputs(folder, manifest, manifestFile);
   const lines = [verifyReport.header(shown, manifest.run_date, `${manifest.tool.name} ${manifest.tool.version}`, manifest.command)];
   const current = toolVersion();
   if (current.version !== manifest.tool.version) lines.push(verifyReport.otherVersion(`${manifest.tool.name} ${manifest.tool.version}`, `${current.name} ${current.version}`));
   lines.push(verifyReport.inputs(manifest.inputs.length));
-  const outputs = checkOutputs(folder, manifest);
-  const differences = [...outputs.differences];
-  lines.push(verifyReport.outputs(manifest.outputs.length, outputs.differences.length));
+  if (manifest.inputs.some((input) => input.copy !== undefined)) lines.push(verifyReport.originals(originals.found, originals.missing));
+  const differences: string[] = [];
+  for (const output of manifest.outputs) {
+    const bytes = memo.stored.get(output.file);
+    if (bytes === undefined) differences.push(verifyReport.outputMissing(output.file));
+    else if (sha256(bytes) !== output.sha256) differences.push(verifyReport.outputChanged(output.file, output.sha256, sha256(bytes)));
+  }
+  lines.push(verifyReport.outputs(manifest.outputs.length, differences.length));
 
-  const config = manifest.inputs.find((input) => input.role === 'config');
-  if (config === undefined) throw new InputError(verifyMessages.badManifest(join(shown, 'manifest.json'), 'inputs', 'a list with one config'));
-  const plan = loadConfig(shownPath(resolve(folder, config.from_output)));
-  const rerun = await prepareMemo(plan, {
-    folder,
-    formats: ['html', 'json', 'csv'],
+  const plan = planFromCopies(folder, manifest, manifestFile);
+  const templates = plan.output.templates;
+  const templatesMissing = templates !== undefined && !existsSync(templates.folder);
+  const prepared = await prepareMemo(plan, { runDate: manifest.run_date });
+  const earlier = earlierFromCopies(folder, manifest, manifestFile);
+  const { files } = await assembleMemo(plan, prepared.loaded, prepared.document, {
+    // The formats the run wrote, so the content digest is the one the sign-offs were given on; no PDF is printed.
+    formats: storedFormats(manifest).filter((format) => format !== 'pdf' && !(format === 'html' && templatesMissing)),
     command: manifest.command,
-    runDate: manifest.run_date,
-    earlier: earlierRecord(folder, manifest, join(shown, 'manifest.json')),
+    earlier: earlier[0]?.document ?? null,
+    inputs: manifest.inputs,
+    copies: [],
+    signOffs: memo.log,
+    supersedes: memo.supersedes,
   });
-  const rebuilt = new Map(rerun.files.map((file) => [file.name, Buffer.from(file.content)]));
+  const rebuilt = new Map(files.map((file) => [file.name, Buffer.from(file.content)]));
   const numberDifferences: Difference[] = [];
-  const storedRecord = outputs.stored.get('record.json');
+  const storedRecord = memo.stored.get('record.json');
   const rerunRecord = rebuilt.get('record.json');
   if (storedRecord !== undefined && rerunRecord !== undefined) {
     const comparison = compareJson(parsedJson(storedRecord), parsedJson(rerunRecord));
     numberDifferences.push(...comparison.differences);
-    lines.push(verifyReport.records(rerun.records.length, comparison.numbers, TOLERANCE_TEXT));
+    lines.push(verifyReport.records(prepared.records.length, comparison.numbers, TOLERANCE_TEXT));
   } else {
     lines.push(verifyReport.noRecord);
   }
-  const storedCsv = outputs.stored.get('forecasts.csv');
+  const storedCsv = memo.stored.get('forecasts.csv');
   const rerunCsv = rebuilt.get('forecasts.csv');
   if (storedCsv !== undefined && rerunCsv !== undefined) {
     numberDifferences.push(...compareJson(csvRows(storedCsv.toString('utf8')), csvRows(rerunCsv.toString('utf8')), 'forecasts.csv').differences);
@@ -152,7 +154,7 @@ export async function verifyMemoFolder(folderArgument: string): Promise<VerifyRe
   differences.push(...numberDifferences.map((d) => verifyReport.numberDiffers(d.path, d.stored, d.rerun)));
   const bytes: string[] = [];
   for (const file of ['memo.html', 'record.json', 'forecasts.csv']) {
-    const stored = outputs.stored.get(file);
+    const stored = memo.stored.get(file);
     const again = rebuilt.get(file);
     if (stored === undefined || again === undefined) continue;
     const same = stored.equals(again);
@@ -160,7 +162,9 @@ export async function verifyMemoFolder(folderArgument: string): Promise<VerifyRe
     // record.json and forecasts.csv are judged number by number above; the memo's text has no tolerance.
     if (!same && file === 'memo.html') differences.push(verifyReport.bytesDiffer(file, firstDifferentLine(stored.toString('utf8'), again.toString('utf8'))));
   }
+  if (templatesMissing && templates !== undefined) bytes.push(verifyReport.templatesMissing(shownPath(templates.folder)));
   if (manifest.outputs.some((output) => output.file === 'memo.pdf')) bytes.push(verifyReport.notRebuilt('memo.pdf'));
   if (bytes.length > 0) lines.push(verifyReport.bytes(bytes));
+  lines.push(...signOffReport(memo, plan.memo.reviewers));
   return { lines, differences };
 }

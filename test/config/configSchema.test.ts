@@ -91,6 +91,7 @@ const VALIDATOR_ONLY: Record<string, string> = {
   'sign-off by an unlisted reviewer': withMemo('reviewers: [{name: A}]', 'sign_off: [{reviewer: B, date: 2026-01-05, decision: approved}]'),
   'reviewer listed twice': withMemo('reviewers: [{name: A}, {name: A}]'),
   'day missing from the calendar': withMemo('reviewers: [{name: A}]', 'sign_off: [{reviewer: A, date: 2026-02-30, decision: approved}]'),
+  'public key that is no Ed25519 key': withMemo('reviewers: [{name: A, public_key: "-----BEGIN PUBLIC KEY-----\\nAAAA\\n-----END PUBLIC KEY-----"}]'),
 };
 
 describe('the schema file', () => {

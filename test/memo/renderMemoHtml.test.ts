@@ -41,7 +41,7 @@ describe('the full memo', () => {
     expect(html).toContain('<h1 class="memo-title">Long-range outlook for basin inflows and demand drivers</h1>');
     expect(html).toContain('Vessamor Basin Water Cooperative');
     expect(html).toContain('Status: Draft');
-    expect(html).toContain('Awaiting sign-off from Ruth Anselm.');
+    expect(html).toContain('Awaiting a recorded sign-off from Oskar Pellin and Ruth Anselm.');
     expect(html).toContain('@page { size: A4; margin: 17mm 17mm 19mm 17mm; }');
   });
 
@@ -94,8 +94,9 @@ describe('the full memo', () => {
 
   it('has the assumptions register, the sign-off block with blank lines, and the appendix', () => {
     expect(html).toContain('<th scope="row">Transform</th><td>natural log</td><td>Growth is roughly proportional to the level</td><td>Configuration</td>');
-    expect(html).toContain('<dd>Approved with changes</dd>');
-    expect(html.match(/<dd class="line"><\/dd>/g)).toHaveLength(3);
+    // The config's sign-off is shown as declared only, so both reviewers keep their blank lines.
+    expect(html).toContain('<tr><td>Oskar Pellin</td><td>Approved with changes</td><td>2026-12-01</td><td>Widen the discussion of the Nile break.</td></tr>');
+    expect(html.match(/<dd class="line"><\/dd>/g)).toHaveLength(6);
     expect(html).toContain('<code>trendbrief run configs/basin-outlook.yaml</code>');
     expect(html).toContain(input.series[1].record.series.source.sha256);
   });
@@ -177,10 +178,20 @@ describe('templates', () => {
     expect(html).toContain('@page { size: letter;');
     expect(html).toContain('<h2 id="summary-heading">Summary for the client</h2>');
   });
-  it('signs the memo off when every reviewer approved', async () => {
+  it('stays a draft on sign-offs typed into the config, and signs off when every reviewer\u2019s decision is recorded', async () => {
     const input = sampleInput(['lakeHuron']);
     input.memo.sign_off.push({ reviewer: 'Ruth Anselm', date: '2026-12-02', decision: 'approved' });
+    const declared = await renderMemoHtml(input);
+    expect(declared).toContain('Status: Draft');
+    expect(declared).toContain('<h3>Declared in the config, not recorded</h3>');
+    const recorded = { role: '', comment: '', resolves: [], signed: false, void_reason: null };
+    input.digest = 'a'.repeat(64);
+    input.sign_offs = [
+      { ...recorded, number: 1, reviewer: 'Oskar Pellin', decision: 'approve', date: '2026-12-01' },
+      { ...recorded, number: 2, reviewer: 'Ruth Anselm', decision: 'approve', date: '2026-12-02' },
+    ];
     const html = await renderMemoHtml(input);
+    expect(html).toContain(`<code class="hash">${'a'.repeat(64)}</code>`);
     expect(html).toContain('<body class="is-signed-off">');
     expect(html).toContain('Status: Signed off');
     expect(html).not.toContain('<dd class="line">');

@@ -105,7 +105,7 @@ describe('verify refuses changed or missing inputs (exit 2)', () => {
     ]);
   });
 
-  it('names a missing config and a missing earlier record', async () => {
+  it('uses the folder\u2019s copies when the config and the earlier record are gone, and names missing copies', async () => {
     const { root } = await issuedMemo();
     setAsOf(root, '2025-12');
     expect((await runCli(['run', join(root, 'memo.yaml'), '--quiet'])).code).toBe(0);
@@ -114,11 +114,16 @@ describe('verify refuses changed or missing inputs (exit 2)', () => {
     const inputs = readManifest(folder).inputs;
     rmSync(join(root, 'out/lake-outlook/2025-11'), { recursive: true });
     unlinkSync(join(root, 'memo.yaml'));
+    const archived = await runCli(['verify', folder]);
+    expect(archived.code).toBe(0);
+    expect(archived.stdout).toContain("originals: 1 found unchanged at their places, 2 not found (the memo folder's copies were used)\n");
+    unlinkSync(join(folder, 'inputs/config/memo.yaml'));
+    unlinkSync(join(folder, 'inputs/earlier-record/record.json'));
     const run = await runCli(['verify', folder]);
     expect(run.code).toBe(2);
     expect(run.errorLines).toEqual([
-      `${folder}/manifest.json: inputs[0]: the config ${join(root, 'memo.yaml')} is missing (expected SHA-256 ${inputs[0].sha256}); put the file back where the manifest says, or rerun the memo`,
-      `${folder}/manifest.json: inputs[2]: the earlier record ${join(root, 'out/lake-outlook/2025-11/record.json')} is missing (expected SHA-256 ${inputs[2].sha256}); put the file back where the manifest says, or rerun the memo`,
+      `${folder}/manifest.json: inputs[0]: the copy of the config ${join(folder, 'inputs/config/memo.yaml')} is missing (expected SHA-256 ${inputs[0].sha256}); put the file back where the manifest says, or rerun the memo`,
+      `${folder}/manifest.json: inputs[2]: the copy of the earlier record ${join(folder, 'inputs/earlier-record/record.json')} is missing (expected SHA-256 ${inputs[2].sha256}); put the file back where the manifest says, or rerun the memo`,
     ]);
   });
 
