@@ -23,8 +23,9 @@ export const RUN_HELP = `Usage: trendbrief run CONFIG.yaml... [options]
 Analyses every series of each config (both trend models, evidence, backtest, recommendation)
 and writes the memo into <output folder>/<memo id>/<as-of>/ (<output folder>/<memo id>/ without
 memo.as_of): memo.html, memo.pdf, record.json, forecasts.csv and manifest.json. A memo with an
-as-of period compares itself with the latest earlier as-of memo beside it. A folder appears
-only when all its files are complete, and carries copies of its config and data under inputs/.
+as-of period compares itself with the latest earlier as-of memo beside it and shows how the
+forecasts of all the earlier ones fared. A folder appears only when all its files are complete,
+and carries copies of its config and data under inputs/.
 
 A memo is issued once a reviewer's decision is recorded on it (trendbrief review). A rerun
 with the same content keeps its sign-offs; one that would change its content is refused

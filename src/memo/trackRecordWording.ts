@@ -29,7 +29,7 @@ export const trackRecordWording = {
     return `${start}${observed}${held === '' ? '' : `: ${held}`}${a.judged ? '.' : `; ${a.outcomes === 1 ? 'one outcome is' : `${a.outcomes} outcomes are`} too few to judge coverage.`}`;
   },
   intro: (asOf: string, earlier: string[]) =>
-    `The forecasts of the ${earlier.length === 1 ? `memo as of ${earlier[0]}` : `${earlier.length} memos as of ${earlier[0]} to ${earlier[earlier.length - 1]}`}, set against the values this memo's data (as of ${asOf}) now hold for the periods they forecast. ` +
+    `The forecasts of the ${earlier.length === 1 ? `memo as of ${earlier[0]}` : `${earlier.length} memos as of ${earlier.length === 2 ? `${earlier[0]} and ${earlier[1]}` : `${earlier[0]} to ${earlier[earlier.length - 1]}`}`}, set against the values this memo's data (as of ${asOf}) now hold for the periods they forecast. ` +
     'Outcomes are the values as they stand now, revisions included; periods not yet observed are left out.',
   dependence:
     'The outcomes are not independent: one memo\u2019s forecasts at successive steps share their errors, and successive memos forecast the same periods. The counts therefore say less about the intervals than their number suggests.',
@@ -68,7 +68,9 @@ export const trackRecordWording = {
     /** One short line per mark, naming only the models drawn. */
     subtitle: (level: string, models: readonly TrendModelKind[]) => [
       'Solid dark line with dots: observed values.',
-      `Dashed line, open markers: an earlier memo's point forecasts from the model it recommended${models.length === 0 ? '' : ` (${models.map((m) => CHART_KEY[m]).join('; ')})`}.`,
+      ...(models.length === 0
+        ? []
+        : ["Dashed lines, open markers: each earlier memo's point forecasts from the model it recommended", `(${models.map((m) => CHART_KEY[m]).join('; ')}).`]),
       `Bars: the ${level}% intervals of those forecasts.`,
     ],
     description: (a: { series: string; memos: number; level: string; held: number; total: number }) =>

@@ -24,7 +24,8 @@ import { REVISIONS_FOLDER } from './issuedMemo.js';
 import { judgeSignOffs } from './judgeSignOffs.js';
 import { sha256 } from './manifest.js';
 import { reviewMessages } from './messages.js';
-import { earlierFromCopy, planFromCopies } from './planFromCopies.js';
+import { earlierFromCopies, earlierFromCopy, planFromCopies } from './planFromCopies.js';
+import { attachTrackRecord } from './trackRecord.js';
 import { prepareMemo } from './prepareMemo.js';
 import { readAllSeries } from './readPlannedSeries.js';
 import type { RecordDocument } from './recordDocument.js';
@@ -119,6 +120,7 @@ export async function recordSignOff(request: SignOffRequest): Promise<RecordedSi
   const loaded = stored === null ? null : readAllSeries(plan);
   const prepared = loaded === null || stored === null ? await prepareMemo(plan, { runDate: manifest.run_date }) : { loaded, document: stored };
   // A stored record.json carries its track record; one analysed again reads the earlier records' copies.
+  if (stored === null) attachTrackRecord(prepared.document, earlierFromCopies(folder, manifest, manifestFile));
   const assembled = await assembleMemo(plan, prepared.loaded, prepared.document, {
     formats: storedFormats(manifest),
     printer: request.printer,

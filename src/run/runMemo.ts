@@ -9,13 +9,14 @@ import { InputError, type InputProblem } from '../base/problem.js';
 import { monthlyMessages } from './messages.js';
 import type { PdfPrinter } from '../memo/print/pdfPrinter.js';
 import { checkRunPaths, writeFailure } from './checkRunPaths.js';
-import { asOfFolders, findEarlierRecord } from './findEarlierRecord.js';
+import { asOfFolders, findEarlierRecords } from './findEarlierRecord.js';
 import { assembleMemo, contentFiles } from './assembleMemo.js';
 import { contentDigest } from './contentDigest.js';
 import { inputCopyFiles } from './inputCopies.js';
 import { publication, type Publication } from './issuedMemo.js';
 import { prepareMemo } from './prepareMemo.js';
 import { runInputs } from './runInputs.js';
+import { attachTrackRecord } from './trackRecord.js';
 import { recordedCommand } from './recordedCommand.js';
 import { runDate } from './runDate.js';
 import type { SeriesPool } from './seriesPool.js';
@@ -69,10 +70,13 @@ export async function runMemo(configFile: string, options: RunMemoOptions = {}):
   if (monthly.length > 0) throw new InputError(monthlyMessages.asOfFoldersWouldBeReplaced({ file: plan.configFile, field: 'memo.as_of' }, shownPath(paths.idFolder), monthly));
   const date = runDate();
   // The revisions compare with the most recent earlier memo; the track record reads them all.
-  const earlier = asOf === undefined ? null : findEarlierRecord(paths.idFolder, plan.memo.id, asOf);
+  // The revisions compare with the most recent earlier memo; the track record reads them all.
+  const earlierMemos = asOf === undefined ? [] : findEarlierRecords(paths.idFolder, plan.memo.id, asOf);
+  const earlier = earlierMemos[0] ?? null;
   const { loaded, records, document, warnings } = await prepareMemo(plan, { runDate: date, threads: options.threads, pool: options.pool, onSeriesDone: options.onSeriesDone });
   const formats = options.formats ?? plan.output.formats;
-  const inputs = runInputs(plan, loaded, paths.memoFolder, earlier === null ? [] : [earlier]);
+  attachTrackRecord(document, earlierMemos);
+  const inputs = runInputs(plan, loaded, paths.memoFolder, earlierMemos);
   const content = contentFiles(document, formats);
   const digest = contentDigest(inputs, new Map(content.map((file) => [file.name, file.content])));
   // An issued memo is kept, revised or left alone (exit 2) before anything is rendered.

@@ -6,9 +6,18 @@
 import type { TrendModelKind } from '../base/settings.js';
 import type { ChoiceScore, LevelCoverage, SeriesTrackRecord, TrackedChoice, TrackedForecast, TrackedRow, TrackRecord } from '../memo/trackRecordPart.js';
 import type { ComparableDocument, ComparableForecast, ComparableRecord } from './comparableDocument.js';
-import { byRecency } from './findEarlierRecord.js';
+import { byRecency, type EarlierRecord } from './findEarlierRecord.js';
+import type { RecordDocument } from './recordDocument.js';
 
 const MODELS: readonly TrendModelKind[] = ['deterministic', 'stochastic'];
+
+/**
+ * Adds `track_record` to a memo's record document when the memo has an as-of period and earlier
+ * as-of memos were read; `run` and `verify` both call it, with the same earlier records.
+ */
+export function attachTrackRecord(document: RecordDocument, earlier: readonly EarlierRecord[]): void {
+  if (document.memo.as_of !== '' && earlier.length > 0) document.track_record = trackRecord(document, earlier.map((memo) => memo.document));
+}
 
 /** `now` with its observed values; `earlier` every earlier as-of memo of the same id, in any order. */
 export function trackRecord(now: ComparableDocument, earlier: readonly ComparableDocument[]): TrackRecord {

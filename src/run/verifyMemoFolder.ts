@@ -22,6 +22,7 @@ import { asOfFolders } from './findEarlierRecord.js';
 import { inputDigest, sha256, type Manifest, type ManifestInput } from './manifest.js';
 import { verifyMessages, verifyReport } from './messages.js';
 import { earlierFromCopies, planFromCopies } from './planFromCopies.js';
+import { attachTrackRecord } from './trackRecord.js';
 import { prepareMemo } from './prepareMemo.js';
 import { signOffReport } from './signOffReport.js';
 import { readStoredMemo, storedFormats } from './storedMemo.js';
@@ -125,6 +126,7 @@ export async function verifyMemoFolder(folderArgument: string): Promise<VerifyRe
   const templatesMissing = templates !== undefined && !existsSync(templates.folder);
   const prepared = await prepareMemo(plan, { runDate: manifest.run_date });
   const earlier = earlierFromCopies(folder, manifest, manifestFile);
+  attachTrackRecord(prepared.document, earlier);
   const { files } = await assembleMemo(plan, prepared.loaded, prepared.document, {
     // The formats the run wrote, so the content digest is the one the sign-offs were given on; no PDF is printed.
     formats: storedFormats(manifest).filter((format) => format !== 'pdf' && !(format === 'html' && templatesMissing)),
