@@ -15,23 +15,13 @@ import { InputError } from '../base/problem.js';
 import { shownPath } from '../base/shownPath.js';
 import type { Supersedes } from '../memo/reviewPart.js';
 import { folderFiles } from './folderFiles.js';
-import type { ManifestInput } from './manifest.js';
 import { issuedMessages } from './messages.js';
-import type { RecordDocument } from './recordDocument.js';
 import { SIGN_OFF_LOG, type SignOffLog } from './signOffLog.js';
 import { readStoredMemo, type StoredMemo } from './storedMemo.js';
-import { supersedesOf } from './supersedesOf.js';
+import { supersedesOf, type NewContent } from './supersedesOf.js';
 import type { OutputFile } from './writeOutputFolder.js';
 
 export const REVISIONS_FOLDER = 'revisions';
-
-export interface NewContent {
-  inputs: readonly ManifestInput[];
-  document: RecordDocument;
-  /** record.json and forecasts.csv as the formats ask for them. */
-  content: readonly OutputFile[];
-  digest: string;
-}
 
 export interface Publication {
   outcome: 'written' | 'kept' | 'revised';

@@ -6,9 +6,19 @@ import type { InputChange, PointChange, Supersedes } from '../memo/reviewPart.js
 import { isComparableDocument, type ComparableDocument } from './comparableDocument.js';
 import { compareJson, numbersAgree } from './compareJson.js';
 import { compareRecords } from './compareRecords.js';
-import type { NewContent } from './issuedMemo.js';
 import type { ManifestInput } from './manifest.js';
+import type { RecordDocument } from './recordDocument.js';
 import type { StoredMemo } from './storedMemo.js';
+import type { OutputFile } from './writeOutputFolder.js';
+
+/** What a run is about to publish, weighed against the memo folder it would replace. */
+export interface NewContent {
+  inputs: readonly ManifestInput[];
+  document: RecordDocument;
+  /** record.json and forecasts.csv as the formats ask for them. */
+  content: readonly OutputFile[];
+  digest: string;
+}
 
 /** Forecast changes named in the reasons. */
 export const LARGEST_SHOWN = 3;
