@@ -10,29 +10,13 @@ import { join, resolve } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Manifest } from '../../src/run/manifest.js';
 import { runCli, type CliRun } from '../support/runCli.js';
-import { fixRunDate } from './monthlySetup.js';
+import { fixRunDate, memoConfig } from './monthlySetup.js';
 
 fixRunDate('all');
 
+/** The monthly tests' config (monthlySetup.ts) for `asOf`, reading `file`. */
 function config(asOf: string, file: string): string {
-  return `memo:
-  id: lake-outlook
-  title: Lake outlook
-  as_of: ${asOf}
-defaults:
-  max_p: 1
-  max_q: 1
-  backtest: {origins: 4, horizon: 2, refit: reestimate}
-series:
-  - id: lake-level
-    title: Lake level
-    units: ft
-    file: ${file}
-    horizon: 4
-output:
-  folder: out
-  formats: [html, json, csv]
-`;
+  return memoConfig(asOf).replace('file: data/lake-huron.csv', `file: ${file}`);
 }
 
 let root = '';
