@@ -25,12 +25,10 @@ memo:
   reviewers:
     - name: R. Reviewer
       role: engagement lead
-  # Reviewers record their decisions under sign_off, each naming a listed reviewer:
-  #   sign_off:
-  #     - reviewer: R. Reviewer
-  #       date: 2026-01-15
-  #       decision: approved         # approved, approved-with-changes or rejected
-  #       comment: Intervals discussed with the client.
+  # Reviewers record their decisions on the written memo folder, each bound to its numbers:
+  #   trendbrief review out/ferry-boardings-outlook/2025 --reviewer 'R. Reviewer' --decision approve
+  # (approve, approve-with-changes or return; the last two need --comment). To sign with a key,
+  # run trendbrief review --new-key DIR and paste the public key here under public_key: |
 
 # Settings for every series; a series may override any of them. Keys left out take their
 # built-in default, and the memo's assumptions register says which is which.
