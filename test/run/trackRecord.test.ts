@@ -8,6 +8,7 @@ import { trackRecord } from '../../src/run/trackRecord.js';
 import { compileChart } from '../../src/memo/charts/renderChart.js';
 import { trackRecordChart } from '../../src/memo/charts/trackRecordChart.js';
 import { trackRecordView } from '../../src/memo/view/trackRecordView.js';
+import { trackRecordClaims } from '../../src/memo/consistency/trackRecordClaims.js';
 
 type Row = [period: string, point: number, lo80: number, hi80: number, lo95: number, hi95: number];
 
@@ -75,6 +76,15 @@ describe('trackRecord', () => {
       "Track record: 2 earlier memos; 5 of their forecasts are now observed: the recommended model's 80% intervals held 2 of 5 and its 95% intervals 4 of 5; 5 outcomes are too few to judge coverage.",
     );
     expect(view?.series[0].tooFew).toBe('5 outcomes: too few to judge coverage; the counts are shown without shares.');
+    // The memo's read-back finds the sentences true, and a changed count false.
+    const lines = `${view?.summary} ${view?.series[0].summary}`;
+    expect(view?.series[0].summary).toBe(
+      "Ferry boardings: 5 of 6 forecasts from 2 earlier memos observed so far; the recommended model's intervals held 2 of 5 at 80% and 4 of 5 at 95%, with a mean absolute error of 5.60.",
+    );
+    expect(trackRecordClaims(tracked, lines)).toEqual([]);
+    expect(trackRecordClaims(tracked, lines.replace('80% intervals held 2 of 5', '80% intervals held 3 of 5'))).toEqual([
+      "the track record sentence says 80% intervals held 3 of 5, which is not the track record's count",
+    ]);
     expect(view?.series[0].detailRows[0]).toMatchObject({ asOf: '2020', period: '2021', actual: '104.00', stochastic: { point: '101.00 \u2605', inside: ['in', 'in'] } });
   });
 

@@ -59,7 +59,8 @@ function chunks(html: string, start: string, end: string): string[] {
 
 const ENTITIES: Readonly<Record<string, string>> = { '&amp;': '&', '&lt;': '<', '&gt;': '>', '&quot;': '"', '&#x27;': "'", '&#x60;': '`', '&#x3D;': '=' };
 
-function plainText(html: string): string {
+/** The memo's words without markup, entities decoded and white space collapsed. */
+export function plainText(html: string): string {
   return html
     .replace(/<svg[\s\S]*?<\/svg>/g, ' ')
     .replace(/<[^>]+>/g, ' ')
