@@ -205,7 +205,7 @@ export const PAGE_ONE = {
     return `Since the memo as of ${a.earlier}: ${parts.join('; ')}. Forecast revisions are in the section that follows.`;
   },
   legend: (level: string) =>
-    `\u25C6 marks the recommended model, whose row is set in bold. Each figure is a point forecast with its ${level} prediction interval beneath. Severity chips on the series pages: \u201cweighs on the decision\u201d, \u201cbear in mind\u201d, \u201cfor the record\u201d, from most to least serious.`,
+    `\u25C6 marks the recommended model, whose row is set in bold. Each figure is a point forecast with its ${level} prediction interval beside it. Severity chips on the series pages: \u201cweighs on the decision\u201d, \u201cbear in mind\u201d, \u201cfor the record\u201d, from most to least serious.`,
 } as const;
 
 export const PAGE_FOOTER = { page: 'Page', of: 'of' } as const;
@@ -230,7 +230,6 @@ export const NOT_RUN = {
   backtest: 'The backtest was not run for this series, so there is no out-of-sample check of either model.',
   stability: 'The trend-stability checks were not run for this series.',
   recommendation: 'No recommendation was recorded for this series; both models are shown side by side.',
-  history: 'The observed values were not supplied with this memo, so the history chart is left out.',
 } as const;
 
 export const SIGN_OFF_NOTE =

@@ -32,9 +32,9 @@ describe('memoContradictions', () => {
   });
 
   it('fires on a significant result called not significant, the wording fault it exists for', () => {
-    const wrong = html.replace('</article>', ' The comparison test at h = 5 gives p = 0.003 in favour of the stochastic trend: not significant at 5%.</article>');
+    const wrong = html.replace('</tbody>', ' The comparison test at h = 5 gives p = 0.003 in favour of the stochastic trend: not significant at 5%.</tbody>');
     expect(memoContradictions(records, wrong)).toEqual(['series lake-huron: p = 0.003 is called not significant at 5%']);
-    const right = html.replace('</article>', ' The comparison test at h = 5 gives p = 0.003 in favour of the stochastic trend: significant at 5%.</article>');
+    const right = html.replace('</tbody>', ' The comparison test at h = 5 gives p = 0.003 in favour of the stochastic trend: significant at 5%.</tbody>');
     expect(memoContradictions(records, right)).toEqual([]);
   });
 

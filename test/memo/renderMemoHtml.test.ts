@@ -22,6 +22,14 @@ function sectionOf(html: string, anchor: string): string {
   return html.slice(start, end < 0 ? undefined : end);
 }
 
+/** A series' part of the technical appendix. */
+function detailOf(html: string, anchor: string): string {
+  const start = html.indexOf(`<section class="series-detail" id="${anchor}-detail"`);
+  if (start < 0) throw new Error(`no detail for ${anchor}`);
+  const end = html.indexOf('<section', start + 10);
+  return html.slice(start, end < 0 ? undefined : end);
+}
+
 describe('the full memo', () => {
   let input: MemoInput;
   let html: string;
@@ -45,44 +53,51 @@ describe('the full memo', () => {
     expect(html).toContain('@page { size: A4; margin: 17mm 17mm 19mm 17mm; }');
   });
 
-  it('summarises every series with the end-of-horizon forecast of both models', () => {
+  it('gives every series on page 1: next period, next full year and end of horizon under both models', () => {
     const summary = html.slice(html.indexOf('<section class="summary"'), html.indexOf('<section class="series"'));
-    expect(summary.match(/<article class="summary-card">/g)).toHaveLength(3);
+    expect(summary.match(/<tbody class="summary-card"/g)).toHaveLength(3);
     const lake = input.series[0].record;
-    // 577.89 and 575.23 – 580.56: the Lake Huron deterministic forecast for 1982 (REML estimates) to two decimals.
+    // 577.89 and 575.23 – 580.56: the Lake Huron deterministic forecast for 1982 (REML estimates) to two decimals, at the widest level.
     expect(lake.forecasts.deterministic[9].point.toFixed(2)).toBe('577.89');
-    expect(summary).toContain('<td class="num">577.89</td><td class="num">576.15\u2009\u2013\u2009579.64</td><td class="num">575.23\u2009\u2013\u2009580.56</td>');
-    expect(summary).toContain('<span class="tag">Recommended</span> <strong>Deterministic trend</strong>');
-    expect(summary.match(/class="summary-caveat severity-/g)).toHaveLength(3);
+    expect(summary).toContain('<td class="num">577.89</td><td class="num interval">575.23\u2009\u2013\u2009580.56</td></tr>');
+    expect(summary).toContain('<tr class="is-recommended"><th scope="row">Deterministic <span class="marker"');
+    expect(summary).toContain('Recommended: deterministic trend.');
+    expect(summary).toContain('last observation 1972');
+    expect(summary).toContain('Source and vintage: not given in the config.');
+    expect(summary).toContain('\u25C6 marks the recommended model');
     expect(summary).toContain('A forecast is an estimate, not a guarantee.');
     expect(summary).toContain('Prediction intervals assume the fitted model holds over the whole horizon.');
     expect(summary).toContain('remain with qualified professionals and the rules that apply to them.');
   });
 
-  it('has every section for each series', () => {
+  it('has every section for each series, the detail in the appendix', () => {
     input.series.forEach((entry, i) => {
       const anchor = `series-${i + 1}`;
       const section = sectionOf(html, anchor);
-      for (const figure of ['history', 'forecast', 'ratio', 'backtest', 'acf', 'stability']) {
+      for (const figure of ['forecast', 'backtest']) {
         expect(section, `${anchor} ${figure}`).toMatch(new RegExp(`<figure class="chart" id="${anchor}-${figure}">\\s*<svg role="img"`));
       }
-      expect(section.match(/<figcaption>/g)).toHaveLength(6);
+      expect(section.match(/<figcaption>/g)).toHaveLength(2);
       expect(section).toContain('<table class="numbers forecast-table">');
-      expect(section.match(/<tbody>[\s\S]*?<\/tbody>/)?.[0].match(/<tr>/g)).toHaveLength(entry.record.settings.horizon);
-      expect(section).toContain('<table class="numbers backtest-point">');
-      expect(section).toContain('<table class="numbers backtest-interval">');
-      expect(section).toContain('<table class="numbers comparison">');
+      // Ten steps: every one is shown (longer horizons print a selection, shownHorizons).
+      expect(section.match(/<table class="numbers forecast-table">[\s\S]*?<tbody>([\s\S]*?)<\/tbody>/)?.[1].match(/<tr>/g)).toHaveLength(entry.record.settings.horizon);
+      expect(section).toContain('<table class="numbers backtest-summary">');
       expect(section).toContain('<table class="numbers unit-root">');
-      expect(section.match(/<p class="equation"><code>/g)).toHaveLength(2);
-      expect(section.match(/<table class="numbers coefficients">/g)).toHaveLength(2);
       expect(section).toContain('data-caveat="fixed-line-extrapolation"');
-      expect(section).toMatch(/<li class="(is-flagged)?">(Deterministic trend: |Stochastic trend: )/);
+      expect(section).toContain('<p class="residual-summary">Checks of the one-step forecast errors');
+      expect(section).toContain('<p class="stability-summary">Trend stability:');
       expect(section).not.toContain('class="not-run"');
+      const detail = detailOf(html, anchor);
+      expect(detail).toMatch(new RegExp(`<figure class="chart" id="${anchor}-stability">`));
+      expect(detail).toContain('<table class="numbers comparison">');
+      expect(detail.match(/<p class="equation"><code>/g)).toHaveLength(2);
+      expect(detail.match(/<table class="numbers coefficients">/g)).toHaveLength(2);
+      expect(detail).toMatch(/<li class="(is-flagged)?">(Deterministic trend: |Stochastic trend: )/);
     });
   });
 
   it('writes both model equations and their standard errors', () => {
-    const section = sectionOf(html, 'series-1');
+    const section = detailOf(html, 'series-1');
     // Handlebars' own escaping, which the template applies to every {{ }} value.
     const equation = Handlebars.Utils.escapeExpression(input.series[0].record.models.stochastic.equation);
     expect(equation).toContain('(1 - B) w_t &#x3D; ');
@@ -93,7 +108,7 @@ describe('the full memo', () => {
   });
 
   it('has the assumptions register, the sign-off block with blank lines, and the appendix', () => {
-    expect(html).toContain('<th scope="row">Transform</th><td>natural log</td><td>Growth is roughly proportional to the level</td><td>Configuration</td>');
+    expect(html).toContain('<th scope="row">Transform</th><td>natural log</td><td>Growth is roughly proportional to the level</td><td>Config</td>');
     // The config's sign-off is shown as declared only, so both reviewers keep their blank lines.
     expect(html).toContain('<tr><td>Oskar Pellin</td><td>Approved with changes</td><td>2026-12-01</td><td>Widen the discussion of the Nile break.</td></tr>');
     expect(html.match(/<dd class="line"><\/dd>/g)).toHaveLength(6);
@@ -115,7 +130,6 @@ describe('escaping and link-free text', () => {
     const html = await renderMemoHtml(input);
     expect(html).not.toContain('<img');
     expect(html).toContain('<h2 id="series-1-heading" class="series-title">&lt;img src&#x3D;x onerror&#x3D;alert(1)&gt;</h2>');
-    expect(html).toContain('&lt;img src=x onerror=alert(1)&gt;: forecasts to 1982</text>');
     expect(html).not.toMatch(/https?:\/\//);
     expect(html).toContain('See https:\u2060//example.org/notes');
   });
@@ -128,7 +142,7 @@ describe('escaping and link-free text', () => {
 });
 
 describe('a record without the later parts', () => {
-  it('says the backtest, stability and recommendation were not run, and leaves out the history chart without data', async () => {
+  it('says the backtest, stability and recommendation were not run', async () => {
     const input = sampleInput(['nile']);
     const record = bareRecord('nile');
     record.evidence.stability = null;
@@ -136,11 +150,11 @@ describe('a record without the later parts', () => {
     const html = await renderMemoHtml(input);
     const section = sectionOf(html, 'series-1');
     expect(section).toContain('The backtest was not run for this series');
-    expect(section).toContain('The trend-stability checks were not run for this series.');
+    expect(detailOf(html, 'series-1')).toContain('The trend-stability checks were not run for this series.');
     expect(section).toContain('No recommendation was recorded for this series');
-    expect(section).toContain('The observed values were not supplied with this memo');
     expect(section).toContain('data-caveat="backtest-thin"');
-    expect(section.match(/<figure class="chart"/g)).toHaveLength(3);
+    // The forecast chart alone: no backtest, no stability windows, and no observed history to draw before the forecasts.
+    expect(section.match(/<figure class="chart"/g)).toHaveLength(1);
     expect(html).toContain('No assumptions were recorded for this series.');
   });
 });
@@ -151,18 +165,17 @@ describe('series at other interval levels', () => {
     const record = await fitRecord('test/fixtures/lake-huron.csv', [...QUICK_BACKTEST, '--levels', '68,95,99']);
     input.series.push({ record, assumptions: [] });
     const html = await renderMemoHtml(input);
-    expect(html).toContain('under both models with the prediction intervals set for each series,');
+    expect(html).toContain('<th scope="colgroup" colspan="2" class="num">Next period</th>');
+    expect(html).toContain('with its widest prediction interval beside it');
     // Built-in levels: the models side by side, as before.
     expect(sectionOf(html, 'series-1')).toContain('<table class="numbers forecast-table">');
-    expect(sectionOf(html, 'series-1')).toContain('<table class="numbers backtest-interval">');
     const section = sectionOf(html, 'series-2');
-    // Three levels: each model its own rows under one set of columns, the row head spanning them
-    // all (forecasts: h, period, point, three intervals, ratio; backtest: h, three covers, width, score, CRPS).
+    // Three levels: each model its own forecast rows under one set of columns, the row head
+    // spanning them all (h, period, point, three intervals, ratio).
     expect(section).toContain('<table class="numbers forecast-table by-model">');
-    expect(section.match(/<th scope="rowgroup" colspan="7" class="model-(deterministic|stochastic)">/g)).toHaveLength(4);
-    expect(section).toContain('<table class="numbers backtest-interval by-model">');
-    const summary = html.slice(html.indexOf('<section class="summary"'), html.indexOf('<section class="series"'));
-    expect(summary.match(/<article class="summary-card( table-below)?">/g)).toEqual(['<article class="summary-card">', '<article class="summary-card table-below">']);
+    expect(section.match(/<th scope="rowgroup" colspan="7" class="model-(deterministic|stochastic)">/g)).toHaveLength(2);
+    // The backtest table: coverage at each of the three levels, both models.
+    expect(section).toContain('<th scope="colgroup" colspan="2">68% cover</th><th scope="colgroup" colspan="2">95% cover</th><th scope="colgroup" colspan="2">99% cover</th>');
   });
 });
 
@@ -176,7 +189,7 @@ describe('templates', () => {
     expect(html).toContain('/* house style */');
     expect(html).not.toContain('--spruce');
     expect(html).toContain('@page { size: letter;');
-    expect(html).toContain('<h2 id="summary-heading">Summary for the client</h2>');
+    expect(html).toContain('<h2 id="summary-heading">At a glance</h2>');
   });
   it('stays a draft on sign-offs typed into the config, and signs off when every reviewer\u2019s decision is recorded', async () => {
     const input = sampleInput(['lakeHuron']);

@@ -109,11 +109,9 @@ describe('in the rendered memo', () => {
     expect(html).toContain('it is simulated: 20,000 draws of the 4 quarters together from each fitted model');
     const error = 100 * Math.max(gdp().next_year?.deterministic?.simulation_error ?? 0, gdp().next_year?.stochastic?.simulation_error ?? 0);
     expect(html).toContain(`another seed would move the interval\u2019s ends by up to ${error.toFixed(1)}% of its half-width (95% bounds)`);
-    expect(html).toContain('<tbody class="year-rows">');
-    // Lake Huron and the Nile are annual: one set of year rows in the memo, GDP's.
-    expect(html.split('<tbody class="year-rows">')).toHaveLength(2);
-    expect(html).toContain('under both models with 80% and 95% prediction intervals');
-    expect(html).toContain('for a monthly or quarterly series, for the next full calendar year');
+    // Page 1 gives the year's column under both models; Lake Huron and the Nile are annual, so their next period is their next year.
+    expect(html).toContain('<td colspan="2" class="num">2010 average</td>');
+    expect(html.split('next full year: as next period')).toHaveLength(3);
   });
 
   it('passes the consistency check as rendered, and fails it when the record says otherwise', () => {

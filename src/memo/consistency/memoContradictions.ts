@@ -41,8 +41,10 @@ export function modelsAgree(record: Pick<AnalysisRecord, 'forecasts' | 'settings
 export function memoContradictions(records: readonly AnalysisRecord[], html: string): string[] {
   const cards = chunks(html, '<tbody class="summary-card', '</tbody>');
   const sections = chunks(html, '<section class="series" id="', '</section>');
+  // Each series' part of the technical appendix (the year figure's method note, the models).
+  const details = chunks(html, '<section class="series-detail" id="', '</section>');
   return records.flatMap((record, i) => {
-    const text = plainText(`${cards[i] ?? ''} ${sections[i] ?? ''}`);
+    const text = plainText(`${cards[i] ?? ''} ${sections[i] ?? ''} ${details[i] ?? ''}`);
     return [...significanceClaims(text), ...narrowerClaims(record, text), ...growthClaims(record, text), ...agreementClaims(record, text), ...yearClaims(record, text)].map((problem) =>
       w.problem(record.series.id, problem),
     );
