@@ -70,12 +70,4 @@ describe('memoContradictions', () => {
     expect(memoContradictions([same], said)).not.toContain(expect.stringContaining('does not say so'));
   });
 
-  it('is silent on the demo memo', async () => {
-    const out = mkdtempSync(join(tmpdir(), 'tb-demo-'));
-    const run = await runCli(['run', 'configs/demo.yaml', '--out', out, '--formats', 'html,json', '--quiet']);
-    expect(run.code, run.stderr).toBe(0);
-    const folder = join(out, 'vessamor-supply-outlook', '2024-12');
-    const document = JSON.parse(readFileSync(join(folder, 'record.json'), 'utf8')) as { records: AnalysisRecord[] };
-    expect(memoContradictions(document.records, readFileSync(join(folder, 'memo.html'), 'utf8'))).toEqual([]);
-  }, 120_000);
 });
