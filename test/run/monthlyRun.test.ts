@@ -27,7 +27,7 @@ describe('a memo with an as-of period', () => {
     expect(run.code).toBe(0);
     expect(readdirSync(join(root, 'out/lake-outlook'))).toEqual(['2025-11']);
     const folder = join(root, 'out/lake-outlook/2025-11');
-    expect(readdirSync(folder).sort()).toEqual(['forecasts.csv', 'manifest.json', 'memo.html', 'record.json']);
+    expect(readdirSync(folder).sort()).toEqual(['forecasts.csv', 'inputs', 'manifest.json', 'memo.html', 'record.json']);
     const document = JSON.parse(readText(folder, 'record.json')) as { history: { series_id: string; values: { period: string; value: number }[] }[] };
     expect(document.history[0].series_id).toBe('lake-level');
     expect(document.history[0].values).toHaveLength(98);
@@ -67,6 +67,7 @@ describe('a memo with an as-of period', () => {
       path: '2025-11/record.json',
       from_output: '../2025-11/record.json',
       sha256: sha256(readFileSync(join(root, 'out/lake-outlook/2025-11/record.json'))),
+      copy: 'inputs/earlier-record/record.json',
     });
   });
 

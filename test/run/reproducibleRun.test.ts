@@ -18,7 +18,14 @@ afterEach(() => {
 });
 
 function filesOf(folder: string): Map<string, Buffer> {
-  return new Map(readdirSync(folder).map((file) => [file, readFileSync(join(folder, file))]));
+  return new Map(
+    readdirSync(folder, { recursive: true, withFileTypes: true })
+      .filter((entry) => entry.isFile())
+      .map((entry) => {
+        const path = join(entry.parentPath, entry.name);
+        return [path.slice(folder.length + 1), readFileSync(path)];
+      }),
+  );
 }
 
 describe('a rerun', () => {
@@ -34,7 +41,7 @@ describe('a rerun', () => {
     process.env.TMPDIR = mkdtempSync(join(tmpdir(), 'tb-tmp-b-'));
     expect((await runCli(['run', join(root, 'memo.yaml'), '--threads', '3', '--quiet'])).code).toBe(0);
     const second = filesOf(join(root, 'out/lake-outlook/2025-12'));
-    expect([...first.keys()].sort()).toEqual(['forecasts.csv', 'manifest.json', 'memo.html', 'record.json']);
+    expect([...first.keys()].sort()).toEqual(['forecasts.csv', 'inputs/config/memo.yaml', 'inputs/data/lake-huron.csv', 'manifest.json', 'memo.html', 'record.json']);
     for (const [file, bytes] of first) expect(second.get(file)?.equals(bytes), file).toBe(true);
     const manifest = JSON.parse(first.get('manifest.json')?.toString('utf8') ?? '{}') as { command: string };
     expect(manifest.command).toBe('trendbrief run memo.yaml');

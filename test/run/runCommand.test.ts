@@ -30,7 +30,8 @@ describe('trendbrief run', () => {
     expect(run.stderr).toBe('');
     expect(run.code).toBe(0);
     const folder = join(root, 'out/lake-outlook');
-    expect(readdirSync(folder).sort()).toEqual(['forecasts.csv', 'manifest.json', 'memo.html', 'record.json']);
+    expect(readdirSync(folder).sort()).toEqual(['forecasts.csv', 'inputs', 'manifest.json', 'memo.html', 'record.json']);
+    expect(readdirSync(join(folder, 'inputs/data'))).toEqual(['lake-huron.csv']);
     const manifest = JSON.parse(readFileSync(join(folder, 'manifest.json'), 'utf8')) as {
       run_date: string;
       inputs: { role: string; path: string; sha256: string }[];
@@ -41,7 +42,9 @@ describe('trendbrief run', () => {
     expect(manifest.inputs.map((input) => input.path)).toEqual(['memo.yaml', 'data/lake-huron.csv']);
     expect(manifest.inputs[1].sha256).toBe(sha256(readFileSync(join(root, 'data/lake-huron.csv'))));
     for (const output of manifest.outputs) expect(sha256(readFileSync(join(folder, output.file))), output.file).toBe(output.sha256);
-    for (const file of readdirSync(folder)) expect(readFileSync(join(folder, file), 'utf8'), file).not.toContain(root);
+    for (const file of readdirSync(folder, { recursive: true, encoding: 'utf8' })) {
+      if (file.endsWith('.csv') || file.endsWith('.json') || file.endsWith('.html') || file.endsWith('.yaml')) expect(readFileSync(join(folder, file), 'utf8'), file).not.toContain(root);
+    }
     const record = JSON.parse(readFileSync(join(folder, 'record.json'), 'utf8')) as { records: { series: { id: string; source: { file: string } }; recommendation: { model: string } }[] };
     expect(record.records[0].series.id).toBe('lake-level');
     expect(record.records[0].series.source.file).toBe('data/lake-huron.csv');
@@ -52,7 +55,11 @@ describe('trendbrief run', () => {
     writeFileSync(join(root, 'memo.yaml'), config('Lake outlook'));
     await runCli(['run', join(root, 'memo.yaml'), '--quiet']);
     const folder = join(root, 'out/lake-outlook');
-    const first = Object.fromEntries(readdirSync(folder).map((file) => [file, readFileSync(join(folder, file), 'utf8')]));
+    const first = Object.fromEntries(
+      readdirSync(folder, { withFileTypes: true })
+        .filter((entry) => entry.isFile())
+        .map((entry) => [entry.name, readFileSync(join(folder, entry.name), 'utf8')]),
+    );
     await runCli(['run', join(root, 'memo.yaml'), '--quiet']);
     for (const [file, content] of Object.entries(first)) expect(readFileSync(join(folder, file), 'utf8'), file).toBe(content);
   });
