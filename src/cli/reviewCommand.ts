@@ -128,7 +128,7 @@ export async function runReview(args: readonly string[], io: Io): Promise<number
     const { entry, status } = result;
     io.stdout(
       `recorded No. ${entry.number}: ${entry.reviewer}, ${entry.decision}, ${entry.date}${entry.signature === null ? '' : ', signed'} on content digest ${entry.digest}\n` +
-        `${positionals[0]}: ${status.label}. ${status.detail} (rewrote ${result.files.join(', ')})\n`,
+        `${positionals[0]}: ${status.label}. ${status.detail} (changed: ${result.files.join(', ')}; the numbers are as they were)\n`,
     );
     return EXIT.ok;
   } finally {

@@ -52,7 +52,7 @@ export interface SignOffRequest {
 export interface RecordedSignOffResult {
   entry: SignOffEntry;
   status: MemoStatus;
-  /** The memo's files rewritten (names in the folder). */
+  /** The memo's files whose bytes changed (names in the folder); the others were written again as they were. */
   files: string[];
 }
 
@@ -141,6 +141,8 @@ export async function recordSignOff(request: SignOffRequest): Promise<RecordedSi
   return {
     entry,
     status: memoStatus(plan.memo.reviewers, judgeSignOffs(log.entries, plan.memo.reviewers, memo.digest)),
-    files: assembled.files.filter((file) => !file.name.includes('/')).map((file) => file.name),
+    files: assembled.files
+      .filter((file) => !file.name.includes('/') && !memo.stored.get(file.name)?.equals(Buffer.from(file.content)))
+      .map((file) => file.name),
   };
 }

@@ -1,4 +1,4 @@
-// Recorded sign-offs and issued memos end to end (our spec: DEVELOPERS.md, "Sign-offs, issued
+// Recorded sign-offs and issued memos end to end (our spec: DEVELOPERS.md, "Self-contained memo folders, sign-offs, issued
 // memos and revisions"): a sign-off is bound to the content digest; verify reports it valid; a
 // rerun with the same content keeps it; a rerun that would change an issued memo is refused
 // and changes no byte; with --new-revision the earlier memo is kept as revisions/1 and its

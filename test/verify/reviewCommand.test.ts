@@ -1,5 +1,5 @@
 // `trendbrief review` with keys and refusals, and an archived memo folder verified elsewhere
-// (our spec: DEVELOPERS.md, "Sign-offs, issued memos and revisions"). One memo, written once.
+// (our spec: DEVELOPERS.md, "Self-contained memo folders, sign-offs, issued memos and revisions"). One memo, written once.
 import { cpSync, mkdtempSync, readFileSync, rmSync, writeFileSync, appendFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
