@@ -2,8 +2,9 @@
 // [--date YYYY-MM-DD] [--resolves N,N] [--key FILE]`: records one reviewer's decision on a memo
 // folder (src/run/recordSignOff.ts). `trendbrief review --new-key DIR` writes a reviewer's
 // Ed25519 key pair. Every problem exits with 2 and changes nothing.
-import { isCalendarDay, DATE_PATTERN } from '../base/textPatterns.js';
+import { DATE_PATTERN, firstRefusedCharacter, isCalendarDay } from '../base/textPatterns.js';
 import { InputError, type InputProblem } from '../base/problem.js';
+import { configMessages } from '../config/messages.js';
 import type { ReviewDecision } from '../memo/reviewPart.js';
 import type { PdfPrinter } from '../memo/print/pdfPrinter.js';
 import { reviewMessages } from '../run/messages.js';
@@ -36,6 +37,9 @@ Options:
                          and review-key.pub.pem, whose text goes under the reviewer's public_key)
   -h, --help             this text
 `;
+
+/** A comment's longest length in code points: the config's limit for multi-line text. */
+const MAX_COMMENT = 4000;
 
 interface Io {
   stdout(text: string): void;
@@ -108,6 +112,10 @@ export async function runReview(args: readonly string[], io: Io): Promise<number
   const commentValue = values.get('comment');
   const comment = typeof commentValue === 'string' ? commentValue.trim() : '';
   if (decision !== undefined && decision !== 'approve' && comment === '') problems.push(reviewMessages.commentNeeded(decision));
+  // The comment reaches the memo: the config's rules for multi-line text apply (src/base/textPatterns.ts).
+  const refused = firstRefusedCharacter(comment, 'block');
+  if (refused !== undefined) problems.push(configMessages.controlCharacter({ field: '--comment' }, refused.codePoint, refused.position, true));
+  if ([...comment].length > MAX_COMMENT) problems.push(reviewMessages.commentTooLong([...comment].length, MAX_COMMENT));
   const date = parseDate(values.get('date'), problems);
   const resolves = parseResolves(values.get('resolves'), problems);
   const key = values.get('key');

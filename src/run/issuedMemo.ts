@@ -16,8 +16,8 @@ import { shownPath } from '../base/shownPath.js';
 import type { Supersedes } from '../memo/reviewPart.js';
 import { folderFiles } from './folderFiles.js';
 import { issuedMessages } from './messages.js';
-import { SIGN_OFF_LOG, type SignOffLog } from './signOffLog.js';
-import { readStoredMemo, type StoredMemo } from './storedMemo.js';
+import { readSignOffLog, SIGN_OFF_LOG, type SignOffLog } from './signOffLog.js';
+import { readStoredMemo } from './storedMemo.js';
 import { supersedesOf, type NewContent } from './supersedesOf.js';
 import type { OutputFile } from './writeOutputFolder.js';
 
@@ -55,20 +55,32 @@ function keptAsRevision(folder: string, revision: number): OutputFile[] {
   return folderFiles(folder, '', [REVISIONS_FOLDER]).map((file) => ({ ...file, name: `${REVISIONS_FOLDER}/${revision}/${file.name}` }));
 }
 
-/** The supersession of a memo that was not issued: the same revision as before, weighed against the new content. */
-function supersedesAgain(existing: StoredMemo, next: NewContent): Supersedes | null {
-  if (existing.supersedes === null) return null;
-  const revision = existing.supersedes.revision;
-  const earlier = readStoredMemo(join(existing.folder, REVISIONS_FOLDER, String(revision)));
-  return earlier === null ? existing.supersedes : supersedesOf(revision, earlier, next);
+/**
+ * The supersession of a draft that superseded a revision: the same revision, weighed against the
+ * new content. A draft replaced as drafts always were: a folder the run cannot read as a memo
+ * (or whose kept revision it cannot read) supersedes nothing new and is not refused for it.
+ */
+function supersedesAgain(folder: string, next: NewContent): Supersedes | null {
+  try {
+    const existing = readStoredMemo(folder);
+    if (existing === null || existing.supersedes === null) return null;
+    const revision = existing.supersedes.revision;
+    const earlier = readStoredMemo(join(folder, REVISIONS_FOLDER, String(revision)));
+    return earlier === null ? existing.supersedes : supersedesOf(revision, earlier, next);
+  } catch (error) {
+    if (error instanceof InputError) return null;
+    throw error;
+  }
 }
 
 export function publication(folder: string, next: NewContent, newRevision: boolean): Publication {
-  const existing = readStoredMemo(folder);
-  if (existing === null) return { outcome: 'written', log: EMPTY_LOG, supersedes: null, carried: [], signOffs: 0 };
+  const log = readSignOffLog(folder);
+  const lines = log.entries.length + log.unreadable.length;
   const carried = folderFiles(folder, REVISIONS_FOLDER);
-  const lines = existing.log.entries.length + existing.log.unreadable.length;
-  if (lines === 0) return { outcome: 'written', log: EMPTY_LOG, supersedes: supersedesAgain(existing, next), carried, signOffs: 0 };
+  if (lines === 0) return { outcome: 'written', log: EMPTY_LOG, supersedes: supersedesAgain(folder, next), carried, signOffs: 0 };
+  // An issued memo must be readable as one: its manifest says what its content was.
+  const existing = readStoredMemo(folder);
+  if (existing === null) throw new InputError(issuedMessages.noManifest({ file: shownPath(join(folder, SIGN_OFF_LOG)) }, shownPath(folder), lines));
   if (existing.digest === next.digest) return { outcome: 'kept', log: existing.log, supersedes: existing.supersedes, carried, signOffs: lines };
   if (!newRevision) throw new InputError(issuedMessages.wouldReplace({ file: shownPath(join(folder, SIGN_OFF_LOG)) }, shownPath(folder), lines, existing.digest, next.digest));
   const revision = Math.max(0, ...revisionNumbers(folder)) + 1;

@@ -211,6 +211,9 @@ export const reviewMessages = {
   commentNeeded(decision: string): InputProblem {
     return problem('review.comment-needed', `a decision of ${decision} needs a comment`, 'say what must change, e.g. --comment "State the drought caveat on page 1."', { field: '--comment' });
   },
+  commentTooLong(length: number, most: number): InputProblem {
+    return problem('review.comment-too-long', `the comment is ${length} characters long, more than ${most}`, 'shorten it; a longer note belongs in a document the comment names', { field: '--comment' });
+  },
   badDate(value: string): InputProblem {
     return problem('review.bad-date', `'${value}' is not a day of the calendar written YYYY-MM-DD`, 'give the date of the decision, e.g. --date 2026-01-15, or leave it out for today', { field: '--date' });
   },
@@ -267,6 +270,14 @@ export const reviewMessages = {
 
 /** A rerun over an issued memo (src/run/issuedMemo.ts). */
 export const issuedMessages = {
+  noManifest(at: InputLocation, folder: string, signOffs: number): InputProblem {
+    return problem(
+      'run.issued-memo',
+      `the memo in '${folder}' is issued (${plural(signOffs, 'sign-off')} recorded) but has no manifest.json, so what it said cannot be known`,
+      'restore the folder from its archived copy, or move it away before running again',
+      at,
+    );
+  },
   wouldReplace(at: InputLocation, folder: string, signOffs: number, before: string, after: string): InputProblem {
     return problem(
       'run.issued-memo',
