@@ -32,7 +32,7 @@ export const trackRecordWording = {
     `The forecasts of the ${earlier.length === 1 ? `memo as of ${earlier[0]}` : `${earlier.length} memos as of ${earlier.length === 2 ? `${earlier[0]} and ${earlier[1]}` : `${earlier[0]} to ${earlier[earlier.length - 1]}`}`}, set against the values this memo's data (as of ${asOf}) now hold for the periods they forecast. ` +
     'Outcomes are the values as they stand now, revisions included; periods not yet observed are left out.',
   dependence:
-    'The outcomes are not independent: one memo\u2019s forecasts at successive steps share their errors, and successive memos forecast the same periods. The counts therefore say less about the intervals than their number suggests.',
+    'The outcomes are not independent: one memo\u2019s forecasts at successive steps share their errors, and successive memos forecast the same periods. The counts therefore say less about the intervals than their number suggests, and how earlier intervals fared is no guarantee for the forecasts in this memo.',
   tooFew: (outcomes: number) => `${outcomes === 1 ? '1 outcome' : `${outcomes} outcomes`}: too few to judge coverage; the counts are shown without shares.`,
   /** `held` e.g. "8 of 10 at 80% and 10 of 10 at 95%". */
   seriesSummary: (a: { title: string; memos: number; outcomes: number; pending: number; held: string; mae: string }) =>

@@ -4,7 +4,7 @@ import { mkdirSync, mkdtempSync, utimesSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { asOfFolders, byRecency, findEarlierRecord, isEarlierAsOf, monthSpan } from '../../src/run/findEarlierRecord.js';
+import { asOfFolders, byRecency, findEarlierRecord, findEarlierRecords, isEarlierAsOf, monthSpan } from '../../src/run/findEarlierRecord.js';
 import { recordedCommand, shellWord } from '../../src/run/recordedCommand.js';
 
 function recordDocument(id: string, asOf: string): string {
@@ -50,6 +50,8 @@ describe('findEarlierRecord', () => {
     expect(found?.asOf).toBe('2025-10');
     expect(found?.file).toBe(join(root, '2025-10', 'record.json'));
     expect(found?.sha256).toMatch(/^[0-9a-f]{64}$/);
+    // The track record reads every valid earlier one, the most recent first.
+    expect(findEarlierRecords(root, 'lake-outlook', '2025-12').map((memo) => memo.asOf)).toEqual(['2025-10', '2025-09']);
   });
 
   it('skips a record of another memo id or another as-of period, and finds none in a missing folder', () => {
