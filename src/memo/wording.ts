@@ -190,7 +190,7 @@ export const PAGE_ONE = {
   widestInterval: 'Widest interval',
   noRecommendation: 'No recommendation was recorded; both models are shown.',
   recommendation: (model: string, decidedBy: string, reason: string, agreement: string) =>
-    `Recommended: ${model.toLowerCase()} trend. ${decidedBy}${reason === '' ? '' : ` Main reason: ${reason.replace(/\.$/, '')}.`}${agreement === '' ? '' : ` ${agreement}`}`,
+    `Recommended: ${model.toLowerCase()} trend. ${decidedBy}${reason === '' ? '' : ` ${reason}`}${agreement === '' ? '' : ` ${agreement}`}`,
   caveats: (all: number, high: number, highLabel: string) =>
     all === 0 ? 'No caveats.' : `${all} caveat${all === 1 ? '' : 's'} on the series page${high === 0 ? '' : `, ${high} marked \u201c${highLabel.toLowerCase()}\u201d`}.`,
   noEarlier: (asOf: string) => `Since the last memo: no earlier memo (as of a period before ${asOf}) was found beside this one.`,

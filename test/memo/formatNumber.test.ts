@@ -51,6 +51,12 @@ describe('other formats', () => {
     expect(formatSignificant(580.0823)).toBe('580.1');
     expect(formatSignificant(-0.6526)).toBe('\u22120.6526');
     expect(formatSignificant(0.000211, 3)).toBe('2.11 \u00d7 10\u207b\u2074');
+    // No zeros after the last digit that counts (our rule): 0.4630 is printed 0.463, 2.270 × 10⁻⁴ as 2.27 × 10⁻⁴.
+    expect(formatSignificant(0.463, 4)).toBe('0.463');
+    expect(formatSignificant(0.000227, 4)).toBe('2.27 \u00d7 10\u207b\u2074');
+    expect(formatSignificant(-0.204, 4)).toBe('\u22120.204');
+    expect(formatSignificant(2, 3)).toBe('2');
+    expect(formatSignificant(1500, 3)).toBe('1,500');
     expect(formatSignificant(12345678, 3)).toBe('1.23 \u00d7 10\u2077');
     expect(formatSignificant(0)).toBe('0');
   });

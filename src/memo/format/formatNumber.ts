@@ -54,19 +54,24 @@ const SUPERSCRIPT: Record<string, string> = {
 
 /**
  * `digits` significant digits, for estimates whose scale varies (coefficients, test
- * statistics): 0.021109 → "0.02111", 580.08 → "580.1"; outside 0.001 to 10^6 as
- * "2.11 × 10⁻⁴".
+ * statistics): 0.021109 → "0.02111", 580.08 → "580.1", 0.463 → "0.463" (no trailing zeros);
+ * outside 0.001 to 10^6 as "2.11 × 10⁻⁴".
  */
 export function formatSignificant(value: JsonNumber | undefined, digits = 4): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return MISSING;
   if (value === 0) return '0';
   const magnitude = Math.floor(Math.log10(Math.abs(value)));
   if (magnitude >= -3 && magnitude < 6) {
-    return formatNumber(value, Math.max(0, digits - 1 - magnitude));
+    return withoutTrailingZeros(formatNumber(value, Math.max(0, digits - 1 - magnitude)));
   }
   const [mantissa, exponent] = value.toExponential(digits - 1).split('e');
   const power = Array.from(String(Number(exponent)), (c) => SUPERSCRIPT[c]).join('');
-  return `${formatNumber(Number(mantissa), digits - 1)} \u00d7 10${power}`;
+  return `${withoutTrailingZeros(formatNumber(Number(mantissa), digits - 1))} \u00d7 10${power}`;
+}
+
+/** "0.4630" → "0.463", "2.00" → "2": significant digits say how precise a figure is, so zeros after the last digit that counts are dropped. */
+function withoutTrailingZeros(text: string): string {
+  return text.includes('.') ? text.replace(/\.?0+$/, '') : text;
 }
 
 /** "p = 0.042", "p < 0.001", or "n/a" when no p-value exists. */

@@ -51,10 +51,10 @@ function row(words: RowWords, result: KpssResult | AdfResult | null, rejects: bo
   if (result === null) return [];
   return {
     name: words.name,
-    statistic: formatSignificant(result.stat, 4),
+    statistic: formatSignificant(result.stat, 3),
     lags: String(result.lags),
     p: formatPCell(result.p_value, 'p_bound' in result ? result.p_bound : undefined),
-    critical5: formatSignificant(result.critical['5'], 4),
+    critical5: formatSignificant(result.critical['5'], 3),
     outcome: rejects ? words.rejects : words.holds,
     rejects,
   };

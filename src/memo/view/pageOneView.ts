@@ -44,11 +44,15 @@ function cell(point: number | undefined, interval: [number, number] | undefined,
   return { point: formatNumber(point, decimals), interval: interval === undefined ? '' : intervalText(interval, decimals) };
 }
 
-/** The recommendation in one line: the model, who settled it, and the first reason the rule gave. */
+/**
+ * The recommendation in one line: the model, who settled it, and the rule's conclusion (the
+ * first reason that is not one of the findings, which may point either way).
+ */
 function recommendationLine(record: AnalysisRecord): string {
   const { recommendation } = record;
   if (recommendation === undefined) return PAGE_ONE.noRecommendation;
-  const reason = recommendation.evidence[0]?.finding ?? recommendation.reasons[0] ?? '';
+  const findings = new Set(recommendation.evidence.map((item) => item.finding));
+  const reason = recommendation.reasons.find((r) => !findings.has(r)) ?? '';
   return PAGE_ONE.recommendation(METHOD_NAME[recommendation.model], evidenceWording.decidedBy[recommendation.decided_by], noLinks(reason), agreement(record).join(' '));
 }
 
