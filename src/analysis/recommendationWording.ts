@@ -64,10 +64,16 @@ export const recommendationWording = {
   despiteShortReach: 'The backtest did not reach the memo\u2019s horizon; this rule takes the scores over the horizons it did reach.',
   /** The policy's conditions the fixed line did not meet. */
   unmet(conditions: readonly ('scores' | 'test' | 'unitRoot' | 'noBreak' | 'reach')[]): string {
-    const words = { scores: 'better scores at every longer horizon', test: 'a significant comparison test over enough origins', unitRoot: 'no unit-root evidence for a stochastic trend', noBreak: 'no break in its trend line', reach: 'a backtest that reaches the memo\u2019s horizon' };
+    const words = {
+      scores: 'better scores at every longer horizon',
+      test: 'a significant comparison test over enough origins',
+      unitRoot: 'unit-root checks free of evidence for a stochastic trend',
+      noBreak: 'a trend line without a break',
+      reach: 'a backtest that reaches the memo\u2019s horizon',
+    };
     const list = conditions.map((c) => words[c]);
     const joined = list.length <= 1 ? list.join('') : `${list.slice(0, -1).join(', ')} and ${list[list.length - 1]}`;
-    return `The fixed line falls short of the policy on ${joined}.`;
+    return `The fixed line does not meet the policy's conditions: it lacks ${joined}.`;
   },
   /** `mixed`: some evidence speaks for each model. */
   conclusion(model: TrendModelKind, decidedBy: 'evidence' | 'policy', mixed: boolean): string {

@@ -66,7 +66,7 @@ describe('prefer-stochastic (default)', () => {
     expect(result.model).toBe('stochastic');
     // The backtest speaks for the fixed line, the unit-root checks against it: mixed.
     expect(result.decided_by).toBe('policy');
-    expect(result.reasons).toContain('The fixed line falls short of the policy on no unit-root evidence for a stochastic trend.');
+    expect(result.reasons).toContain("The fixed line does not meet the policy's conditions: it lacks unit-root checks free of evidence for a stochastic trend.");
     expect(result.evidence.find((e) => e.check === 'unit-root')).toEqual({ check: 'unit-root', finding: 'The unit-root checks point to a stochastic trend.', favours: 'stochastic' });
   });
 
