@@ -6,7 +6,7 @@
 import Handlebars from 'handlebars';
 import type { MemoInput } from './memoInput.js';
 import { loadTemplates } from './loadTemplates.js';
-import { memoContradictions, plainText } from './consistency/memoContradictions.js';
+import { memoContradictions } from './consistency/memoContradictions.js';
 import { trackRecordClaims } from './consistency/trackRecordClaims.js';
 import { buildMemoView } from './view/buildMemoView.js';
 
@@ -36,7 +36,7 @@ export async function renderMemoHtml(input: MemoInput, options: RenderMemoOption
   const view = await buildMemoView(input);
   const html = template({ ...view, css: templates.css });
   assertSelfContained(html);
-  const contradictions = [...memoContradictions(input.series.map((entry) => entry.record), html), ...trackRecordClaims(input.track_record, plainText(html))];
+  const contradictions = [...memoContradictions(input.series.map((entry) => entry.record), html), ...trackRecordClaims(input.track_record, html)];
   if (contradictions.length > 0) throw new Error(`renderMemoHtml: the memo contradicts its records (${contradictions.join('; ')})`);
   return html;
 }

@@ -77,7 +77,7 @@ describe('trackRecord', () => {
     );
     expect(view?.series[0].tooFew).toBe('5 outcomes: too few to judge coverage; the counts are shown without shares.');
     // The memo's read-back finds the sentences true, and a changed count false.
-    const lines = `${view?.summary} ${view?.series[0].summary}`;
+    const lines = `<section class="track-record"><p>${view?.summary}</p><p>${view?.series[0].summary}</p></section>`;
     expect(view?.series[0].summary).toBe(
       "Ferry boardings: 5 of 6 forecasts from 2 earlier memos observed so far; the recommended model's intervals held 2 of 5 at 80% and 4 of 5 at 95%, with a mean absolute error of 5.60.",
     );

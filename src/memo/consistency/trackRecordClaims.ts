@@ -1,11 +1,15 @@
 // What a memo says about how the earlier memos' forecasts fared (trackRecordWording.ts), read
-// back against the `track_record` it was rendered from:
-// - the one sentence over every series (page 1 and the section): the number of earlier memos,
+// back against the `track_record` it was rendered from, in the section's text (page 1 repeats
+// its first sentence; series titles elsewhere are the user's text and are not read):
+// - the one sentence over every series: the number of earlier memos,
 //   of outcomes observed, and each "L% intervals held H of T" are the overall counts;
 // - each series' line: its outcomes and forecasts, and each "H of T at L%" are that series'
 //   counts for the recommended choice, in the order of the series;
 // - a share printed beside a count is that count's share.
 import type { LevelCoverage, TrackRecord } from '../trackRecordPart.js';
+import { plainText } from './memoContradictions.js';
+
+const SECTION_START = '<section class="track-record"';
 
 const SUMMARY = /Track record: (\d+) earlier memos?; (?:none of (?:its|their) forecasts has been observed yet|(\d+) of (?:its|their) forecasts (?:is|are) now observed(?:: ([^;.]*))?)/g;
 const SUMMARY_HELD = /(\d+)% intervals (?:held )?(\d+) of (\d+)(?: \((\d+)%\))?/g;
@@ -21,8 +25,17 @@ function heldProblems(said: { level: string; hits: number; total: number; share?
   });
 }
 
-/** Each contradiction between the memo's plain text and its track record; empty when they agree. */
-export function trackRecordClaims(record: TrackRecord | undefined, text: string): string[] {
+/** The track record section's words; empty without the section. */
+function sectionText(html: string): string {
+  const start = html.indexOf(SECTION_START);
+  if (start < 0) return '';
+  const end = html.indexOf('</section>', start);
+  return plainText(html.slice(start, end < 0 ? html.length : end));
+}
+
+/** Each contradiction between the memo's track record section and its track record; empty when they agree. */
+export function trackRecordClaims(record: TrackRecord | undefined, html: string): string[] {
+  const text = sectionText(html);
   const problems: string[] = [];
   for (const m of text.matchAll(SUMMARY)) {
     if (record === undefined) {
