@@ -22,7 +22,7 @@ export type { ArmaOrder, BacktestForecast, BacktestMethod, BacktestRecord, Compa
 /** The comparison rows' loss name at an interval level, for readers that look rows up by level. */
 export { intervalScoreLoss } from '../backtest/backtestRecord.js';
 export type { EvidenceRecord } from '../evidence/collectEvidence.js';
-export type { ResidualChecks } from '../evidence/residualChecks.js';
+export type { ResidualChecks, ResidualCheckName } from '../evidence/residualChecks.js';
 export type { AdfResult, KpssResult, StabilityRecord, SupWaldPBound, TrendVerdictKind } from '../evidence/types.js';
 export type { IntervalsByLevel } from '../base/transform.js';
 

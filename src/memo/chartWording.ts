@@ -14,16 +14,14 @@ export const chartWording = {
       a.models.map((m) => `At ${a.end} the ${MODEL_NAME[m.model].toLowerCase()} model gives ${m.point} (${levelPercent(a.level)} interval ${m.low} to ${m.high}).`).join(' '),
   },
   backtest: {
-    title: (_series: string) => 'Backtest accuracy by horizon',
-    subtitle: (origins: number, level: number, coincide: boolean) => [
-      `Forecasts made from ${origins} past origins and compared with what happened. Dashed black line on the right: the ${levelPercent(level)} target.`,
-      ...(coincide ? ['The two models\u2019 error lines coincide: their RMSE differs by less than 0.5% at every horizon.'] : []),
+    title: (_series: string) => 'Root mean squared error by horizon',
+    subtitle: (origins: number, coincide: boolean) => [
+      `Forecasts from ${origins} past origins against what happened.`,
+      ...(coincide ? ['The two models\u2019 lines coincide: their RMSE differs', 'by less than 0.5% at every horizon.'] : []),
     ],
     errorPanel: 'Root mean squared error',
-    coveragePanel: (level: number) => `Outcomes inside the ${levelPercent(level)} interval`,
-    description: (a: { origins: number; horizon: number; endErrors: string; endCoverage: string; level: number; benchmark: string }) =>
-      `Two panels by forecast horizon 1 to ${a.horizon}, from ${a.origins} backtest origins. Left: root mean squared error of the deterministic and stochastic forecasts and the ${a.benchmark}; at the last horizon ${a.endErrors}. ` +
-      `Right: share of outcomes inside each model's ${levelPercent(a.level)} interval, against the ${levelPercent(a.level)} target; at the last horizon ${a.endCoverage}.`,
+    description: (a: { origins: number; horizon: number; endErrors: string; benchmark: string }) =>
+      `Line chart by forecast horizon 1 to ${a.horizon}, from ${a.origins} backtest origins: root mean squared error of the deterministic and stochastic forecasts and the ${a.benchmark}; at the last horizon ${a.endErrors}.`,
   },
   stability: {
     title: (_series: string) => 'Trend on growing histories',

@@ -5,7 +5,7 @@ import type { Frequency } from '../base/period.js';
 import type { Estimation, TrendModelKind } from '../base/settings.js';
 import { countPeriods, levelPercent, listInWords, MODEL_IN_TEXT, MODEL_NAME } from './wording.js';
 import { type RefitPolicy, type WindowKind } from '../base/settings.js';
-import type { ResidualCheckName } from '../evidence/residualChecks.js';
+import type { ResidualCheckName } from '../analysis/record.js';
 
 export const UNIT_ROOT_ROWS = {
   kpssLevel: { name: 'KPSS: steady level', holds: 'no evidence against a steady level', rejects: 'rules out a steady level' },

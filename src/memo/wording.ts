@@ -159,8 +159,10 @@ export const TEMPLATE_TEXT = {
   notTested: 'not tested',
   methodShort: { deterministic: 'Det.', stochastic: 'Stoch.', naive: 'Bench.', seasonal_naive: 'Bench.' } as Record<BacktestMethod, string>,
   coverHead: (level: number) => `${levelPercent(level)} cover`,
-  backtestTableNote: (benchmark: string) =>
-    `Det.: deterministic trend. Stoch.: stochastic trend. Bench.: the ${benchmark.toLowerCase()} benchmark. RMSE: root mean squared error. MASE: mean absolute error over a fixed in-sample yardstick (lower is better; above 1 at longer horizons is usual for every method). Cover: share of outcomes inside the interval. Interval score: width plus a penalty for misses (lower is better). MAPE, widths and CRPS at every horizon are in record.json.`,
+  backtestTableNote: (benchmark: string) => `Det.: deterministic trend. Stoch.: stochastic trend. Bench.: the ${benchmark.toLowerCase()} benchmark. Lower RMSE, MASE and interval score are better.`,
+  /** Said once in the technical appendix for every backtest table. */
+  backtestGlossary:
+    'Backtest tables: RMSE is the root mean squared error. MASE is the mean absolute error over a fixed in-sample yardstick, the benchmark\u2019s mean error one step (for a seasonal series one season) ahead within the training history; values above 1 at longer horizons are usual for every method, the benchmark included. Cover is the share of outcomes inside the interval. The interval score is the width plus a penalty for outcomes outside it. MAPE, interval widths and CRPS at every horizon are in record.json.',
   ruleStudyPointer: 'How this rule behaves in simulation: see the technical appendix.',
   rowsShown: (shown: readonly number[]) => `Rows shown: steps ${listInWords(shown.map(String))}; every step is in forecasts.csv and record.json.`,
   backtestRowsShown: (shown: readonly number[]) => `Rows shown: steps ${listInWords(shown.map(String))}; every step is in record.json.`,

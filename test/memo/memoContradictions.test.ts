@@ -1,15 +1,11 @@
 // The memo's consistency check (src/memo/consistency/memoContradictions.ts, our rules): silent
-// on agreeing memos, the sample memo and the demo among them; firing on constructed
-// contradictions of each kind it looks for.
-import { mkdtempSync, readFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
+// on agreeing memos, the sample memo among them (the demo's check is in demoMemo.test.ts);
+// firing on constructed contradictions of each kind it looks for.
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { AnalysisRecord } from '../../src/analysis/record.js';
 import { memoContradictions } from '../../src/memo/consistency/memoContradictions.js';
 import { renderMemoHtml } from '../../src/memo/renderMemoHtml.js';
 import { fixRunDate } from '../support/fixRunDate.js';
-import { runCli } from '../support/runCli.js';
 import { fullRecord, sampleInput } from './sampleInput.js';
 
 fixRunDate('all');

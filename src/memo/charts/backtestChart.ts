@@ -1,16 +1,17 @@
 // Backtest accuracy by horizon: root mean squared error of the two models and the benchmark
-// (no change, or the seasonal naive for a seasonal series), and the share of outcomes inside each model's interval at the widest level
-// against that level as the target.
+// (no change, or the seasonal naive for a seasonal series), half the text's width beside the
+// backtest's description. Coverage is in the table under it: as a line it is mostly one number
+// repeated (100%, 100%, ...), which a table column says better.
 import type { TopLevelSpec } from 'vega-lite';
 import { chartWording } from '../chartWording.js';
-import { formatNumber, formatPercent, withUnits } from '../format/formatNumber.js';
+import { formatNumber, withUnits } from '../format/formatNumber.js';
 import { atLevel, widestLevel } from '../intervalLevels.js';
 import type { BacktestMethod, BacktestRecord } from '../../analysis/record.js';
 import { backtestMethods, scoresOf } from '../backtestMethods.js';
 import { METHOD_NAME, MODEL_IN_TEXT } from '../wording.js';
 import { CHART_CONFIG, PANEL_WIDTH } from './chartConfig.js';
 import type { LayerPart, PanelSpec } from './chartTypes.js';
-import { INK, MODEL_COLOUR, MODEL_DASH, MODEL_SHAPE } from './palette.js';
+import { MODEL_COLOUR, MODEL_DASH, MODEL_SHAPE } from './palette.js';
 
 export interface BacktestChartRow {
   method: string;
@@ -36,6 +37,9 @@ function styleScales(methods: readonly BacktestMethod[]) {
   };
 }
 
+/** The chart sits in half the text's width, beside the backtest's description. */
+const HALF_WIDTH = 250;
+
 function linePanel(title: string, field: 'rmse' | 'coverage', rows: BacktestChartRow[], all: readonly BacktestMethod[], methods: readonly BacktestMethod[], yTitle: string | null, extra: LayerPart[]): PanelSpec {
   const { color, strokeDash } = styleScales(all);
   const x = { field: 'h', type: 'quantitative' as const, title: 'horizon (steps ahead)', axis: { tickMinStep: 1, format: 'd' } };
@@ -44,7 +48,7 @@ function linePanel(title: string, field: 'rmse' | 'coverage', rows: BacktestChar
   return {
     title: { text: title, fontSize: 11 },
     width: PANEL_WIDTH,
-    height: 88,
+    height: 110,
     layer: [
       ...extra,
       { data: { values: shown }, mark: { type: 'line', strokeWidth: 1.6 }, encoding: { x, y, color, strokeDash } },
@@ -78,23 +82,13 @@ export function backtestChart({ series, units, decimals, backtest }: { series: s
   const methods = backtestMethods(backtest);
   const origins = backtest.origins.length;
   const endErrors = methods.map((m) => `${METHOD_NAME[m].toLowerCase()} ${withUnits(formatNumber(scoresOf(backtest, m).at(-1)?.rmse, decimals), units)}`).join(', ');
-  const level = widestLevel(backtest.settings);
-  const endCoverage = (['deterministic', 'stochastic'] as const)
-    .map((m) => `${METHOD_NAME[m].toLowerCase()} ${formatPercent(atLevel(backtest.per_horizon[m].at(-1)?.coverage, level))}`)
-    .join(', ');
-  const target: LayerPart = {
-    data: { values: [{ coverage: level / 100 }] },
-    mark: { type: 'rule', color: INK, strokeDash: [4, 2], strokeWidth: 1 },
-    encoding: { y: { field: 'coverage', type: 'quantitative' } },
-  };
+  const panel = linePanel(chartWording.backtest.errorPanel, 'rmse', rows, methods, methods, units ?? null, []);
   return {
-    title: { text: chartWording.backtest.title(series), subtitle: chartWording.backtest.subtitle(origins, level, linesCoincide(backtest)) },
-    description: chartWording.backtest.description({ origins, horizon: backtest.settings.horizon, endErrors, endCoverage, level, benchmark: MODEL_IN_TEXT[methods[2]] }),
+    title: { text: chartWording.backtest.title(series), subtitle: chartWording.backtest.subtitle(origins, linesCoincide(backtest)) },
+    description: chartWording.backtest.description({ origins, horizon: backtest.settings.horizon, endErrors, benchmark: MODEL_IN_TEXT[methods[2]] }),
     config: CHART_CONFIG,
-    spacing: 24,
-    hconcat: [
-      linePanel(chartWording.backtest.errorPanel, 'rmse', rows, methods, methods, units ?? null, []),
-      linePanel(chartWording.backtest.coveragePanel(level), 'coverage', rows, methods, ['deterministic', 'stochastic'], null, [target]),
-    ],
+    width: HALF_WIDTH,
+    height: panel.height,
+    layer: panel.layer,
   };
 }

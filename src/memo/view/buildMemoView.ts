@@ -111,7 +111,7 @@ export async function buildMemoView(input: MemoInput): Promise<MemoView> {
           s.aiccNote,
           s.evidence.intro,
           s.evidence.residualsIntro,
-          ...(s.backtest === null ? [] : [s.backtest.comparisonIntro]),
+          ...(s.backtest === null ? [] : [TEMPLATE_TEXT.backtestGlossary, s.backtest.comparisonIntro]),
           ...(s.stability?.method ?? []),
         ]),
       ),

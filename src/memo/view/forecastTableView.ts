@@ -20,7 +20,7 @@ export interface ForecastCells {
 export type ForecastTable = ModelTable<{ h: number; period: string; cells: string[] }> & { caption: string; /** Which rows are left out, or empty when every horizon is shown. */ rowsNote: string };
 
 /** Longer horizons print a selection of rows (shownHorizons). */
-export const FORECAST_TABLE_ROWS = 12;
+export const FORECAST_TABLE_ROWS = 8;
 
 /** "575.36 – 580.31". */
 export function intervalText(interval: [number, number] | undefined, decimals: number): string {
