@@ -145,6 +145,9 @@ export const verifyReport = {
   unreadableSignOff: (where: string, line: number) => `  ${where}line ${line} of the sign-off log: void (not a sign-off entry)`,
   valid: 'valid',
   voidBecause: (reason: string) => `void (${reason})`,
+  revisionMissing: (revision: number) => `revisions/${revision}: the revision this memo supersedes is missing`,
+  revisionChanged: (revision: number, recorded: string, actual: string) =>
+    `revisions/${revision}: content digest ${actual}, the supersession note records ${recorded}`,
   templatesMissing: (folder: string) => `memo.html not rebuilt: its templates folder ${folder} (output.templates) is missing; its recorded hash is checked above`,
   match: (folder: string) => `ok: ${folder} is what its inputs give`,
   mismatch: (folder: string, count: number) => `mismatch: ${folder} differs from what its inputs give in ${count} place${count === 1 ? '' : 's'}`,

@@ -11,7 +11,7 @@
 // the exit code: the rendered status is rebuilt from the valid ones, so a void one shown as
 // counting is a memo.html difference (exit 3).
 import { existsSync, readFileSync } from 'node:fs';
-import { resolve } from 'node:path';
+import { join, resolve } from 'node:path';
 import { parse } from 'csv-parse/sync';
 import { toolVersion } from '../base/toolVersion.js';
 import { InputError, type InputProblem } from '../base/problem.js';
@@ -19,6 +19,7 @@ import { shownPath } from '../base/shownPath.js';
 import { assembleMemo } from './assembleMemo.js';
 import { compareJson, TOLERANCE_TEXT, type Difference } from './compareJson.js';
 import { asOfFolders } from './findEarlierRecord.js';
+import { REVISIONS_FOLDER } from './issuedMemo.js';
 import { inputDigest, sha256, type Manifest, type ManifestInput } from './manifest.js';
 import { verifyMessages, verifyReport } from './messages.js';
 import { earlierFromCopies, planFromCopies } from './planFromCopies.js';
@@ -168,5 +169,12 @@ export async function verifyMemoFolder(folderArgument: string): Promise<VerifyRe
   if (manifest.outputs.some((output) => output.file === 'memo.pdf')) bytes.push(verifyReport.notRebuilt('memo.pdf'));
   if (bytes.length > 0) lines.push(verifyReport.bytes(bytes));
   lines.push(...signOffReport(memo, plan.memo.reviewers));
+  // A revised memo keeps the revision it supersedes, whose content must still be the one the note names.
+  if (memo.supersedes !== null) {
+    const { revision, digest } = memo.supersedes;
+    const kept = readStoredMemo(join(folder, REVISIONS_FOLDER, String(revision)));
+    if (kept === null) differences.push(verifyReport.revisionMissing(revision));
+    else if (kept.digest !== digest) differences.push(verifyReport.revisionChanged(revision, digest, kept.digest));
+  }
   return { lines, differences };
 }
