@@ -184,6 +184,9 @@ export const reviewMessages = {
   notAMemo(folder: string): InputProblem {
     return problem('review.not-a-memo', `'${folder}' has no manifest.json, so it is not a memo folder`, 'give the folder a run wrote, the one with manifest.json in it', { file: folder });
   },
+  superseded(folder: string, current: string): InputProblem {
+    return problem('review.superseded', `'${folder}' is a revision kept by the memo in '${current}', which supersedes it`, `review the current memo, ${current}`, { file: folder });
+  },
   notSelfContained(file: string): InputProblem {
     return problem(
       'review.no-input-copies',

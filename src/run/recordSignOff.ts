@@ -8,7 +8,7 @@
 // for byte as stored; when the run wrote no record.json the analysis is run again from the
 // copied inputs (and must give the stored forecasts.csv).
 import { existsSync } from 'node:fs';
-import { resolve } from 'node:path';
+import { basename, dirname, join, resolve } from 'node:path';
 import { closestName } from '../base/closestName.js';
 import { writeFailure } from './checkRunPaths.js';
 import { InputError } from '../base/problem.js';
@@ -82,6 +82,11 @@ export async function recordSignOff(request: SignOffRequest): Promise<RecordedSi
   const folder = resolve(request.folder);
   const memo = readStoredMemo(folder);
   if (memo === null) throw new InputError(reviewMessages.notAMemo(shownPath(folder)));
+  // A revision kept under revisions/N/ of a memo folder is superseded: its sign-offs stay as they were.
+  const current = dirname(dirname(folder));
+  if (basename(dirname(folder)) === REVISIONS_FOLDER && existsSync(join(current, 'manifest.json'))) {
+    throw new InputError(reviewMessages.superseded(shownPath(folder), shownPath(current)));
+  }
   checkIssued(memo);
   const { manifest, manifestFile } = memo;
   const plan = planFromCopies(folder, manifest, manifestFile);

@@ -98,5 +98,10 @@ describe('a sign-off on an issued memo', () => {
     const oldRevision = await runCli(['verify', join(folder, 'revisions/1')]);
     expect(oldRevision.code).toBe(0);
     expect(oldRevision.stdout).toContain('  No. 1 A. Reviewer, approve-with-changes, 2026-01-01: valid\n');
+    const superseded = await runCli(['review', join(folder, 'revisions/1'), '--reviewer', 'A. Reviewer', '--decision', 'approve']);
+    expect([superseded.code, superseded.errorLines]).toEqual([
+      2,
+      [`${folder}/revisions/1: '${folder}/revisions/1' is a revision kept by the memo in '${folder}', which supersedes it; review the current memo, ${folder}`],
+    ]);
   });
 });
