@@ -4,25 +4,19 @@
 // once a reviewer's decision is recorded on it, that is once its log has a line.
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import type { ReviewDecision } from '../memo/reviewPart.js';
+import type { RecordedSignOff, ReviewDecision } from '../memo/reviewPart.js';
 
 export const SIGN_OFF_LOG = 'sign-offs.jsonl';
 
 export const REVIEW_DECISIONS: readonly ReviewDecision[] = ['approve', 'approve-with-changes', 'return'];
 
-export interface SignOffEntry {
-  number: number;
-  reviewer: string;
-  role: string;
-  decision: ReviewDecision;
-  /** YYYY-MM-DD. */
-  date: string;
-  /** '' when none. */
-  comment: string;
-  resolves: number[];
-  /** The content digest the reviewer decided on. */
+/**
+ * One recorded act as the log holds it: what the memo shows of it (RecordedSignOff without the
+ * verdict, which is judged afresh against each memo's content), the content digest the reviewer
+ * decided on, and the base64 Ed25519 signature of `signedText(entry)`, null when unsigned.
+ */
+export interface SignOffEntry extends Omit<RecordedSignOff, 'signed' | 'void_reason'> {
   digest: string;
-  /** Base64 Ed25519 signature of `signedText(entry)`; null when unsigned. */
   signature: string | null;
 }
 

@@ -7,7 +7,10 @@ import { judgeSignOffs, voidReason } from '../../src/run/judgeSignOffs.js';
 import { signEntry } from '../../src/run/reviewKeys.js';
 import { parseSignOffLog, signOffLine, type SignOffEntry } from '../../src/run/signOffLog.js';
 
-const pem = () => generateKeyPairSync('ed25519', { publicKeyEncoding: { type: 'spki', format: 'pem' } });
+function pem() {
+  const { publicKey, privateKey } = generateKeyPairSync('ed25519');
+  return { publicKey: publicKey.export({ type: 'spki', format: 'pem' }).toString(), privateKey };
+}
 const ada = pem();
 const mallory = pem();
 const digest = 'c'.repeat(64);
