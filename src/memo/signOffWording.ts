@@ -58,10 +58,13 @@ function shortDigest(digest: string | null): string {
   return digest === null ? 'none' : `${digest.slice(0, 12)}\u2026`;
 }
 
+const INPUT_ROLE: Readonly<Record<string, string>> = { config: 'config', data: 'data file', 'earlier-record': 'earlier memo\u2019s record' };
+
 function inputReason(change: InputChange): string {
-  if (change.before === null) return `The ${change.role} ${change.path} is new (SHA-256 ${shortDigest(change.after)}).`;
-  if (change.after === null) return `The ${change.role} ${change.path} is no longer used.`;
-  return `The ${change.role} ${change.path} changed (SHA-256 ${shortDigest(change.before)} before, ${shortDigest(change.after)} now).`;
+  const what = `The ${INPUT_ROLE[change.role] ?? change.role} ${change.path}`;
+  if (change.before === null) return `${what} is new (SHA-256 ${shortDigest(change.after)}).`;
+  if (change.after === null) return `${what} is no longer used.`;
+  return `${what} changed (SHA-256 ${shortDigest(change.before)} before, ${shortDigest(change.after)} now).`;
 }
 
 const MODEL_WORDS = { deterministic: 'deterministic trend', stochastic: 'stochastic trend' } as const;
