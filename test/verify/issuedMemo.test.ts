@@ -84,6 +84,9 @@ describe('a sign-off on an issued memo', () => {
     const newHtml = readText(folder, 'memo.html');
     expect(newHtml).toContain('Status: Draft');
     expect(newHtml).toContain(`This memo supersedes revision 1 (content digest ${digest.slice(0, 12)}…), because data/lake-huron.csv changed;`);
+    const after = sha(readFileSync(join(root, 'data/lake-huron.csv')));
+    expect(newHtml).toContain(`The data file data/lake-huron.csv changed (SHA-256 ${manifest.inputs[1].sha256.slice(0, 12)}… before, ${after.slice(0, 12)}… now).`);
+    expect(newHtml).toContain('1 observation was revised in periods both versions hold.');
     const supersedes = JSON.parse(readText(folder, 'supersedes.json')) as { revision: number; inputs: { path: string }[]; observations_revised: number };
     // One value revised (1924) and one appended by reviseData.
     expect(supersedes).toMatchObject({ revision: 1, digest, inputs: [{ role: 'data', path: 'data/lake-huron.csv' }], observations_revised: 1 });
