@@ -144,6 +144,7 @@ export const verifyReport = {
   revisionPrefix: (revision: number) => `revision ${revision}, `,
   unreadableSignOff: (where: string, line: number) => `  ${where}line ${line} of the sign-off log: void (not a sign-off entry)`,
   valid: 'valid',
+  validSigned: "valid, signed with the reviewer's key",
   voidBecause: (reason: string) => `void (${reason})`,
   revisionMissing: (revision: number) => `revisions/${revision}: the revision this memo supersedes is missing`,
   revisionChanged: (revision: number, recorded: string, actual: string) =>

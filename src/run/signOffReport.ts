@@ -22,7 +22,8 @@ function logLines(log: SignOffLog, reviewers: readonly ListedReviewer[], digest:
   for (const entry of log.entries) {
     const reason = voidReason(entry, reviewers, digest);
     if (reason === null) valid += 1;
-    const verdict = reason === null ? verifyReport.valid : verifyReport.voidBecause(VOID_WORDS[reason](entry.digest, digest));
+    const keyed = reviewers.some((reviewer) => reviewer.name === entry.reviewer && reviewer.public_key !== undefined);
+    const verdict = reason !== null ? verifyReport.voidBecause(VOID_WORDS[reason](entry.digest, digest)) : keyed ? verifyReport.validSigned : verifyReport.valid;
     lines.push(verifyReport.signOff(where, entry.number, entry.reviewer, entry.decision, entry.date, verdict));
   }
   for (const { line } of log.unreadable) lines.push(verifyReport.unreadableSignOff(where, line));

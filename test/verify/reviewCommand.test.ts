@@ -76,7 +76,7 @@ describe('signed sign-offs', () => {
     expect(archived.stderr).toBe('');
     expect(archived.code).toBe(0);
     expect(archived.stdout).toContain("originals: 0 found unchanged at their places, 2 not found (the memo folder's copies were used)\n");
-    expect(archived.stdout).toContain('sign-offs: 2 recorded, 2 valid on this content\n  No. 1 A. Reviewer, approve, 2026-01-07: valid\n  No. 2 B. Checker, approve, 2026-01-08: valid\n');
+    expect(archived.stdout).toContain("sign-offs: 2 recorded, 2 valid on this content\n  No. 1 A. Reviewer, approve, 2026-01-07: valid, signed with the reviewer's key\n  No. 2 B. Checker, approve, 2026-01-08: valid\n");
     rmSync(join(root, 'data'), { recursive: true });
     rmSync(join(root, 'memo.yaml'));
     expect((await runCli(['verify', archive])).code).toBe(0);
@@ -100,7 +100,7 @@ describe('signed sign-offs', () => {
     expect(report.stdout).toContain(
       [
         'sign-offs: 6 recorded, 2 valid on this content',
-        '  No. 1 A. Reviewer, approve, 2026-01-07: valid',
+        "  No. 1 A. Reviewer, approve, 2026-01-07: valid, signed with the reviewer's key",
         '  No. 2 B. Checker, approve, 2026-01-08: valid',
         '  No. 3 A. Reviewer, approve, 2026-01-07: void (the signature does not verify with the public key the config lists for the reviewer)',
         '  No. 4 A. Reviewer, approve, 2026-01-07: void (the signature does not verify with the public key the config lists for the reviewer)',
