@@ -220,13 +220,6 @@ export const CAUTIONS = [
   'Decisions that rest on these figures, including financial, capacity and regulatory decisions, remain with qualified professionals and the rules that apply to them.',
 ] as const;
 
-/** The summary's opening; `levels` is null when the series do not share one set of levels; `withYear` when a series is monthly or quarterly. */
-export function summaryIntro(levels: readonly number[] | null, withYear = false): string {
-  // Plural at one level too: each of the two models has its interval.
-  const intervals = levels === null ? 'the prediction intervals set for each series' : `${levelList(levels)} prediction intervals`;
-  const when = withYear ? 'at the end of the horizon and, for a monthly or quarterly series, for the next full calendar year,' : 'at the end of the horizon';
-  return `For each series: the model we recommend, the forecast ${when} under both models with ${intervals}, and the caveat that matters most. The sections that follow give the evidence behind each choice.`;
-}
 
 export const NOT_RUN = {
   backtest: 'The backtest was not run for this series, so there is no out-of-sample check of either model.',

@@ -79,8 +79,13 @@ describe('the full memo', () => {
       }
       expect(section.match(/<figcaption>/g)).toHaveLength(2);
       expect(section).toContain('<table class="numbers forecast-table">');
-      // Ten steps: every one is shown (longer horizons print a selection, shownHorizons).
-      expect(section.match(/<table class="numbers forecast-table">[\s\S]*?<tbody>([\s\S]*?)<\/tbody>/)?.[1].match(/<tr>/g)).toHaveLength(entry.record.settings.horizon);
+      // Lake Huron's ten steps: the table prints 1, 2, 3, 4, 6, 8 and 10 (shownHorizons, our layout rule); every step is in forecasts.csv.
+      if (i === 0) {
+        expect(entry.record.settings.horizon).toBe(10);
+        const steps = [...(section.match(/<table class="numbers forecast-table">[\s\S]*?<tbody>([\s\S]*?)<\/tbody>/)?.[1].matchAll(/<tr><td class="num">(\d+)<\/td>/g) ?? [])].map((m) => Number(m[1]));
+        expect(steps).toEqual([1, 2, 3, 4, 6, 8, 10]);
+        expect(section).toContain('Rows shown: steps 1, 2, 3, 4, 6, 8 and 10; every step is in forecasts.csv and record.json.');
+      }
       expect(section).toContain('<table class="numbers backtest-summary">');
       expect(section).toContain('<table class="numbers unit-root">');
       expect(section).toContain('data-caveat="fixed-line-extrapolation"');

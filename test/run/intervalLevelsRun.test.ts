@@ -14,8 +14,6 @@ import { fixRunDate, memoConfig, monthlyFolder } from './monthlySetup.js';
 interface LevelCase {
   id: string;
   levels: number[];
-  /** How the summary's opening names the intervals (our spec). */
-  summary: string;
   /** How the forecast chart's description names the intervals (our spec). */
   named: string;
   /** The forecast chart's key to its shading (our spec). */
@@ -25,12 +23,11 @@ interface LevelCase {
 }
 
 const CASES: LevelCase[] = [
-  { id: 'levels-50-90', levels: [50, 90], summary: 'under both models with 50% and 90% prediction intervals,', named: 'with its 50% and 90% prediction intervals.', shading: 'Shading: 50% (darker) and 90% prediction intervals.', widest: 90 },
-  { id: 'levels-90', levels: [90], summary: 'under both models with 90% prediction intervals,', named: 'with its 90% prediction interval.', shading: 'Shading: 90% prediction interval.', widest: 90 },
+  { id: 'levels-50-90', levels: [50, 90], named: 'with its 50% and 90% prediction intervals.', shading: 'Shading: 50% (darker) and 90% prediction intervals.', widest: 90 },
+  { id: 'levels-90', levels: [90], named: 'with its 90% prediction interval.', shading: 'Shading: 90% prediction interval.', widest: 90 },
   {
     id: 'levels-68-95-99',
     levels: [68, 95, 99],
-    summary: 'under both models with 68%, 95% and 99% prediction intervals,',
     named: 'with its 68%, 95% and 99% prediction intervals.',
     shading: 'Shading, darkest to lightest: 68%, 95% and 99% prediction intervals.',
     widest: 99,
@@ -91,20 +88,19 @@ describe('run at other interval levels', () => {
 
       it('names exactly those levels in the tables, the chart descriptions and the shading key', () => {
         const html = read('memo.html');
-        expect(html).toContain(c.summary);
-        expect(levelsNamed(elementOf(html, '<table class="numbers summary-table', 'table'), 'interval')).toEqual(c.levels);
+        // Page 1 gives each figure with the widest level's interval beside it, and says which.
+        expect(html).toContain(`Each figure is a point forecast with its ${c.widest}% prediction interval beside it.`);
         expect(levelsNamed(elementOf(html, '<table class="numbers forecast-table', 'table'), 'interval')).toEqual(c.levels);
-        expect(levelsNamed(elementOf(html, '<table class="numbers backtest-interval', 'table'), 'cover')).toEqual(c.levels);
-        expect(levelsNamed(elementOf(html, '<table class="numbers backtest-interval', 'table'), '(width|score)')).toEqual([c.widest]);
+        expect(levelsNamed(elementOf(html, '<table class="numbers backtest-summary', 'table'), 'cover')).toEqual(c.levels);
+        expect(levelsNamed(elementOf(html, '<table class="numbers backtest-summary', 'table'), 'interval score')).toEqual([c.widest]);
         expect(levelsNamed(elementOf(html, '<table class="numbers comparison', 'table'), 'interval score')).toEqual([c.widest]);
         const forecastCaption = elementOf(elementOf(html, '<figure class="chart" id="series-1-forecast">', 'figure'), '<figcaption>', 'figcaption');
         expect(forecastCaption).toContain(c.named);
         expect(levelsNamed(forecastCaption, 'interval ')).toEqual([c.widest]);
         expect(html).toContain(c.shading);
-        expect(elementOf(html, '<figure class="chart" id="series-1-ratio">', 'figure')).toContain(`deterministic to the stochastic ${c.widest}% interval width`);
-        expect(elementOf(html, '<figure class="chart" id="series-1-backtest">', 'figure')).toContain(`${c.widest}% interval, against the ${c.widest}% target`);
+        expect(elementOf(html, '<p class="width-note">', 'p')).toContain(`the deterministic model&#x27;s ${c.widest}% interval`);
         expect(html).toContain(`the average ${c.widest}% interval score`);
-        // Outside the charts' SVG, where 80% may be an axis tick of the coverage panel.
+        // Outside the charts' SVG, where 80% may be an axis tick.
         if (!c.levels.includes(80)) expect(html.replace(/<svg[\s\S]*?<\/svg>/g, '')).not.toMatch(/\b80%/);
       });
 

@@ -3,7 +3,7 @@
 import { noLinks } from '../format/noLinks.js';
 import type { MemoInput } from '../memoInput.js';
 import { cssMargin, PAPER_SIZES } from '../print/paperSize.js';
-import { CAUTIONS, HEADINGS, PAGE_ONE, LABELS, METHOD_NAME, MODEL_NAME, SIGN_OFF_NOTE, summaryIntro, TEMPLATE_TEXT } from '../wording.js';
+import { CAUTIONS, HEADINGS, PAGE_ONE, LABELS, METHOD_NAME, MODEL_NAME, SIGN_OFF_NOTE, TEMPLATE_TEXT } from '../wording.js';
 import { commentResolutions, memoStatus, type MemoStatus } from './memoStatus.js';
 import { revisionsView, type RevisionsView } from './revisionsView.js';
 import { trackRecordView, type TrackRecordView } from './trackRecordView.js';
@@ -14,13 +14,11 @@ import { seriesDecimals } from '../format/seriesDecimals.js';
 import { signOffView, type SignOffView } from './signOffView.js';
 import { supersedesView, type SupersedesView } from './supersedesView.js';
 import { REVIEW_TEXT } from '../signOffWording.js';
-import type { SummaryCard } from './summaryView.js';
 
 export interface MemoView {
   page: { size: string; margin: string };
   details: { id: string; title: string; client: string; preparedBy: string; reference: string; asOf: string; author: string; reviewers: { name: string; role: string }[] };
   status: MemoStatus & { draft: boolean };
-  summary: { intro: string; cards: SummaryCard[] };
   pageOne: {
     heading: string;
     heads: { next: string; year: string; end: string; interval: string };
@@ -93,7 +91,6 @@ export async function buildMemoView(input: MemoInput): Promise<MemoView> {
       reviewers: memo.reviewers.map((r) => ({ name: noLinks(r.name), role: noLinks(r.role) })),
     },
     status: { ...status, detail: noLinks(status.detail), draft: status.state !== 'signed-off' },
-    summary: { intro: summaryIntro(sharedLevels(input), series.some((s) => s.summary.year !== null)), cards: series.map((s) => s.summary) },
     pageOne: {
       heading: PAGE_ONE.heading,
       heads: { next: PAGE_ONE.nextHead, year: PAGE_ONE.yearHead, end: PAGE_ONE.endHead, interval: intervalHead(input.series.map((e) => e.record)) },
@@ -147,9 +144,3 @@ export async function buildMemoView(input: MemoInput): Promise<MemoView> {
   };
 }
 
-/** The interval levels every series of the memo was analysed at; null when they differ. */
-function sharedLevels(input: MemoInput): readonly number[] | null {
-  const [first, ...rest] = input.series.map(({ record }) => record.settings.levels);
-  if (first === undefined) return null;
-  return rest.every((levels) => levels.join() === first.join()) ? first : null;
-}
