@@ -294,3 +294,10 @@ export const issuedMessages = {
     );
   },
 };
+
+/** Two writers on one memo folder (src/run/memoLock.ts). */
+export const lockMessages = {
+  busy(folder: string): InputProblem {
+    return problem('run.memo-busy', `another run or review is writing the memo in '${folder}'`, 'wait for it to finish, then try again; nothing was changed', { file: folder });
+  },
+};

@@ -33,6 +33,7 @@ import { keyMatches, readPrivateKey, signEntry } from './reviewKeys.js';
 import { nextNumber, signOffLine, type SignOffEntry } from './signOffLog.js';
 import { readStoredMemo, storedFormats, type StoredMemo } from './storedMemo.js';
 import { writeOutputFolder } from './writeOutputFolder.js';
+import { withMemoLock } from './memoLock.js';
 
 export interface SignOffRequest {
   folder: string;
@@ -78,8 +79,16 @@ function checkIssued(memo: StoredMemo): void {
   }
 }
 
+/** Holds the memo folder's lock from reading the log to publishing the folder, so no sign-off is lost to another writer. */
 export async function recordSignOff(request: SignOffRequest): Promise<RecordedSignOffResult> {
   const folder = resolve(request.folder);
+  return withMemoLock(folder, () => record(folder, request)).catch((error: unknown) => {
+    // Refusals by the file system (taking the lock, writing the folder) are the user's environment.
+    throw writeFailure(error, { outputFolder: folder, idFolder: folder, memoFolder: folder, chosenAt: { file: shownPath(folder) } });
+  });
+}
+
+async function record(folder: string, request: SignOffRequest): Promise<RecordedSignOffResult> {
   const memo = readStoredMemo(folder);
   if (memo === null) throw new InputError(reviewMessages.notAMemo(shownPath(folder)));
   // A revision kept under revisions/N/ of a memo folder is superseded: its sign-offs stay as they were.
@@ -137,12 +146,7 @@ export async function recordSignOff(request: SignOffRequest): Promise<RecordedSi
     supersedes: memo.supersedes,
   });
   if (assembled.digest !== memo.digest) throw new InputError(reviewMessages.contentNotRebuilt(shownPath(folder)));
-  try {
-    writeOutputFolder(folder, [...assembled.files, ...folderFiles(folder, REVISIONS_FOLDER)]);
-  } catch (error) {
-    const shown = shownPath(folder);
-    throw writeFailure(error, { outputFolder: folder, idFolder: folder, memoFolder: folder, chosenAt: { file: shown } });
-  }
+  writeOutputFolder(folder, [...assembled.files, ...folderFiles(folder, REVISIONS_FOLDER)]);
   return {
     entry,
     status: memoStatus(plan.memo.reviewers, judgeSignOffs(log.entries, plan.memo.reviewers, memo.digest)),

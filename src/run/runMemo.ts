@@ -14,6 +14,7 @@ import { assembleMemo, contentFiles } from './assembleMemo.js';
 import { contentDigest } from './contentDigest.js';
 import { inputCopyFiles } from './inputCopies.js';
 import { publication, type Publication } from './issuedMemo.js';
+import { withMemoLock } from './memoLock.js';
 import { prepareMemo } from './prepareMemo.js';
 import { runInputs } from './runInputs.js';
 import { attachTrackRecord } from './trackRecord.js';
@@ -70,7 +71,6 @@ export async function runMemo(configFile: string, options: RunMemoOptions = {}):
   if (monthly.length > 0) throw new InputError(monthlyMessages.asOfFoldersWouldBeReplaced({ file: plan.configFile, field: 'memo.as_of' }, shownPath(paths.idFolder), monthly));
   const date = runDate();
   // The revisions compare with the most recent earlier memo; the track record reads them all.
-  // The revisions compare with the most recent earlier memo; the track record reads them all.
   const earlierMemos = asOf === undefined ? [] : findEarlierRecords(paths.idFolder, plan.memo.id, asOf);
   const earlier = earlierMemos[0] ?? null;
   const { loaded, records, document, warnings } = await prepareMemo(plan, { runDate: date, threads: options.threads, pool: options.pool, onSeriesDone: options.onSeriesDone });
@@ -79,23 +79,26 @@ export async function runMemo(configFile: string, options: RunMemoOptions = {}):
   const inputs = runInputs(plan, loaded, paths.memoFolder, earlierMemos);
   const content = contentFiles(document, formats);
   const digest = contentDigest(inputs, new Map(content.map((file) => [file.name, file.content])));
-  // An issued memo is kept, revised or left alone (exit 2) before anything is rendered.
-  const publish = publication(paths.memoFolder, { inputs, document, content, digest }, options.newRevision === true);
-  const { files } = await assembleMemo(plan, loaded, document, {
-    formats,
-    printer: options.printer,
-    command: recordedCommand(plan, options),
-    earlier: earlier?.document ?? null,
-    inputs,
-    copies: inputCopyFiles(paths.memoFolder, inputs, 'original'),
-    signOffs: publish.log,
-    supersedes: publish.supersedes,
-  });
-  try {
+  // An issued memo is kept, revised or left alone (exit 2) before anything is rendered; no
+  // review may record a sign-off between reading the folder and replacing it.
+  const { publish, files } = await withMemoLock(paths.memoFolder, async () => {
+    const publish = publication(paths.memoFolder, { inputs, document, content, digest }, options.newRevision === true);
+    const { files } = await assembleMemo(plan, loaded, document, {
+      formats,
+      printer: options.printer,
+      command: recordedCommand(plan, options),
+      earlier: earlier?.document ?? null,
+      inputs,
+      copies: inputCopyFiles(paths.memoFolder, inputs, 'original'),
+      signOffs: publish.log,
+      supersedes: publish.supersedes,
+    });
     writeOutputFolder(paths.memoFolder, [...files, ...publish.carried]);
-  } catch (error) {
+    return { publish, files };
+  }).catch((error: unknown) => {
+    // Refusals by the file system (taking the lock, writing the folder) are the user's environment.
     throw writeFailure(error, paths);
-  }
+  });
   return {
     configFile: plan.configFile,
     memoId: plan.memo.id,

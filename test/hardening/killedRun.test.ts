@@ -22,7 +22,8 @@ const KILLS = 8;
 const SEED = 20260101;
 const MEMO = 'tarnwick-cargo';
 const REVISED_TITLE = 'Tarnwick cargo outlook, revised';
-const LEFTOVER = new RegExp(`^\\.(partial-${MEMO}-\\d+|previous-${MEMO})$`);
+// A killed run may also leave the memo folder's lock, which the next run takes over (src/run/memoLock.ts).
+const LEFTOVER = new RegExp(`^\\.(partial-${MEMO}-\\d+|previous-${MEMO}|lock-${MEMO})$`);
 
 let build = '';
 let root = '';
