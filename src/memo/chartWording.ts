@@ -25,7 +25,7 @@ export const chartWording = {
   },
   stability: {
     title: (_series: string) => 'Trend on growing histories',
-    subtitle: ['Line: estimate on the history up to each date.', 'Shading: \u00b12 standard errors.', 'Dashed line: full-history estimate.'],
+    subtitle: ['Line: estimate on the history to each date, \u00b12 s.e. shaded.', 'Dashed: the full-history estimate.'],
     panel: { deterministic: 'Slope of the line, per period', stochastic: 'Drift, per period' } as Record<TrendModelKind, string>,
     description: (a: { first: string; last: string; windows: number; slope: string; drift: string }) =>
       `Two panels of estimates on ${a.windows} expanding windows ending from ${a.first} to ${a.last}, each with a band of two standard errors. ` +

@@ -62,8 +62,8 @@ export const evidenceWording = {
   /** `level`: the one the recommendation rule scores, the only level the comparison tests run at. */
   comparisonIntro: (level: number) =>
     `At each horizon a Diebold-Mariano test of equal accuracy compares the two models\u2019 backtest losses: squared error for the point forecasts and the ${levelPercent(level)} interval score for the intervals. The outcome names the model with the lower average loss; a small p-value means the difference is unlikely to be chance.`,
-  comparisonOutcome: (better: TrendModelKind | null, available: boolean) =>
-    !available ? 'not tested' : better === null ? 'equal average loss' : `${MODEL_NAME[better].toLowerCase().replace(' trend', '')} lower`,
+  /** Short enough for the appendix's narrow column; "Det." and "Stoch." are named under the backtest table. */
+  comparisonOutcome: (better: TrendModelKind | null, available: boolean) => (!available ? 'not tested' : better === null ? 'equal' : `${better === 'deterministic' ? 'Det.' : 'Stoch.'} lower`),
   noReason: 'no reason recorded',
   stabilitySummary: (likely: TrendModelKind[], weak: TrendModelKind[]) => {
     const names = (models: TrendModelKind[]) => listInWords(models.map((m) => MODEL_NAME[m].toLowerCase()));
@@ -141,9 +141,9 @@ export const evidenceWording = {
       ? `Coefficients, innovation variance (${a.sigma2}) and standard errors by restricted maximum likelihood (REML), less biased than exact maximum likelihood when the trend is estimated alongside the errors. The fit ${a.converged}.`
       : `Coefficients, innovation variance (${a.sigma2}) and standard errors by exact maximum likelihood. The fit ${a.converged}.`),
   seasonalHeading: 'Seasonal pattern',
-  patternColumns: { average: 'Average effect', fixedLine: 'Fixed pattern, deterministic trend' },
+  patternColumns: { average: 'Average', fixedLine: 'Det. fixed pattern' },
   patternCaption: (transformed: boolean, period: number) =>
-    `Seasonal effect of each ${period === 12 ? 'month' : 'quarter'} above or below the trend${transformed ? ', on the modelling scale' : ''}: averaged over the whole history and in the first and last complete years (STL decomposition), and the fixed pattern the deterministic trend model estimated, where it has one.`,
+    `Seasonal effect of each ${period === 12 ? 'month' : 'quarter'} above or below the trend${transformed ? ', on the modelling scale' : ''}: the average over the whole history and the first and last complete years (STL decomposition), and the fixed pattern the deterministic trend model estimated, where it has one (Det. fixed pattern).`,
   seasonName: (period: number, season: number) =>
     period === 12 ? ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'][season - 1] : `Q${season}`,
   seasonalNone: 'The configuration says the series has no seasonal pattern to model (seasonally adjusted data), so neither model has a seasonal part.',

@@ -45,7 +45,7 @@ describe('a quarterly seasonal series', () => {
     const pattern = view.seasonal?.pattern;
     expect(pattern?.rows.map((row) => row.season)).toEqual(['Q1', 'Q2', 'Q3', 'Q4']);
     const hasFixed = (record.models.deterministic.seasonal?.harmonics ?? 0) > 0;
-    expect(pattern?.columns).toEqual(['Average effect', '1960', '1986', ...(hasFixed ? ['Fixed pattern, deterministic trend'] : [])]);
+    expect(pattern?.columns).toEqual(['Average', '1960', '1986', ...(hasFixed ? ['Det. fixed pattern'] : [])]);
     expect(pattern?.rows[0].cells[0]).toBe(record.evidence.seasonal?.pattern?.mean_effect[0].toPrecision(3).replace('-', '\u2212'));
   });
 

@@ -57,7 +57,7 @@ function panel(model: TrendModelKind, levels: readonly number[], rows: ForecastC
   return {
     title: { text: chartWording.forecast.panel(model), fontSize: 11 },
     width: PANEL_WIDTH,
-    height: 104,
+    height: 92,
     layer: [
       // Widest first, so each narrower band is drawn over the wider ones.
       ...[...levels].reverse().map((level): LayerPart => {

@@ -44,7 +44,7 @@ function panel(model: TrendModelKind, rows: StabilityRow[], full: number | undef
   return {
     title: { text: chartWording.stability.panel[model], fontSize: 11 },
     width: COLUMN_WIDTH,
-    height: 62,
+    height: 48,
     layer: [
       { data: { values: rows }, mark: { type: 'area', color: colour, opacity: BAND_OPACITY.outer + 0.06 }, encoding: { x, y: { ...y, field: 'low' }, y2: { field: 'high' } } },
       { data: { values: rows }, mark: { type: 'line', color: colour, strokeWidth: 1.6 }, encoding: { x, y } },

@@ -58,6 +58,8 @@ export interface SeriesView {
   backtest: BacktestView | null;
   evidence: EvidenceView;
   models: ModelView[];
+  /** Notes that read the same for both models, said once under them. */
+  sharedModelNotes: string[];
   modelScale: string;
   aiccNote: string;
   stability: StabilityView | null;
@@ -110,18 +112,25 @@ export async function seriesView(entry: MemoSeries, index: number): Promise<Seri
     figures: {
       forecast: await figureView(`${anchor}-forecast`, forecastChart({ ...chartInput, history })),
       backtest: backtest === undefined ? null : await figureView(`${anchor}-backtest`, backtestChart({ ...chartInput, backtest })),
-      stability: stability === undefined ? null : await figureView(`${anchor}-stability`, stabilityChart({ ...chartInput, stability })),
+      // One window is the full history alone: a chart of one point per panel says nothing the text does not.
+      stability: stability === undefined || stability.windows.deterministic.length <= 1 ? null : await figureView(`${anchor}-stability`, stabilityChart({ ...chartInput, stability })),
     },
     forecastTable: forecastTableView(record, decimals, units ?? ''),
     widthNote: widthNote(record),
     yearNote: yearNote(record, decimals),
     backtest: backtest === undefined ? null : backtestView(backtest, record.series.frequency, decimals, scoredLevel(record)),
     evidence: evidenceView(record),
-    models: [modelView(record, 'deterministic'), modelView(record, 'stochastic')],
+    ...withSharedNotes([modelView(record, 'deterministic'), modelView(record, 'stochastic')]),
     modelScale: scaleNote(record),
     aiccNote: AICC_NOTE,
     stability: stability === undefined ? null : stabilityView(stability, record.series.first, { deterministic: record.models.deterministic.seasonal, stochastic: record.models.stochastic.seasonal }),
     caveats: caveats.map((c) => ({ id: c.id, severity: c.severity, label: LABELS.severity[c.severity], text: noLinks(c.text) })),
     summary: summaryCard({ anchor, title, units, record, decimals, caveats }),
   };
+}
+
+/** The two models with the notes both carry taken out and said once. */
+function withSharedNotes(models: ModelView[]): { models: ModelView[]; sharedModelNotes: string[] } {
+  const shared = models[0].notes.filter((note) => models.every((model) => model.notes.includes(note)));
+  return { models: models.map((model) => ({ ...model, notes: model.notes.filter((note) => !shared.includes(note)) })), sharedModelNotes: shared };
 }
