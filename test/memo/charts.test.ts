@@ -8,7 +8,7 @@ import type { TopLevelSpec } from 'vega-lite';
 import { addPeriods } from '../../src/base/period.js';
 import { backtestChart, backtestRows } from '../../src/memo/charts/backtestChart.js';
 import { bandFields, forecastChart, recentLength } from '../../src/memo/charts/forecastChart.js';
-import { periodPosition } from '../../src/memo/charts/periodPosition.js';
+import { periodPosition, timeAxis } from '../../src/memo/charts/periodPosition.js';
 import { compileChart, renderChartSvg } from '../../src/memo/charts/renderChart.js';
 import { stabilityChart } from '../../src/memo/charts/stabilityChart.js';
 import { widthNote, widthRatios } from '../../src/memo/view/widthRatios.js';
@@ -263,5 +263,24 @@ describe('renderChartSvg', () => {
     const first = await renderChartSvg(spec, 'st');
     await renderChartSvg(spec, 'other');
     expect(await renderChartSvg(spec, 'st')).toBe(first);
+  });
+});
+
+describe('timeAxis', () => {
+  it('labels a span under two years by period, since whole years would leave a single tick (our layout rule)', () => {
+    const months = ['2025-01', '2025-02', '2025-03', '2025-04', '2025-05', '2025-06', '2025-07', '2025-08', '2025-09', '2025-10', '2025-11', '2025-12'];
+    const axis = timeAxis(months).axis as { values?: number[]; labelExpr?: string };
+    // Twelve months, every second one labelled: six ticks.
+    expect(axis.values).toEqual([2025, 2025 + 2 / 12, 2025 + 4 / 12, 2025 + 6 / 12, 2025 + 8 / 12, 2025 + 10 / 12]);
+    expect(axis.labelExpr).toContain("datum.value === 2025 ? '2025-01'");
+    expect(axis.labelExpr).toContain("'2025-11'");
+    // A longer span keeps whole years.
+    expect(timeAxis(['2020', '2021', '2022', '2023']).axis).toMatchObject({ format: 'd', tickMinStep: 1 });
+    const spec: TopLevelSpec = {
+      data: { values: months.map((period, i) => ({ t: periodPosition(period), v: i })) },
+      mark: 'line',
+      encoding: { x: timeAxis(months), y: { field: 'v', type: 'quantitative' } },
+    };
+    expect(compileChart(spec).warnings).toEqual([]);
   });
 });

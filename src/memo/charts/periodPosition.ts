@@ -17,7 +17,22 @@ const TIME_AXIS = {
   axis: { format: 'd', tickMinStep: 1, labelOverlap: true },
 } as const;
 
-/** The x encoding for a `t` field made by periodPosition, labelled in whole years. */
-export function timeAxis(): typeof TIME_AXIS {
-  return TIME_AXIS;
+/** The most ticks a short axis labels one by one. */
+const MAX_PERIOD_TICKS = 6;
+
+/**
+ * The x encoding for a `t` field made by periodPosition, labelled in whole years. Given the
+ * period labels a chart plots, an axis spanning less than two years (where whole years would
+ * leave one tick, or none) is labelled by period instead: evenly chosen periods, at most six,
+ * named as the data name them ("2025-03", "2025-Q2").
+ */
+export function timeAxis(labels: readonly string[] = []) {
+  const positions = labels.map(periodPosition);
+  if (positions.length === 0 || Math.max(...positions) - Math.min(...positions) >= 2) return TIME_AXIS;
+  const distinct = [...new Map(labels.map((label, i) => [positions[i], label])).entries()].sort((a, b) => a[0] - b[0]);
+  const every = Math.ceil(distinct.length / MAX_PERIOD_TICKS);
+  const shown = distinct.filter((_, i) => i % every === 0);
+  // Vega-Lite's label expression maps each tick's value back to its period label.
+  const names = shown.map(([t, label]) => `datum.value === ${t} ? '${label}'`).join(' : ');
+  return { ...TIME_AXIS, axis: { values: shown.map(([t]) => t), labelExpr: `${names} : ''`, labelOverlap: true } };
 }

@@ -30,7 +30,7 @@ function rows(path: PathPoint[]): { t: number; period: string; point: number }[]
 }
 
 function panel(model: TrendModelKind, now: PathPoint[], earlier: PathPoint[], units: string | undefined): PanelSpec {
-  const x = timeAxis();
+  const x = timeAxis([...now, ...earlier].map((point) => point.period));
   const y = { field: 'point', type: 'quantitative' as const, title: units ?? null, scale: { zero: false } };
   const colour = MODEL_COLOUR[model];
   return {

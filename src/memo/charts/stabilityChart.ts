@@ -38,7 +38,7 @@ export function stabilityRows(first: string, stability: StabilityRecord, model: 
 }
 
 function panel(model: TrendModelKind, rows: StabilityRow[], full: number | undefined): PanelSpec {
-  const x = timeAxis();
+  const x = timeAxis(rows.map((row) => row.period));
   const y = { field: 'estimate', type: 'quantitative' as const, title: null, scale: { zero: false } };
   const colour = MODEL_COLOUR[model];
   return {

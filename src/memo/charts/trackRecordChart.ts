@@ -58,7 +58,7 @@ export function trackRecordChart({ series, units, level, rows, history }: TrackR
   const shown = history.slice(Math.max(0, (firstIndex < 0 ? history.length : firstIndex) - LEAD_IN));
   const observed = shown.flatMap(({ period, value }) => (value === null ? [] : [{ t: periodPosition(period), period, value }]));
   const models = MODELS.filter((model) => forecasts.some((row) => row.model === model));
-  const x = timeAxis();
+  const x = timeAxis([...observed.map((point) => point.period), ...forecasts.map((row) => row.period)]);
   const y = (field: string) => ({ field, type: 'quantitative' as const, title: units ?? null, scale: { zero: false } });
   const byModel = {
     color: { field: 'model', type: 'nominal' as const, legend: null, scale: { domain: [...MODELS], range: MODELS.map((model) => MODEL_COLOUR[model]) } },
