@@ -119,6 +119,9 @@ describe('the full memo', () => {
     expect(html.match(/<dd class="line"><\/dd>/g)).toHaveLength(6);
     expect(html).toContain('<code>trendbrief run configs/basin-outlook.yaml</code>');
     expect(html).toContain(input.series[1].record.series.source.sha256);
+    // Each data file's digest once, with the column and series it feeds.
+    expect(html.split(input.series[1].record.series.source.sha256)).toHaveLength(2);
+    expect(html).toContain(`column \u201c${input.series[1].record.series.source.column}\u201d for ${input.series[1].record.series.title}`);
   });
 
   it('is the same, byte for byte, when rendered again', async () => {

@@ -48,8 +48,8 @@ export interface MemoView {
     command: string;
     runDate: string;
     config: { file: string; sha256: string };
-    data: { file: string; sha256: string }[];
-    sources: { title: string; file: string; column: string; sha256: string }[];
+    /** Each data file once, with the series (and column) it feeds. */
+    data: { file: string; sha256: string; feeds: string }[];
   };
   headings: typeof HEADINGS;
   review: typeof REVIEW_TEXT;
@@ -127,13 +127,7 @@ export async function buildMemoView(input: MemoInput): Promise<MemoView> {
       command: noLinks(reproducibility.command),
       runDate: noLinks(reproducibility.run_date),
       config: digest(reproducibility.config),
-      data: reproducibility.data.map(digest),
-      sources: input.series.map(({ record }) => ({
-        title: noLinks(record.series.title),
-        file: noLinks(record.series.source.file),
-        column: noLinks(record.series.source.column),
-        sha256: record.series.source.sha256,
-      })),
+      data: dataFiles(input),
     },
     headings: HEADINGS,
     review: REVIEW_TEXT,
@@ -144,3 +138,19 @@ export async function buildMemoView(input: MemoInput): Promise<MemoView> {
   };
 }
 
+
+/**
+ * Each data file once: its path as the config wrote it, its digest and what it feeds ("column
+ * 'value': Metered household connections"). A file read for two series is listed once.
+ */
+function dataFiles(input: MemoInput): MemoView['reproducibility']['data'] {
+  const files = new Map<string, { file: string; sha256: string; feeds: string[] }>();
+  input.reproducibility.data.forEach((entry, i) => {
+    const record = input.series[i]?.record;
+    const key = `${entry.file}\u0000${entry.sha256}`;
+    const found = files.get(key) ?? { file: noLinks(entry.file), sha256: noLinks(entry.sha256), feeds: [] };
+    if (record !== undefined) found.feeds.push(LABELS.feeds(noLinks(record.series.source.column), noLinks(record.series.title)));
+    files.set(key, found);
+  });
+  return [...files.values()].map((f) => ({ file: f.file, sha256: f.sha256, feeds: f.feeds.join('; ') }));
+}
