@@ -58,6 +58,8 @@ export type { RenderMemoOptions } from './memo/renderMemoHtml.js';
 
 export { runMemo, type MemoRunResult, type RunMemoOptions } from './run/runMemo.js';
 export { verifyMemoFolder, type VerifyResult } from './run/verifyMemoFolder.js';
+export { recordSignOff, type RecordedSignOffResult, type SignOffRequest } from './run/recordSignOff.js';
+export { contentDigest } from './run/contentDigest.js';
 export { cli, type CliIo } from './cli.js';
 
 /** The memo as one self-contained HTML document (inline CSS and SVG charts, no scripts, no links). */
