@@ -48,6 +48,8 @@ describe('the demo memo', () => {
     // What changed since the last memo, the recommendation and its reason, the legend.
     expect(page1).toContain('Since the last memo: no earlier memo (as of a period before 2024-12) was found beside this one.');
     expect(page1.match(/Recommended: (stochastic|deterministic) trend\. The (policy|evidence) decided it/g)).toHaveLength(5);
+    // The desalination backtest reached 3 of the 10 steps the memo forecasts.
+    expect(page1).toContain('The backtest checked forecasts only up to 3 steps ahead, against 10 in this memo');
     expect(page1).toContain('\u25C6 marks the recommended model');
     expect(page1).toContain('A forecast is an estimate, not a guarantee.');
   });

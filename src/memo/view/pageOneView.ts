@@ -14,6 +14,7 @@ import { yearWording } from '../yearWording.js';
 import { LABELS, METHOD_NAME, PAGE_ONE, TEMPLATE_TEXT } from '../wording.js';
 import { intervalText } from './forecastTableView.js';
 import { agreement } from './agreement.js';
+import { backtestReach } from './summaryView.js';
 import type { SeriesView } from './seriesView.js';
 
 export interface FigureCell {
@@ -53,7 +54,8 @@ function recommendationLine(record: AnalysisRecord): string {
   if (recommendation === undefined) return PAGE_ONE.noRecommendation;
   const findings = new Set(recommendation.evidence.map((item) => item.finding));
   const reason = recommendation.reasons.find((r) => !findings.has(r)) ?? '';
-  return PAGE_ONE.recommendation(METHOD_NAME[recommendation.model], evidenceWording.decidedBy[recommendation.decided_by], noLinks(reason), agreement(record).join(' '));
+  // The backtest's reach, when it stopped short of the horizon, belongs beside the choice it informed.
+  return PAGE_ONE.recommendation(METHOD_NAME[recommendation.model], evidenceWording.decidedBy[recommendation.decided_by], noLinks(reason), [...agreement(record), ...backtestReach(record)].join(' '));
 }
 
 export function pageOneSeries(entry: MemoSeries, view: SeriesView, decimals: number): PageOneSeries {

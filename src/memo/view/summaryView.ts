@@ -79,7 +79,7 @@ export function summaryCard(a: { anchor: string; title: string; units?: string; 
 }
 
 /** The sentence on page 1 when the backtest did not reach the memo's horizon (none when it did, or did not run). */
-function backtestReach(record: AnalysisRecord): string[] {
+export function backtestReach(record: AnalysisRecord): string[] {
   const reach = record.backtest?.settings.horizon;
   return reach === undefined || reach >= record.settings.horizon ? [] : [evidenceWording.shortBacktest(reach, record.settings.horizon)];
 }
