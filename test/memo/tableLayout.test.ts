@@ -1,11 +1,9 @@
-// Tables that fit the page: the summary card's table sits beside its text and the forecast
-// table sets the two models side by side only when their rows fit (widths estimated from the
-// memo's table font, src/memo/view/tableWidth.ts; our own layout rules). Wide numbers, as in
-// a series in the millions, move them under the text and stack the models.
+// Tables that fit the page: the forecast table sets the two models side by side only when their
+// rows fit (widths estimated from the memo's table font, src/memo/view/tableWidth.ts; our own
+// layout rules). Wide numbers, as in a series in the millions, stack the models.
 import { describe, expect, it } from 'vitest';
 import type { AnalysisRecord } from '../../src/analysis/record.js';
 import { forecastTableView } from '../../src/memo/view/forecastTableView.js';
-import { summaryCard } from '../../src/memo/view/summaryView.js';
 import { rowsFit, SHEET_WIDTH } from '../../src/memo/view/tableWidth.js';
 import { bareRecord } from './sampleInput.js';
 
@@ -41,9 +39,4 @@ describe('layouts chosen by width', () => {
     expect(forecastTableView(wide, 0, 'ft').byModel).toBe(true);
   });
 
-  it('puts the summary table beside the text when it fits, under it otherwise', () => {
-    const card = (record: AnalysisRecord, decimals: number) => summaryCard({ anchor: 'x', title: 'X', record, decimals, caveats: [] });
-    expect(card(lake, 2).tableBelow).toBe(false);
-    expect(card(scaled(lake, 2e6), 0).tableBelow).toBe(true);
-  });
 });

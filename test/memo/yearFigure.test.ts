@@ -8,7 +8,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import type { AnalysisRecord } from '../../src/analysis/record.js';
 import { memoContradictions } from '../../src/memo/consistency/memoContradictions.js';
 import { renderMemoHtml } from '../../src/memo/renderMemoHtml.js';
-import { summaryCard } from '../../src/memo/view/summaryView.js';
+import { summaryYear } from '../../src/memo/view/yearView.js';
 import { yearNote } from '../../src/memo/view/yearView.js';
 import { assumptionsRegister } from '../../src/run/assumptionsRegister.js';
 import { fitRecord, runCli } from '../support/runCli.js';
@@ -17,9 +17,9 @@ import { sampleInput } from './sampleInput.js';
 
 const DEATHS = 'test/fixtures/seasonal/us-accidental-deaths.csv';
 
-/** The card's plain words, for the sentences. */
+/** The year's part of page 1, in plain words, for the sentences. */
 function cardOf(record: AnalysisRecord, decimals = 0) {
-  return summaryCard({ anchor: 'series-1', title: 'Accidental deaths', record, decimals, caveats: [] });
+  return { year: summaryYear(record, decimals) };
 }
 
 describe('a monthly flow, its total', () => {

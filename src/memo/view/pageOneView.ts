@@ -14,7 +14,6 @@ import { yearWording } from '../yearWording.js';
 import { LABELS, METHOD_NAME, PAGE_ONE, TEMPLATE_TEXT } from '../wording.js';
 import { intervalText } from './forecastTableView.js';
 import { agreement } from './agreement.js';
-import { backtestReach } from './summaryView.js';
 import type { SeriesView } from './seriesView.js';
 
 export interface FigureCell {
@@ -45,6 +44,12 @@ function cell(point: number | undefined, interval: [number, number] | undefined,
   return { point: formatNumber(point, decimals), interval: interval === undefined ? '' : intervalText(interval, decimals) };
 }
 
+/** The sentence on page 1 when the backtest did not reach the memo's horizon (none when it did, or did not run). */
+function backtestReach(record: AnalysisRecord): string[] {
+  const reach = record.backtest?.settings.horizon;
+  return reach === undefined || reach >= record.settings.horizon ? [] : [evidenceWording.shortBacktest(reach, record.settings.horizon)];
+}
+
 /**
  * The recommendation in one line: the model, who settled it, and the rule's conclusion (the
  * first reason that is not one of the findings, which may point either way).
@@ -64,7 +69,6 @@ export function pageOneSeries(entry: MemoSeries, view: SeriesView, decimals: num
   const model: TrendModelKind | undefined = record.recommendation?.model;
   const last = record.forecasts.deterministic.length - 1;
   const year = record.next_year ?? null;
-  const yearShown = year !== null && year.available;
   const high = view.caveats.filter((c) => c.severity === 'high').length;
   return {
     anchor: view.anchor,
@@ -79,18 +83,19 @@ export function pageOneSeries(entry: MemoSeries, view: SeriesView, decimals: num
     },
     rows: TREND_MODELS.map((kind) => {
       const rows = record.forecasts[kind];
-      const figure = yearShown ? year[kind] : null;
+      // The year's rows as the year view formats them (one interval per level of settings.levels), at the widest level.
+      const figure = view.year?.models.find((row) => row.name === METHOD_NAME[kind]);
       return {
         name: METHOD_NAME[kind],
         recommended: kind === model,
         next: cell(rows[0]?.point, atLevel(rows[0]?.intervals, level), decimals),
-        year: figure === null ? null : cell(figure.point, atLevel(figure.intervals, level), decimals),
+        year: figure === undefined ? null : { point: figure.point, interval: figure.intervals[record.settings.levels.indexOf(level)] ?? '' },
         end: cell(rows[last]?.point, atLevel(rows[last]?.intervals, level), decimals),
       };
     }),
     recommendation: recommendationLine(record),
     caveats: PAGE_ONE.caveats(view.caveats.length, high, LABELS.severity.high),
-    yearSentence: view.summary.year?.sentence ?? '',
+    yearSentence: view.year?.sentence ?? '',
   };
 }
 

@@ -17,8 +17,7 @@ import { forecastTableView, type ForecastTable } from './forecastTableView.js';
 import { modelView, scaleNote, type ModelView } from './modelsView.js';
 import { stabilityView, type StabilityView } from './stabilityView.js';
 import { agreement } from './agreement.js';
-import { summaryCard, type SummaryCard } from './summaryView.js';
-import { yearNote } from './yearView.js';
+import { summaryYear, yearNote, type SummaryYear } from './yearView.js';
 import { widthNote } from './widthRatios.js';
 
 export interface SeriesView {
@@ -64,7 +63,8 @@ export interface SeriesView {
   aiccNote: string;
   stability: StabilityView | null;
   caveats: { id: string; severity: Caveat['severity']; label: string; text: string }[];
-  summary: SummaryCard;
+  /** The next full calendar year under both models and in words (page 1); null for annual series. */
+  year: SummaryYear | null;
 }
 
 export async function seriesView(entry: MemoSeries, index: number): Promise<SeriesView> {
@@ -125,7 +125,7 @@ export async function seriesView(entry: MemoSeries, index: number): Promise<Seri
     aiccNote: AICC_NOTE,
     stability: stability === undefined ? null : stabilityView(stability, record.series.first, { deterministic: record.models.deterministic.seasonal, stochastic: record.models.stochastic.seasonal }),
     caveats: caveats.map((c) => ({ id: c.id, severity: c.severity, label: LABELS.severity[c.severity], text: noLinks(c.text) })),
-    summary: summaryCard({ anchor, title, units, record, decimals, caveats }),
+    year: summaryYear(record, decimals),
   };
 }
 
