@@ -41,7 +41,7 @@ export function assumptionsRegister(plan: SeriesPlan, record: AnalysisRecord, co
     rows.push({
       choice: CHOICES[key] ?? key,
       value,
-      basis: at === undefined ? 'built-in default of the tool' : `${configName}, line ${at.line} (${at.field})`,
+      basis: at === undefined ? 'the tool\u2019s default' : `${configName}, line ${at.line} (${at.field})`,
       set_by: at === undefined ? 'default' : 'config',
     });
   }
@@ -57,8 +57,8 @@ export function assumptionsRegister(plan: SeriesPlan, record: AnalysisRecord, co
       choice: part === null ? `ARMA order of the ${kind} trend` : `ARMA order and seasonal part of the ${kind} trend`,
       value: `(${model.p}, ${model.q})${seasonalValue}`,
       basis:
-        `lowest AICc over p ≤ ${record.settings.max_p}, q ≤ ${record.settings.max_q}` +
-        (part === null ? '' : fixedPart ? ', the seasonal part as configured' : ', the seasonal part searched with it (seasonal differences by the seasonal test)'),
+        `lowest AICc, p ≤ ${record.settings.max_p}, q ≤ ${record.settings.max_q}` +
+        (part === null ? '' : fixedPart ? '; seasonal part as configured' : '; seasonal part searched alongside'),
       set_by: 'data',
     });
   }
@@ -68,7 +68,7 @@ export function assumptionsRegister(plan: SeriesPlan, record: AnalysisRecord, co
       value: `${record.recommendation.model} trend`,
       basis: record.recommendation.fixed_by_config
         ? `fixed by the config: ${record.recommendation.justification ?? ''}`
-        : `the ${record.settings.recommendation.rule} rule applied to this series' evidence (the rule and the evidence are on the series page)`,
+        : `the ${record.settings.recommendation.rule} rule on this series' evidence (series page)`,
       set_by: record.recommendation.fixed_by_config ? 'config' : 'data',
     });
   }
