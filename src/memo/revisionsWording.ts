@@ -36,7 +36,8 @@ export const revisionsWording = {
     revised: 'Observed, now',
   },
   chart: {
-    title: (series: string) => `${series}: this memo’s forecasts against the previous memo’s`,
+    // The section's heading names the series; a title that repeats it can run past the chart's width.
+    title: (_series: string) => 'This memo’s forecasts against the previous memo’s',
     subtitle: (asOf: string, earlier: string) => [`Solid line, filled markers: this memo (as of ${asOf}).`, `Dashed grey line, open markers: the memo as of ${earlier}.`],
     panel: (model: TrendModelKind) => MODEL_NAME[model],
     description: (a: { series: string; asOf: string; earlier: string; largest: { model: TrendModelKind; period: string; change: string }[] }) =>

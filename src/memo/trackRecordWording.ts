@@ -64,7 +64,8 @@ export const trackRecordWording = {
     level: (level: string) => `${level}%`,
   },
   chart: {
-    title: (series: string) => `${series}: earlier memos' forecasts against the outcomes`,
+    // The section's heading names the series; a title that repeats it can run past the chart's width.
+    title: (_series: string) => "Earlier memos' forecasts against the outcomes",
     /** One short line per mark, naming only the models drawn. */
     subtitle: (level: string, models: readonly TrendModelKind[]) => [
       'Solid dark line with dots: observed values.',

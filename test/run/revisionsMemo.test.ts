@@ -43,7 +43,7 @@ describe('revisionChart', () => {
   it('compiles without a warning and says what it shows, with the largest revision of each model', () => {
     expect(compileChart(chart).warnings).toEqual([]);
     expect(chart.title).toEqual({
-      text: 'Ferry boardings: this memo’s forecasts against the previous memo’s',
+      text: 'This memo’s forecasts against the previous memo’s',
       subtitle: ['Solid line, filled markers: this memo (as of 2025-12).', 'Dashed grey line, open markers: the memo as of 2025-11.'],
     });
     expect(chart.description).toContain('The deterministic-trend model forecast moved most at 2026, by +1.0 k.');
