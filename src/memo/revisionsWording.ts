@@ -19,6 +19,7 @@ export const revisionsWording = {
   recommendationChanged: (earlier: TrendModelKind | null, now: TrendModelKind | null) =>
     `Recommendation: ${now === null ? 'none' : `the ${MODEL_IN_TEXT[now]}`} now, previously ${earlier === null ? 'none' : `the ${MODEL_IN_TEXT[earlier]}`}.`,
   recommendationSame: (model: TrendModelKind | null) => (model === null ? 'Recommendation: none in either memo.' : `Recommendation: the ${MODEL_IN_TEXT[model]}, as before.`),
+  rowsShown: (shown: number, all: number) => `${shown} of the ${all} periods both memos forecast are shown; both memos\u2019 record.json files hold every one.`,
   noCommonPeriods: 'The two memos forecast no common period.',
   forecastCaption: (units: string) => `Point forecasts for the periods both memos forecast${units === '' ? '' : ` (${units})`}: previous memo, this memo and the change.`,
   dataCaption: (units: string) => `Revised observations${units === '' ? '' : ` (${units})`}: periods both memos hold with different values.`,

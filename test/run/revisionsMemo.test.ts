@@ -91,3 +91,19 @@ describe('revisionsView', () => {
     expect(block?.figure?.svg.startsWith('<svg role="img"')).toBe(true);
   });
 });
+
+describe('a long run of common periods', () => {
+  it('prints the first three, then every quarter to the last, and says how many it left out (our layout rule)', async () => {
+    const months = Array.from({ length: 12 }, (_, i) => `2026-${String(i + 1).padStart(2, '0')}`);
+    const monthly: SeriesRevisions = {
+      ...series,
+      forecasts: months.map((period, i) => ({ model: 'deterministic' as const, period, h: i + 1, h_earlier: i + 2, point: 100 + i, point_earlier: 100, change: i, percent_change: i })),
+      paths: { now: { deterministic: [], stochastic: [] }, earlier: null },
+      data: [],
+    };
+    const view = await revisionsView({ revisions: { ...revisions, series: [monthly] }, series: [] });
+    const block = view?.series[0];
+    expect(block?.forecastRows.map((row) => row.period)).toEqual(['2026-01', '2026-02', '2026-03', '2026-06', '2026-09', '2026-12']);
+    expect(block?.forecastRowsNote).toBe('6 of the 12 periods both memos forecast are shown; both memos\u2019 record.json files hold every one.');
+  });
+});

@@ -36,7 +36,7 @@ function panel(model: TrendModelKind, now: PathPoint[], earlier: PathPoint[], un
   return {
     title: { text: revisionsWording.chart.panel(model), fontSize: 11 },
     width: PANEL_WIDTH,
-    height: 190,
+    height: 120,
     layer: [
       { data: { values: rows(earlier) }, mark: { type: 'line', color: MUTED, strokeWidth: 1.3, strokeDash: REVISION_DASH.earlier }, encoding: { x, y } },
       { data: { values: rows(earlier) }, mark: { type: 'point', shape: MODEL_SHAPE[model], filled: false, color: MUTED, size: 22 }, encoding: { x, y } },

@@ -10,6 +10,8 @@ import type { TrendModelKind } from '../../base/settings.js';
 import type { ForecastRevision, Revisions, SeriesRevisions } from '../revisionsPart.js';
 import { revisionsWording } from '../revisionsWording.js';
 import { figureView, type FigureView } from './figureView.js';
+import { shownHorizons } from './shownHorizons.js';
+import { parsePeriod, periodsPerYear } from '../../base/period.js';
 
 /** Revised observations listed in the memo; the rest are counted. */
 export const DATA_ROWS_SHOWN = 24;
@@ -28,6 +30,8 @@ export interface RevisionSeriesView {
   figure: FigureView | null;
   forecastCaption: string;
   forecastRows: { period: string; steps: string; deterministic: Change; stochastic: Change }[];
+  /** How many of the common periods the table shows, when not all. */
+  forecastRowsNote: string;
   noCommonPeriods: string;
   dataCaption: string;
   dataRows: ({ period: string } & Change)[];
@@ -61,17 +65,26 @@ function change(earlier: number | null, now: number | null, difference: number |
 
 const NO_ROW: Change = { earlier: MISSING, now: MISSING, change: MISSING, percent: MISSING };
 
-function forecastRows(forecasts: ForecastRevision[], decimals: number): RevisionSeriesView['forecastRows'] {
-  const periods = [...new Set(forecasts.map((row) => row.period))];
-  return periods.map((period) => {
+/** Common periods beyond this many print a selection (shownHorizons: the first three, then evenly spaced to the last). */
+export const REVISION_ROWS = 8;
+
+function forecastRows(forecasts: ForecastRevision[], decimals: number): { rows: RevisionSeriesView['forecastRows']; all: number } {
+  const every = [...new Set(forecasts.map((row) => row.period))];
+  const first = every[0];
+  const parsed = first === undefined ? null : parsePeriod(first);
+  const perYear = parsed === null ? 1 : periodsPerYear(parsed.frequency);
+  const picked = new Set(shownHorizons(every.length, REVISION_ROWS, perYear));
+  const periods = every.filter((_, i) => picked.has(i + 1));
+  const rows = periods.map((period) => {
     const of = (model: TrendModelKind) => forecasts.find((row) => row.model === model && row.period === period);
-    const first = of('deterministic') ?? of('stochastic');
     const cells = (model: TrendModelKind) => {
       const row = of(model);
       return row === undefined ? NO_ROW : change(row.point_earlier, row.point, row.change, row.percent_change, decimals);
     };
-    return { period, steps: first === undefined ? MISSING : `${first.h_earlier} \u2192 ${first.h}`, deterministic: cells('deterministic'), stochastic: cells('stochastic') };
+    const steps = of('deterministic') ?? of('stochastic');
+    return { period, steps: steps === undefined ? MISSING : `${steps.h_earlier} \u2192 ${steps.h}`, deterministic: cells('deterministic'), stochastic: cells('stochastic') };
   });
+  return { rows, all: every.length };
 }
 
 function notes(entry: SeriesRevisions): string[] {
@@ -97,6 +110,7 @@ async function seriesBlock(entry: SeriesRevisions, input: Pick<MemoInput, 'serie
   const units = memoSeries?.units === undefined ? undefined : noLinks(memoSeries.units);
   const decimals = memoSeries === undefined ? 2 : seriesDecimals(memoSeries.record);
   const { earlier } = entry.paths;
+  const revised = forecastRows(entry.forecasts, decimals);
   const figure =
     earlier === null
       ? null
@@ -107,7 +121,8 @@ async function seriesBlock(entry: SeriesRevisions, input: Pick<MemoInput, 'serie
     notes: notes(entry),
     figure,
     forecastCaption: revisionsWording.forecastCaption(units ?? ''),
-    forecastRows: forecastRows(entry.forecasts, decimals),
+    forecastRows: revised.rows,
+    forecastRowsNote: revised.rows.length < revised.all ? revisionsWording.rowsShown(revised.rows.length, revised.all) : '',
     noCommonPeriods: entry.in_earlier && entry.forecasts.length === 0 ? revisionsWording.noCommonPeriods : '',
     dataCaption: revisionsWording.dataCaption(units ?? ''),
     dataRows: (entry.data ?? []).slice(0, DATA_ROWS_SHOWN).map((row) => ({ period: row.period, ...change(row.value_earlier, row.value, row.change, row.percent_change, decimals) })),
