@@ -13,16 +13,6 @@ export const chartWording = {
       `Two panels on one vertical scale, one per model. Each shows the last ${a.recent} observations of ${a.series}, then the model's point forecast to ${a.end} with its ${predictionIntervals(a.levels)}. ` +
       a.models.map((m) => `At ${a.end} the ${MODEL_NAME[m.model].toLowerCase()} model gives ${m.point} (${levelPercent(a.level)} interval ${m.low} to ${m.high}).`).join(' '),
   },
-  backtest: {
-    title: (_series: string) => 'Root mean squared error by horizon',
-    subtitle: (origins: number, coincide: boolean) => [
-      `Forecasts from ${origins} past origins against what happened.`,
-      ...(coincide ? ['The two models\u2019 lines coincide: their RMSE differs', 'by less than 0.5% at every horizon.'] : []),
-    ],
-    errorPanel: 'Root mean squared error',
-    description: (a: { origins: number; horizon: number; endErrors: string; benchmark: string }) =>
-      `Line chart by forecast horizon 1 to ${a.horizon}, from ${a.origins} backtest origins: root mean squared error of the deterministic and stochastic forecasts and the ${a.benchmark}; at the last horizon ${a.endErrors}.`,
-  },
   stability: {
     title: (_series: string) => 'Trend on growing histories',
     subtitle: ['Line: estimate on the history to each date, \u00b12 s.e. shaded.', 'Dashed: the full-history estimate.'],

@@ -6,14 +6,13 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { TopLevelSpec } from 'vega-lite';
 import { addPeriods } from '../../src/base/period.js';
-import { backtestChart, backtestRows } from '../../src/memo/charts/backtestChart.js';
 import { bandFields, forecastChart, recentLength } from '../../src/memo/charts/forecastChart.js';
 import { periodPosition, timeAxis } from '../../src/memo/charts/periodPosition.js';
 import { compileChart, renderChartSvg } from '../../src/memo/charts/renderChart.js';
 import { stabilityChart } from '../../src/memo/charts/stabilityChart.js';
 import { widthNote, widthRatios } from '../../src/memo/view/widthRatios.js';
 import type { MemoSeries } from '../../src/memo/memoInput.js';
-import type { AnalysisRecord, BacktestRecord, ForecastRow, StabilityRecord } from '../../src/analysis/record.js';
+import type { AnalysisRecord, ForecastRow, StabilityRecord } from '../../src/analysis/record.js';
 import { fitRecord, QUICK_BACKTEST } from '../support/runCli.js';
 import { sampleSeries } from './sampleInput.js';
 
@@ -26,11 +25,9 @@ function stabilityOf(entry: MemoSeries): StabilityRecord {
 function allCharts(entry: MemoSeries): Record<string, TopLevelSpec> {
   const { record, history, units } = entry;
   const input = { series: record.series.title, units, decimals: 2, record };
-  const backtest = record.backtest;
-  if (history === undefined || backtest === undefined || backtest === null) throw new Error('the sample series lacks history or backtest');
+  if (history === undefined) throw new Error('the sample series lacks its history');
   return {
     forecast: forecastChart({ ...input, history }),
-    backtest: backtestChart({ ...input, backtest }),
     stability: stabilityChart({ ...input, stability: stabilityOf(entry) }),
   };
 }
@@ -105,17 +102,6 @@ describe('chart data match the record', () => {
     expect(note).toContain(`${expected.at(-1)?.toFixed(2)} at ${record.forecasts.deterministic.at(-1)?.period}`);
   });
 
-  it('backtest rows are the record per-horizon RMSE and 95% coverage of each method', () => {
-    const backtest = record.backtest;
-    if (backtest === undefined || backtest === null) throw new Error('no backtest');
-    const rows = backtestRows(backtest);
-    expect(rows.filter((r) => r.method === 'Stochastic').map((r) => r.rmse)).toEqual(backtest.per_horizon.stochastic.map((r) => r.rmse));
-    expect(rows.filter((r) => r.method === 'No change').map((r) => r.coverage)).toEqual(backtest.per_horizon.naive.map(() => null));
-    // One panel, RMSE of all three methods (coverage is in the memo's table).
-    const plotted = (JSON.parse(JSON.stringify(charts.backtest)) as { layer: { data: { values: { method: string; rmse: number }[] } }[] }).layer[0].data.values;
-    expect(plotted.filter((r) => r.method === 'No change').map((r) => r.rmse)).toEqual(backtest.per_horizon.naive.map((r) => r.rmse));
-  });
-
   it('stability windows are placed at the period of their last observation, band ±2 se', () => {
     const windows = stabilityOf(entry).windows.deterministic;
     const rows = layerValues(charts.stability, 0, 1);
@@ -142,11 +128,6 @@ interface LayerData {
 /** The layers of a panel, as plain data. */
 function layersOf(spec: TopLevelSpec, panel: number): LayerData[] {
   return (JSON.parse(JSON.stringify(spec)) as { hconcat: { layer: LayerData[] }[] }).hconcat[panel].layer;
-}
-
-function backtestOf(record: AnalysisRecord): BacktestRecord {
-  if (record.backtest === undefined || record.backtest === null) throw new Error('the record has no backtest');
-  return record.backtest;
 }
 
 describe('charts at other interval levels', () => {
@@ -205,7 +186,7 @@ describe('charts at other interval levels', () => {
     expect(rows.slice(1).map((row) => [row.lo99_5, row.hi99_5])).toEqual(record.forecasts.stochastic.map((f) => f.intervals['99.5']));
   });
 
-  it('take the width ratio and the backtest coverage at the widest level', () => {
+  it('take the width ratio at the widest level', () => {
     const entry = entryAt('68,95,99');
     const { record } = entry;
     const ratios = widthRatios(record).map((v) => v.ratio);
@@ -216,8 +197,6 @@ describe('charts at other interval levels', () => {
       }),
     );
     expect(widthNote(record)).toContain("the deterministic model's 99% interval divided by the stochastic model's");
-    const backtest = backtestOf(record);
-    expect(backtestRows(backtest).filter((r) => r.method === 'Deterministic').map((r) => r.coverage)).toEqual(backtest.per_horizon.deterministic.map((r) => r.coverage['99']));
   });
 });
 

@@ -13,8 +13,8 @@ function pageCount(pdf: Buffer): number {
   return (pdf.toString('latin1').match(/\/Type\s*\/Page(?![s\w])/g) ?? []).length;
 }
 
-/** The demo's length today; the budget is 16 A4 pages (see DEVELOPERS.md, "The memo's length"). */
-const DEMO_PAGES_AT_MOST = 18;
+/** The budget for the demo: 16 A4 pages (DEVELOPERS.md, the memo's layout). */
+const DEMO_PAGES_AT_MOST = 16;
 
 describe('the demo memo', () => {
   let folder = '';

@@ -79,10 +79,9 @@ describe('the full memo', () => {
     input.series.forEach((entry, i) => {
       const anchor = `series-${i + 1}`;
       const section = sectionOf(html, anchor);
-      for (const figure of ['forecast', 'backtest']) {
-        expect(section, `${anchor} ${figure}`).toMatch(new RegExp(`<figure class="chart" id="${anchor}-${figure}">\\s*<svg role="img"`));
-      }
-      expect(section.match(/<figcaption>/g)).toHaveLength(2);
+      // One chart on the series' pages, the forecast; the backtest's numbers are in its table.
+      expect(section).toMatch(new RegExp(`<figure class="chart" id="${anchor}-forecast">\\s*<svg role="img"`));
+      expect(section.match(/<figcaption>/g)).toHaveLength(1);
       expect(section).toContain('<table class="numbers forecast-table">');
       // Lake Huron's ten steps: the table prints 1, 2, 3, 4, 6, 8 and 10 (shownHorizons, our layout rule); every step is in forecasts.csv.
       if (i === 0) {
@@ -166,8 +165,9 @@ describe('a record without the later parts', () => {
     expect(detailOf(html, 'series-1')).toContain('The trend-stability checks were not run for this series.');
     expect(section).toContain('No recommendation was recorded for this series');
     expect(section).toContain('data-caveat="backtest-thin"');
-    // The forecast chart alone: no backtest, no stability windows, and no observed history to draw before the forecasts.
+    // The forecast chart alone, with no observed history to draw before the forecasts; no stability windows in the appendix.
     expect(section.match(/<figure class="chart"/g)).toHaveLength(1);
+    expect(detailOf(html, 'series-1')).not.toContain('<figure class="chart"');
     expect(html).toContain('No assumptions were recorded for this series.');
   });
 });

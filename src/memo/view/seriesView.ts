@@ -1,7 +1,6 @@
 // Everything the memo shows for one series, formatted and with its charts rendered.
 import type { Caveat } from '../caveats/caveat.js';
 import { collectCaveats } from '../caveats/caveatRules.js';
-import { backtestChart } from '../charts/backtestChart.js';
 import { forecastChart } from '../charts/forecastChart.js';
 import { stabilityChart } from '../charts/stabilityChart.js';
 import { evidenceWording } from '../evidenceWording.js';
@@ -46,7 +45,6 @@ export interface SeriesView {
   captions: { point: string };
   figures: {
     forecast: FigureView;
-    backtest: FigureView | null;
     stability: FigureView | null;
   };
   forecastTable: ForecastTable;
@@ -111,7 +109,6 @@ export async function seriesView(entry: MemoSeries, index: number): Promise<Seri
     },
     figures: {
       forecast: await figureView(`${anchor}-forecast`, forecastChart({ ...chartInput, history })),
-      backtest: backtest === undefined ? null : await figureView(`${anchor}-backtest`, backtestChart({ ...chartInput, backtest })),
       // One window is the full history alone: a chart of one point per panel says nothing the text does not.
       stability: stability === undefined || stability.windows.deterministic.length <= 1 ? null : await figureView(`${anchor}-stability`, stabilityChart({ ...chartInput, stability })),
     },
