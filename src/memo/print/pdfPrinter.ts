@@ -1,10 +1,12 @@
 // HTML → PDF with headless Chromium through puppeteer-core (never a downloaded browser).
 // The page is loaded with setContent and every request is aborted, so nothing is fetched
 // from anywhere; Chromium's own background traffic is switched off by flags.
-import { mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
+// The browser dies with the run: it is driven over a pipe (--remote-debugging-pipe), and
+// Chromium exits when the pipe closes, which it does when the run ends however it ends,
+// SIGKILL included. Its profile and home folder live in the run's own temporary folder
+// (browserFolder.ts), so it writes nothing to the user's home.
 import puppeteer, { type Browser } from 'puppeteer-core';
+import { openBrowserFolder } from './browserFolder.js';
 import type { Paper } from '../memoInput.js';
 import { footerTemplate } from './footerTemplate.js';
 import { PAGE_MARGIN, PAPER_SIZES } from './paperSize.js';
@@ -38,6 +40,7 @@ const FLAGS = [
   '--no-first-run',
   '--no-default-browser-check',
   '--host-resolver-rules=MAP * ~NOTFOUND',
+  '--disable-breakpad',
 ];
 
 export function chromiumPath(options: PdfPrinterOptions = {}): string {
@@ -71,12 +74,12 @@ export async function printOnBrowser(browser: Browser, html: string, options: Pr
 
 /** One browser for many PDFs; close it when done (it also removes its temporary profile). */
 export async function openPdfPrinter(options: PdfPrinterOptions = {}): Promise<PdfPrinter> {
-  const profile = mkdtempSync(join(tmpdir(), 'trendbrief-chromium-'));
+  const folder = openBrowserFolder();
   let browser: Browser;
   try {
-    browser = await puppeteer.launch({ executablePath: chromiumPath(options), headless: true, args: FLAGS, userDataDir: profile });
+    browser = await puppeteer.launch({ executablePath: chromiumPath(options), headless: true, args: FLAGS, userDataDir: folder.profile, env: folder.env, pipe: true });
   } catch (error) {
-    rmSync(profile, { recursive: true, force: true });
+    folder.remove();
     throw new Error(`could not start Chromium at ${chromiumPath(options)} to print the PDF: ${error instanceof Error ? error.message : String(error)}`);
   }
   return {
@@ -85,7 +88,7 @@ export async function openPdfPrinter(options: PdfPrinterOptions = {}): Promise<P
       try {
         await browser.close();
       } finally {
-        rmSync(profile, { recursive: true, force: true });
+        folder.remove();
       }
     },
   };
