@@ -7,6 +7,7 @@ import { fileURLToPath } from 'node:url';
 import Handlebars from 'handlebars';
 import { InputError } from '../base/problem.js';
 import { templateMessages } from './messages.js';
+import { checkHouseTemplate } from './checkHouseTemplate.js';
 
 export interface MemoTemplates {
   main: string;
@@ -42,18 +43,21 @@ function checkTemplateSyntax(path: string, source: string): void {
 export function loadTemplates(dir?: string): MemoTemplates {
   const builtIn = builtInTemplatesDir();
   const dirs = dir === undefined ? [builtIn] : [dir, builtIn];
+  const names = [...new Set(dirs.flatMap(partialNames))].sort();
   const read = (relative: string): string => {
     for (const d of dirs) {
       const path = join(d, relative);
       if (!existsSync(path)) continue;
       const source = readFileSync(path, 'utf8');
-      // A consultancy's own template is user input: a syntax error in it is their mistake to fix.
-      if (d !== builtIn && relative.endsWith('.hbs')) checkTemplateSyntax(path, source);
+      // A consultancy's own template is user input: its faults are their mistake to fix, at their line.
+      if (d !== builtIn) {
+        if (relative.endsWith('.hbs')) checkTemplateSyntax(path, source);
+        checkHouseTemplate(path, source, names);
+      }
       return source;
     }
     throw new Error(`memo template ${relative} is missing from ${dirs.join(' and ')}`);
   };
-  const names = [...new Set(dirs.flatMap(partialNames))].sort();
   const partials: Record<string, string> = {};
   for (const name of names) partials[name] = read(join('partials', `${name}.hbs`));
   return { main: read('memo.hbs'), css: read('memo.css'), partials };

@@ -3,6 +3,23 @@
 import { problem, type InputProblem } from '../base/problem.js';
 
 export const templateMessages = {
+  renderFailed(folder: string, detail: string, line: number | undefined): InputProblem {
+    return problem(
+      'template.render',
+      `a template in ${folder} could not be filled in (${detail})${line === undefined ? '' : ` at line ${line} of the template that holds it`}`,
+      'use only the fields and helpers the built-in templates use, or remove the template to use the built-in one',
+      { file: folder },
+    );
+  },
+  forbidden(file: string, line: number, what: string): InputProblem {
+    return problem('template.not-self-contained', `the template would make the memo load or run something (${what})`, 'a memo stands alone: remove scripts, web addresses and stylesheet imports from the template', { file, line });
+  },
+  unknownPartial(file: string, line: number, name: string, known: readonly string[]): InputProblem {
+    return problem('template.unknown-partial', `no partial named ${JSON.stringify(name)}`, `use one of ${known.join(', ')}, or add partials/${name}.hbs`, { file, line });
+  },
+  unknownHelper(file: string, line: number, name: string): InputProblem {
+    return problem('template.unknown-helper', `no helper named ${JSON.stringify(name)}`, 'use only if, unless, each, with and lookup', { file, line });
+  },
   badSyntax(file: string, line: number | undefined, detail: string): InputProblem {
     return problem('template.syntax', `not a valid template (${detail})`, 'fix the template, or remove it to use the built-in one', { file, line });
   },

@@ -9,24 +9,16 @@ import { loadTemplates } from './loadTemplates.js';
 import { memoContradictions } from './consistency/memoContradictions.js';
 import { trackRecordClaims } from './consistency/trackRecordClaims.js';
 import { buildMemoView } from './view/buildMemoView.js';
+import { assertSelfContained } from './format/selfContained.js';
+import { InputError } from '../base/problem.js';
+import { templateMessages } from './messages.js';
 
 export interface RenderMemoOptions {
   /** A directory with the consultancy's own memo.hbs, memo.css or partials; missing files come from the built-in templates/. */
   templatesDir?: string;
 }
 
-const FORBIDDEN = [/<script/i, /https?:\/\//i, /@import/i];
-
-/** Throws when the HTML could load or run anything: the memo must stand alone. */
-export function assertSelfContained(html: string): void {
-  for (const pattern of FORBIDDEN) {
-    const match = pattern.exec(html);
-    if (match !== null) {
-      const around = html.slice(Math.max(0, match.index - 40), match.index + 40).replace(/\s+/g, ' ');
-      throw new Error(`renderMemoHtml: the memo would not be self-contained (found ${pattern.source} near "${around}"); check the templates and CSS`);
-    }
-  }
-}
+export { assertSelfContained } from './format/selfContained.js';
 
 export async function renderMemoHtml(input: MemoInput, options: RenderMemoOptions = {}): Promise<string> {
   const templates = loadTemplates(options.templatesDir);
@@ -34,9 +26,24 @@ export async function renderMemoHtml(input: MemoInput, options: RenderMemoOption
   for (const [name, source] of Object.entries(templates.partials)) handlebars.registerPartial(name, source);
   const template = handlebars.compile(templates.main, { strict: true });
   const view = await buildMemoView(input);
-  const html = template({ ...view, css: templates.css });
+  const html = renderTemplate(() => template({ ...view, css: templates.css }), options.templatesDir);
   assertSelfContained(html);
   const contradictions = [...memoContradictions(input.series.map((entry) => entry.record), html), ...trackRecordClaims(input.track_record, html)];
   if (contradictions.length > 0) throw new Error(`renderMemoHtml: the memo contradicts its records (${contradictions.join('; ')})`);
   return html;
+}
+
+/**
+ * Runs the filled template. A consultancy's own template that fails at run time (a field the
+ * view does not have, say) is theirs to fix: exit 2 naming the folder and, when Handlebars
+ * gives one, the line. With the built-in templates a failure is our defect.
+ */
+function renderTemplate(render: () => string, templatesDir: string | undefined): string {
+  try {
+    return render();
+  } catch (error) {
+    if (templatesDir === undefined || !(error instanceof Error)) throw error;
+    const at = /- (\d+):(\d+)$/.exec(error.message);
+    throw new InputError(templateMessages.renderFailed(templatesDir, error.message.replace(/\s*- \d+:\d+$/, ''), at === null ? undefined : Number(at[1])));
+  }
 }

@@ -146,6 +146,16 @@ describe('escaping and link-free text', () => {
     expect(html).toContain('See https:\u2060//example.org/notes');
   });
 
+  it('renders a web address or a stylesheet import in a title or units as text, never stopping the render (our spec)', async () => {
+    const input = sampleInput(['lakeHuron']);
+    input.series[0].record.series.title = 'Levels https://evil.example/x @import url(a.css)';
+    input.series[0].units = '@import url(b.css) http://x.y';
+    const html = await renderMemoHtml(input);
+    expect(html).not.toMatch(/https?:\/\/|@import/i);
+    expect(html).toContain('Levels https:\u2060//evil.example/x @\u2060import url(a.css)');
+    expect(html).toContain('@\u2060import url(b.css) http:\u2060//x.y');
+  });
+
   it('rejects templates that would load anything', () => {
     expect(() => assertSelfContained('<style>@import url(x.css);</style>')).toThrow(/not be self-contained/);
     expect(() => assertSelfContained('<p>ok</p><script>1</script>')).toThrow(/<script/);
