@@ -46,6 +46,9 @@ describe('hostile but legal text', () => {
     expect(html.match(/<style\b/g)).toHaveLength(1);
     expect(html.match(/<\/style>/g)).toHaveLength(1);
     expect(html.match(/<title>/g)).toHaveLength(1);
+    // A web address or stylesheet import in the units reaches the charts' axis titles too, neutralised there as everywhere.
+    expect(html).not.toMatch(/https?:\/\/|@import/i);
+    expect(html).toContain('@\u2060import url(x.css) https:\u2060//tarnwick.invalid/u');
   });
 
   it('shows it as text, template syntax included', () => {
