@@ -1,15 +1,20 @@
 // An input file read as UTF-8 text with a size limit, every file-system failure turned into
 // an InputError in the caller's wording (series files and configs word them alike, but with
-// their own codes). Shared by the data and config stages.
-import { closeSync, constants, fstatSync, openSync, readFileSync } from 'node:fs';
+// their own codes). Shared by the data and config stages; readRegularFile refuses anything
+// but a regular file before opening it, so no input can make a run wait.
 import { InputError, type InputProblem } from './problem.js';
+import { readRegularFile, type FileFault } from './readRegularFile.js';
+import { firstInvalidUtf8 } from './utf8Position.js';
 
 export interface FileMessages {
   fileMissing(file: string): InputProblem;
   notAFile(file: string, kind: 'directory' | 'special file'): InputProblem;
+  badLink(file: string, kind: 'dangling' | 'loop'): InputProblem;
+  nameTooLong(file: string): InputProblem;
   unreadable(file: string, reason: string): InputProblem;
   tooLarge(file: string, bytes: number, limitBytes: number): InputProblem;
-  notUtf8(file: string): InputProblem;
+  /** `at`: the line and column (in characters) of the first byte that is not UTF-8. */
+  notUtf8(file: string, at: { line: number; column: number }): InputProblem;
 }
 
 export interface InputFile {
@@ -19,42 +24,32 @@ export interface InputFile {
 }
 
 export function readInputFile(file: string, limitBytes: number, messages: FileMessages): InputFile {
-  const bytes = readBytes(file, limitBytes, messages);
+  const read = readRegularFile(file, limitBytes);
+  if (read.fault !== undefined) throw new InputError(faultProblem(file, read.fault, limitBytes, messages));
+  const { bytes } = read;
   try {
     return { bytes, text: new TextDecoder('utf-8', { fatal: true }).decode(bytes) };
   } catch {
-    throw new InputError(messages.notUtf8(file));
+    throw new InputError(messages.notUtf8(file, firstInvalidUtf8(bytes)));
   }
 }
 
-function readBytes(file: string, limitBytes: number, messages: FileMessages): Buffer {
-  let fd: number;
-  try {
-    // Non-blocking, so a FIFO named as the file is refused below instead of waiting for a writer.
-    fd = openSync(file, constants.O_RDONLY | constants.O_NONBLOCK);
-  } catch (error) {
-    throw new InputError(fileSystemProblem(file, error, messages));
+function faultProblem(file: string, fault: FileFault, limitBytes: number, messages: FileMessages): InputProblem {
+  switch (fault.kind) {
+    case 'missing':
+      return messages.fileMissing(file);
+    case 'dangling-link':
+      return messages.badLink(file, 'dangling');
+    case 'link-loop':
+      return messages.badLink(file, 'loop');
+    case 'name-too-long':
+      return messages.nameTooLong(file);
+    case 'directory':
+    case 'special file':
+      return messages.notAFile(file, fault.kind);
+    case 'too-large':
+      return messages.tooLarge(file, fault.bytes, limitBytes);
+    case 'unreadable':
+      return messages.unreadable(file, fault.reason);
   }
-  try {
-    const stats = fstatSync(fd);
-    if (stats.isDirectory()) throw new InputError(messages.notAFile(file, 'directory'));
-    if (!stats.isFile()) throw new InputError(messages.notAFile(file, 'special file'));
-    if (stats.size > limitBytes) throw new InputError(messages.tooLarge(file, stats.size, limitBytes));
-    const bytes = readFileSync(fd);
-    // The file may have grown since fstat.
-    if (bytes.length > limitBytes) throw new InputError(messages.tooLarge(file, bytes.length, limitBytes));
-    return bytes;
-  } catch (error) {
-    if (error instanceof InputError) throw error;
-    throw new InputError(fileSystemProblem(file, error, messages));
-  } finally {
-    closeSync(fd);
-  }
-}
-
-function fileSystemProblem(file: string, error: unknown, messages: FileMessages): InputProblem {
-  const code = error instanceof Error && 'code' in error ? String(error.code) : 'unknown error';
-  if (code === 'ENOENT' || code === 'ENOTDIR') return messages.fileMissing(file);
-  if (code === 'EISDIR') return messages.notAFile(file, 'directory');
-  return messages.unreadable(file, code);
 }

@@ -102,6 +102,7 @@ function seriesPlan(
     vintage: entry.vintage,
     file: resolvePath(baseDir, entry.file),
     fileAsWritten: entry.file,
+    fileAt: placeOf(`series[${index}].file`),
     periodColumn: entry.period_column,
     column: entry.column,
     frequency: entry.frequency,

@@ -104,14 +104,21 @@ export const configMessages = {
   notAFile(file: string, kind: 'directory' | 'special file'): InputProblem {
     return problem('config.not-a-file', `is a ${kind}, not a regular file`, 'give the path of a .yaml config file', { file });
   },
+  badLink(file: string, kind: 'dangling' | 'loop'): InputProblem {
+    const what = kind === 'dangling' ? 'is a symbolic link to a file that does not exist' : 'is a symbolic link that leads back to itself';
+    return problem('config.bad-link', what, 'point the link at the .yaml config file, or name the file itself', { file });
+  },
+  nameTooLong(file: string): InputProblem {
+    return problem('config.name-too-long', 'is a path too long for the file system', 'move the config to a shorter path', { file });
+  },
   unreadable(file: string, reason: string): InputProblem {
     return problem('config.unreadable', `cannot be read (${reason})`, 'check that the file exists and that you may read it', { file });
   },
   tooLarge(file: string, bytes: number, limitBytes: number): InputProblem {
     return problem('config.too-large', `is ${bytes} bytes, above the ${limitBytes / MEBIBYTE} MB limit for a config file`, CONFIG_SIZE_HINT, { file });
   },
-  notUtf8(file: string): InputProblem {
-    return problem('config.not-utf8', 'is not UTF-8 text', 'save the file with UTF-8 encoding', { file });
+  notUtf8(file: string, at: { line: number; column: number }): InputProblem {
+    return problem('config.not-utf8', 'is not UTF-8 text from here on', 'save the file with UTF-8 encoding', { file, ...at });
   },
   empty(file: string): InputProblem {
     return problem('config.empty', 'holds no settings', 'write the memo and series sections; trendbrief init writes a starter config', {
@@ -165,6 +172,9 @@ export const configMessages = {
   },
   emptyText(at: InputLocation): InputProblem {
     return problem('config.empty-text', 'is empty text', 'write a value, or remove the key', at);
+  },
+  blankText(at: InputLocation): InputProblem {
+    return problem('config.blank-text', 'holds only blank space', 'write the text it should say, or remove the key', at);
   },
   tooLong(at: InputLocation, length: number, max: number): InputProblem {
     return problem('config.too-long', `is ${length} characters long; at most ${max} are allowed`, 'shorten it', at);

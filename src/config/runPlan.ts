@@ -28,6 +28,8 @@ export interface SeriesPlan {
   file: string;
   /** The path as written in the config. */
   fileAsWritten: string;
+  /** Where the config writes the path (`series[0].file`); absent only in plans made by hand. */
+  fileAt?: ConfigPlace;
   periodColumn?: string;
   column?: string;
   frequency?: Frequency;

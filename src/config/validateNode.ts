@@ -100,6 +100,8 @@ function validateText(spec: TextSpec, node: YamlNode, field: string, v: Validati
   const length = [...value].length;
   if (length === 0) return reject(v, configMessages.emptyText(at));
   if (length > spec.maxLength) return reject(v, configMessages.tooLong(at, length, spec.maxLength));
+  // Free text is printed as a title, a name or a note: blank space alone says nothing.
+  if (value.trim() === '') return reject(v, configMessages.blankText(at));
   if (new RegExp(textPattern(spec.form), 'u').test(value)) {
     if (spec.form === 'date' && !isCalendarDay(value)) return reject(v, configMessages.noSuchDay(at, value));
     return value;

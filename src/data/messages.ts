@@ -1,6 +1,7 @@
 // What the data stage says about series files: CSV structure, periods, values, and the series
 // as a whole. Each function returns a complete problem, so code, wording and hint stay together.
-import { abbreviateList, codePointName, MEBIBYTE, plural, problem, quoted, roughly, type InputLocation, type InputProblem } from '../base/problem.js';
+import { abbreviateList, codePointName, MEBIBYTE, plural, problem, roughly, type InputLocation, type InputProblem } from '../base/problem.js';
+import { quotedCell } from '../base/quotedCell.js';
 
 const PERIOD_FORMS = 'write periods as 2003 (annual), 2003-Q1 (quarterly) or 2003-01 (monthly)';
 const MISSING_HINT = 'fill in the observed value, or allow missing values (missing: allow in the config, --allow-missing for fit)';
@@ -15,7 +16,17 @@ const CSV_SYNTAX_DETAILS: Readonly<Record<string, string>> = {
 
 export const dataMessages = {
   fileMissing(file: string): InputProblem {
-    return problem('csv.file-missing', 'file not found', 'check the path and its spelling', { file });
+    return problem('csv.file-missing', 'was not found', 'check the path and its spelling', { file });
+  },
+  badLink(file: string, kind: 'dangling' | 'loop'): InputProblem {
+    const what = kind === 'dangling' ? 'is a symbolic link to a file that does not exist' : 'is a symbolic link that leads back to itself';
+    return problem('csv.bad-link', what, 'point the link at the .csv file, or name the file itself', { file });
+  },
+  nameTooLong(file: string): InputProblem {
+    return problem('csv.name-too-long', 'is a path too long for the file system', 'move the file to a shorter path', { file });
+  },
+  webAddress(file: string): InputProblem {
+    return problem('csv.web-address', 'is a web address; only files on this computer are read', 'download the file and name the local copy', { file });
   },
   notAFile(file: string, kind: 'directory' | 'special file'): InputProblem {
     return problem('csv.not-a-file', `is a ${kind}, not a regular file`, 'give the path of a .csv file', { file });
@@ -34,8 +45,8 @@ export const dataMessages = {
       { file },
     );
   },
-  notUtf8(file: string): InputProblem {
-    return problem('csv.not-utf8', 'is not UTF-8 text', 'save the file with UTF-8 encoding', { file });
+  notUtf8(file: string, at: { line: number; column: number }): InputProblem {
+    return problem('csv.not-utf8', 'is not UTF-8 text from here on', 'save the file with UTF-8 encoding', { file, ...at });
   },
   csvSyntax(file: string, line: number | undefined, csvCode: string): InputProblem {
     const detail = CSV_SYNTAX_DETAILS[csvCode] ?? `the CSV structure is broken (${csvCode})`;
@@ -55,7 +66,7 @@ export const dataMessages = {
   headerLooksLikeData(at: InputLocation, cell: string): InputProblem {
     return problem(
       'csv.no-header',
-      `the first line holds ${quoted(cell)}, which is data, not a column name`,
+      `the first line holds ${quotedCell(cell)}, which is data, not a column name`,
       'add a header line naming the columns, such as period,value',
       at,
     );
@@ -64,11 +75,11 @@ export const dataMessages = {
     const hint = /[;\t]/.test(name)
       ? 'separate cells with commas (this file seems to use semicolons or tabs)'
       : 'add a value column: each line needs a period and a value';
-    return problem('csv.one-column', `has a single column ${quoted(name)}`, hint, at);
+    return problem('csv.one-column', `has a single column ${quotedCell(name)}`, hint, at);
   },
   unknownColumn(at: InputLocation, name: string, columns: readonly string[], suggestion: string | undefined): InputProblem {
-    const hint = suggestion === undefined ? 'use one of the column names above' : `did you mean ${quoted(suggestion)}?`;
-    return problem('csv.unknown-column', `no column with this name; the columns are ${columns.map(quoted).join(', ')}`, hint, {
+    const hint = suggestion === undefined ? 'use one of the column names above' : `did you mean ${quotedCell(suggestion)}?`;
+    return problem('csv.unknown-column', `no column with this name; the columns are ${abbreviateList(columns.map(quotedCell))}`, hint, {
       ...at,
       field: name,
     });
@@ -115,27 +126,27 @@ export const dataMessages = {
   badPeriod(at: InputLocation, label: string): InputProblem {
     const date = /^(\d{4})-(\d{2})-\d{2}$/.exec(label);
     const hint = date === null ? PERIOD_FORMS : `write a month without its day, e.g. ${date[1]}-${date[2]}`;
-    return problem('csv.bad-period', `${quoted(label)} is not a period`, hint, at);
+    return problem('csv.bad-period', `${quotedCell(label)} is not a period`, hint, at);
   },
   emptyValue(at: InputLocation): InputProblem {
     return problem('csv.missing-value', 'the value cell is empty', MISSING_HINT, at);
   },
   missingMarker(at: InputLocation, text: string): InputProblem {
-    return problem('csv.missing-value', `${quoted(text)} marks a missing value`, MISSING_HINT, at);
+    return problem('csv.missing-value', `${quotedCell(text)} marks a missing value`, MISSING_HINT, at);
   },
   nonFinite(at: InputLocation, text: string): InputProblem {
-    return problem('csv.non-finite', `${quoted(text)} is not a finite number`, 'replace it with the observed value', at);
+    return problem('csv.non-finite', `${quotedCell(text)} is not a finite number`, 'replace it with the observed value', at);
   },
   badValue(at: InputLocation, text: string): InputProblem {
     const hint = text.includes(',')
       ? 'write decimals with a point and no thousands separators, e.g. 1234.5'
       : 'write a plain number such as 1234.5, without units or symbols';
-    return problem('csv.bad-value', `${quoted(text)} is not a number`, hint, at);
+    return problem('csv.bad-value', `${quotedCell(text)} is not a number`, hint, at);
   },
   frequencyMismatch(at: InputLocation, label: string, found: string, expected: string, lines: readonly number[]): InputProblem {
     return problem(
       'csv.frequency-mismatch',
-      `period ${quoted(label)} is ${found}, but the frequency is set to ${expected}${disagreeing(lines)}`,
+      `period ${quotedCell(label)} is ${found}, but the frequency is set to ${expected}${disagreeing(lines)}`,
       `set the frequency to ${found}, or write every period in the ${expected} form`,
       at,
     );
@@ -149,7 +160,7 @@ export const dataMessages = {
   ): InputProblem {
     return problem(
       'csv.mixed-frequency',
-      `period ${quoted(label)} is ${found}, but the first period ${quoted(first.label)} (line ${first.line}) is ${first.frequency}${disagreeing(lines)}`,
+      `period ${quotedCell(label)} is ${found}, but the first period ${quotedCell(first.label)} (line ${first.line}) is ${first.frequency}${disagreeing(lines)}`,
       'write every period with the same frequency: one file holds one series',
       at,
     );
@@ -235,6 +246,13 @@ export const dataMessages = {
       'express the series in smaller units (multiply it by a power of ten), or check that the right column is chosen',
       at,
     );
+  },
+  /**
+   * A series file that cannot be read at all (missing, not a regular file, too large), told at
+   * the config's `file:` entry that names it, with the path as written there.
+   */
+  atFileEntry(about: InputProblem, written: string, entry: { file: string; line: number; column: number; field: string }): InputProblem {
+    return { ...about, ...entry, message: `${quotedCell(written)} ${about.message}` };
   },
   /** A problem with a series file as a whole, told with the config entry that names the file. */
   namedBy(about: InputProblem, entry: { file: string; line: number; column: number; field: string }): InputProblem {

@@ -1,8 +1,9 @@
 // The parts of a record document (record.json) that the monthly comparison reads, and a
 // reader that accepts a file from an earlier run only when those parts have the right shape:
-// a folder whose record.json is missing, unreadable or of another shape is skipped, never
-// trusted.
-import { readFileSync } from 'node:fs';
+// a folder whose record.json is missing, unreadable, not a regular file (a FIFO, a link to
+// /dev/zero: never opened, so it cannot make the run wait) or of another shape is skipped,
+// never trusted.
+import { MAX_RUN_DOCUMENT_BYTES, readRegularFile } from '../base/readRegularFile.js';
 import { sha256 } from './manifest.js';
 import type { TrendModelKind } from '../base/settings.js';
 import { RECORD_DOCUMENT_SCHEMA, type SeriesHistory } from './recordDocument.js';
@@ -89,12 +90,9 @@ export function isComparableDocument(value: unknown): value is ComparableDocumen
 
 /** A record.json written by an earlier run, with the SHA-256 of its bytes; null when it is missing or not a record document. */
 export function readComparableDocument(file: string): { document: ComparableDocument; sha256: string } | null {
-  let bytes: Buffer;
-  try {
-    bytes = readFileSync(file);
-  } catch {
-    return null;
-  }
+  const read = readRegularFile(file, MAX_RUN_DOCUMENT_BYTES);
+  if (read.fault !== undefined) return null;
+  const { bytes } = read;
   let value: unknown;
   try {
     value = JSON.parse(new TextDecoder('utf-8', { fatal: true }).decode(bytes));

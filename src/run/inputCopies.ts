@@ -3,9 +3,9 @@
 // byte under inputs/<role>/ with its own file name, so an archived folder can be verified,
 // reviewed and rerun with nothing outside it. Copying is generic: whatever role an input has,
 // it is copied the same way.
-import { readFileSync } from 'node:fs';
 import { basename, resolve } from 'node:path';
 import { InputError } from '../base/problem.js';
+import { MAX_RUN_DOCUMENT_BYTES, readRegularFile } from '../base/readRegularFile.js';
 import { shownPath } from '../base/shownPath.js';
 import { inputDigest, type ManifestInput } from './manifest.js';
 import { copyMessages } from './messages.js';
@@ -48,12 +48,10 @@ export function inputCopyFiles(from: string, inputs: readonly ManifestInput[], a
   for (const input of inputs) {
     if (input.copy === undefined || files.has(input.copy)) continue;
     const path = resolve(from, at === 'copy' ? input.copy : input.from_output);
-    let bytes: Buffer;
-    try {
-      bytes = readFileSync(path);
-    } catch {
-      throw new InputError(copyMessages.unreadable(shownPath(path), input.role));
-    }
+    // Only a regular file is read: a FIFO or a device put in an input's place never makes the run wait.
+    const read = readRegularFile(path, MAX_RUN_DOCUMENT_BYTES);
+    if (read.fault !== undefined) throw new InputError(copyMessages.unreadable(shownPath(path), input.role));
+    const { bytes } = read;
     if (inputDigest(input.role, bytes) !== input.sha256) throw new InputError(copyMessages.changed(shownPath(path), input.role, input.sha256));
     files.set(input.copy, { name: input.copy, content: bytes });
   }

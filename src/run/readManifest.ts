@@ -1,9 +1,10 @@
 // manifest.json read back for verify and review: every field they rely on is checked, and a
 // manifest from before inputs carried `from_output` is named as such rather than half-verified.
 // An input's `copy` is optional (manifests written before memo folders carried their inputs
-// lack it) but, when present, must lie under inputs/ in the memo folder.
-import { readFileSync } from 'node:fs';
+// lack it) but, when present, must lie under inputs/ in the memo folder. Only a regular file
+// of bounded size is read, so a FIFO or a device in its place is refused, never waited on.
 import { InputError, type InputProblem } from '../base/problem.js';
+import { MAX_RUN_DOCUMENT_BYTES, readRegularFile } from '../base/readRegularFile.js';
 import { INPUTS_FOLDER } from './inputCopies.js';
 import { verifyMessages } from './messages.js';
 import { MANIFEST_SCHEMA, type InputRole, type Manifest, type ManifestInput, type ManifestOutput } from './manifest.js';
@@ -33,9 +34,11 @@ function isCopyPlace(value: unknown): value is string {
 }
 
 export function readManifest(file: string, shown: string): Manifest {
+  const read = readRegularFile(file, MAX_RUN_DOCUMENT_BYTES);
+  if (read.fault !== undefined) throw new InputError(verifyMessages.badManifest(shown, 'manifest.json', 'a regular file of JSON'));
   let value: unknown;
   try {
-    value = JSON.parse(readFileSync(file, 'utf8'));
+    value = JSON.parse(new TextDecoder('utf-8', { fatal: true }).decode(read.bytes));
   } catch {
     throw new InputError(verifyMessages.badManifest(shown, 'manifest.json', 'JSON'));
   }

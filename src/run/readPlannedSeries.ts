@@ -20,9 +20,18 @@ export interface PlannedSeries {
   asOfGap?: NonNullable<AsOfCheck['gap']>;
 }
 
+/** `scheme://`, as RFC 3986 writes a URI's scheme. */
+const WEB_ADDRESS = /^[A-Za-z][A-Za-z0-9+.-]*:\/\//;
+
+/** Problems with a series file that could not be read at all: reported at the config's `file:` entry. */
+const UNREADABLE_FILE: ReadonlySet<string> = new Set(['csv.file-missing', 'csv.not-a-file', 'csv.bad-link', 'csv.name-too-long', 'csv.unreadable', 'csv.too-large']);
+
 /** `configFile` names the config in messages about the series file as a whole (missing, too large) and about its settings. */
 export function readPlannedSeries(plan: SeriesPlan, configFile: string): PlannedSeries {
   const reading = readingSettings(plan.settings);
+  const entry = { file: configFile, ...(plan.fileAt ?? { ...plan.at, field: `${plan.at.field}.file` }) };
+  // A web address would otherwise be read as a relative path and reported as a missing file.
+  if (WEB_ADDRESS.test(plan.fileAsWritten)) throw new InputError(dataMessages.atFileEntry(dataMessages.webAddress(shownPath(plan.file)), plan.fileAsWritten, entry));
   let series: Series;
   try {
     series = readSeriesCsv(shownPath(plan.file), {
@@ -36,7 +45,13 @@ export function readPlannedSeries(plan: SeriesPlan, configFile: string): Planned
   } catch (error) {
     if (!(error instanceof InputError)) throw error;
     const named = { file: configFile, ...plan.at };
-    throw new InputError(error.problems.map((problem) => (problem.line === undefined && problem.field === undefined ? dataMessages.namedBy(problem, named) : problem)));
+    throw new InputError(
+      error.problems.map((problem) =>
+        UNREADABLE_FILE.has(problem.code) ? dataMessages.atFileEntry(problem, plan.fileAsWritten, entry)
+        : problem.line === undefined && problem.field === undefined ? dataMessages.namedBy(problem, named)
+        : problem,
+      ),
+    );
   }
   // A setting the config leaves out is reported at the series entry it applies to.
   const placeOf = (key: string): InputLocation => ({ file: configFile, ...(plan.settingPlaces.get(key) ?? { ...plan.at, field: `${plan.at.field}.${key}` }) });

@@ -10,11 +10,12 @@
 // The rerun goes through the code `run` uses, and writes nothing. Void sign-offs do not change
 // the exit code: the rendered status is rebuilt from the valid ones, so a void one shown as
 // counting is a memo.html difference (exit 3).
-import { existsSync, readFileSync } from 'node:fs';
+import { existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { parse } from 'csv-parse/sync';
 import { toolVersion } from '../base/toolVersion.js';
 import { InputError, type InputProblem } from '../base/problem.js';
+import { MAX_RUN_DOCUMENT_BYTES, readRegularFile } from '../base/readRegularFile.js';
 import { shownPath } from '../base/shownPath.js';
 import { assembleMemo } from './assembleMemo.js';
 import { compareJson, TOLERANCE_TEXT, type Difference } from './compareJson.js';
@@ -37,12 +38,10 @@ export interface VerifyResult {
 
 const ROLE_NAME: Record<ManifestInput['role'], string> = { config: 'config', data: 'data file', 'earlier-record': 'earlier record' };
 
+/** Null unless a regular file within the bound: a FIFO or a device in an input's place is never opened. */
 function readBytes(path: string): Buffer | null {
-  try {
-    return readFileSync(path);
-  } catch {
-    return null;
-  }
+  const read = readRegularFile(path, MAX_RUN_DOCUMENT_BYTES);
+  return read.fault === undefined ? read.bytes : null;
 }
 
 /** Copies must be there with their digest; originals that are there must have it too. Returns the originals found and missing. */

@@ -67,7 +67,7 @@ describe('size limits', () => {
     const refused = await check(join(root, 'memo.yaml'));
     expect(refused.code).toBe(2);
     expect(refused.stderr).toBe(
-      `${series}: is 20.1 MB, above the 20 MB limit for a series file; keep only the period column and the value columns you need (the file of series[0], ${join(root, 'memo.yaml')}:10:5)\n`,
+      `${join(root, 'memo.yaml')}:13:11: series[0].file: 'data/cargo.csv' is 20.1 MB, above the 20 MB limit for a series file; keep only the period column and the value columns you need\n`,
     );
     cpSync(join(HARDENING_FIXTURES, 'base/data/cargo.csv'), series);
   });

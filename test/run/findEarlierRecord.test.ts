@@ -1,6 +1,7 @@
 // Which as-of memo a run compares with: the latest earlier one by period order, skipping
 // folders without a valid record.json (our spec: src/run/findEarlierRecord.ts).
-import { mkdirSync, mkdtempSync, utimesSync, writeFileSync } from 'node:fs';
+import { execFileSync } from 'node:child_process';
+import { mkdirSync, mkdtempSync, symlinkSync, utimesSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
@@ -62,6 +63,18 @@ describe('findEarlierRecord', () => {
     expect(findEarlierRecord(root, 'lake-outlook', '2025-12')).toBeNull();
     expect(findEarlierRecord(join(root, 'absent'), 'lake-outlook', '2025-12')).toBeNull();
     expect(asOfFolders(root)).toEqual(['2025-11', '2025-10', '2025-09']);
+  });
+
+  it('skips, without opening, a record.json that is a FIFO, a link to /dev/zero or a folder', () => {
+    const root = mkdtempSync(join(tmpdir(), 'tb-earlier-'));
+    asOfFolder(root, '2025-08', recordDocument('lake-outlook', '2025-08'));
+    asOfFolder(root, '2025-09', undefined);
+    execFileSync('mkfifo', [join(root, '2025-09', 'record.json')]);
+    asOfFolder(root, '2025-10', undefined);
+    symlinkSync('/dev/zero', join(root, '2025-10', 'record.json'));
+    mkdirSync(join(root, '2025-11', 'record.json'), { recursive: true });
+    // Opened blocking, the FIFO would wait for a writer and /dev/zero fill memory: the test would hang.
+    expect(findEarlierRecords(root, 'lake-outlook', '2025-12').map((memo) => memo.asOf)).toEqual(['2025-08']);
   });
 });
 
