@@ -71,6 +71,12 @@ export function readRegularFile(file: string, limitBytes: number): FileRead {
   }
 }
 
+/** The bytes, or null for anything but a regular file within the bound: for files a missing one of which is no error. */
+export function regularFileBytes(file: string, limitBytes: number): Buffer | null {
+  const read = readRegularFile(file, limitBytes);
+  return read.fault === undefined ? read.bytes : null;
+}
+
 /** Reads to the end, but never more than one byte past the limit: the file may have grown since fstat. */
 function readBounded(fd: number, limitBytes: number): FileRead {
   const chunks: Buffer[] = [];

@@ -3,7 +3,7 @@
 // a folder whose record.json is missing, unreadable, not a regular file (a FIFO, a link to
 // /dev/zero: never opened, so it cannot make the run wait) or of another shape is skipped,
 // never trusted.
-import { MAX_RUN_DOCUMENT_BYTES, readRegularFile } from '../base/readRegularFile.js';
+import { MAX_RUN_DOCUMENT_BYTES, regularFileBytes } from '../base/readRegularFile.js';
 import { sha256 } from './manifest.js';
 import type { TrendModelKind } from '../base/settings.js';
 import { RECORD_DOCUMENT_SCHEMA, type SeriesHistory } from './recordDocument.js';
@@ -90,9 +90,8 @@ export function isComparableDocument(value: unknown): value is ComparableDocumen
 
 /** A record.json written by an earlier run, with the SHA-256 of its bytes; null when it is missing or not a record document. */
 export function readComparableDocument(file: string): { document: ComparableDocument; sha256: string } | null {
-  const read = readRegularFile(file, MAX_RUN_DOCUMENT_BYTES);
-  if (read.fault !== undefined) return null;
-  const { bytes } = read;
+  const bytes = regularFileBytes(file, MAX_RUN_DOCUMENT_BYTES);
+  if (bytes === null) return null;
   let value: unknown;
   try {
     value = JSON.parse(new TextDecoder('utf-8', { fatal: true }).decode(bytes));

@@ -4,7 +4,7 @@
 // lack it) but, when present, must lie under inputs/ in the memo folder. Only a regular file
 // of bounded size is read, so a FIFO or a device in its place is refused, never waited on.
 import { InputError, type InputProblem } from '../base/problem.js';
-import { MAX_RUN_DOCUMENT_BYTES, readRegularFile } from '../base/readRegularFile.js';
+import { MAX_RUN_DOCUMENT_BYTES, regularFileBytes } from '../base/readRegularFile.js';
 import { INPUTS_FOLDER } from './inputCopies.js';
 import { verifyMessages } from './messages.js';
 import { MANIFEST_SCHEMA, type InputRole, type Manifest, type ManifestInput, type ManifestOutput } from './manifest.js';
@@ -34,11 +34,11 @@ function isCopyPlace(value: unknown): value is string {
 }
 
 export function readManifest(file: string, shown: string): Manifest {
-  const read = readRegularFile(file, MAX_RUN_DOCUMENT_BYTES);
-  if (read.fault !== undefined) throw new InputError(verifyMessages.badManifest(shown, 'manifest.json', 'a regular file of JSON'));
+  const bytes = regularFileBytes(file, MAX_RUN_DOCUMENT_BYTES);
+  if (bytes === null) throw new InputError(verifyMessages.badManifest(shown, 'manifest.json', 'a regular file of JSON'));
   let value: unknown;
   try {
-    value = JSON.parse(new TextDecoder('utf-8', { fatal: true }).decode(read.bytes));
+    value = JSON.parse(new TextDecoder('utf-8', { fatal: true }).decode(bytes));
   } catch {
     throw new InputError(verifyMessages.badManifest(shown, 'manifest.json', 'JSON'));
   }

@@ -3,7 +3,8 @@
 // config under memo.reviewers[].public_key), a private key read back for `review --key`, and
 // the signature of a sign-off entry.
 import { createPrivateKey, createPublicKey, generateKeyPairSync, sign, type KeyObject } from 'node:crypto';
-import { mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdirSync, rmSync, writeFileSync } from 'node:fs';
+import { regularFileBytes } from '../base/readRegularFile.js';
 import { join } from 'node:path';
 import { InputError } from '../base/problem.js';
 import { shownPath } from '../base/shownPath.js';
@@ -49,8 +50,9 @@ export function writeKeyPair(folder: string): KeyPairFiles {
 /** An Ed25519 private key from a PEM file; refused (exit 2) when it is anything else. */
 export function readPrivateKey(file: string): KeyObject {
   try {
-    const text = readFileSync(file);
-    if (text.byteLength > MAX_KEY_BYTES) throw new Error('too large');
+    // Only a regular file within the bound is read: a FIFO or /dev/zero named as the key never makes review wait.
+    const text = regularFileBytes(file, MAX_KEY_BYTES);
+    if (text === null) throw new Error('not a regular file within the bound');
     const key = createPrivateKey(text);
     if (key.asymmetricKeyType === 'ed25519') return key;
   } catch {

@@ -2,7 +2,7 @@
 // recorded act, numbered from 1 in the order recorded. It is only ever appended to (`review`
 // writes the old bytes followed by one new line); nothing rewrites an entry. A memo is issued
 // once a reviewer's decision is recorded on it, that is once its log has a line.
-import { readFileSync } from 'node:fs';
+import { MAX_RUN_DOCUMENT_BYTES, regularFileBytes } from '../base/readRegularFile.js';
 import { join } from 'node:path';
 import type { RecordedSignOff, ReviewDecision } from '../memo/reviewPart.js';
 
@@ -85,13 +85,10 @@ export function parseSignOffLog(text: string): SignOffLog {
 
 /** The log of a memo folder; an empty log when it has none. */
 export function readSignOffLog(folder: string): SignOffLog {
-  let text: string;
-  try {
-    text = readFileSync(join(folder, SIGN_OFF_LOG), 'utf8');
-  } catch {
-    return { entries: [], unreadable: [], text: '' };
-  }
-  return parseSignOffLog(text);
+  // Only a regular file is read, so a FIFO in the log's place cannot make review wait.
+  const bytes = regularFileBytes(join(folder, SIGN_OFF_LOG), MAX_RUN_DOCUMENT_BYTES);
+  if (bytes === null) return { entries: [], unreadable: [], text: '' };
+  return parseSignOffLog(bytes.toString('utf8'));
 }
 
 /** The number the next entry gets: one past the log's lines, readable or not. */

@@ -2,7 +2,8 @@
 // manifest, the bytes of the outputs the manifest lists, the content digest of what is stored
 // (the inputs' recorded digests and the stored record.json and forecasts.csv), its sign-off
 // log and its supersession note.
-import { existsSync, readFileSync } from 'node:fs';
+import { existsSync } from 'node:fs';
+import { MAX_RUN_DOCUMENT_BYTES, regularFileBytes } from '../base/readRegularFile.js';
 import { join } from 'node:path';
 import { shownPath } from '../base/shownPath.js';
 import type { OutputFormat } from '../config/runPlan.js';
@@ -36,7 +37,9 @@ export function readStoredMemo(folder: string): StoredMemo | null {
   const stored = new Map<string, Buffer>();
   for (const output of manifest.outputs) {
     const path = join(folder, output.file);
-    if (existsSync(path)) stored.set(output.file, readFileSync(path));
+    // Only a regular file is read: a FIFO or a device in an output's place counts as missing.
+    const bytes = regularFileBytes(path, MAX_RUN_DOCUMENT_BYTES);
+    if (bytes !== null) stored.set(output.file, bytes);
   }
   return { folder, manifestFile, manifest, stored, digest: contentDigest(manifest.inputs, stored), log: readSignOffLog(folder), supersedes: readSupersedes(folder) };
 }

@@ -2,7 +2,7 @@
 // `verify` render the same note without the earlier revision at hand. Written by a run with
 // --new-revision, read back with its shape checked; it is outside the content digest (the
 // numbers do not depend on it) and listed in the manifest with its SHA-256.
-import { readFileSync } from 'node:fs';
+import { MAX_RUN_DOCUMENT_BYTES, regularFileBytes } from '../base/readRegularFile.js';
 import { join } from 'node:path';
 import { InputError } from '../base/problem.js';
 import { shownPath } from '../base/shownPath.js';
@@ -50,12 +50,10 @@ function isSupersedes(value: unknown): value is Supersedes {
 /** The folder's supersession note; null when the memo supersedes nothing. */
 export function readSupersedes(folder: string): Supersedes | null {
   const file = join(folder, SUPERSEDES_FILE);
-  let text: string;
-  try {
-    text = readFileSync(file, 'utf8');
-  } catch {
-    return null;
-  }
+  // Only a regular file is read, so a FIFO in the note's place cannot make a run wait.
+  const bytes = regularFileBytes(file, MAX_RUN_DOCUMENT_BYTES);
+  if (bytes === null) return null;
+  const text = bytes.toString('utf8');
   let value: unknown;
   try {
     value = JSON.parse(text);

@@ -15,7 +15,7 @@ import { join, resolve } from 'node:path';
 import { parse } from 'csv-parse/sync';
 import { toolVersion } from '../base/toolVersion.js';
 import { InputError, type InputProblem } from '../base/problem.js';
-import { MAX_RUN_DOCUMENT_BYTES, readRegularFile } from '../base/readRegularFile.js';
+import { MAX_RUN_DOCUMENT_BYTES, regularFileBytes } from '../base/readRegularFile.js';
 import { shownPath } from '../base/shownPath.js';
 import { assembleMemo } from './assembleMemo.js';
 import { compareJson, TOLERANCE_TEXT, type Difference } from './compareJson.js';
@@ -40,8 +40,7 @@ const ROLE_NAME: Record<ManifestInput['role'], string> = { config: 'config', dat
 
 /** Null unless a regular file within the bound: a FIFO or a device in an input's place is never opened. */
 function readBytes(path: string): Buffer | null {
-  const read = readRegularFile(path, MAX_RUN_DOCUMENT_BYTES);
-  return read.fault === undefined ? read.bytes : null;
+  return regularFileBytes(path, MAX_RUN_DOCUMENT_BYTES);
 }
 
 /** Copies must be there with their digest; originals that are there must have it too. Returns the originals found and missing. */
