@@ -163,7 +163,8 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
     }
   } finally {
     progress.finish();
-    if (printer !== undefined) await (await printer).close();
+    // A browser that failed to start was reported by each memo that needed it; report it once.
+    if (printer !== undefined) await printer.then((opened) => opened.close(), () => undefined);
     if (pool !== undefined) await pool.close();
   }
   if (!quiet) io.stdout(summaryTable(outcomes));

@@ -6,6 +6,7 @@
 import { readdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { parsePeriod, periodsPerYear } from '../base/period.js';
+import { isMemoLink } from './memoVersions.js';
 import { readComparableDocument, type ComparableDocument } from './comparableDocument.js';
 
 export interface EarlierRecord {
@@ -79,7 +80,7 @@ export function findEarlierRecord(memoIdFolder: string, memoId: string, asOf: st
 export function asOfFolders(memoIdFolder: string): string[] {
   try {
     return readdirSync(memoIdFolder, { withFileTypes: true })
-      .filter((entry) => entry.isDirectory() && monthSpan(entry.name) !== null)
+      .filter((entry) => (entry.isDirectory() || isMemoLink(join(memoIdFolder, entry.name))) && monthSpan(entry.name) !== null)
       .map((entry) => entry.name)
       .sort(byRecency);
   } catch {

@@ -2,7 +2,7 @@
 //   loadConfig ─▶ RunPlan ─checkRunPaths─▶ <output>/<memo id>/<as-of>/ (or <output>/<memo id>/)
 //   ─findEarlierRecord (the previous as-of memo beside it)─▶ prepareMemo ─▶ record document
 //   ─contentDigest─▶ publication (an issued memo kept, revised or left alone) ─assembleMemo─▶ files
-//   ─writeOutputFolder─▶ the folder (complete, or the previous one left as it was)
+//   ─writeOutputFolder─▶ the memo (its name linked to the complete new version, or to the previous one)
 import { loadConfig } from '../config/loadConfig.js';
 import type { OutputFormat } from '../config/runPlan.js';
 import { InputError, type InputProblem } from '../base/problem.js';
@@ -21,7 +21,8 @@ import { attachTrackRecord } from './trackRecord.js';
 import { recordedCommand } from './recordedCommand.js';
 import { runDate } from './runDate.js';
 import type { SeriesPool } from './seriesPool.js';
-import { recoverOutputFolder, writeOutputFolder } from './writeOutputFolder.js';
+import { writeOutputFolder } from './writeOutputFolder.js';
+import { recoverMemoLink } from './memoVersions.js';
 import { shownPath } from '../base/shownPath.js';
 
 export interface RunMemoOptions {
@@ -62,9 +63,6 @@ export interface MemoRunResult {
 export async function runMemo(configFile: string, options: RunMemoOptions = {}): Promise<MemoRunResult> {
   const plan = loadConfig(configFile);
   const paths = checkRunPaths(plan, options.outputFolder);
-  // Put back an earlier memo left under its backup name by a killed run, before anything else
-  // (findEarlierRecord and a failing run must see it where it belongs).
-  recoverOutputFolder(paths.memoFolder);
   const { asOf } = plan.memo;
   // Without an as-of period the memo replaces <memo id>/ as a whole, which would delete the monthly memos in it.
   const monthly = asOf === undefined ? asOfFolders(paths.idFolder) : [];
@@ -82,6 +80,8 @@ export async function runMemo(configFile: string, options: RunMemoOptions = {}):
   // An issued memo is kept, revised or left alone (exit 2) before anything is rendered; no
   // review may record a sign-off between reading the folder and replacing it.
   const { publish, files } = await withMemoLock(paths.memoFolder, async () => {
+    // A killed run's leftovers are cleared and the memo's name linked to its complete version first.
+    recoverMemoLink(paths.memoFolder);
     const publish = publication(paths.memoFolder, { inputs, document, content, digest }, options.newRevision === true);
     const { files } = await assembleMemo(plan, loaded, document, {
       formats,
@@ -93,7 +93,7 @@ export async function runMemo(configFile: string, options: RunMemoOptions = {}):
       signOffs: publish.log,
       supersedes: publish.supersedes,
     });
-    writeOutputFolder(paths.memoFolder, [...files, ...publish.carried]);
+    writeOutputFolder(paths.memoFolder, [...files, ...publish.carried], paths.outputFolder);
     return { publish, files };
   }).catch((error: unknown) => {
     // Refusals by the file system (taking the lock, writing the folder) are the user's environment.

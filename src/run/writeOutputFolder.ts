@@ -1,12 +1,18 @@
-// Writes a set of output files so that a reader only ever sees a complete folder: the files
-// go into a hidden temporary folder beside the target, which is renamed into place only once
-// every file is written. A failed or killed run leaves the previous folder as it was.
-//
-// Replacing an existing folder takes two renames (old → backup, temporary → target); a run
-// killed between them leaves the previous folder under its backup name, which the next run
-// puts back before it starts (`recoverOutputFolder`).
-import { existsSync, mkdirSync, readdirSync, renameSync, rmSync, writeFileSync } from 'node:fs';
-import { basename, dirname, join, relative, resolve, sep } from 'node:path';
+// Writes a set of output files so that a reader only ever sees a complete memo, and nothing
+// lands outside the output folder: the files go into a hidden temporary folder beside the
+// memo's name, created afresh and checked to lie inside the real output folder, and are
+// published as the memo's next version by one atomic rename of a link (`memoVersions.ts`).
+// A failed or killed run leaves the previous memo as it was.
+import { mkdirSync, realpathSync, rmSync, writeFileSync } from 'node:fs';
+import { basename, dirname, join, resolve } from 'node:path';
+import { InputError } from '../base/problem.js';
+import { shownPath } from '../base/shownPath.js';
+import { containmentMessages } from './messages.js';
+import { isMemoLink, kindOf, publishVersion, recoverMemoLink, TEMPORARY } from './memoVersions.js';
+import { isInside, makeFolders, realFolderWithin } from './outputTree.js';
+import { pauseAtStep } from './pauseAtStep.js';
+
+export { isInside } from './outputTree.js';
 
 export interface OutputFile {
   /** Path relative to the output folder, with forward slashes. */
@@ -14,57 +20,37 @@ export interface OutputFile {
   content: string | Uint8Array;
 }
 
-const TEMPORARY = '.partial-';
-const BACKUP = '.previous-';
-
-/** Writes `files` into `target` (created or replaced as a whole). */
-export function writeOutputFolder(target: string, files: readonly OutputFile[]): void {
+/**
+ * Writes `files` as the memo at `target` (created or replaced as a whole). Every folder created
+ * and every file written must resolve inside `within` (the output folder; by default the folder
+ * holding `target`), and `target` must be missing or the link a previous publish left.
+ */
+export function writeOutputFolder(target: string, files: readonly OutputFile[], within = dirname(resolve(target))): void {
   const folder = resolve(target);
   const parent = dirname(folder);
-  const name = basename(folder);
-  mkdirSync(parent, { recursive: true });
-  recoverOutputFolder(folder);
-  const temporary = join(parent, `${TEMPORARY}${name}-${process.pid}`);
+  const owner = /^\.(.+)\.v[1-9]\d*$/.exec(basename(folder));
+  if (owner !== null) throw new InputError(containmentMessages.hiddenVersion(shownPath(folder), shownPath(join(parent, owner[1]))));
+  makeFolders(parent);
+  if (realFolderWithin(within, parent) === null) throw new InputError(containmentMessages.leavesOutput(shownPath(parent), shownPath(realpathSync(parent)), shownPath(within)));
+  recoverMemoLink(folder);
+  if (kindOf(folder) !== 'missing' && !isMemoLink(folder)) throw new InputError(containmentMessages.nameTaken(shownPath(folder)));
+  const temporary = join(parent, `${TEMPORARY}${basename(folder)}-${process.pid}`);
   rmSync(temporary, { recursive: true, force: true });
   mkdirSync(temporary);
   try {
+    const real = realpathSync(temporary);
     for (const file of files) {
       const path = resolve(temporary, file.name);
       if (!isInside(temporary, path)) throw new Error(`writeOutputFolder: '${file.name}' would leave the output folder`);
-      mkdirSync(dirname(path), { recursive: true });
-      writeFileSync(path, file.content);
+      makeFolders(dirname(path));
+      // Only folders this run created lie under the temporary folder; a link slipped in meanwhile is refused.
+      if (realFolderWithin(real, dirname(path)) === null) throw new InputError(containmentMessages.leavesOutput(shownPath(dirname(path)), shownPath(realpathSync(dirname(path))), shownPath(within)));
+      writeFileSync(path, file.content, { flag: 'wx' });
     }
-    const backup = join(parent, `${BACKUP}${name}`);
-    if (existsSync(folder)) renameSync(folder, backup);
-    renameSync(temporary, folder);
-    rmSync(backup, { recursive: true, force: true });
+    pauseAtStep('files-written');
+    publishVersion(temporary, folder);
   } catch (error) {
     rmSync(temporary, { recursive: true, force: true });
     throw error;
   }
-}
-
-/**
- * Puts back a previous output folder left under its backup name by a run killed between its
- * two renames, and removes temporary folders of runs that died.
- */
-export function recoverOutputFolder(target: string): void {
-  const folder = resolve(target);
-  const parent = dirname(folder);
-  const name = basename(folder);
-  if (!existsSync(parent)) return;
-  const backup = join(parent, `${BACKUP}${name}`);
-  if (existsSync(backup)) {
-    if (existsSync(folder)) rmSync(backup, { recursive: true, force: true });
-    else renameSync(backup, folder);
-  }
-  for (const entry of readdirSync(parent)) {
-    if (entry.startsWith(`${TEMPORARY}${name}-`)) rmSync(join(parent, entry), { recursive: true, force: true });
-  }
-}
-
-/** True when `path` lies inside `folder` (not equal to it, not above it). */
-export function isInside(folder: string, path: string): boolean {
-  const rel = relative(folder, path);
-  return rel !== '' && !rel.startsWith(`..${sep}`) && rel !== '..' && !rel.startsWith(sep);
 }

@@ -1,10 +1,11 @@
-// A run killed with SIGKILL at any moment leaves the output folder with the earlier memo
-// byte for byte, or a complete new memo whose manifest matches every file; a temporary folder
-// it leaves is hidden and removed by the next run (our spec; DESIGN.md "Output and safety").
+// A run killed with SIGKILL at any moment leaves the memo's name resolving to the earlier memo
+// byte for byte, or to a complete new memo whose manifest matches every file; what it leaves
+// beside the name is hidden and removed by the next run (our spec; DEVELOPERS.md "Publishing").
 // Real child processes run the built program; the kill times are spread over the whole
-// measured duration of a run, drawn from a seeded generator so every test run repeats them.
+// measured duration of a run, drawn from a seeded generator so every test run repeats them,
+// and runs are also held at each named step of publishing (TRENDBRIEF_PAUSE_AT) and killed there.
 import { spawn } from 'node:child_process';
-import { cpSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, renameSync, rmSync, writeFileSync } from 'node:fs';
+import { cpSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { performance } from 'node:perf_hooks';
@@ -22,8 +23,12 @@ const KILLS = 8;
 const SEED = 20260101;
 const MEMO = 'tarnwick-cargo';
 const REVISED_TITLE = 'Tarnwick cargo outlook, revised';
-// A killed run may also leave the memo folder's lock, which the next run takes over (src/run/memoLock.ts).
-const LEFTOVER = new RegExp(`^\\.(partial-${MEMO}-\\d+|previous-${MEMO}|lock-${MEMO})$`);
+// Beside the name: its current version, and what a killed run may leave (a partial folder, a new
+// link not yet renamed, a version not yet linked, the lock), all removed or taken over by the next run.
+const LEFTOVER = new RegExp(`^\\.(partial-${MEMO}-\\d+|link-${MEMO}-\\d+|${MEMO}\\.v\\d+|lock-${MEMO})$`);
+const CURRENT_VERSION = new RegExp(`^\\.${MEMO}\\.v\\d+$`);
+/** Copies keep the memo's name a relative link to its version. */
+const AS_THEY_ARE = { recursive: true, verbatimSymlinks: true } as const;
 
 let build = '';
 let root = '';
@@ -31,26 +36,31 @@ let runMilliseconds = 0;
 let earlierMemo: TreeSnapshot = {};
 const outcomes: string[] = [];
 
-function startRun(config: string): { kill(): void; exited: Promise<number | null> } {
+function startRun(config: string, pauseAt?: string): { kill(): void; exited: Promise<number | null>; paused: Promise<void> } {
   const child = spawn(process.execPath, [join(build, 'bin/trendbrief.js'), 'run', config, '--quiet'], {
     cwd: root,
-    env: { ...process.env, SOURCE_DATE_EPOCH: RUN_EPOCH },
-    stdio: 'ignore',
+    env: { ...process.env, SOURCE_DATE_EPOCH: RUN_EPOCH, ...(pauseAt === undefined ? {} : { TRENDBRIEF_PAUSE_AT: pauseAt }) },
+    stdio: ['ignore', 'ignore', 'pipe'],
   });
   const exited = new Promise<number | null>((settle) => child.on('exit', (code) => settle(code)));
-  return { kill: () => child.kill('SIGKILL'), exited };
+  let stderr = '';
+  const paused = new Promise<void>((settle, fail) => {
+    child.stderr.on('data', (chunk: Buffer) => {
+      stderr += chunk.toString();
+      if (stderr.includes(`paused at ${String(pauseAt)}\n`)) settle();
+    });
+    child.on('exit', (code) => fail(new Error(`the run exited ${String(code)} before pausing: ${stderr}`)));
+  });
+  // Only a held run awaits `paused`; the others must not leave its rejection unhandled.
+  paused.catch(() => undefined);
+  return { kill: () => child.kill('SIGKILL'), exited, paused };
 }
 
-/** The output folder as a killed run left it: 'earlier', 'new' or 'earlier, under its backup name'. */
+/** The output folder as a killed run left it: the memo's name resolves to the 'earlier' memo or the 'new' one. */
 function judgeOutput(out: string): string {
   const entries = readdirSync(out);
   const visible = entries.filter((entry) => !entry.startsWith('.'));
   for (const entry of entries.filter((name) => name.startsWith('.'))) expect(entry).toMatch(LEFTOVER);
-  if (visible.length === 0) {
-    // Killed between the two renames: the earlier memo waits under its backup name.
-    expect(treeSnapshot(join(out, `.previous-${MEMO}`))).toEqual(earlierMemo);
-    return 'earlier, under its backup name';
-  }
   expect(visible).toEqual([MEMO]);
   const memo = join(out, MEMO);
   const now = treeSnapshot(memo);
@@ -76,7 +86,7 @@ beforeAll(async () => {
     if (code !== 0) throw new Error(`the good run exited ${code}`);
   }
   earlierMemo = treeSnapshot(join(root, EARLIER_MEMO));
-  cpSync(join(root, 'out'), join(root, 'earlier-out'), { recursive: true });
+  cpSync(join(root, 'out'), join(root, 'earlier-out'), AS_THEY_ARE);
 }, 60_000);
 
 afterAll(() => {
@@ -92,7 +102,7 @@ describe('a run killed with SIGKILL', () => {
     it(`at ${(fraction * 100).toFixed(1)}% of a run leaves a whole memo, and the next run cleans up`, async () => {
       const out = join(root, 'out');
       rmSync(out, { recursive: true, force: true });
-      cpSync(join(root, 'earlier-out'), out, { recursive: true });
+      cpSync(join(root, 'earlier-out'), out, AS_THEY_ARE);
       const run = startRun('revised.yaml');
       await sleep(fraction * runMilliseconds);
       run.kill();
@@ -102,26 +112,65 @@ describe('a run killed with SIGKILL', () => {
       const next = await runCli(['run', join(root, 'revised.yaml'), '--quiet']);
       expect(next.stderr).toBe('');
       expect(next.code).toBe(0);
-      expect(readdirSync(out)).toEqual([MEMO]);
+      expect(readdirSync(out).filter((entry) => !CURRENT_VERSION.test(entry))).toEqual([MEMO]);
       expect(manifestMismatches(join(out, MEMO))).toEqual([]);
       expect(readFileSync(join(out, MEMO, 'memo.html'), 'utf8')).toContain(REVISED_TITLE);
     });
   }
 
-  // A kill lands between writing files and renaming only by luck, so the two states it can
-  // leave are also made by hand: a half-written temporary folder, and the earlier memo under
-  // its backup name with the new one not yet in place.
-  it('leaves hidden remains that the next run removes, putting a backed-up memo back first', async () => {
+  // A kill lands between two steps of publishing only by luck, so runs are held at each step
+  // and killed there: the name still resolves to a complete memo that verifies, and the next
+  // run cleans up.
+  for (const [step, expected] of [['files-written', 'earlier'], ['version-named', 'earlier'], ['link-swapped', 'new']] as const) {
+    it(`held at '${step}' and killed, leaves the ${expected} memo under its name, which verifies`, async () => {
+      const out = join(root, 'out');
+      rmSync(out, { recursive: true, force: true });
+      cpSync(join(root, 'earlier-out'), out, AS_THEY_ARE);
+      const run = startRun('revised.yaml', step);
+      await run.paused;
+      run.kill();
+      await run.exited;
+      expect(judgeOutput(out)).toBe(expected);
+      const verified = await runCli(['verify', join(out, MEMO)]);
+      expect(verified.stderr).toBe('');
+      expect(verified.code).toBe(0);
+      expect(await startRun('revised.yaml').exited).toBe(0);
+      expect(readdirSync(out).filter((entry) => !CURRENT_VERSION.test(entry))).toEqual([MEMO]);
+      expect(judgeOutput(out)).toBe('new');
+    });
+  }
+
+  // A memo written before versions existed is a plain folder; the first run moves it aside as a
+  // version and links it: two renames, the one moment the name is missing. A run killed there
+  // leaves the complete memo as the version, which verifies, and the next run links it again.
+  it('held between moving a plain memo folder aside and linking it, leaves a complete version the next run links', async () => {
     const out = join(root, 'out');
     rmSync(out, { recursive: true, force: true });
-    cpSync(join(root, 'earlier-out'), out, { recursive: true });
+    mkdirSync(out);
+    cpSync(join(root, 'earlier-out', MEMO), join(out, MEMO), { recursive: true, dereference: true });
+    const run = startRun('revised.yaml', 'folder-moved-aside');
+    await run.paused;
+    run.kill();
+    await run.exited;
+    expect(readdirSync(out).filter((entry) => !entry.startsWith('.'))).toEqual([]);
+    const version = join(out, `.${MEMO}.v1`);
+    expect(treeSnapshot(version)).toEqual(earlierMemo);
+    expect((await runCli(['verify', version])).code).toBe(0);
+    expect(await startRun('revised.yaml').exited).toBe(0);
+    expect(judgeOutput(out)).toBe('new');
+  });
+
+  // Leftovers of the earlier two-rename publishing: a half-written temporary folder, and the
+  // earlier memo under its backup name with the new one not yet in place.
+  it('puts a memo left under the old backup name back and removes hidden remains', async () => {
+    const out = join(root, 'out');
+    rmSync(out, { recursive: true, force: true });
+    mkdirSync(out);
+    cpSync(join(root, 'earlier-out', MEMO), join(out, `.previous-${MEMO}`), { recursive: true, dereference: true });
     mkdirSync(join(out, `.partial-${MEMO}-424242`));
     writeFileSync(join(out, `.partial-${MEMO}-424242`, 'memo.html'), '<!DOCTYPE html><html><head><title>Tarnwick');
-    expect(judgeOutput(out)).toBe('earlier');
-    renameSync(join(out, MEMO), join(out, `.previous-${MEMO}`));
-    expect(judgeOutput(out)).toBe('earlier, under its backup name');
     expect(await startRun('revised.yaml').exited).toBe(0);
-    expect(readdirSync(out)).toEqual([MEMO]);
+    expect(readdirSync(out).filter((entry) => !CURRENT_VERSION.test(entry))).toEqual([MEMO]);
     expect(judgeOutput(out)).toBe('new');
   });
 

@@ -1,5 +1,5 @@
-// A run writes only inside the output folder it was given: its memo's folder and, while it
-// writes, a hidden temporary folder beside it. Ids that could name a path elsewhere are
+// A run writes only inside the output folder it was given: its memo's name (a link), the hidden
+// version folder it links to and, while it writes, a hidden temporary folder beside it. Ids that could name a path elsewhere are
 // refused before anything is written (our spec; DEVELOPERS.md, Config, "Text").
 import { cpSync, mkdirSync, mkdtempSync, readFileSync, rmSync, symlinkSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -47,7 +47,7 @@ describe('where a run writes', () => {
     const run = await runCli(['run', join(folder, 'memo.yaml'), '--quiet']);
     expect(run.code, run.stderr).toBe(0);
     const after = treeSnapshot(join(root, 'config-folder'));
-    expect(changed(before, after).filter((path) => path !== 'project/out' && !path.startsWith('project/out/tarnwick-cargo/'))).toEqual(['project/out/tarnwick-cargo']);
+    expect(changed(before, after).filter((path) => path !== 'project/out' && !path.startsWith('project/out/.tarnwick-cargo.v1/'))).toEqual(['project/out/.tarnwick-cargo.v1', 'project/out/tarnwick-cargo']);
   });
 
   it('writes only inside the --out folder, and nothing beside the config', async () => {
@@ -56,20 +56,58 @@ describe('where a run writes', () => {
     const run = await runCli(['run', join(folder, 'memo.yaml'), '--quiet', '--out', join(outside, 'memos')]);
     expect(run.code, run.stderr).toBe(0);
     const after = treeSnapshot(join(root, 'out-option'));
-    expect(changed(before, after).filter((path) => path !== 'elsewhere/memos' && !path.startsWith('elsewhere/memos/tarnwick-cargo/'))).toEqual(['elsewhere/memos/tarnwick-cargo']);
+    expect(changed(before, after).filter((path) => path !== 'elsewhere/memos' && !path.startsWith('elsewhere/memos/.tarnwick-cargo.v1/'))).toEqual(['elsewhere/memos/.tarnwick-cargo.v1', 'elsewhere/memos/tarnwick-cargo']);
     expect(manifestMismatches(join(outside, 'memos/tarnwick-cargo'))).toEqual([]);
   });
 
-  it('replaces a memo folder that is a link to a folder elsewhere without touching what it points at', async () => {
+  it('refuses a memo folder that is a link to a folder elsewhere, naming it, and writes nothing', async () => {
     const { folder, outside } = workspace('linked-memo');
     mkdirSync(join(folder, 'out'));
     symlinkSync(outside, join(folder, 'out/tarnwick-cargo'));
-    const before = treeSnapshot(outside);
+    const before = treeSnapshot(join(root, 'linked-memo'));
     const run = await runCli(['run', join(folder, 'memo.yaml'), '--quiet']);
-    expect(run.code, run.stderr).toBe(0);
-    expect(treeSnapshot(outside)).toEqual(before);
-    expect(Object.keys(before)).toEqual(['keep.txt']);
-    expect(manifestMismatches(join(folder, 'out/tarnwick-cargo'))).toEqual([]);
+    expect(run.code).toBe(2);
+    expect(run.errorLines).toEqual([expect.stringMatching(/^.*memo\.yaml:\d+:\d+: output\.folder: '.*out\/tarnwick-cargo' is a symbolic link to '.*elsewhere', and a run writes only inside its output folder; remove the link/)]);
+    expect(treeSnapshot(join(root, 'linked-memo'))).toEqual(before);
+  });
+
+  it('refuses a link at the memo id\'s folder of an as-of memo, and at the as-of folder', async () => {
+    const { folder, outside } = workspace('linked-id');
+    writeFileSync(join(folder, 'memo.yaml'), config.replace('  client: Tarnwick Harbour Authority', '  client: Tarnwick Harbour Authority\n  as_of: 2024'));
+    mkdirSync(join(folder, 'out'));
+    symlinkSync(outside, join(folder, 'out/tarnwick-cargo'));
+    const before = treeSnapshot(join(root, 'linked-id'));
+    const atId = await runCli(['run', join(folder, 'memo.yaml'), '--quiet']);
+    expect(atId.code).toBe(2);
+    expect(atId.stderr).toContain("out/tarnwick-cargo' is a symbolic link to");
+    expect(treeSnapshot(join(root, 'linked-id'))).toEqual(before);
+    rmSync(join(folder, 'out/tarnwick-cargo'));
+    mkdirSync(join(folder, 'out/tarnwick-cargo'));
+    symlinkSync(outside, join(folder, 'out/tarnwick-cargo/2024'));
+    const atAsOf = await runCli(['run', join(folder, 'memo.yaml'), '--quiet']);
+    expect(atAsOf.code).toBe(2);
+    expect(atAsOf.stderr).toContain("out/tarnwick-cargo/2024' is a symbolic link to");
+    expect(treeSnapshot(outside)).toEqual({ 'keep.txt': before['elsewhere/keep.txt'] });
+  });
+
+  it('keeps a run, a revision, a review and their lock files inside the output folder, which may itself be reached through a link', async () => {
+    const { folder, outside } = workspace('through-link');
+    mkdirSync(join(outside, 'memos'));
+    // The output folder is the user's to choose, links included; what lies inside it is checked.
+    symlinkSync(join(outside, 'memos'), join(folder, 'out'));
+    const reviewed = config.replace('  client: Tarnwick Harbour Authority', '  client: Tarnwick Harbour Authority\n  reviewers:\n    - name: H. Marsh');
+    writeFileSync(join(folder, 'memo.yaml'), reviewed);
+    const memo = join(folder, 'out/tarnwick-cargo');
+    expect((await runCli(['run', join(folder, 'memo.yaml'), '--quiet'])).code).toBe(0);
+    const review = await runCli(['review', memo, '--reviewer', 'H. Marsh', '--decision', 'approve', '--date', '2026-01-02']);
+    expect(review.stderr).toBe('');
+    writeFileSync(join(folder, 'memo.yaml'), reviewed.replace('title: Tarnwick cargo outlook', 'title: Tarnwick cargo outlook, revised'));
+    expect((await runCli(['run', join(folder, 'memo.yaml'), '--quiet', '--new-revision'])).code).toBe(0);
+    expect(readFileSync(join(memo, 'memo.html'), 'utf8')).toContain('Tarnwick cargo outlook, revised');
+    expect(manifestMismatches(join(memo, 'revisions/1'))).toEqual([]);
+    expect(readFileSync(join(memo, 'revisions/1/sign-offs.jsonl'), 'utf8')).toContain('H. Marsh');
+    const entries = Object.keys(treeSnapshot(outside)).filter((path) => !path.startsWith('memos/.tarnwick-cargo.v'));
+    expect(entries).toEqual(['keep.txt', 'memos', 'memos/tarnwick-cargo']);
   });
 });
 

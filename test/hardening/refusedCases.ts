@@ -29,7 +29,8 @@ export function refusedCases(): RefusedCase[] {
 /** A fresh workspace: a copy of `baseline` with the case's files laid over it and its setup applied. */
 export function caseWorkspace(baseline: string, refused: RefusedCase): string {
   const root = mkdtempSync(join(tmpdir(), `tb-refused-${refused.name}-`));
-  cpSync(baseline, root, { recursive: true });
+  // The earlier memo's name is a relative link to its version: copied as it is.
+  cpSync(baseline, root, { recursive: true, verbatimSymlinks: true });
   const folder = join(REFUSED, refused.name);
   for (const entry of readdirSync(folder)) {
     if (entry !== 'case.json') cpSync(join(folder, entry), join(root, entry), { recursive: true });

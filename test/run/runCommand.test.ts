@@ -75,7 +75,7 @@ describe('trendbrief run', () => {
     expect(run.code).toBe(2);
     expect(run.errorLines[0]).toMatch(/lake-huron\.csv:\d+.*missing/);
     expect(readFileSync(join(folder, 'memo.html'), 'utf8')).toBe(before);
-    expect(readdirSync(join(root, 'out'))).toEqual(['lake-outlook']);
+    expect(readdirSync(join(root, 'out')).sort()).toEqual(['.lake-outlook.v1', 'lake-outlook']);
   });
 
   it('reports config mistakes with their line and writes nothing', async () => {

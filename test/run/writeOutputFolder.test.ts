@@ -1,21 +1,27 @@
-// Output folders appear whole or not at all (our spec, DESIGN.md "Output and safety").
-import { existsSync, mkdtempSync, readFileSync, readdirSync, renameSync, writeFileSync, mkdirSync } from 'node:fs';
+// Memos appear whole or not at all, and only inside the output folder (our spec, DEVELOPERS.md "Publishing").
+import { existsSync, lstatSync, mkdtempSync, readFileSync, readdirSync, readlinkSync, renameSync, rmSync, symlinkSync, writeFileSync, mkdirSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { isInside, recoverOutputFolder, writeOutputFolder } from '../../src/run/writeOutputFolder.js';
+import { isInside, writeOutputFolder } from '../../src/run/writeOutputFolder.js';
+import { recoverMemoLink } from '../../src/run/memoVersions.js';
+import { makeFolders, pseudoFileSystem } from '../../src/run/outputTree.js';
+import { InputError } from '../../src/base/problem.js';
 import { runDate } from '../../src/run/runDate.js';
 import { forecastsCsv } from '../../src/run/forecastsCsv.js';
 
 describe('writeOutputFolder', () => {
-  it('creates, then replaces a folder as a whole', () => {
+  it('creates, then replaces a memo as a whole: its name is a link to the complete current version', () => {
     const root = mkdtempSync(join(tmpdir(), 'tb-out-'));
     const target = join(root, 'memo');
     writeOutputFolder(target, [{ name: 'a.txt', content: 'one' }, { name: 'sub/b.txt', content: 'two' }]);
     expect(readFileSync(join(target, 'sub/b.txt'), 'utf8')).toBe('two');
+    expect(readlinkSync(target)).toBe('.memo.v1');
     writeOutputFolder(target, [{ name: 'c.txt', content: 'three' }]);
     expect(readdirSync(target)).toEqual(['c.txt']);
-    expect(readdirSync(root)).toEqual(['memo']);
+    expect(readlinkSync(target)).toBe('.memo.v2');
+    // The old version is removed after the swap; nothing else is left beside the name.
+    expect(readdirSync(root).sort()).toEqual(['.memo.v2', 'memo']);
   });
 
   it('leaves the previous folder untouched when writing fails', () => {
@@ -24,19 +30,55 @@ describe('writeOutputFolder', () => {
     writeOutputFolder(target, [{ name: 'memo.html', content: 'issued' }]);
     expect(() => writeOutputFolder(target, [{ name: 'ok.txt', content: 'x' }, { name: '../escape.txt', content: 'y' }])).toThrow(/leave the output folder/);
     expect(readFileSync(join(target, 'memo.html'), 'utf8')).toBe('issued');
-    expect(readdirSync(root)).toEqual(['memo']);
+    expect(readdirSync(root).sort()).toEqual(['.memo.v1', 'memo']);
   });
 
-  it('puts back a previous folder left under its backup name by a killed run', () => {
+  it('puts back a previous folder left under the old backup name, and makes a plain folder the first version', () => {
     const root = mkdtempSync(join(tmpdir(), 'tb-out-'));
     const target = join(root, 'memo');
-    writeOutputFolder(target, [{ name: 'memo.html', content: 'issued' }]);
-    renameSync(target, join(root, '.previous-memo'));
+    mkdirSync(join(root, '.previous-memo'));
+    writeFileSync(join(root, '.previous-memo', 'memo.html'), 'issued');
     mkdirSync(join(root, '.partial-memo-99999'));
     writeFileSync(join(root, '.partial-memo-99999', 'half.html'), '<html');
-    recoverOutputFolder(target);
+    // Another memo's leftovers are not this memo's to remove.
+    mkdirSync(join(root, '.partial-memo-b-99999'));
+    recoverMemoLink(target);
     expect(readFileSync(join(target, 'memo.html'), 'utf8')).toBe('issued');
-    expect(existsSync(join(root, '.partial-memo-99999'))).toBe(false);
+    expect(lstatSync(target).isSymbolicLink()).toBe(true);
+    expect(readdirSync(root).sort()).toEqual(['.memo.v1', '.partial-memo-b-99999', 'memo']);
+  });
+
+  it('links the highest version again when a killed run left the name missing, and drops versions nobody links to', () => {
+    const root = mkdtempSync(join(tmpdir(), 'tb-out-'));
+    const target = join(root, 'memo');
+    writeOutputFolder(target, [{ name: 'memo.html', content: 'first' }]);
+    renameSync(join(root, '.memo.v1'), join(root, '.memo.v4'));
+    rmSync(target);
+    mkdirSync(join(root, '.memo.v2'));
+    recoverMemoLink(target);
+    expect(readlinkSync(target)).toBe('.memo.v4');
+    expect(readFileSync(join(target, 'memo.html'), 'utf8')).toBe('first');
+    expect(existsSync(join(root, '.memo.v2'))).toBe(false);
+  });
+
+  it('refuses a name that is a link to a folder elsewhere, and a hidden version named as the memo', () => {
+    const root = mkdtempSync(join(tmpdir(), 'tb-out-'));
+    const elsewhere = mkdtempSync(join(tmpdir(), 'tb-elsewhere-'));
+    symlinkSync(elsewhere, join(root, 'memo'));
+    expect(() => writeOutputFolder(join(root, 'memo'), [{ name: 'a.txt', content: 'x' }])).toThrow(InputError);
+    expect(readdirSync(elsewhere)).toEqual([]);
+    expect(readdirSync(root)).toEqual(['memo']);
+    writeOutputFolder(join(root, 'other'), [{ name: 'a.txt', content: 'x' }]);
+    expect(() => writeOutputFolder(join(root, '.other.v1'), [{ name: 'a.txt', content: 'y' }])).toThrow(/hidden version of the memo/);
+    expect(readFileSync(join(root, 'other/a.txt'), 'utf8')).toBe('x');
+  });
+
+  it('refuses a folder on the way that resolves outside the output folder', () => {
+    const root = mkdtempSync(join(tmpdir(), 'tb-out-'));
+    const elsewhere = mkdtempSync(join(tmpdir(), 'tb-elsewhere-'));
+    symlinkSync(elsewhere, join(root, 'memo-id'));
+    expect(() => writeOutputFolder(join(root, 'memo-id', '2024'), [{ name: 'a.txt', content: 'x' }], root)).toThrow(/outside the output folder/);
+    expect(readdirSync(elsewhere)).toEqual([]);
   });
 
   it('knows inside from outside', () => {
@@ -44,6 +86,14 @@ describe('writeOutputFolder', () => {
     expect(isInside('/a/b', '/a/b')).toBe(false);
     expect(isInside('/a/b', '/a/bc')).toBe(false);
     expect(isInside('/a/b', '/a/b/../c')).toBe(false);
+  });
+});
+
+describe('makeFolders', () => {
+  it('refuses a folder under /proc/self at once instead of looping (Linux procfs)', () => {
+    expect(pseudoFileSystem('/proc/self/memos/out')).toBe('proc');
+    expect(() => makeFolders('/proc/self/memos/out')).toThrow(/ENOENT|EACCES|EPERM/);
+    expect(pseudoFileSystem(tmpdir())).toBeNull();
   });
 });
 

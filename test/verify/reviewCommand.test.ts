@@ -71,7 +71,8 @@ describe('signed sign-offs', () => {
 
     // An archived copy: moved elsewhere, the original config and data deleted.
     const archive = join(mkdtempSync(join(tmpdir(), 'tb-archive-')), '2025-11');
-    cpSync(folder, archive, { recursive: true });
+    // The memo's name is a link to its current version: copy what it points at (cp -rL).
+    cpSync(folder, archive, { recursive: true, dereference: true });
     const archived = await runCli(['verify', archive]);
     expect(archived.stderr).toBe('');
     expect(archived.code).toBe(0);
