@@ -2,7 +2,7 @@
 // used with the `u` flag on both sides), so both accept exactly the same text.
 
 /**
- * Free text on one line, text that may span lines, an id that becomes a folder name, or a
+ * Free text (never only white space) on one line, text that may span lines, an id that becomes a folder name, or a
  * calendar date written YYYY-MM-DD.
  */
 export type TextForm = 'line' | 'block' | 'slug' | 'date';
@@ -34,10 +34,11 @@ export const PERIOD_YEAR_RANGE = { min: 1000, max: 9999 } as const;
 /** The whole-value pattern a text of this form must match. */
 export function textPattern(form: TextForm): string {
   switch (form) {
+    // At least one character that is neither refused nor white space: blank text says nothing.
     case 'line':
-      return `^[^${REFUSED_IN_LINE}]*$`;
+      return `^[^${REFUSED_IN_LINE}]*[^\\s${REFUSED_IN_LINE}][^${REFUSED_IN_LINE}]*$`;
     case 'block':
-      return `^[^${REFUSED_IN_BLOCK}]*$`;
+      return `^[^${REFUSED_IN_BLOCK}]*[^\\s${REFUSED_IN_BLOCK}][^${REFUSED_IN_BLOCK}]*$`;
     case 'slug':
       return SLUG_PATTERN;
     case 'date':

@@ -1,7 +1,7 @@
 // What the data stage says about series files: CSV structure, periods, values, and the series
 // as a whole. Each function returns a complete problem, so code, wording and hint stay together.
 import { abbreviateList, codePointName, MEBIBYTE, plural, problem, roughly, type InputLocation, type InputProblem } from '../base/problem.js';
-import { quotedCell } from '../base/quotedCell.js';
+import { cellField, quotedCell } from '../base/quotedCell.js';
 
 const PERIOD_FORMS = 'write periods as 2003 (annual), 2003-Q1 (quarterly) or 2003-01 (monthly)';
 const MISSING_HINT = 'fill in the observed value, or allow missing values (missing: allow in the config, --allow-missing for fit)';
@@ -81,7 +81,7 @@ export const dataMessages = {
     const hint = suggestion === undefined ? 'use one of the column names above' : `did you mean ${quotedCell(suggestion)}?`;
     return problem('csv.unknown-column', `no column with this name; the columns are ${abbreviateList(columns.map(quotedCell))}`, hint, {
       ...at,
-      field: name,
+      field: cellField(name),
     });
   },
   unnamedColumn(at: InputLocation, position: number): InputProblem {
@@ -107,13 +107,13 @@ export const dataMessages = {
   duplicateColumn(at: InputLocation, name: string, count: number): InputProblem {
     return problem('csv.duplicate-column', `${count} columns share this name`, 'rename the columns so each name appears once', {
       ...at,
-      field: name,
+      field: cellField(name),
     });
   },
   sameColumn(at: InputLocation, name: string): InputProblem {
     return problem('csv.same-column', 'chosen as both the period column and the value column', 'pick two different columns', {
       ...at,
-      field: name,
+      field: cellField(name),
     });
   },
   rowWidth(at: InputLocation, cells: number, expected: number): InputProblem {

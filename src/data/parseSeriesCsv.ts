@@ -4,6 +4,7 @@
 
 import { createHash } from 'node:crypto';
 import { InputError, type InputLocation, type InputProblem } from '../base/problem.js';
+import { cellField } from '../base/quotedCell.js';
 import { dataMessages } from './messages.js';
 import { checkPeriods, type DatedLine } from './checkPeriods.js';
 import { checkSeries, exactPatternProblem } from './checkSeries.js';
@@ -40,11 +41,11 @@ function readRow(row: CsvRow, width: number, choice: ColumnChoice, file: string,
   const { line, cells } = row;
   if (cells.length !== width) problems.push(dataMessages.rowWidth({ file, line }, cells.length, width));
   const label = cells[choice.periodPosition] ?? '';
-  const periodAt = { file, line, column: choice.periodPosition + 1, field: choice.periodColumn };
+  const periodAt = { file, line, column: choice.periodPosition + 1, field: cellField(choice.periodColumn) };
   const period = label === '' ? null : parsePeriod(label);
   if (label === '') problems.push(dataMessages.emptyPeriod(periodAt));
   else if (period === null) problems.push(dataMessages.badPeriod(periodAt, label));
-  const valueAt = { file, line, column: choice.valuePosition + 1, field: choice.column };
+  const valueAt = { file, line, column: choice.valuePosition + 1, field: cellField(choice.column) };
   const { value, problem } = cellProblem(cells[choice.valuePosition] ?? '', valueAt, allowMissing);
   if (problem !== undefined) problems.push(problem);
   return period === null ? undefined : { line, label, period, value };
@@ -85,18 +86,18 @@ export function parseSeriesCsv(text: string, file: string, options: SeriesOption
     const observation = readRow(row, header.cells.length, choice, file, problems, allowMissing);
     if (observation !== undefined) observations.push(observation);
   }
-  const periodColumn = { file, column: choice.periodPosition + 1, field: choice.periodColumn };
+  const periodColumn = { file, column: choice.periodPosition + 1, field: cellField(choice.periodColumn) };
   const periods = checkPeriods(observations, periodColumn, options.frequency, allowMissing);
   problems.push(...periods.problems);
 
   const valued = observations.filter((entry) => entry.value !== undefined && !Number.isNaN(entry.value));
   const observed = Float64Array.from(valued, (entry) => entry.value ?? NaN);
   const lines = valued.map((entry) => entry.line);
-  problems.push(...checkSeries({ file, column: choice.column, values: observed, lines }, options));
+  problems.push(...checkSeries({ file, column: cellField(choice.column), values: observed, lines }, options));
   const ends = [observations[0], observations[observations.length - 1]];
   if (allowMissing && ends.every((entry) => entry !== undefined)) {
     ends.forEach((entry, i) => {
-      if (Number.isNaN(entry.value)) problems.push(dataMessages.missingEnd({ file, line: entry.line, field: choice.column }, i === 0 ? 'first' : 'last', entry.label));
+      if (Number.isNaN(entry.value)) problems.push(dataMessages.missingEnd({ file, line: entry.line, field: cellField(choice.column) }, i === 0 ? 'first' : 'last', entry.label));
     });
   }
 
@@ -105,7 +106,7 @@ export function parseSeriesCsv(text: string, file: string, options: SeriesOption
   // A series with no random variation on the scale the models see is refused here, with the file's name.
   const transform = options.transform !== undefined && options.transform.kind !== 'none' ? options.transform : undefined;
   const modelScale = transform === undefined ? values : values.map((value) => (Number.isNaN(value) ? value : transformValue(transform, value)));
-  const exact = exactPatternProblem(modelScale, periodsPerYear(periods.frequency), { file, field: choice.column }, transform === undefined ? null : describeTransform(transform));
+  const exact = exactPatternProblem(modelScale, periodsPerYear(periods.frequency), { file, field: cellField(choice.column) }, transform === undefined ? null : describeTransform(transform));
   if (exact !== undefined) throw new InputError([exact]);
   return {
     file,
