@@ -15,7 +15,7 @@ import { join, resolve } from 'node:path';
 import { parse } from 'csv-parse/sync';
 import { toolVersion } from '../base/toolVersion.js';
 import { InputError, type InputProblem } from '../base/problem.js';
-import { MAX_RUN_DOCUMENT_BYTES, regularFileBytes } from '../base/readRegularFile.js';
+import { MAX_RUN_DOCUMENT_BYTES, readRegularFile, type FileFault, type FileRead } from '../base/readRegularFile.js';
 import { shownPath } from '../base/shownPath.js';
 import { assembleMemo } from './assembleMemo.js';
 import { compareJson, TOLERANCE_TEXT, type Difference } from './compareJson.js';
@@ -38,9 +38,14 @@ export interface VerifyResult {
 
 const ROLE_NAME: Record<ManifestInput['role'], string> = { config: 'config', data: 'data file', 'earlier-record': 'earlier record' };
 
-/** Null unless a regular file within the bound: a FIFO or a device in an input's place is never opened. */
-function readBytes(path: string): Buffer | null {
-  return regularFileBytes(path, MAX_RUN_DOCUMENT_BYTES);
+/** A FIFO or a device in an input's place is never opened: it is read as a fault, like a missing file. */
+function readBytes(path: string): FileRead {
+  return readRegularFile(path, MAX_RUN_DOCUMENT_BYTES);
+}
+
+/** The copy a verify needs is missing, or something other than a regular file within the bound stands in its place. */
+function unreadableInput(fault: FileFault, shown: string, field: string, role: string, path: string, sha: string): InputProblem {
+  return fault.kind === 'missing' || fault.kind === 'dangling-link' ? verifyMessages.inputMissing(shown, field, role, path, sha) : verifyMessages.inputNotAFile(shown, field, role, path, sha);
 }
 
 /** Copies must be there with their digest; originals that are there must have it too. Returns the originals found and missing. */
@@ -57,17 +62,17 @@ function checkInputs(folder: string, manifest: Manifest, shown: string): { found
     };
     if (input.copy !== undefined) {
       const path = resolve(folder, input.copy);
-      const bytes = readBytes(path);
-      if (bytes === null) problems.push(verifyMessages.inputMissing(shown, field, `copy of the ${what}`, shownPath(path), input.sha256));
-      else check(path, `copy of the ${what}`, bytes);
+      const read = readBytes(path);
+      if (read.fault !== undefined) problems.push(unreadableInput(read.fault, shown, field, `copy of the ${what}`, shownPath(path), input.sha256));
+      else check(path, `copy of the ${what}`, read.bytes);
     }
     const original = resolve(folder, input.from_output);
-    const bytes = readBytes(original);
-    if (bytes !== null) {
+    const read = readBytes(original);
+    if (read.fault === undefined) {
       found += 1;
-      check(original, what, bytes);
+      check(original, what, read.bytes);
     } else if (input.copy === undefined) {
-      problems.push(verifyMessages.inputMissing(shown, field, what, shownPath(original), input.sha256));
+      problems.push(unreadableInput(read.fault, shown, field, what, shownPath(original), input.sha256));
     } else {
       missing += 1;
     }

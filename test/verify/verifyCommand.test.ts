@@ -1,6 +1,7 @@
 // `trendbrief verify` end to end on a small memo (our spec: exit 0 on a match, 3 with the
 // differences listed, 2 when an input is missing or changed; DEVELOPERS.md "verify").
-import { readFileSync, rmSync, unlinkSync, writeFileSync } from 'node:fs';
+import { execFileSync } from 'node:child_process';
+import { readFileSync, rmSync, symlinkSync, unlinkSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { sha256, type Manifest } from '../../src/run/manifest.js';
@@ -124,6 +125,15 @@ describe('verify refuses changed or missing inputs (exit 2)', () => {
     expect(run.errorLines).toEqual([
       `${folder}/manifest.json: inputs[0]: the copy of the config ${join(folder, 'inputs/config/memo.yaml')} is missing (expected SHA-256 ${inputs[0].sha256}); put the file back where the manifest says, or rerun the memo`,
       `${folder}/manifest.json: inputs[2]: the copy of the earlier record ${join(folder, 'inputs/earlier-record/record.json')} is missing (expected SHA-256 ${inputs[2].sha256}); put the file back where the manifest says, or rerun the memo`,
+    ]);
+    // A FIFO and a link to /dev/zero in the copies' places are refused without being opened (our spec: nothing makes verify wait).
+    execFileSync('mkfifo', [join(folder, 'inputs/config/memo.yaml')]);
+    symlinkSync('/dev/zero', join(folder, 'inputs/earlier-record/record.json'));
+    const special = await runCli(['verify', folder]);
+    expect(special.code).toBe(2);
+    expect(special.errorLines).toEqual([
+      `${folder}/manifest.json: inputs[0]: the copy of the config ${join(folder, 'inputs/config/memo.yaml')} is not a regular file (expected one with SHA-256 ${inputs[0].sha256}); put the file back where the manifest says, or rerun the memo`,
+      `${folder}/manifest.json: inputs[2]: the copy of the earlier record ${join(folder, 'inputs/earlier-record/record.json')} is not a regular file (expected one with SHA-256 ${inputs[2].sha256}); put the file back where the manifest says, or rerun the memo`,
     ]);
   });
 
