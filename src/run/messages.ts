@@ -5,6 +5,21 @@ import { abbreviateList, plural, problem, type InputLocation, type InputProblem 
 import type { DataEnd } from '../memo/memoInput.js';
 
 const OUTPUT_FOLDER_HINT = 'choose a folder, or a path where one can be created';
+/** What each file-system refusal means, and what to do about it (errno names as in errno(3)). */
+const WRITE_REFUSALS: Readonly<Record<string, readonly [string, string]>> = {
+  EROFS: ['a read-only file system', 'choose an output folder on a writable disk'],
+  EACCES: ['permission denied', 'choose an output folder you may write to, or ask for write permission'],
+  EPERM: ['operation not permitted', 'choose an output folder you may write to, or ask for write permission'],
+  ENOSPC: ['no space left on the disk', 'free some space or choose an output folder on another disk'],
+  EDQUOT: ['disk quota exceeded', 'free some space or choose an output folder on another disk'],
+  ENOENT: ['a folder on the way is missing and cannot be created', 'create the output folder, or choose one whose parent exists'],
+  ENOTDIR: ['a file stands where a folder is needed', 'move the file away, or choose another output folder'],
+  EEXIST: ['something appeared where a folder is needed', 'move it away and run again'],
+  EISDIR: ['a folder stands where a file is needed', 'move it away and run again'],
+  ENAMETOOLONG: ['a path is too long', 'choose an output folder with a shorter path'],
+  ELOOP: ['too many symbolic links on the way', 'choose an output folder without a loop of links'],
+};
+
 const TEMPLATES_HINT = 'correct the path, or remove output.templates to use the built-in templates';
 
 export const runMessages = {
@@ -31,8 +46,20 @@ export const runMessages = {
       at,
     );
   },
-  outputUnwritable(at: InputLocation, folder: string, reason: string): InputProblem {
-    return problem('run.output-unwritable', `the memo cannot be written into '${folder}' (${reason})`, 'check that you may write there and that the disk has room; the earlier memo is kept', at);
+  outputUnwritable(at: InputLocation, folder: string, code: string): InputProblem {
+    const [reason, hint] = WRITE_REFUSALS[code] ?? [code, 'check that you may write there and that the disk has room'];
+    return problem('run.output-unwritable', `the memo cannot be written into '${folder}' (${code}: ${reason})`, `${hint}; the earlier memo is kept`, at);
+  },
+  outputOnPseudoFileSystem(at: InputLocation, folder: string, fileSystem: string): InputProblem {
+    return problem('run.output-not-a-disk', `the output folder '${folder}' lies on the ${fileSystem} file system, which the kernel makes up and which holds no files`, 'choose a folder on a disk', at);
+  },
+  memoFolderLink(at: InputLocation, folder: string, target: string): InputProblem {
+    return problem(
+      'run.memo-folder-link',
+      `'${folder}' is a symbolic link to '${target}', and a run writes only inside its output folder`,
+      'remove the link, or give the folder it points at as the output folder (--out or output.folder)',
+      at,
+    );
   },
   templatesMissing(at: InputLocation, folder: string): InputProblem {
     return problem('run.templates-missing', `the templates folder '${folder}' does not exist`, TEMPLATES_HINT, at);
@@ -299,6 +326,18 @@ export const issuedMessages = {
 };
 
 /** Two writers on one memo folder (src/run/memoLock.ts). */
+export const containmentMessages = {
+  leavesOutput(folder: string, real: string, within: string): InputProblem {
+    return problem('run.leaves-output', `'${folder}' resolves to '${real}', outside the output folder '${within}'`, 'remove the symbolic link on the way; nothing was written', { file: folder });
+  },
+  hiddenVersion(folder: string, memo: string): InputProblem {
+    return problem('run.hidden-version', `'${folder}' is a hidden version of the memo '${memo}'`, `name the memo '${memo}' instead; nothing was written`, { file: folder });
+  },
+  nameTaken(folder: string): InputProblem {
+    return problem('run.memo-folder-taken', `'${folder}' is neither a memo folder written by this tool nor free`, 'move it away, or choose another output folder or memo id; nothing was written', { file: folder });
+  },
+};
+
 export const lockMessages = {
   busy(folder: string): InputProblem {
     return problem('run.memo-busy', `another run or review is writing the memo in '${folder}'`, 'wait for it to finish, then try again; nothing was changed', { file: folder });
