@@ -34,8 +34,15 @@ function acquire(file: string, folder: string): void {
   for (let attempt = 0; attempt < 2; attempt++) {
     try {
       const fd = openSync(file, 'wx');
-      writeSync(fd, String(process.pid));
-      closeSync(fd);
+      try {
+        writeSync(fd, String(process.pid));
+      } catch (error) {
+        // A full disk: no lock, and no empty lock file left behind.
+        rmSync(file, { force: true });
+        throw error;
+      } finally {
+        closeSync(fd);
+      }
       return;
     } catch (error) {
       if (!(error instanceof Error && 'code' in error && error.code === 'EEXIST')) throw error;
