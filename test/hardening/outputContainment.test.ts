@@ -90,6 +90,19 @@ describe('where a run writes', () => {
     expect(treeSnapshot(outside)).toEqual({ 'keep.txt': before['elsewhere/keep.txt'] });
   });
 
+  it('refuses a review through a link to a memo elsewhere, and leaves that memo as it was', async () => {
+    const { folder, outside } = workspace('review-link');
+    writeFileSync(join(folder, 'memo.yaml'), config.replace('  client: Tarnwick Harbour Authority', '  client: Tarnwick Harbour Authority\n  reviewers:\n    - name: H. Marsh'));
+    expect((await runCli(['run', join(folder, 'memo.yaml'), '--quiet', '--out', join(outside, 'memos')])).code).toBe(0);
+    mkdirSync(join(folder, 'out'));
+    symlinkSync(join(outside, 'memos/tarnwick-cargo'), join(folder, 'out/tarnwick-cargo'));
+    const before = treeSnapshot(join(root, 'review-link'));
+    const review = await runCli(['review', join(folder, 'out/tarnwick-cargo'), '--reviewer', 'H. Marsh', '--decision', 'approve', '--date', '2026-01-02']);
+    expect(review.code).toBe(2);
+    expect(review.errorLines).toEqual([expect.stringContaining("out/tarnwick-cargo' is neither a memo folder written by this tool nor free; move it away")]);
+    expect(treeSnapshot(join(root, 'review-link'))).toEqual(before);
+  });
+
   it('keeps a run, a revision, a review and their lock files inside the output folder, which may itself be reached through a link', async () => {
     const { folder, outside } = workspace('through-link');
     mkdirSync(join(outside, 'memos'));
