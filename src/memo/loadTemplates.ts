@@ -8,6 +8,7 @@ import Handlebars from 'handlebars';
 import { InputError } from '../base/problem.js';
 import { templateMessages } from './messages.js';
 import { checkHouseTemplate } from './checkHouseTemplate.js';
+import { readRegularFile } from '../base/readRegularFile.js';
 
 export interface MemoTemplates {
   main: string;
@@ -40,6 +41,16 @@ function checkTemplateSyntax(path: string, source: string): void {
   }
 }
 
+/** A template or stylesheet is a few kilobytes; a megabyte is far beyond any real one. */
+const TEMPLATE_LIMIT_BYTES = 1024 * 1024;
+
+/** A consultancy's file, read only as a regular file within the bound (a FIFO would block the run). */
+function houseFile(path: string): string {
+  const read = readRegularFile(path, TEMPLATE_LIMIT_BYTES);
+  if (read.fault !== undefined) throw new InputError(templateMessages.unreadable(path, read.fault.kind === 'too-large' ? `larger than ${TEMPLATE_LIMIT_BYTES} bytes` : read.fault.kind === 'unreadable' ? read.fault.reason : read.fault.kind.replace('-', ' ')));
+  return read.bytes.toString('utf8');
+}
+
 export function loadTemplates(dir?: string): MemoTemplates {
   const builtIn = builtInTemplatesDir();
   const dirs = dir === undefined ? [builtIn] : [dir, builtIn];
@@ -48,7 +59,7 @@ export function loadTemplates(dir?: string): MemoTemplates {
     for (const d of dirs) {
       const path = join(d, relative);
       if (!existsSync(path)) continue;
-      const source = readFileSync(path, 'utf8');
+      const source = d === builtIn ? readFileSync(path, 'utf8') : houseFile(path);
       // A consultancy's own template is user input: its faults are their mistake to fix, at their line.
       if (d !== builtIn) {
         if (relative.endsWith('.hbs')) checkTemplateSyntax(path, source);

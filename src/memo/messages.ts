@@ -11,6 +11,9 @@ export const templateMessages = {
       { file: folder },
     );
   },
+  unreadable(file: string, why: string): InputProblem {
+    return problem('template.unreadable', `the template cannot be read (${why})`, 'make it a regular file of the templates folder, or remove it to use the built-in one', { file });
+  },
   forbidden(file: string, line: number, what: string): InputProblem {
     return problem('template.not-self-contained', `the template would make the memo load or run something (${what})`, 'a memo stands alone: remove scripts, web addresses and stylesheet imports from the template', { file, line });
   },

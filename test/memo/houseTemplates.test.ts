@@ -58,3 +58,13 @@ describe("a consultancy's own templates", () => {
     }
   });
 });
+
+describe('a template that is not a regular file', () => {
+  it('is refused without being opened, so a FIFO cannot hold the run', async () => {
+    const { execFileSync } = await import('node:child_process');
+    const dir = mkdtempSync(join(tmpdir(), 'tb-house-fifo-'));
+    mkdirSync(join(dir, 'partials'));
+    execFileSync('mkfifo', [join(dir, 'memo.css')]);
+    expect(await problemsOf(dir)).toEqual([expect.objectContaining({ code: 'template.unreadable', file: join(dir, 'memo.css'), message: 'the template cannot be read (special file)' })]);
+  });
+});
