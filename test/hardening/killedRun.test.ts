@@ -134,7 +134,7 @@ describe('a run killed with SIGKILL', () => {
       const verified = await runCli(['verify', join(out, MEMO)]);
       expect(verified.stderr).toBe('');
       expect(verified.code).toBe(0);
-      expect(await startRun('revised.yaml').exited).toBe(0);
+      expect((await runCli(['run', join(root, 'revised.yaml'), '--quiet'])).code).toBe(0);
       expect(readdirSync(out).filter((entry) => !CURRENT_VERSION.test(entry))).toEqual([MEMO]);
       expect(judgeOutput(out)).toBe('new');
     });
@@ -156,7 +156,7 @@ describe('a run killed with SIGKILL', () => {
     const version = join(out, `.${MEMO}.v1`);
     expect(treeSnapshot(version)).toEqual(earlierMemo);
     expect((await runCli(['verify', version])).code).toBe(0);
-    expect(await startRun('revised.yaml').exited).toBe(0);
+    expect((await runCli(['run', join(root, 'revised.yaml'), '--quiet'])).code).toBe(0);
     expect(judgeOutput(out)).toBe('new');
   });
 
@@ -169,7 +169,7 @@ describe('a run killed with SIGKILL', () => {
     cpSync(join(root, 'earlier-out', MEMO), join(out, `.previous-${MEMO}`), { recursive: true, dereference: true });
     mkdirSync(join(out, `.partial-${MEMO}-424242`));
     writeFileSync(join(out, `.partial-${MEMO}-424242`, 'memo.html'), '<!DOCTYPE html><html><head><title>Tarnwick');
-    expect(await startRun('revised.yaml').exited).toBe(0);
+    expect((await runCli(['run', join(root, 'revised.yaml'), '--quiet'])).code).toBe(0);
     expect(readdirSync(out).filter((entry) => !CURRENT_VERSION.test(entry))).toEqual([MEMO]);
     expect(judgeOutput(out)).toBe('new');
   });
