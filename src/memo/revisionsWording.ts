@@ -8,7 +8,6 @@ const order = ({ p, q }: ArmaOrder) => `ARMA(${p}, ${q})`;
 
 export const revisionsWording = {
   heading: 'Changes since the previous memo',
-  none: (asOf: string) => `No earlier memo (as of a period before ${asOf}) was found beside this one, so there is nothing to compare with.`,
   intro: (asOf: string, earlier: string, runDate: string) =>
     `This memo, as of ${asOf}, set against the memo as of ${earlier} (run on ${runDate}): forecasts for the same target periods, model orders, the recommendation and revised observations.`,
   dropped: (titles: string[]) => `No longer in this memo: ${titles.join('; ')}.`,

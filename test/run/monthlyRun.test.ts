@@ -33,10 +33,10 @@ describe('a memo with an as-of period', () => {
     expect(document.history[0].series_id).toBe('lake-level');
     expect(document.history[0].values).toHaveLength(98);
     expect(document.history[0].values[49]).toEqual({ period: '1924', value: 577.79 });
-    // With nothing to compare, the appendix says so in one line and there is no section (our spec).
+    // With nothing to compare, page 1 says so in one line and there is no section (our spec).
     const html = readText(folder, 'memo.html');
     expect(html).not.toContain('<section class="revisions"');
-    expect(html).toMatch(/<dd class="revisions-none">No earlier memo \(as of a period before 2025-11\) was found beside this one, so there is nothing to compare with\.<\/dd>/);
+    expect(html).toContain('<p class="since-last">Since the last memo: no earlier memo (as of a period before 2025-11) was found beside this one.</p>');
     const manifest = JSON.parse(readText(folder, 'manifest.json')) as Manifest;
     expect(manifest.inputs.map((input) => [input.role, input.path, input.from_output])).toEqual([
       ['config', 'memo.yaml', '../../../memo.yaml'],

@@ -67,11 +67,10 @@ describe('revisionChart', () => {
 });
 
 describe('revisionsView', () => {
-  it('is absent for a memo without an as-of period and one line without an earlier memo', async () => {
+  it('is absent for a memo without an as-of period, and not compared without an earlier memo (page 1 says so)', async () => {
     expect(await revisionsView({ series: [] })).toBeNull();
     const alone = await revisionsView({ series: [], revisions: { as_of: '2025-12', earlier: null, series: [], dropped: [] } });
     expect(alone?.compared).toBe(false);
-    expect(alone?.none).toBe('No earlier memo (as of a period before 2025-12) was found beside this one, so there is nothing to compare with.');
   });
 
   it('formats the revisions with signs, one row per period for both models, and caps the data rows', async () => {

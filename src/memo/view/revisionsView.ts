@@ -41,7 +41,6 @@ export interface RevisionSeriesView {
 export interface RevisionsView {
   heading: string;
   compared: boolean;
-  none: string;
   intro: string;
   dropped: string;
   columns: typeof revisionsWording.columns;
@@ -136,7 +135,7 @@ export async function revisionsView(input: Pick<MemoInput, 'revisions' | 'series
   const asOf = noLinks(revisions.as_of);
   const { columns } = revisionsWording;
   const perModel = [columns.earlier, columns.now, columns.change, columns.percent];
-  const base = { heading: revisionsWording.heading, columns, modelColumns: [...perModel, ...perModel], none: revisionsWording.none(asOf) };
+  const base = { heading: revisionsWording.heading, columns, modelColumns: [...perModel, ...perModel] };
   const { earlier } = revisions;
   if (earlier === null) return { ...base, compared: false, intro: '', dropped: '', series: [] };
   const earlierAsOf = noLinks(earlier.as_of);
