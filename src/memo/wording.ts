@@ -124,7 +124,6 @@ export const LABELS = {
   command: 'Command',
   runDate: 'Run date',
   config: 'Configuration file',
-  dataFile: 'Data file',
   sha256: 'SHA-256',
   file: 'File',
   horizon: 'h',
