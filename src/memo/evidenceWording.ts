@@ -80,9 +80,9 @@ export const evidenceWording = {
     };
     const flagged = models.filter((m) => m.flagged.length > 0);
     if (flagged.length === 0) return 'Checks of the one-step forecast errors find no problem in either model (detail in the technical appendix).';
-    const parts = flagged.map((m) => `${MODEL_NAME[m.model].toLowerCase()}: ${listInWords(m.flagged.map((c) => what[c]))}`);
+    const parts = flagged.map((m) => `for the ${MODEL_NAME[m.model].toLowerCase()}, ${listInWords(m.flagged.map((c) => what[c]))}`);
     const clean = models.filter((m) => m.flagged.length === 0).map((m) => MODEL_NAME[m.model].toLowerCase());
-    return `Checks of the one-step forecast errors flag ${parts.join('; ')}${clean.length > 0 ? `; nothing for the ${clean[0]}` : ''} (detail in the technical appendix).`;
+    return `Checks of the one-step forecast errors find, ${parts.join('; ')}${clean.length > 0 ? `; for the ${clean[0]}, nothing` : ''} (detail in the technical appendix).`;
   },
 
   /** `yearSteps`: the stochastic model works on seasonal differences over this many periods (a year); absent otherwise. */

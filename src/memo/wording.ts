@@ -68,10 +68,7 @@ export const DECISION_NAME: Record<SignOffDecision, string> = {
 };
 
 export const HEADINGS = {
-  summary: 'Summary for the client',
-  history: 'History',
   forecast: 'Forecast',
-  widthRatio: 'How much narrower the deterministic intervals are',
   backtest: 'Backtest accuracy',
   evidence: 'What the data say about the trend',
   models: 'The two models',
@@ -144,7 +141,6 @@ export const LABELS = {
 /** Short fixed text the templates place: table captions, column heads, small labels. */
 export const TEMPLATE_TEXT = {
   memoKind: 'Forecast memo',
-  atPeriod: (period: string) => `At ${period}`,
   recommendedMarker: 'recommended',
   assumes: 'It assumes',
   squaredErrorLoss: 'Squared error',
@@ -152,7 +148,7 @@ export const TEMPLATE_TEXT = {
   intervalHead: (level: number) => `${levelPercent(level)} interval`,
   noAssumptions: 'No assumptions were recorded for this series.',
   forecastCaption: (units: string) => (units === '' ? 'Forecasts by period' : `Forecasts by period (${units})`),
-  pointCaption: (units: string) => (units === '' ? 'Point accuracy by horizon' : `Point accuracy by horizon (RMSE in ${units})`),
+  backtestCaption: (units: string) => (units === '' ? 'Accuracy by horizon' : `Accuracy by horizon (RMSE and interval score in ${units})`),
   comparisonCaption: 'Comparison tests by horizon',
   notTested: 'not tested',
   methodShort: { deterministic: 'Det.', stochastic: 'Stoch.', naive: 'Bench.', seasonal_naive: 'Bench.' } as Record<BacktestMethod, string>,
@@ -162,15 +158,13 @@ export const TEMPLATE_TEXT = {
   backtestGlossary:
     'Backtest tables: RMSE is the root mean squared error. MASE is the mean absolute error over a fixed in-sample yardstick, the benchmark\u2019s mean error one step (for a seasonal series one season) ahead within the training history; values above 1 at longer horizons are usual for every method, the benchmark included. Cover is the share of outcomes inside the interval. The interval score is the width plus a penalty for outcomes outside it. MAPE, interval widths and CRPS at every horizon are in record.json.',
   ruleStudyPointer: 'How this rule behaves in simulation: see the technical appendix.',
-  rowsShown: (shown: readonly number[]) => `Rows shown: steps ${listInWords(shown.map(String))}; every step is in forecasts.csv and record.json.`,
-  backtestRowsShown: (shown: readonly number[]) => `Rows shown: steps ${listInWords(shown.map(String))}; every step is in record.json.`,
+  /** `files`: where every step is, e.g. "forecasts.csv and record.json". */
+  rowsShown: (shown: readonly number[], files: string) => `Rows shown: steps ${listInWords(shown.map(String))}; every step is in ${files}.`,
   widthFlat: (level: number, low: string, high: string) =>
-    low === high
-      ? `The deterministic model's ${levelPercent(level)} interval is ${low} times as wide as the stochastic model's at every horizon: the two models' uncertainty hardly differs.`
-      : `The deterministic model's ${levelPercent(level)} interval is ${low} to ${high} times as wide as the stochastic model's at every horizon: the two models' uncertainty hardly differs.`,
-  widthRange: (level: number, first: { period: string; ratio: string }, last: { period: string; ratio: string }, low: string, high: string) => {
-    const direction = Number(high) < 1 ? 'narrower at every horizon' : Number(low) > 1 ? 'wider at every horizon' : 'narrower at some horizons and wider at others';
-    return `Width ratio: the deterministic model's ${levelPercent(level)} interval divided by the stochastic model's, ${first.ratio} at ${first.period} and ${last.ratio} at ${last.period} (${direction}).`;
+    `The deterministic model's ${levelPercent(level)} interval is ${low === high ? low : `${low} to ${high}`} times as wide as the stochastic model's at every horizon: the two models' uncertainty hardly differs.`,
+  widthRange: (level: number, first: { period: string; ratio: string }, last: { period: string; ratio: string }, direction: 'narrower' | 'wider' | 'mixed') => {
+    const words = { narrower: 'narrower at every horizon', wider: 'wider at every horizon', mixed: 'narrower at some horizons and wider at others' };
+    return `Width ratio: the deterministic model's ${levelPercent(level)} interval divided by the stochastic model's, ${first.ratio} at ${first.period} and ${last.ratio} at ${last.period} (${words[direction]}).`;
   },
   /** Coverage at every level; width and score at the level the recommendation rule scores. */
 } as const;

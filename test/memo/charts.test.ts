@@ -263,3 +263,24 @@ describe('timeAxis', () => {
     expect(compileChart(spec).warnings).toEqual([]);
   });
 });
+
+describe('widthNote', () => {
+  /** Forecasts whose deterministic 95% interval is `ratio` times the stochastic one at each of four steps. */
+  function withRatios(ratios: number[]) {
+    const row = (h: number, width: number) => ({ h, period: String(2024 + h), point: 10, intervals: { '95': [10 - width / 2, 10 + width / 2] as [number, number] } });
+    return {
+      settings: { levels: [95] },
+      forecasts: { deterministic: ratios.map((r, i) => row(i + 1, 2 * r)), stochastic: ratios.map((_, i) => row(i + 1, 2)) },
+    } as unknown as Parameters<typeof widthNote>[0];
+  }
+
+  it('says the uncertainty hardly differs only when every ratio is near 1 (our wording rule)', () => {
+    expect(widthNote(withRatios([0.99, 1, 1.01, 1]))).toContain("the two models' uncertainty hardly differs");
+    // Steady at 0.60: the fixed line is much narrower throughout, whatever the ratio's steadiness.
+    const steady = widthNote(withRatios([0.6, 0.6, 0.6, 0.6]));
+    expect(steady).not.toContain('hardly differs');
+    expect(steady).toContain('0.60 at 2025 and 0.60 at 2028 (narrower at every horizon)');
+    expect(widthNote(withRatios([0.9, 1.1, 1.2, 1.3]))).toContain('(narrower at some horizons and wider at others)');
+    expect(widthNote(withRatios([1.1, 1.2, 1.2, 1.3]))).toContain('(wider at every horizon)');
+  });
+});

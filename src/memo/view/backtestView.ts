@@ -47,7 +47,7 @@ function comparisonCells(c: ComparisonRow | undefined, significance: number, rea
 
 export interface BacktestView {
   settings: string;
-  /** The benchmark's name, for the table's note. */
+  /** The benchmark's name, as the table's note gives it. */
   benchmarkName: string;
   /**
    * One table of the figures a reviewer weighs: RMSE and MASE of the two models and the
@@ -78,8 +78,9 @@ export function backtestView(backtest: BacktestRecord, frequency: Frequency, dec
   const picked = new Set(shownHorizons(every.length, BACKTEST_TABLE_ROWS, periodsPerYear(frequency)));
   const horizons = every.filter((h) => picked.has(h));
   const reasons: string[] = [];
+  const benchmark = METHOD_NAME[backtestMethods(backtest)[2]];
   return {
-    benchmarkName: METHOD_NAME[backtestMethods(backtest)[2]],
+    benchmarkName: benchmark,
     settings: evidenceWording.backtestSettings({
       origins: backtest.origins.length,
       firstLength: first?.length ?? 0,
@@ -97,7 +98,7 @@ export function backtestView(backtest: BacktestRecord, frequency: Frequency, dec
       // Records written before the seasonal yardstick have no mase_scaling: theirs was the no-change forecast.
       maseScaling: backtest.settings.mase_scaling ?? 'naive',
     }),
-    summary: summaryTable(backtest, horizons, decimals, scoredLevel),
+    summary: summaryTable(backtest, horizons, decimals, scoredLevel, benchmark),
     comparisonIntro: evidenceWording.comparisonIntro(scoredLevel),
     losses: [TEMPLATE_TEXT.squaredErrorLoss, TEMPLATE_TEXT.intervalScoreLoss(scoredLevel)],
     // The p-value alone decides significance; the outcome only names the lower mean loss.
@@ -107,12 +108,12 @@ export function backtestView(backtest: BacktestRecord, frequency: Frequency, dec
       .map((h) => ({ h, tests: comparedLosses.map((loss) => comparisonCells(backtest.comparison.find((c) => c.h === h && c.loss === loss), backtest.settings.significance, reasons)) })),
     comparisonNotes: reasons.map((reason, i) => `(${i + 1}) ${TEMPLATE_TEXT.notTested}: ${reason}.`),
     notes: backtest.notes.map(noLinks),
-    rowsNote: horizons.length === every.length ? '' : TEMPLATE_TEXT.backtestRowsShown(horizons),
+    rowsNote: horizons.length === every.length ? '' : TEMPLATE_TEXT.rowsShown(horizons, 'record.json'),
   };
 }
 
 /** The combined accuracy table: per horizon RMSE and MASE of all three methods, coverage and interval score of the two models. */
-function summaryTable(backtest: BacktestRecord, horizons: readonly number[], decimals: number, scoredLevel: number): BacktestView['summary'] {
+function summaryTable(backtest: BacktestRecord, horizons: readonly number[], decimals: number, scoredLevel: number, benchmark: string): BacktestView['summary'] {
   const methods = backtestMethods(backtest);
   const models = ['deterministic', 'stochastic'] as const;
   const { levels } = backtest.settings;
@@ -138,6 +139,6 @@ function summaryTable(backtest: BacktestRecord, horizons: readonly number[], dec
         ],
       };
     }),
-    note: TEMPLATE_TEXT.backtestTableNote(METHOD_NAME[methods[2]]),
+    note: TEMPLATE_TEXT.backtestTableNote(benchmark),
   };
 }

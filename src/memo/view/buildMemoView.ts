@@ -76,6 +76,7 @@ export async function buildMemoView(input: MemoInput): Promise<MemoView> {
   for (const [i, entry] of input.series.entries()) series.push(await seriesView(entry, i));
   const trackRecord = await trackRecordView(input);
   const signOffs = input.sign_offs ?? [];
+  const interval = intervalHead(input.series.map((entry) => entry.record));
   const status = memoStatus(memo.reviewers, signOffs);
   const digest = (d: { file: string; sha256: string }) => ({ file: noLinks(d.file), sha256: noLinks(d.sha256) });
   return {
@@ -93,10 +94,10 @@ export async function buildMemoView(input: MemoInput): Promise<MemoView> {
     status: { ...status, detail: noLinks(status.detail), draft: status.state !== 'signed-off' },
     pageOne: {
       heading: PAGE_ONE.heading,
-      heads: { next: PAGE_ONE.nextHead, year: PAGE_ONE.yearHead, end: PAGE_ONE.endHead, interval: intervalHead(input.series.map((e) => e.record)) },
+      heads: { next: PAGE_ONE.nextHead, year: PAGE_ONE.yearHead, end: PAGE_ONE.endHead, interval },
       series: input.series.map((entry, i) => pageOneSeries(entry, series[i], seriesDecimals(entry.record))),
       changes: noLinks(changesLine(input.revisions)),
-      legend: PAGE_ONE.legend(intervalHead(input.series.map((e) => e.record)).replace(' interval', '').toLowerCase()),
+      legend: PAGE_ONE.legend(interval.replace(' interval', '').toLowerCase()),
       issued: { label: PAGE_ONE.issued, date: noLinks(reproducibility.run_date) },
     },
     series,

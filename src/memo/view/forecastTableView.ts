@@ -63,5 +63,5 @@ export function forecastTableView(record: AnalysisRecord, decimals: number, unit
       }))),
     cellsOf: (row) => [String(row.h), row.period, ...row.cells],
   });
-  return { caption: TEMPLATE_TEXT.forecastCaption(units), rowsNote: shown.size === horizon ? '' : TEMPLATE_TEXT.rowsShown([...shown]), ...table };
+  return { caption: TEMPLATE_TEXT.forecastCaption(units), rowsNote: shown.size === horizon ? '' : TEMPLATE_TEXT.rowsShown([...shown], 'forecasts.csv and record.json'), ...table };
 }

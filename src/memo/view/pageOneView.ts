@@ -10,7 +10,6 @@ import { noLinks } from '../format/noLinks.js';
 import { atLevel, widestLevel } from '../intervalLevels.js';
 import type { MemoSeries } from '../memoInput.js';
 import type { Revisions } from '../revisionsPart.js';
-import { yearWording } from '../yearWording.js';
 import { LABELS, METHOD_NAME, PAGE_ONE, TEMPLATE_TEXT } from '../wording.js';
 import { intervalText } from './forecastTableView.js';
 import { agreement } from './agreement.js';
@@ -78,7 +77,7 @@ export function pageOneSeries(entry: MemoSeries, view: SeriesView, decimals: num
     source: PAGE_ONE.source(noLinks(entry.source ?? ''), noLinks(entry.vintage ?? '')),
     labels: {
       next: record.forecasts.deterministic[0]?.period ?? '',
-      year: year === null ? PAGE_ONE.annual : year.available ? yearWording.head(year.year, year.figure) : PAGE_ONE.yearBeyond(year.year),
+      year: year === null ? PAGE_ONE.annual : year.available ? (view.year?.head ?? '') : PAGE_ONE.yearBeyond(year.year),
       end: record.forecasts.deterministic[last]?.period ?? '',
     },
     rows: TREND_MODELS.map((kind) => {

@@ -105,7 +105,7 @@ export async function seriesView(entry: MemoSeries, index: number): Promise<Seri
     notRun: NOT_RUN,
     backtestUnavailable: record.backtest_unavailable === undefined ? '' : noLinks(evidenceWording.backtestUnavailable(record.backtest_unavailable)),
     captions: {
-      point: TEMPLATE_TEXT.pointCaption(units ?? ''),
+      point: TEMPLATE_TEXT.backtestCaption(units ?? ''),
     },
     figures: {
       forecast: await figureView(`${anchor}-forecast`, forecastChart({ ...chartInput, history })),

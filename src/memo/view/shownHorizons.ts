@@ -19,8 +19,3 @@ export function shownHorizons(horizon: number, maxRows: number, period = 1): num
   shown.add(horizon);
   return [...shown].sort((a, b) => a - b);
 }
-
-/** "Rows shown: steps 1, 2, 3, 6 … 24; every step is in forecasts.csv." wording lives with the views. */
-export function allShown(shown: readonly number[], horizon: number): boolean {
-  return shown.length === horizon;
-}

@@ -23,10 +23,10 @@ export function widthRatios(record: Pick<AnalysisRecord, 'forecasts' | 'settings
   });
 }
 
-/** Ratios that round to the same two decimals within this distance read as "about the same throughout". */
-const FLAT = 0.02;
+/** Ratios all this close to 1 read as "the two models' uncertainty hardly differs". */
+const ABOUT_EQUAL = 0.02;
 
-/** One sentence on the ratios: their range and direction, or that they barely move. */
+/** One sentence on the ratios: the two models about equally wide throughout, or the first and last ratio and which way they lie. */
 export function widthNote(record: Pick<AnalysisRecord, 'forecasts' | 'settings'>): string {
   const rows = widthRatios(record);
   const first = rows[0];
@@ -37,6 +37,7 @@ export function widthNote(record: Pick<AnalysisRecord, 'forecasts' | 'settings'>
   const high = Math.max(...ratios);
   const level = widestLevel(record.settings);
   const text = (v: number) => formatNumber(v, 2);
-  if (high - low <= FLAT) return TEMPLATE_TEXT.widthFlat(level, text(low), text(high));
-  return TEMPLATE_TEXT.widthRange(level, { period: first.period, ratio: text(first.ratio) }, { period: last.period, ratio: text(last.ratio) }, text(low), text(high));
+  if (Math.abs(low - 1) <= ABOUT_EQUAL && Math.abs(high - 1) <= ABOUT_EQUAL) return TEMPLATE_TEXT.widthFlat(level, text(low), text(high));
+  const direction = high < 1 ? 'narrower' : low > 1 ? 'wider' : 'mixed';
+  return TEMPLATE_TEXT.widthRange(level, { period: first.period, ratio: text(first.ratio) }, { period: last.period, ratio: text(last.ratio) }, direction);
 }
