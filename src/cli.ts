@@ -3,6 +3,7 @@
 // runs, so `--version` loads next to nothing and `fit` never loads the memo renderer or the
 // browser driver.
 import { closestName } from './base/closestName.js';
+import { EnvironmentError } from './base/environmentError.js';
 import { formatProblem, InputError } from './base/problem.js';
 import { toolVersion } from './base/toolVersion.js';
 import { EXIT } from './cli/exitCodes.js';
@@ -65,7 +66,7 @@ export async function cli(argv: readonly string[], io: CliIo): Promise<number> {
   } catch (error) {
     if (error instanceof InputError) {
       for (const problem of error.problems) io.stderr(`${formatProblem(problem)}\n`);
-      return EXIT.input;
+      return error instanceof EnvironmentError ? EXIT.environment : EXIT.input;
     }
     io.stderr(`trendbrief: internal error: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}\n`);
     return EXIT.internal;

@@ -1,6 +1,6 @@
 // `trendbrief run CONFIG... [--out DIR] [--formats html,pdf,json,csv] [--quiet]`: one memo per
 // config. A config that fails is reported and the others still run; the exit code says the
-// worst that happened (2 for bad input, 1 for an internal failure).
+// worst that happened (1 for an internal failure, 4 for no browser, 2 for bad input).
 import { availableParallelism } from 'node:os';
 import { join, resolve } from 'node:path';
 import { OUTPUT_FORMATS } from '../config/configSpec.js';
@@ -10,13 +10,15 @@ import { formatProblem, InputError, type InputProblem } from '../base/problem.js
 import { cliMessages, configCommandMessages } from './messages.js';
 import { runMessages } from '../run/messages.js';
 import type { PdfPrinter } from '../memo/print/pdfPrinter.js';
+import { browserProblem } from '../memo/print/browserPath.js';
 import { runMemo, type MemoRunResult } from '../run/runMemo.js';
 import { openSeriesPool } from '../run/seriesPool.js';
 import { batchOrder, type BatchEntry } from './batchOrder.js';
 import { progressReporter } from './progressReporter.js';
 import { splitOptions } from './splitOptions.js';
 import { shownPath } from '../base/shownPath.js';
-import { EXIT } from './exitCodes.js';
+import { EnvironmentError } from '../base/environmentError.js';
+import { EXIT, worseExit } from './exitCodes.js';
 
 export const RUN_HELP = `Usage: trendbrief run CONFIG.yaml... [options]
 
@@ -98,11 +100,13 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
     quiet ? undefined : { write: (text) => (io.isTTY === true ? io.stderr(text) : io.stdout(text)), isTTY: io.isTTY === true },
   );
   let printer: Promise<PdfPrinter> | undefined;
+  let noBrowser: InputProblem | null | undefined;
   // The browser driver loads, and Chromium starts, only when the first PDF is printed.
   const sharedPrinter = (): Promise<PdfPrinter> => (printer ??= import('../memo/print/pdfPrinter.js').then(({ openPdfPrinter }) => openPdfPrinter()));
   const pool = threads > 1 && totalSeries > 1 ? openSeriesPool(Math.min(threads, totalSeries)) : undefined;
   const outcomes: MemoOutcome[] = [];
   let exitCode: number = EXIT.ok;
+  let environmentReported = false;
   const { order, after } = batchOrder(previews);
   const runOne = async (index: number): Promise<MemoRunResult> => {
     const config = positionals[index];
@@ -112,6 +116,11 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
     const folder = previews[index].folder;
     const first = folder === undefined ? undefined : claimed.get(folder);
     if (first !== undefined && first !== index) throw new InputError(runMessages.sameMemoFolder({ file: config, field: 'memo.id' }, positionals[first]));
+    // A memo that needs a PDF and has no browser stops before its analysis.
+    if ((formats ?? previews[index].formats)?.includes('pdf') === true) {
+      const missing = (noBrowser ??= browserProblem() ?? null);
+      if (missing !== null) throw new EnvironmentError(missing);
+    }
     return runMemo(config, {
       outputFolder: typeof out === 'string' ? resolve(out) : undefined,
       formats,
@@ -150,14 +159,23 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
       progress.finish();
       if (!(error instanceof InputError)) {
         io.stderr(`${config}: internal error: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}\n`);
-        exitCode = Math.max(exitCode, EXIT.internal);
+        exitCode = worseExit(exitCode, EXIT.internal);
         outcomes.push({ config, memo: '-', series: null, result: 'failed: internal error (see above)', folder: '-' });
         progress.memoDone(config, false);
         continue;
       }
+      if (error instanceof EnvironmentError) {
+        // One browser serves the whole batch: its failure is reported once, and each memo that needed it says so.
+        if (!environmentReported) for (const problem of error.problems) io.stderr(`${formatProblem(problem)}\n`);
+        environmentReported = true;
+        progress.memoDone(config, false);
+        exitCode = worseExit(exitCode, EXIT.environment);
+        outcomes.push({ config, memo: '-', series: null, result: 'failed: no browser for the PDF (see above; nothing written)', folder: '-' });
+        continue;
+      }
       for (const problem of error.problems) io.stderr(`${formatProblem(problem)}\n`);
       progress.memoDone(config, false);
-      exitCode = EXIT.input;
+      exitCode = worseExit(exitCode, EXIT.input);
       const count = error.problems.length;
       outcomes.push({ config, memo: '-', series: null, result: `failed: ${count} input problem${count === 1 ? '' : 's'} (see above)`, folder: '-' });
     }
@@ -176,12 +194,12 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
  * the memo id's folder with the as-of period (for the batch's order); nothing for a config that
  * does not load.
  */
-function previewConfig(config: string, outputFolder: string | undefined): { series: number; folder?: string } & BatchEntry {
+function previewConfig(config: string, outputFolder: string | undefined): { series: number; folder?: string; formats?: readonly OutputFormat[] } & BatchEntry {
   try {
     const plan = loadConfig(config);
     const idFolder = join(outputFolder ?? plan.output.folder, plan.memo.id);
     const folder = join(idFolder, plan.memo.asOf ?? '');
-    return { series: plan.series.length, folder, idFolder, asOf: plan.memo.asOf };
+    return { series: plan.series.length, folder, idFolder, asOf: plan.memo.asOf, formats: plan.output.formats };
   } catch {
     return { series: 0 };
   }

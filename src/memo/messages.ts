@@ -28,7 +28,27 @@ export const templateMessages = {
   },
 };
 
+/** Where the Chromium path came from, as the user would set it. */
+export type ChromiumSource = 'option' | 'environment' | 'default';
+
+const LEAVE_OUT_PDF = 'or, for run, leave the PDF out (--formats html,json,csv, or output.formats in the config)';
+
 export const printMessages = {
+  browserMissing(path: string, source: ChromiumSource, why: string): InputProblem {
+    const setBy = source === 'environment' ? ' (set by TRENDBRIEF_CHROMIUM)' : source === 'option' ? '' : ' (the default place)';
+    return problem(
+      'print.no-browser',
+      `no Chromium to print the PDF: ${path}${setBy} ${why}`,
+      `install Debian's chromium (apt-get install chromium), point TRENDBRIEF_CHROMIUM at a Chromium or Chrome binary, ${LEAVE_OUT_PDF}`,
+    );
+  },
+  browserFailed(path: string, detail: string): InputProblem {
+    return problem(
+      'print.browser-failed',
+      `Chromium at ${path} did not start to print the PDF (${detail})`,
+      `check that it runs (${path} --headless --version), point TRENDBRIEF_CHROMIUM at another Chromium, ${LEAVE_OUT_PDF}`,
+    );
+  },
   temporaryUnusable(folder: string, code: string): InputProblem {
     return problem(
       'print.temporary-folder',

@@ -3,7 +3,7 @@
 // byte (our spec). Real mounts stand in for a read-only disk and a full one (a tmpfs mounted
 // read-only, one filled to its size), the immutable flag for a folder root may not write to
 // (chmod does not stop root, who runs these tests in CI), and /proc/self for a folder the
-// kernel makes up. A browser that cannot start is a failure reported exactly once.
+// kernel makes up.
 import { execFileSync } from 'node:child_process';
 import { closeSync, cpSync, mkdirSync, mkdtempSync, openSync, readFileSync, rmSync, writeFileSync, writeSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -111,20 +111,6 @@ describe('file-system refusals', () => {
       else process.env.TMPDIR = saved;
     }
     expect(treeSnapshot(root)['pdf-out']).toBeUndefined();
-  });
-
-  it('reports a browser that cannot start exactly once', async () => {
-    const missing = join(root, 'no-such-browser/chromium');
-    const saved = process.env.TRENDBRIEF_CHROMIUM;
-    process.env.TRENDBRIEF_CHROMIUM = missing;
-    try {
-      const result = await run('memo.yaml', '--out', join(root, 'browser-out'), '--formats', 'html,pdf');
-      expect(result.code).not.toBe(0);
-      expect(result.errorLines.filter((line) => line.includes(missing))).toHaveLength(1);
-    } finally {
-      if (saved === undefined) delete process.env.TRENDBRIEF_CHROMIUM;
-      else process.env.TRENDBRIEF_CHROMIUM = saved;
-    }
   });
 
   it('turns a folder missing on the way while writing into a message naming the output folder', () => {

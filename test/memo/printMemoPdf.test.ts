@@ -70,6 +70,6 @@ describe('printing the memo', () => {
   });
 
   it('names the browser path it could not start', async () => {
-    await expect(openPdfPrinter({ executablePath: '/nonexistent/chromium' })).rejects.toThrow(/could not start Chromium at \/nonexistent\/chromium/);
+    await expect(openPdfPrinter({ executablePath: '/nonexistent/chromium' })).rejects.toThrow('no Chromium to print the PDF: /nonexistent/chromium does not exist');
   });
 });

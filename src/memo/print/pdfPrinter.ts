@@ -6,17 +6,15 @@
 // SIGKILL included. Its profile and home folder live in the run's own temporary folder
 // (browserFolder.ts), so it writes nothing to the user's home.
 import puppeteer, { type Browser } from 'puppeteer-core';
+import { EnvironmentError } from '../../base/environmentError.js';
+import { printMessages } from '../messages.js';
+import { browserProblem, chromiumSetting, type PdfPrinterOptions } from './browserPath.js';
 import { openBrowserFolder } from './browserFolder.js';
 import type { Paper } from '../memoInput.js';
 import { footerTemplate } from './footerTemplate.js';
 import { PAGE_MARGIN, PAPER_SIZES } from './paperSize.js';
 
-export const DEFAULT_CHROMIUM = '/usr/bin/chromium';
-
-export interface PdfPrinterOptions {
-  /** Path to a Chromium binary; default TRENDBRIEF_CHROMIUM, else /usr/bin/chromium. */
-  executablePath?: string;
-}
+export { chromiumPath, DEFAULT_CHROMIUM, type PdfPrinterOptions } from './browserPath.js';
 
 export interface PrintOptions {
   paper: Paper;
@@ -42,10 +40,6 @@ const FLAGS = [
   '--host-resolver-rules=MAP * ~NOTFOUND',
   '--disable-breakpad',
 ];
-
-export function chromiumPath(options: PdfPrinterOptions = {}): string {
-  return options.executablePath ?? process.env.TRENDBRIEF_CHROMIUM ?? DEFAULT_CHROMIUM;
-}
 
 /** Prints one memo on an open browser: a fresh page, all requests blocked, page numbers in the footer. */
 export async function printOnBrowser(browser: Browser, html: string, options: PrintOptions | Paper): Promise<Buffer> {
@@ -74,13 +68,18 @@ export async function printOnBrowser(browser: Browser, html: string, options: Pr
 
 /** One browser for many PDFs; close it when done (it also removes its temporary profile). */
 export async function openPdfPrinter(options: PdfPrinterOptions = {}): Promise<PdfPrinter> {
+  const missing = browserProblem(options);
+  if (missing !== undefined) throw new EnvironmentError(missing);
+  const { path } = chromiumSetting(options);
   const folder = openBrowserFolder();
   let browser: Browser;
   try {
-    browser = await puppeteer.launch({ executablePath: chromiumPath(options), headless: true, args: FLAGS, userDataDir: folder.profile, env: folder.env, pipe: true });
+    browser = await puppeteer.launch({ executablePath: path, headless: true, args: FLAGS, userDataDir: folder.profile, env: folder.env, pipe: true });
   } catch (error) {
     folder.remove();
-    throw new Error(`could not start Chromium at ${chromiumPath(options)} to print the PDF: ${error instanceof Error ? error.message : String(error)}`);
+    // The launcher's message starts with its own summary line; the rest is Chromium's log.
+    const detail = (error instanceof Error ? error.message : String(error)).split('\n')[0].slice(0, 200);
+    throw new EnvironmentError(printMessages.browserFailed(path, detail));
   }
   return {
     print: (html, printOptions) => printOnBrowser(browser, html, printOptions),
