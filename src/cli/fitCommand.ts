@@ -1,6 +1,7 @@
 // `trendbrief fit FILE.csv`: read, analyse, print the record (--json) or a summary.
 import { analyseSeries, requiredObservations } from '../analysis/analyseSeries.js';
-import { BUILT_IN_SETTINGS as BUILT_IN, HORIZON_BY_FREQUENCY } from '../config/builtInSettings.js';
+import { BUILT_IN_SETTINGS as BUILT_IN } from '../config/builtInSettings.js';
+import { DEFAULT_YEARS_AHEAD as YEARS } from '../base/periodEnd.js';
 import { readingSettings, resolveSettings } from '../config/resolveSettings.js';
 import { BACKTEST_FIELDS, LEVEL, SETTINGS_FIELDS } from '../config/settingsSpec.js';
 import { readSeriesCsv } from '../data/readSeriesCsv.js';
@@ -8,8 +9,6 @@ import { formatSummary } from './formatSummary.js';
 import { fitOptionPlace, parseFitOptions } from './parseFitOptions.js';
 import { EXIT } from './exitCodes.js';
 import { MIN_BACKTEST_ORIGINS } from '../base/settings.js';
-
-const H = HORIZON_BY_FREQUENCY;
 
 export const FIT_HELP = `Usage: trendbrief fit FILE.csv [options]
 
@@ -23,7 +22,10 @@ Options:
   --period-column NAME      period column (default: the first column)
   --frequency F             annual, quarterly or monthly (default: inferred from the periods)
   --transform T             none, log or box-cox:LAMBDA (default: ${BUILT_IN.transform})
-  --horizon H               forecast steps, 1 to ${SETTINGS_FIELDS.horizon.max} (default: ${H.annual} annual, ${H.quarterly} quarterly, ${H.monthly} monthly)
+  --through PERIOD          the last period to forecast, e.g. 2030, 2030-Q4 or 2030-12 (default: the
+                            end of the calendar year ${YEARS.monthly} years after the last observation's for
+                            monthly and quarterly data, ${YEARS.annual} years after it for annual data)
+  --horizon H               forecast steps instead, 1 to ${SETTINGS_FIELDS.horizon.max}
   --max-p N, --max-q N      largest AR and MA orders searched, 0 to ${SETTINGS_FIELDS.max_p.max} (default: ${BUILT_IN.max_p} and ${BUILT_IN.max_q})
   --levels L1,L2            one to ${SETTINGS_FIELDS.levels.maxItems} interval levels in percent, above ${LEVEL.min} and below ${LEVEL.max}
                             (default: ${BUILT_IN.levels.join(',')})

@@ -35,6 +35,12 @@ export const cliMessages = {
   extraArguments(extra: readonly string[]): InputProblem {
     return problem('cli.extra-arguments', `unexpected argument${extra.length > 1 ? 's' : ''} ${extra.join(' ')}`, 'give one CSV file');
   },
+  horizonAndThrough(): InputProblem {
+    return problem('cli.horizon-and-through', '--horizon and --through both say how far to forecast', 'give one of them: --horizon in steps, or --through as an end period', { field: '--through' });
+  },
+  badThrough(value: string): InputProblem {
+    return problem('cli.bad-option-value', `'${value}' is not a period`, 'give the last period to forecast, e.g. 2030, 2030-Q4 or 2030-12', { field: '--through' });
+  },
   notAnInteger(option: string, value: string, min: number, max: number): InputProblem {
     return problem('cli.bad-value', `'${value}' is not a whole number from ${min} to ${max}`, `give --${option} a whole number from ${min} to ${max}`, {
       field: `--${option}`,

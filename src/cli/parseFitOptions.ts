@@ -1,6 +1,7 @@
 // `trendbrief fit` arguments → the settings as a config would write them, every problem
 // collected. Ranges and choices come from the config's settings spec, so an option accepts
 // exactly what the config key does; resolveSettings then fills in the rest, as for a config.
+import { PERIOD_PATTERN, PERIOD_YEAR_RANGE } from '../base/textPatterns.js';
 import type { Frequency } from '../base/period.js';
 import { InputError, type InputLocation, type InputProblem } from '../base/problem.js';
 import type { WrittenSettings } from '../config/resolveSettings.js';
@@ -25,6 +26,7 @@ export interface FitRequest {
 /** The option that sets each setting, for messages about the settings fit resolves. */
 export const FIT_OPTION_OF: Readonly<Record<string, string>> = {
   horizon: '--horizon',
+  through: '--through',
   transform: '--transform',
   levels: '--levels',
   coefficient_uncertainty: '--no-coef-uncertainty',
@@ -52,6 +54,7 @@ const FIT_OPTIONS: Readonly<Record<string, OptionSpec>> = {
   frequency: { type: 'string' },
   transform: { type: 'string' },
   horizon: { type: 'string' },
+  through: { type: 'string' },
   'max-p': { type: 'string' },
   'max-q': { type: 'string' },
   levels: { type: 'string' },
@@ -101,6 +104,7 @@ export function parseFitOptions(args: readonly string[]): FitRequest {
   const settings: WrittenSettings = {
     transform: parseTransform(text('transform'), problems),
     horizon: integer('horizon', SETTINGS_FIELDS.horizon),
+    through: parseThrough(text('through'), text('horizon'), problems),
     max_p: integer('max-p', SETTINGS_FIELDS.max_p),
     max_q: integer('max-q', SETTINGS_FIELDS.max_q),
     levels: parseLevels(text('levels'), problems),
@@ -124,6 +128,20 @@ export function parseFitOptions(args: readonly string[]): FitRequest {
   };
   if (problems.length > 0) throw new InputError(problems);
   return request;
+}
+
+/** An end period as the config writes one (2030, 2030-Q4, 2030-12), and not beside --horizon. */
+function parseThrough(value: string | undefined, horizon: string | undefined, problems: InputProblem[]): string | undefined {
+  if (value === undefined) return undefined;
+  if (horizon !== undefined) {
+    problems.push(cliMessages.horizonAndThrough());
+    return undefined;
+  }
+  const match = new RegExp(PERIOD_PATTERN, 'u').exec(value.trim());
+  const year = Number(value.trim().slice(0, 4));
+  if (match !== null && year >= PERIOD_YEAR_RANGE.min && year <= PERIOD_YEAR_RANGE.max) return value.trim();
+  problems.push(cliMessages.badThrough(value));
+  return undefined;
 }
 
 /** `none`, `log` or `box-cox:LAMBDA`, LAMBDA within the spec's range. */

@@ -93,6 +93,15 @@ function seriesPlan(
     const value = pick(key, (own as Record<string, unknown> | undefined)?.[inner], (shared as Record<string, unknown> | undefined)?.[inner]);
     if (value !== undefined) merged[group] = { ...(merged[group] as object | undefined), [inner]: value };
   }
+  // How far to forecast is one choice written two ways: a series' own horizon or through
+  // replaces either under defaults (the config rules refuse both at one level).
+  const reach = { horizon: entry.horizon, through: entry.through };
+  for (const [key, other] of [['horizon', 'through'], ['through', 'horizon']] as const) {
+    if (reach[key] !== undefined && reach[other] === undefined) {
+      delete merged[other];
+      settingPlaces.delete(other);
+    }
+  }
   return {
     id: entry.id,
     title: entry.title ?? entry.id,

@@ -1,6 +1,6 @@
 // The value every setting takes when neither the series nor `defaults` sets it, written once:
 // the spec shows these in the JSON Schema and resolveSettings applies them. The defaults that
-// depend on the data or on other settings (the horizon on the frequency, the backtest's
+// depend on the data or on other settings (the horizon on the last observation, the backtest's
 // shortest training window on the order limits, its horizon on the forecast horizon and the
 // series' length, the scored level on the levels) are rules in
 // resolveSettings.ts, stated in words in the spec.
@@ -26,8 +26,6 @@ export const BUILT_IN_SETTINGS = {
   missing: 'error',
 } as const;
 
-/** Forecast steps by frequency when no horizon is set: ten years, three years of quarters, two years of months. */
-export const HORIZON_BY_FREQUENCY = { annual: 10, quarterly: 12, monthly: 24 } as const;
 
 /** The shortest backtest training window when none is set: at least this many observations ... */
 export const MIN_TRAIN_FLOOR = 20;

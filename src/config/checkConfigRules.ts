@@ -15,6 +15,14 @@ export function checkConfigRules(doc: Loose<ConfigDocument>, v: Validation): voi
     v,
     (at, id, firstField, firstLine) => configMessages.duplicateSeriesId(at, id, firstField, firstLine),
   );
+  // Steps and an end period at one level would contradict each other or say the same twice.
+  const levels = [{ entry: doc.defaults, field: 'defaults' }, ...(doc.series ?? []).map((entry, index) => ({ entry, field: `series[${index}]` }))];
+  for (const { entry, field } of levels) {
+    const horizonAt = v.positions.get(`${field}.horizon`);
+    const throughAt = v.positions.get(`${field}.through`);
+    if (entry?.horizon === undefined || entry.through === undefined || horizonAt === undefined || throughAt === undefined) continue;
+    v.problems.push(configMessages.horizonAndThrough({ file: v.file, ...throughAt, field: `${field}.through` }, `${field}.horizon`, horizonAt.line));
+  }
   const reviewers = doc.memo?.reviewers ?? [];
   reviewers.forEach((entry, index) => {
     const field = `memo.reviewers[${index}].public_key`;

@@ -2,8 +2,10 @@
 // fictional ferry service, a random walk with drift drawn from a fixed seed, so every init writes
 // the same file.
 
-export const EXAMPLE_FIRST_YEAR = 1996;
-export const EXAMPLE_YEARS = 30;
+// Long enough for the default backtest: 20 origins after the shortest training window (27
+// observations at the default order limits) for a five-year horizon.
+export const EXAMPLE_FIRST_YEAR = 1974;
+export const EXAMPLE_YEARS = 52;
 
 /** Uniform draws in [0, 1) from a 32-bit linear congruential generator (Numerical Recipes, ch. 7 constants). */
 function uniforms(seed: number): () => number {
@@ -24,7 +26,7 @@ function normals(seed: number): () => number {
 export function exampleSeriesCsv(seed = 20_260_101): string {
   const draw = normals(seed);
   const lines = ['year,boardings'];
-  let level = 312;
+  let level = 95;
   for (let i = 0; i < EXAMPLE_YEARS; i++) {
     level += 4.5 + 7 * draw();
     lines.push(`${EXAMPLE_FIRST_YEAR + i},${level.toFixed(1)}`);

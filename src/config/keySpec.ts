@@ -123,8 +123,8 @@ export function choice<const V extends readonly string[]>(doc: string, values: V
   return { kind: 'choice', doc, values, ...options };
 }
 
-export function period(doc: string): Spec<PeriodSpec, string> {
-  return { kind: 'period', doc };
+export function period(doc: string, options: { defaultText?: string } = {}): Spec<PeriodSpec, string> {
+  return { kind: 'period', doc, ...options };
 }
 
 export function list<T>(

@@ -244,6 +244,18 @@ export const configMessages = {
       at,
     );
   },
+  throughNotAhead(at: InputLocation, through: string, last: string): InputProblem {
+    return problem('config.through-not-ahead', `the forecast would end at ${through}, but the data already run to ${last}`, `give a period after ${last}, or leave through out for the default`, at);
+  },
+  throughInsidePeriod(at: InputLocation, through: string, frequency: string): InputProblem {
+    return problem('config.through-inside-period', `${quoted(through)} ends inside a period of this ${frequency} series`, `give the period the forecast ends with at the series' own frequency or coarser, e.g. ${frequency === 'annual' ? '2030' : frequency === 'quarterly' ? '2030-Q4 or 2030' : '2030-12 or 2030'}`, at);
+  },
+  horizonTooLong(at: InputLocation, steps: number, max: number, through: string): InputProblem {
+    return problem('config.horizon-too-long', `forecasting through ${through} takes ${steps} steps; at most ${max} are allowed`, 'give an earlier end period', at);
+  },
+  horizonAndThrough(at: InputLocation, otherField: string, otherLine: number): InputProblem {
+    return problem('config.horizon-and-through', `says how far to forecast twice: ${otherField} (line ${otherLine}) says it too`, 'keep one of horizon (steps) and through (an end period)', at);
+  },
   scoredLevelNotListed(at: InputLocation, level: number, levels: readonly number[]): InputProblem {
     return problem(
       'config.scored-level',

@@ -2,7 +2,7 @@
 // merged `defaults` and series keys, and `fit`'s options, both arrive here in the config's own
 // shape; this is the only place a setting takes its default, each default written once:
 // built-in values in builtInSettings.ts, and the rules below for the four that depend on
-// something else (the horizon on the frequency, the shortest backtest training window on the
+// something else (the horizon on the end period and the last observation, the shortest backtest training window on the
 // order limits, the backtest horizon on the forecast horizon and the series' length, the
 // scored level on the levels).
 //
@@ -10,10 +10,11 @@
 // data), yet reading it needs the transform, the missing-value policy and the order limits:
 // `readingSettings` resolves those four, and `resolveSettings` builds the rest on them.
 import { harmonicColumnCount, periodsPerYear, type Frequency } from '../base/period.js';
+import { DEFAULT_YEARS_AHEAD, defaultThrough, periodThrough, stepsBetween } from '../base/periodEnd.js';
 import { InputError, type InputLocation } from '../base/problem.js';
 import { MIN_BACKTEST_ORIGINS, type AnalysisSettings, type SeasonalSetting, type Transform } from '../base/settings.js';
-import { BUILT_IN_SETTINGS as BUILT_IN, HORIZON_BY_FREQUENCY, MIN_TRAIN_FLOOR, MIN_TRAIN_PER_PARAMETER } from './builtInSettings.js';
-import { BACKTEST_FIELDS } from './settingsSpec.js';
+import { BUILT_IN_SETTINGS as BUILT_IN, MIN_TRAIN_FLOOR, MIN_TRAIN_PER_PARAMETER } from './builtInSettings.js';
+import { BACKTEST_FIELDS, SETTINGS_FIELDS } from './settingsSpec.js';
 import type { SettingsEntry } from './configSpec.js';
 import { configMessages } from './messages.js';
 
@@ -44,6 +45,8 @@ export interface SeriesFacts {
   n: number;
   /** The values (NaN where missing), when known: a fixed seasonal pattern is checked against the seasons observed. */
   values?: ArrayLike<number>;
+  /** The last period's label, when known: `through` and the default horizon count from it. */
+  last?: string;
 }
 
 /**
@@ -52,7 +55,7 @@ export interface SeriesFacts {
  */
 export function resolveSettings(written: WrittenSettings, series: SeriesFacts, placeOf: PlaceOf = nowhere): AnalysisSettings {
   const reading = readingSettings(written);
-  const horizon = written.horizon ?? HORIZON_BY_FREQUENCY[series.frequency];
+  const horizon = written.horizon ?? horizonThrough(written.through, series, placeOf);
   // The deterministic trend at the order limits has p + q + 3 parameters (intercept, slope, σ²).
   const minTrain = written.backtest?.min_train ?? Math.max(MIN_TRAIN_FLOOR, MIN_TRAIN_PER_PARAMETER * (reading.max_p + reading.max_q + 3));
   const levels = [...(written.levels ?? BUILT_IN.levels)].sort((a, b) => a - b);
@@ -90,6 +93,27 @@ export function resolveSettings(written: WrittenSettings, series: SeriesFacts, p
     },
     missing: reading.missing,
   });
+}
+
+/**
+ * Steps from the last observation through the end period written (`through`), or through the
+ * default one: the end of the calendar year DEFAULT_YEARS_AHEAD years after the last
+ * observation's. A caller that does not know the last period gets the steps from a year's end.
+ */
+function horizonThrough(through: string | undefined, series: SeriesFacts, placeOf: PlaceOf): number {
+  const { frequency, last } = series;
+  if (last === undefined) {
+    if (through !== undefined) throw new Error('resolveSettings: `through` needs the series\' last period (SeriesFacts.last)');
+    return DEFAULT_YEARS_AHEAD[frequency] * periodsPerYear(frequency);
+  }
+  if (through === undefined) return stepsBetween(last, defaultThrough(last, frequency));
+  const end = periodThrough(through, frequency);
+  if (end === undefined) throw new InputError(configMessages.throughInsidePeriod(placeOf('through'), through, frequency));
+  const steps = stepsBetween(last, end);
+  if (steps < 1) throw new InputError(configMessages.throughNotAhead(placeOf('through'), through, last));
+  const max = SETTINGS_FIELDS.horizon.max;
+  if (steps > max) throw new InputError(configMessages.horizonTooLong(placeOf('through'), steps, max, through));
+  return steps;
 }
 
 /** Frozen all the way down: the settings are shared by every stage and none may change them. */

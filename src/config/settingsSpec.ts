@@ -1,7 +1,8 @@
 // The settings a config may give once under `defaults` and override per series.
 import { ESTIMATION_METHODS, MIN_BACKTEST_ORIGINS, MISSING_POLICIES, POINT_FORECASTS, RECOMMENDATION_RULES, REFIT_POLICIES, TREND_MODELS, WINDOW_KINDS, YEAR_FIGURES } from '../base/settings.js';
-import { BUILT_IN_SETTINGS as BUILT_IN, HORIZON_BY_FREQUENCY, MIN_TRAIN_FLOOR, MIN_TRAIN_PER_PARAMETER } from './builtInSettings.js';
-import { choice, decimal, flag, list, object, shapes, text, whole } from './keySpec.js';
+import { BUILT_IN_SETTINGS as BUILT_IN, MIN_TRAIN_FLOOR, MIN_TRAIN_PER_PARAMETER } from './builtInSettings.js';
+import { DEFAULT_YEARS_AHEAD } from '../base/periodEnd.js';
+import { choice, decimal, flag, list, object, period, shapes, text, whole } from './keySpec.js';
 
 const MAX_ORDER = 8;
 /** Interval levels a memo shows at most: each is shaded in the charts and has its columns in the tables. */
@@ -88,9 +89,13 @@ const recommendation = object(
 
 /** Keys shared by `defaults` and every series entry. */
 export const SETTINGS_FIELDS = {
-  horizon: whole('Forecast steps.', 1, 1000, {
-    defaultText: `${HORIZON_BY_FREQUENCY.annual} for annual, ${HORIZON_BY_FREQUENCY.quarterly} for quarterly, ${HORIZON_BY_FREQUENCY.monthly} for monthly series`,
-  }),
+  horizon: whole('Forecast steps, instead of through.', 1, 1000, { defaultText: 'the steps to through' }),
+  through: period(
+    "The last period to forecast, instead of horizon: 2030 (its last month or quarter for monthly or quarterly data), 2030-Q4 or 2030-12. A series' own horizon or through replaces either under defaults.",
+    {
+      defaultText: `the end of the calendar year ${DEFAULT_YEARS_AHEAD.monthly} years after the last observation's for monthly and quarterly series (the rest of that year and ${DEFAULT_YEARS_AHEAD.monthly} full years), ${DEFAULT_YEARS_AHEAD.annual} years after it for annual series`,
+    },
+  ),
   transform,
   levels: list('Prediction interval levels in percent.', LEVEL, {
     minItems: 1,

@@ -32,7 +32,9 @@ memo:
 
 # Settings for every series; a series may override any of them. Keys left out take their
 # built-in default, and the memo's assumptions register says which is which.
-#   horizon (10 annual, 12 quarterly, 24 monthly), transform (none | log | {box_cox: 0.5}),
+#   through (the last period to forecast: 2030, 2030-Q4 or 2030-12; by default the end of the
+#   calendar year 5 years after the last observation for annual data, 2 years after it for
+#   monthly and quarterly data) or horizon (steps instead), transform (none | log | {box_cox: 0.5}),
 #   levels ([80, 95]), coefficient_uncertainty (true), point (median | mean),
 #   estimation (reml | ml: how the chosen order's coefficients are estimated),
 #   seasonal (auto | none | {harmonics, seasonal_ar, seasonal_ma, seasonal_differences}),
@@ -44,7 +46,7 @@ memo:
 #                    model (deterministic | stochastic),
 #                    justification (required when model is given)}
 defaults:
-  horizon: 10
+  through: 2030                      # forecast the years 2026 to 2030
   transform: log
 
 series:

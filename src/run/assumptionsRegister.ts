@@ -37,7 +37,8 @@ export function assumptionsRegister(plan: SeriesPlan, record: AnalysisRecord, co
   for (const key of SETTING_KEYS) {
     const value = appliedValue(key, record);
     if (value === undefined) continue;
-    const at = plan.settingPlaces.get(key);
+    // The horizon's row says where it was set, in steps or as an end period.
+    const at = plan.settingPlaces.get(key) ?? (key === 'horizon' ? plan.settingPlaces.get('through') : undefined);
     rows.push({
       choice: CHOICES[key] ?? key,
       value,
@@ -80,8 +81,13 @@ function appliedValue(key: string, record: AnalysisRecord): string | undefined {
   const { settings } = record;
   const backtest = record.backtest ?? undefined;
   switch (key) {
-    case 'horizon':
-      return `${settings.horizon} periods`;
+    case 'horizon': {
+      const end = record.forecasts.stochastic.at(-1)?.period;
+      return `${settings.horizon} periods${end === undefined ? '' : `, through ${end}`}`;
+    }
+    case 'through':
+      // Shown in the horizon's row.
+      return undefined;
     case 'backtest.horizon':
       return backtest === undefined ? 'not run' : `${backtest.settings.horizon} periods`;
     case 'backtest.min_train':

@@ -112,7 +112,7 @@ describe('the schema file', () => {
           properties: {
             levels: { default: [80, 95], type: 'array', uniqueItems: true },
             max_p: { default: 3, minimum: 0, maximum: 8, type: 'integer' },
-            horizon: { description: 'Forecast steps. Default: 10 for annual, 12 for quarterly, 24 for monthly series.' },
+            horizon: { description: 'Forecast steps, instead of through. Default: the steps to through.' },
           },
         },
       },

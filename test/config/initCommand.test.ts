@@ -23,7 +23,7 @@ describe('trendbrief init', () => {
     expect(config.split('\n')[0]).toBe('# yaml-language-server: $schema=./config.schema.json');
     const series = readFileSync(join(target, 'data/annual-boardings.csv'), 'utf8').trimEnd().split('\n');
     expect(series[0]).toBe('year,boardings');
-    expect(series.length).toBe(31);
+    expect(series.length).toBe(53);
   });
 
   it('writes a config that passes check', async () => {
@@ -32,7 +32,7 @@ describe('trendbrief init', () => {
     const run = await runCli(['check', join(target, 'memo.yaml')]);
     expect(run.stderr).toBe('');
     expect(run.code).toBe(0);
-    expect(run.stdout).toBe(`${join(target, 'memo.yaml')}: ok, memo ferry-boardings-outlook, 1 series: annual-boardings 1996 to 2025 (30 annual)\n`);
+    expect(run.stdout).toBe(`${join(target, 'memo.yaml')}: ok, memo ferry-boardings-outlook, 1 series: annual-boardings 1974 to 2025 (52 annual)\n`);
   });
 
   it('writes the same bytes every time', async () => {

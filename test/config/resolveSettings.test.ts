@@ -7,8 +7,8 @@ import { readingSettings, resolveSettings } from '../../src/config/resolveSettin
 
 describe('resolveSettings', () => {
   it('fills every setting a config leaves out with its built-in value', () => {
-    expect(resolveSettings({}, { frequency: 'annual', n: 100 })).toEqual({
-      horizon: 10,
+    expect(resolveSettings({}, { frequency: 'annual', n: 100, last: '2024' })).toEqual({
+      horizon: 5,
       transform: { kind: 'none' },
       levels: [80, 95],
       coefficient_uncertainty: true,
@@ -19,15 +19,45 @@ describe('resolveSettings', () => {
       max_p: 3,
       max_q: 3,
       significance: 0.05,
-      backtest: { origins: 20, horizon: 10, refit: 'reselect', window: 'expanding', min_train: 27 },
+      backtest: { origins: 20, horizon: 5, refit: 'reselect', window: 'expanding', min_train: 27 },
       recommendation: { rule: 'prefer-stochastic', significance: 0.05, scored_level: 95, model: null, justification: null },
       missing: 'error',
     });
   });
 
-  it('takes the horizon from the frequency: ten years, three years of quarters, two years of months', () => {
-    expect([resolveSettings({}, { frequency: 'annual', n: 100 }).horizon, resolveSettings({}, { frequency: 'quarterly', n: 100 }).horizon, resolveSettings({}, { frequency: 'monthly', n: 100 }).horizon]).toEqual([10, 12, 24]);
-    expect(resolveSettings({ horizon: 7 }, { frequency: 'monthly', n: 100 }).horizon).toBe(7);
+  it('forecasts by default through the end of a calendar year: five years ahead for annual data, the rest of the year and two more for monthly and quarterly', () => {
+    const horizon = (frequency: 'annual' | 'quarterly' | 'monthly', last: string) => resolveSettings({}, { frequency, n: 100, last }).horizon;
+    // 2024 → 2029; 2024-Q4 → 2026-Q4 (8 quarters); 2024-12 → 2026-12 (24 months); 2024-03 → 2026-12 (33 months).
+    expect([horizon('annual', '2024'), horizon('quarterly', '2024-Q4'), horizon('quarterly', '2024-Q1'), horizon('monthly', '2024-12'), horizon('monthly', '2024-03')]).toEqual([5, 8, 11, 24, 33]);
+    // A caller that does not know the last period gets the steps from a year's end.
+    expect([resolveSettings({}, { frequency: 'annual', n: 100 }).horizon, resolveSettings({}, { frequency: 'monthly', n: 100 }).horizon]).toEqual([5, 24]);
+    expect(resolveSettings({ horizon: 7 }, { frequency: 'monthly', n: 100, last: '2024-12' }).horizon).toBe(7);
+  });
+
+  it('counts the steps through an end period written at the series\' frequency or a coarser one', () => {
+    const steps = (through: string, frequency: 'annual' | 'quarterly' | 'monthly', last: string) => resolveSettings({ through }, { frequency, n: 100, last }).horizon;
+    expect(steps('2030', 'annual', '2024')).toBe(6);
+    // A year ends with its fourth quarter and its twelfth month; a quarter with its third month.
+    expect(steps('2030', 'quarterly', '2024-Q4')).toBe(24);
+    expect(steps('2030', 'monthly', '2024-12')).toBe(72);
+    expect(steps('2026-Q2', 'monthly', '2025-11')).toBe(7);
+    expect(steps('2026-12', 'annual', '2024')).toBe(2);
+  });
+
+  it('refuses an end period that is not ahead of the data, ends inside a period, or lies too far out, at the place that wrote it', () => {
+    const place = () => ({ file: 'memo.yaml', line: 7, column: 12, field: 'series[0].through' });
+    const refusal = (through: string, frequency: 'annual' | 'monthly', last: string): string => {
+      try {
+        resolveSettings({ through }, { frequency, n: 100, last }, place);
+      } catch (error) {
+        return error instanceof InputError ? `${error.problems[0].line}: ${error.problems[0].message}` : String(error);
+      }
+      return 'accepted';
+    };
+    expect(refusal('2024', 'annual', '2024')).toBe('7: the forecast would end at 2024, but the data already run to 2024');
+    expect(refusal('2024-Q4', 'monthly', '2024-12')).toBe('7: the forecast would end at 2024-Q4, but the data already run to 2024-12');
+    expect(refusal('2026-06', 'annual', '2024')).toBe("7: '2026-06' ends inside a period of this annual series");
+    expect(refusal('2200', 'monthly', '2024-12')).toBe('7: forecasting through 2200 takes 2112 steps; at most 1000 are allowed');
   });
 
   it('makes the shortest training window max(20, 3 × (max_p + max_q + 3))', () => {
@@ -40,10 +70,10 @@ describe('resolveSettings', () => {
 
   it('backtests as far ahead as the memo forecasts, shortened to leave ten origins on a short series', () => {
     // n = 100: 100 − 27 − 9 = 64 steps are possible, so the backtest covers the horizon of 10.
-    expect(resolveSettings({}, { frequency: 'annual', n: 100 }).backtest.horizon).toBe(10);
+    expect(resolveSettings({ horizon: 10 }, { frequency: 'annual', n: 100 }).backtest.horizon).toBe(10);
     // n = 40: 40 − 27 − (10 − 1) = 4, the longest horizon that leaves ten origins after 27 to train on.
-    expect(resolveSettings({}, { frequency: 'annual', n: 40 }).backtest.horizon).toBe(4);
-    expect(resolveSettings({}, { frequency: 'annual', n: 30 }).backtest.horizon).toBe(1);
+    expect(resolveSettings({ horizon: 10 }, { frequency: 'annual', n: 40 }).backtest.horizon).toBe(4);
+    expect(resolveSettings({ horizon: 10 }, { frequency: 'annual', n: 30 }).backtest.horizon).toBe(1);
     expect(resolveSettings({ horizon: 200 }, { frequency: 'monthly', n: 2000 }).backtest.horizon).toBe(100);
     expect(resolveSettings({ backtest: { horizon: 3 } }, { frequency: 'annual', n: 100 }).backtest.horizon).toBe(3);
   });

@@ -5,7 +5,7 @@ import { describe, expect, it } from 'vitest';
 import { loadConfig } from '../../src/config/loadConfig.js';
 import { resolveSettings } from '../../src/config/resolveSettings.js';
 import { SETTING_KEYS } from '../../src/config/settingsSpec.js';
-import { BASE, BASE_DIR, planOf } from './configText.js';
+import { BASE, BASE_DIR, onlyProblem, planOf } from './configText.js';
 
 const FIXTURES = resolve('test/fixtures/config');
 const FULL = join(FIXTURES, 'plans/full.yaml');
@@ -25,6 +25,21 @@ describe('merging defaults and overrides', () => {
     expect(reads.settingPlaces.get('max_p')).toMatchObject({ field: 'series[1].max_p', line: 61 });
     expect(inflow.settings.max_p).toBe(2);
     expect(inflow.settingPlaces.get('max_p')).toMatchObject({ field: 'defaults.max_p', line: 30 });
+  });
+
+  it("lets a series' own horizon or through replace either under defaults, and refuses both at one level", () => {
+    // Lines 1-6 are BASE; the defaults say through, the series horizon (and the other way round).
+    const throughDefault = ['defaults:', '  through: 2030', ...BASE.slice(0, 6), '    horizon: 4'];
+    const [own] = planOf(throughDefault).series;
+    expect(own.settings).toEqual({ horizon: 4 });
+    expect([...own.settingPlaces.keys()]).toEqual(['horizon']);
+    const [shared] = planOf(['defaults:', '  horizon: 12', ...BASE, '    through: 2026-12']).series;
+    expect(shared.settings).toEqual({ through: '2026-12' });
+    expect(shared.settingPlaces.get('through')).toMatchObject({ field: 'series[0].through', line: 9 });
+    expect(onlyProblem([...BASE, '    horizon: 4', '    through: 2030'])).toMatchObject({
+      where: '8:14 series[0].through',
+      code: 'config.horizon-and-through',
+    });
   });
 
   it('merges settings groups key by key', () => {
@@ -51,6 +66,7 @@ describe('merging defaults and overrides', () => {
     // Every setting, in the order of the spec (src/config/settingsSpec.ts), the order of the memo's register.
     expect(SETTING_KEYS).toEqual([
       'horizon',
+      'through',
       'transform',
       'levels',
       'coefficient_uncertainty',
