@@ -40,5 +40,6 @@ function moreOfTheSame(like: InputProblem, lines: readonly number[]): InputProbl
     file: like.file,
     line: lines[0],
     field: like.field,
+    sheet: like.sheet,
   });
 }

@@ -10,6 +10,8 @@ export interface InputLocation {
   line?: number;
   column?: number;
   field?: string;
+  /** The sheet of a workbook; with a line and a column the place also reads as a cell reference (`Sheet1!B7`). */
+  sheet?: string;
 }
 
 /** One problem with the user's input. */
@@ -46,9 +48,23 @@ export function formatProblem(problem: InputProblem): string {
   }
   const parts: string[] = [];
   if (place.length > 0) parts.push(place.join(':'));
+  if (problem.sheet !== undefined) parts.push(sheetPlace(problem.sheet, problem.line, problem.column));
   if (problem.field !== undefined) parts.push(problem.field);
   parts.push(`${problem.message}; ${problem.hint}`);
   return visible(parts.join(': '));
+}
+
+/** `Sheet1!B7` as spreadsheets write a cell (a sheet name other than letters, digits and `_` in single quotes), or the sheet alone. */
+export function sheetPlace(sheet: string, row?: number, column?: number): string {
+  const name = /^[A-Za-z_][A-Za-z0-9_]*$/.test(sheet) ? sheet : `'${sheet.replace(/'/g, "''")}'`;
+  return row === undefined || column === undefined ? `sheet ${name}` : `${name}!${columnLetters(column)}${row}`;
+}
+
+/** Column 1 → A, 27 → AA (the spreadsheet's bijective base-26 column names). */
+export function columnLetters(column: number): string {
+  let letters = '';
+  for (let n = column; n > 0; n = Math.floor((n - 1) / 26)) letters = String.fromCharCode(65 + ((n - 1) % 26)) + letters;
+  return letters;
 }
 
 /**

@@ -6,8 +6,11 @@ import { formatPeriod, periodFromIndex, periodIndex, type Frequency, type Period
 
 export interface DatedLine {
   line: number;
+  /** The cell as written: a period label, or a date (then `fromDate`). */
   label: string;
   period: Period;
+  /** The label is a date mapped into its period. */
+  fromDate?: boolean;
 }
 
 export interface PeriodCheck {
@@ -29,7 +32,7 @@ function frequencyProblems(dated: readonly DatedLine[], frequency: Frequency, gi
 
 function orderProblems(dated: readonly DatedLine[], column: InputLocation): InputProblem[] {
   const problems: InputProblem[] = [];
-  const firstLineOf = new Map<number, number>();
+  const firstLineOf = new Map<number, DatedLine>();
   let latest: DatedLine | undefined;
   let descending = dated.length > 1;
   for (let i = 0; i < dated.length; i++) {
@@ -38,10 +41,13 @@ function orderProblems(dated: readonly DatedLine[], column: InputLocation): Inpu
     if (i > 0 && index >= periodIndex(dated[i - 1].period)) descending = false;
     const seen = firstLineOf.get(index);
     if (seen !== undefined) {
-      problems.push(dataMessages.duplicatePeriod({ ...column, line: entry.line }, entry.label, seen));
+      const at = { ...column, line: entry.line };
+      problems.push(
+        entry.fromDate === true ? dataMessages.dateInSamePeriod(at, entry.label, formatPeriod(entry.period), { label: seen.label, line: seen.line }) : dataMessages.duplicatePeriod(at, entry.label, seen.line),
+      );
       continue;
     }
-    firstLineOf.set(index, entry.line);
+    firstLineOf.set(index, entry);
     if (latest !== undefined && index < periodIndex(latest.period)) {
       problems.push(dataMessages.unsorted({ ...column, line: entry.line }, entry.label, latest));
     } else {
@@ -55,7 +61,8 @@ function orderProblems(dated: readonly DatedLine[], column: InputLocation): Inpu
   return problems;
 }
 
-function gapProblems(dated: readonly DatedLine[], frequency: Frequency, column: InputLocation): InputProblem[] {
+/** `unreadable`: lines whose period could not be read; a gap with one of them between its two sides is theirs, not reported again. */
+function gapProblems(dated: readonly DatedLine[], frequency: Frequency, column: InputLocation, unreadable: readonly number[]): InputProblem[] {
   const byIndex = new Map<number, DatedLine>();
   for (const entry of dated) if (!byIndex.has(periodIndex(entry.period))) byIndex.set(periodIndex(entry.period), entry);
   const indices = [...byIndex.keys()].sort((a, b) => a - b);
@@ -65,6 +72,8 @@ function gapProblems(dated: readonly DatedLine[], frequency: Frequency, column: 
     const missing: string[] = [];
     for (let index = indices[i - 1] + 1; index < indices[i]; index++) missing.push(formatPeriod(periodFromIndex(frequency, index)));
     const next = byIndex.get(indices[i]);
+    const previous = byIndex.get(indices[i - 1]);
+    if (previous !== undefined && next !== undefined && unreadable.some((line) => line > Math.min(previous.line, next.line) && line < Math.max(previous.line, next.line))) continue;
     if (next !== undefined) problems.push(dataMessages.gap({ ...column, line: next.line }, missing, next.label));
   }
   return problems;
@@ -75,7 +84,7 @@ function gapProblems(dated: readonly DatedLine[], frequency: Frequency, column: 
  * judged only among labels of the series' frequency, so one stray label yields one problem.
  * `column` locates the period column (file, field, column number); each problem adds its line.
  */
-export function checkPeriods(dated: readonly DatedLine[], column: InputLocation, given?: Frequency, allowGaps = false): PeriodCheck {
+export function checkPeriods(dated: readonly DatedLine[], column: InputLocation, given?: Frequency, allowGaps = false, unreadable: readonly number[] = []): PeriodCheck {
   const frequency = given ?? dated[0]?.period.frequency;
   if (frequency === undefined) return { frequency, problems: [] };
   const regular = dated.filter((entry) => entry.period.frequency === frequency);
@@ -84,7 +93,7 @@ export function checkPeriods(dated: readonly DatedLine[], column: InputLocation,
     problems: [
       ...frequencyProblems(dated, frequency, given !== undefined, column),
       ...orderProblems(regular, column),
-      ...(allowGaps ? [] : gapProblems(regular, frequency, column)),
+      ...(allowGaps ? [] : gapProblems(regular, frequency, column, unreadable)),
     ],
   };
 }

@@ -16,6 +16,10 @@ export interface SeriesValues {
   values: ArrayLike<number>;
   /** File line of each value, when the values came from a file. */
   lines?: readonly number[];
+  /** The workbook sheet the values came from. */
+  sheet?: string;
+  /** Rows whose period could not be read: the count of observations judged is the values' and theirs, since each would be one once its period is corrected. */
+  unreadableRows?: number;
 }
 
 function isConstant(values: ArrayLike<number>): boolean {
@@ -33,7 +37,7 @@ function isConstant(values: ArrayLike<number>): boolean {
 export const MODEL_SCALE = { maxMagnitude: 1e100, minSpread: 1e-100 } as const;
 
 function scaleProblems(series: SeriesValues, transform: Transform | undefined): InputProblem[] {
-  const { file, column, values } = series;
+  const { file, column, values, sheet } = series;
   const scale = transform === undefined || transform.kind === 'none' ? undefined : describeTransform(transform);
   const problems: InputProblem[] = [];
   let lowest = Infinity;
@@ -42,13 +46,13 @@ function scaleProblems(series: SeriesValues, transform: Transform | undefined): 
     const y = transform === undefined ? values[i] : transformValue(transform, values[i]);
     if (Number.isNaN(y)) continue;
     if (!(Math.abs(y) <= MODEL_SCALE.maxMagnitude)) {
-      problems.push(dataMessages.tooLargeForModels({ file, line: series.lines?.[i], field: column }, values[i], y, MODEL_SCALE.maxMagnitude, scale));
+      problems.push(dataMessages.tooLargeForModels({ file, line: series.lines?.[i], field: column, sheet }, values[i], y, MODEL_SCALE.maxMagnitude, scale));
     }
     lowest = Math.min(lowest, y);
     highest = Math.max(highest, y);
   }
   if (problems.length === 0 && highest - lowest < MODEL_SCALE.minSpread) {
-    problems.push(dataMessages.tooLittleSpread({ file, field: column }, highest - lowest, MODEL_SCALE.minSpread, scale));
+    problems.push(dataMessages.tooLittleSpread({ file, field: column, sheet }, highest - lowest, MODEL_SCALE.minSpread, scale));
   }
   return problems;
 }
@@ -59,15 +63,16 @@ function scaleProblems(series: SeriesValues, transform: Transform | undefined): 
  * Log and Box-Cox both need every value above zero (Box & Cox 1964 define the transform for y > 0).
  */
 export function checkSeries(series: SeriesValues, rules: SeriesRules = {}): InputProblem[] {
-  const { file, column, values } = series;
+  const { file, column, values, sheet } = series;
   const problems: InputProblem[] = [];
   const n = values.length;
-  if (rules.minObservations !== undefined && n < rules.minObservations) {
-    problems.push(dataMessages.tooFew({ file, field: column }, n, rules.minObservations));
+  const rows = n + (series.unreadableRows ?? 0);
+  if (rules.minObservations !== undefined && rows < rules.minObservations) {
+    problems.push(dataMessages.tooFew({ file, field: column, sheet }, rows, rules.minObservations));
   }
   const constant = n >= 2 && isConstant(values);
   if (constant) {
-    problems.push(dataMessages.constant({ file, field: column }, n, values[0]));
+    problems.push(dataMessages.constant({ file, field: column, sheet }, n, values[0]));
   }
   const transform = rules.transform;
   let inDomain = true;
@@ -76,7 +81,7 @@ export function checkSeries(series: SeriesValues, rules: SeriesRules = {}): Inpu
     for (let i = 0; i < n; i++) {
       if (values[i] > 0) continue;
       inDomain = false;
-      problems.push(dataMessages.nonPositive({ file, line: series.lines?.[i], field: column }, values[i], name));
+      problems.push(dataMessages.nonPositive({ file, line: series.lines?.[i], field: column, sheet }, values[i], name));
     }
   }
   if (n >= 2 && !constant && inDomain) problems.push(...scaleProblems(series, transform));

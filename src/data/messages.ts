@@ -3,7 +3,21 @@
 import { abbreviateList, codePointName, MEBIBYTE, plural, problem, roughly, type InputLocation, type InputProblem } from '../base/problem.js';
 import { cellField, quotedCell } from '../base/quotedCell.js';
 
-const PERIOD_FORMS = 'write periods as 2003 (annual), 2003-Q1 (quarterly) or 2003-01 (monthly)';
+const PERIOD_FORMS = 'write periods as 2003 (annual), 2003-Q1 (quarterly) or 2003-01 (monthly), or as dates such as 2003-01-31';
+/** How a series' reading settings are named, in the config and for fit. */
+const SETTING_NAMES = {
+  delimiter: { key: 'delimiter', option: '--delimiter' },
+  decimal_mark: { key: 'decimal_mark', option: '--decimal-mark' },
+  sheet: { key: 'sheet', option: '--sheet' },
+  frequency: { key: 'frequency', option: '--frequency' },
+  period_column: { key: 'period_column', option: '--period-column' },
+} as const;
+/** `delimiter: semicolon in the config (--delimiter semicolon for fit)`, or without a value `delimiter in the config (--delimiter for fit)`. */
+function setting(name: keyof typeof SETTING_NAMES, value?: string): string {
+  const { key, option } = SETTING_NAMES[name];
+  return value === undefined ? `${key} in the config (${option} for fit)` : `${key}: ${value} in the config (${option} ${value} for fit)`;
+}
+const DELIMITER_NAMES: Readonly<Record<string, string>> = { comma: 'commas', semicolon: 'semicolons', tab: 'tabs' };
 const MISSING_HINT = 'fill in the observed value, or allow missing values (missing: allow in the config, --allow-missing for fit)';
 
 const CSV_SYNTAX_DETAILS: Readonly<Record<string, string>> = {
@@ -72,9 +86,9 @@ export const dataMessages = {
     );
   },
   oneColumn(at: InputLocation, name: string): InputProblem {
-    const hint = /[;\t]/.test(name)
-      ? 'separate cells with commas (this file seems to use semicolons or tabs)'
-      : 'add a value column: each line needs a period and a value';
+    const other = name.includes(';') ? 'semicolon' : name.includes('\t') ? 'tab' : name.includes(',') ? 'comma' : undefined;
+    const hint =
+      other === undefined ? 'add a value column: each line needs a period and a value' : `the header seems to separate cells with ${DELIMITER_NAMES[other]}: set ${setting('delimiter', other)}`;
     return problem('csv.one-column', `has a single column ${quotedCell(name)}`, hint, at);
   },
   unknownColumn(at: InputLocation, name: string, columns: readonly string[], suggestion: string | undefined): InputProblem {
@@ -116,17 +130,89 @@ export const dataMessages = {
       field: cellField(name),
     });
   },
-  rowWidth(at: InputLocation, cells: number, expected: number): InputProblem {
-    const hint = cells > expected ? 'quote cells that contain commas, or remove the extra cells' : 'fill in the missing cells';
+  rowWidth(at: InputLocation, cells: number, expected: number, delimiter = 'comma'): InputProblem {
+    const hint = cells > expected ? `quote cells that contain ${DELIMITER_NAMES[delimiter] ?? 'the delimiter'}, or remove the extra cells` : 'fill in the missing cells';
     return problem('csv.row-width', `has ${plural(cells, 'cell')} but the header has ${expected}`, hint, at);
+  },
+  sheetForText(file: string, sheet: string): InputProblem {
+    return problem('csv.sheet-for-text', `sheet ${quotedCell(sheet)} is asked for, but the file is text (CSV), which has no sheets`, `remove ${setting('sheet')}, or name the workbook (.xlsx) that holds it`, { file });
   },
   emptyPeriod(at: InputLocation): InputProblem {
     return problem('csv.empty-period', 'the period cell is empty', `${PERIOD_FORMS}, or delete the line`, at);
   },
   badPeriod(at: InputLocation, label: string): InputProblem {
-    const date = /^(\d{4})-(\d{2})-\d{2}$/.exec(label);
-    const hint = date === null ? PERIOD_FORMS : `write a month without its day, e.g. ${date[1]}-${date[2]}`;
-    return problem('csv.bad-period', `${quotedCell(label)} is not a period`, hint, at);
+    return problem('csv.bad-period', `${quotedCell(label)} is not a period`, PERIOD_FORMS, at);
+  },
+  /** The period column's labels are unreadable throughout: one problem at the first bad cell stands for them all. */
+  unreadablePeriods(at: InputLocation, label: string, others: number, total: number): InputProblem {
+    const rest = others === 0 ? '' : `, nor ${others === total - 1 ? (others === 1 ? 'is the other label' : `are the other ${others} labels`) : `are ${others} of the other ${total - 1} labels`} in this column`;
+    return problem(
+      'csv.unreadable-periods',
+      `${quotedCell(label)} is not a period${rest}`,
+      `${PERIOD_FORMS}; if the periods are in another column, name it with ${setting('period_column')}`,
+      at,
+    );
+  },
+  /** A label of the other form than the column's first: a date among period labels, or a label among dates. */
+  mixedPeriodForm(at: InputLocation, label: string, first: { label: string; line: number }, isDate: boolean): InputProblem {
+    const [these, those] = isDate ? ['a date', 'a period label'] : ['a period label', 'a date'];
+    return problem(
+      'csv.mixed-period-form',
+      `${quotedCell(label)} is ${these}, but the first period ${quotedCell(first.label)} (line ${first.line}) is ${those}`,
+      'write every period of the column in one form: all as period labels (2003-01) or all as dates (2003-01-31)',
+      at,
+    );
+  },
+  noSuchDay(at: InputLocation, label: string): InputProblem {
+    return problem('csv.bad-date', `${quotedCell(label)} is not a day of the calendar`, 'correct the date (YYYY-MM-DD, a day that exists in that month)', at);
+  },
+  /** Dates whose spacing is not a month, a quarter or a year, with no frequency set. */
+  dateSpacing(at: InputLocation, months: number | undefined): InputProblem {
+    const what =
+      months === undefined ? 'a single date does not show the frequency of the series'
+      : months === 0 ? 'most consecutive dates fall in the same month: daily or weekly data are not read'
+      : `most consecutive dates are ${plural(months, 'month')} apart, which is not monthly (1), quarterly (3) or annual (12)`;
+    const hint = months === 0 ? 'add the days up (or average them) to one value per month, quarter or year' : `set ${setting('frequency')}`;
+    return problem('csv.date-spacing', what, hint, at);
+  },
+  /** Dates closer together than the frequency set: every later date of a period would be a duplicate. `spacing`: the dates' own frequency, if they have one. */
+  datesFiner(at: InputLocation, first: string, second: string, spacing: string | undefined, given: string): InputProblem {
+    const period = given === 'annual' ? 'year' : given === 'quarterly' ? 'quarter' : 'month';
+    const apart = spacing === undefined ? `closer together than a ${period}` : spacing;
+    const hint = `${spacing === undefined ? '' : `set ${setting('frequency', spacing)}, or `}add the values up (or average them) to one per ${period}`;
+    return problem('csv.dates-finer', `dates ${first} and ${second} fall in one ${period}: the dates are ${apart}, but the frequency is set to ${given}`, hint, at);
+  },
+  dateInSamePeriod(at: InputLocation, label: string, period: string, first: { label: string; line: number }): InputProblem {
+    return problem('csv.duplicate-period', `date ${label} falls in ${period}, as does ${first.label} on line ${first.line}`, 'keep one line per period', at);
+  },
+  delimiterAmbiguous(at: InputLocation, candidates: readonly string[]): InputProblem {
+    const names = candidates.map((name) => DELIMITER_NAMES[name] ?? name);
+    return problem(
+      'csv.delimiter-ambiguous',
+      `the header line holds ${names.join(' and ')}, and the file could be read with either as the delimiter`,
+      `set ${setting('delimiter')} to ${candidates.join(' or ')}`,
+      at,
+    );
+  },
+  decimalMarkAmbiguous(at: InputLocation, text: string, reason: 'both' | 'comma-delimited' | 'grouped'): InputProblem {
+    const why =
+      reason === 'both' ? 'some values use a point and others a comma as the decimal mark'
+      : reason === 'comma-delimited' ? 'in a file delimited by commas a comma in a number may be a decimal mark or a thousands separator'
+      : `every marked value has three digits after its ${text.includes(',') ? 'comma' : 'point'}, which is how a thousands separator looks too`;
+    const hint = `set ${setting('decimal_mark')} to point or comma; thousands separators are never read`;
+    return problem('csv.decimal-mark-ambiguous', `${quotedCell(text)} could be read two ways: ${why}`, hint, at);
+  },
+  otherMark(at: InputLocation, text: string, mark: 'point' | 'comma'): InputProblem {
+    const other = mark === 'point' ? 'comma' : 'point';
+    return problem(
+      'csv.bad-value',
+      `${quotedCell(text)} is written with a ${other} as its decimal mark, but the decimal mark is a ${mark}`,
+      `write it with a ${mark}, or set ${setting('decimal_mark', other)} if every value uses a ${other}`,
+      at,
+    );
+  },
+  groupedDigits(at: InputLocation, text: string): InputProblem {
+    return problem('csv.bad-value', `${quotedCell(text)} groups its digits with a thousands separator, which is not read`, 'save the values without thousands separators, e.g. 1234.5 or 1234,5', at);
   },
   emptyValue(at: InputLocation): InputProblem {
     return problem('csv.missing-value', 'the value cell is empty', MISSING_HINT, at);
@@ -138,10 +224,7 @@ export const dataMessages = {
     return problem('csv.non-finite', `${quotedCell(text)} is not a finite number`, 'replace it with the observed value', at);
   },
   badValue(at: InputLocation, text: string): InputProblem {
-    const hint = text.includes(',')
-      ? 'write decimals with a point and no thousands separators, e.g. 1234.5'
-      : 'write a plain number such as 1234.5, without units or symbols';
-    return problem('csv.bad-value', `${quotedCell(text)} is not a number`, hint, at);
+    return problem('csv.bad-value', `${quotedCell(text)} is not a number`, 'write a plain number such as 1234.5, without units, symbols or thousands separators', at);
   },
   frequencyMismatch(at: InputLocation, label: string, found: string, expected: string, lines: readonly number[]): InputProblem {
     return problem(

@@ -3,6 +3,7 @@
 import { CsvError, parse } from 'csv-parse/sync';
 import { InputError } from '../base/problem.js';
 import { dataMessages } from './messages.js';
+import { DELIMITER_CHARACTER, detectDelimiter, type Delimiter, type DelimiterSetting } from './detectDialect.js';
 
 export interface CsvRow {
   /** 1-based line in the file where the row starts; the header is line 1 unless blank lines precede it. */
@@ -14,6 +15,8 @@ export interface CsvRow {
 export interface CsvTable {
   header: CsvRow;
   rows: CsvRow[];
+  /** The delimiter set, or the one detected (detectDelimiter). */
+  delimiter: Delimiter;
 }
 
 function countNewlines(cells: readonly string[]): number {
@@ -34,13 +37,15 @@ function firstNonBlankLine(text: string, from: number): number {
  * (including rows whose cells are all empty, as spreadsheets append). Rows may differ in
  * width from the header: the caller reports that with the row's line.
  */
-export function readCsvTable(text: string, file: string): CsvTable {
+export function readCsvTable(text: string, file: string, delimiterSetting: DelimiterSetting = 'auto'): CsvTable {
   // Line endings are unified first: csv-parse counts a CRLF inside a quoted cell as two lines.
   const normalized = text.replace(/^\uFEFF/, '').replace(/\r\n?/g, '\n');
+  const delimiter = detectDelimiter(normalized, file, delimiterSetting);
   const rows: CsvRow[] = [];
   let lastRecordEnd = 0;
   try {
     parse(normalized, {
+      delimiter: DELIMITER_CHARACTER[delimiter],
       relax_column_count: true,
       skip_empty_lines: true,
       trim: true,
@@ -68,5 +73,5 @@ export function readCsvTable(text: string, file: string): CsvTable {
   }
   const header = rows.shift();
   if (header === undefined) throw new InputError(dataMessages.emptyFile(file));
-  return { header, rows };
+  return { header, rows, delimiter };
 }

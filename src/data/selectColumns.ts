@@ -7,6 +7,7 @@ import { firstRefusedCharacter } from '../base/textPatterns.js';
 import { closestName } from '../base/closestName.js';
 import { parsePeriod } from '../base/period.js';
 import { parseValue } from './parseValue.js';
+import { parseIsoDate } from './periodDates.js';
 
 export interface ColumnChoice {
   periodColumn: string;
@@ -49,7 +50,7 @@ export function selectColumns(headerRow: CsvRow, file: string, wanted: { column?
   const at: InputLocation = { file, line: headerRow.line };
   // Only the first cell is judged: a value column may be named like a year ("2019").
   const first = header[0];
-  if (parsePeriod(first) !== null || parseValue(first).kind === 'number') throw new InputError(dataMessages.headerLooksLikeData(at, first));
+  if (parsePeriod(first) !== null || parseIsoDate(first) !== null || parseValue(first).kind === 'number') throw new InputError(dataMessages.headerLooksLikeData(at, first));
   if (header.length === 1 && wanted.column === undefined) throw new InputError(dataMessages.oneColumn(at, header[0]));
 
   const problems: InputProblem[] = [];

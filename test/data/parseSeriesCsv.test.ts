@@ -77,10 +77,10 @@ describe('parseSeriesCsv header and columns', () => {
     expect(problems('period,value\n\n')[0]).toMatchObject({ code: 'csv.no-data', line: 1 });
   });
 
-  it('refuses a single column and points at semicolons', () => {
-    const found = problems('period;value\n2001;1\n');
+  it('refuses a single column when commas are set, and points at the semicolons', () => {
+    const found = problems('period;value\n2001;1\n', { delimiter: 'comma' });
     expect(found[0]).toMatchObject({ code: 'csv.one-column', line: 1 });
-    expect(found[0].hint).toContain('semicolons');
+    expect(found[0].hint).toBe('the header seems to separate cells with semicolons: set delimiter: semicolon in the config (--delimiter semicolon for fit)');
   });
 
   it('names the unknown column, lists the columns and suggests the closest', () => {
@@ -126,17 +126,21 @@ describe('parseSeriesCsv cells', () => {
     expect(found[5].message).toBe("'NA' marks a missing value");
   });
 
-  it('hints at decimal commas and thousands separators', () => {
+  it('refuses a decimal comma in a comma-delimited file as ambiguous, and names the setting', () => {
     const found = problems('period,value\n2001,"1,5"\n2002,2\n');
-    expect(found[0]).toMatchObject({ code: 'csv.bad-value', line: 2 });
-    expect(found[0].hint).toContain('decimals with a point');
+    expect(found).toHaveLength(1);
+    expect(found[0]).toMatchObject({ code: 'csv.decimal-mark-ambiguous', line: 2, column: 2, field: 'value' });
+    expect(found[0].hint).toBe('set decimal_mark in the config (--decimal-mark for fit) to point or comma; thousands separators are never read');
+    const pointSet = problems('period,value\n2001,"1,5"\n2002,2\n', { decimalMark: 'point' });
+    expect(pointSet[0]).toMatchObject({ code: 'csv.bad-value', line: 2 });
+    expect(pointSet[0].hint).toContain('decimal_mark: comma in the config');
   });
 
-  it('reports empty and unreadable periods, with a hint for full dates', () => {
+  it('reports empty and unreadable periods, and a date among period labels', () => {
     const found = problems('month,value\n2001-01,1\n,2\n2001-03-01,3\n2001-M4,4\n');
-    expect(codesAndLines(found)).toEqual(['csv.empty-period@3', 'csv.bad-period@4', 'csv.bad-period@5']);
+    expect(codesAndLines(found)).toEqual(['csv.empty-period@3', 'csv.mixed-period-form@4', 'csv.bad-period@5']);
     expect(found[1]).toMatchObject({ column: 1, field: 'month' });
-    expect(found[1].hint).toBe('write a month without its day, e.g. 2001-03');
+    expect(found[1].message).toBe("'2001-03-01' is a date, but the first period '2001-01' (line 2) is a period label");
     expect(found[2].hint).toContain('2003-Q1 (quarterly)');
   });
 

@@ -106,15 +106,16 @@ describe('readSeriesCsv on hand-written bad files', () => {
       'csv.gap@7',
       'csv.mixed-frequency@8',
       'csv.empty-period@9',
-      'csv.bad-period@10',
+      'csv.mixed-period-form@10',
     ]);
     expect(found[2].message).toBe('missing 2001-03 before 2001-04');
     expect(found[3].message).toBe('missing 2001-06, 2001-07, 2001-08 before 2001-09');
   });
 
-  it('refuses a file without a header and a semicolon-separated file', () => {
+  it('refuses a file without a header, and reads a semicolon-separated file with decimal commas', () => {
     expect(problemsOf(() => readSeriesCsv(fixture('data/no-header.csv'), { missing: 'error' }))[0]).toMatchObject({ code: 'csv.no-header', line: 1 });
-    expect(problemsOf(() => readSeriesCsv(fixture('data/semicolon.csv'), { missing: 'error' }))[0]).toMatchObject({ code: 'csv.one-column', line: 1 });
+    // The file holds 2001;1,5 and 2002;2,5: a comma as decimal mark (common practice where it is the decimal mark).
+    expect([...readSeriesCsv(fixture('data/semicolon.csv'), { missing: 'error' }).values]).toEqual([1.5, 2.5]);
   });
 
   it('refuses text that is not UTF-8', () => {
