@@ -3,8 +3,8 @@
 // sources for the same series and settings (both are our own code; the check is that the
 // package's entry points, exports and files are complete), and its types must check.
 import { spawnSync } from 'node:child_process';
-import { cpSync, mkdirSync, readdirSync, writeFileSync } from 'node:fs';
-import { join, resolve } from 'node:path';
+import { cpSync, mkdirSync, readdirSync, readFileSync, realpathSync, writeFileSync } from 'node:fs';
+import { delimiter, join, resolve } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { analyseSeries } from '../../src/analysis/analyseSeries.js';
 import type { AnalysisRecord } from '../../src/analysis/record.js';
@@ -79,5 +79,15 @@ describe('the packed package', () => {
       JSON.stringify({ compilerOptions: { module: 'NodeNext', moduleResolution: 'NodeNext', target: 'ES2022', strict: true, noEmit: true, skipLibCheck: true, types: ['node'], typeRoots: [join(REPOSITORY, 'node_modules/@types')] }, files: ['use.ts'] }),
     );
     expect(run(join(REPOSITORY, 'node_modules/.bin/tsc'), ['-p', 'tsconfig.json'], app)).toBe('');
+  });
+
+  it('puts the command on the PATH by its name (npm links the package\'s bin), which runs from the packed bundle', () => {
+    const version = (JSON.parse(readFileSync(join(REPOSITORY, 'package.json'), 'utf8')) as { version: string }).version;
+    const bin = join(app, 'node_modules/.bin');
+    const result = spawnSync('trendbrief', ['--version'], { cwd: app, encoding: 'utf8', env: { ...process.env, PATH: `${bin}${delimiter}${process.env.PATH ?? ''}` } });
+    expect(result.stderr).toBe('');
+    expect(result.status).toBe(0);
+    expect(result.stdout).toBe(`${version}\n`);
+    expect(realpathSync(join(bin, 'trendbrief'))).toBe(join(realpathSync(app), 'node_modules/trendbrief/bin/trendbrief.js'));
   });
 });
