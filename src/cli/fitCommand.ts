@@ -4,13 +4,13 @@ import { BUILT_IN_SETTINGS as BUILT_IN } from '../config/builtInSettings.js';
 import { DEFAULT_YEARS_AHEAD as YEARS } from '../base/periodEnd.js';
 import { readingSettings, resolveSettings } from '../config/resolveSettings.js';
 import { BACKTEST_FIELDS, LEVEL, SETTINGS_FIELDS } from '../config/settingsSpec.js';
-import { readSeriesCsv } from '../data/readSeriesCsv.js';
+import { readSeriesFile } from '../data/readSeriesFile.js';
 import { formatSummary } from './formatSummary.js';
 import { fitOptionPlace, parseFitOptions } from './parseFitOptions.js';
 import { EXIT } from './exitCodes.js';
 import { MIN_BACKTEST_ORIGINS } from '../base/settings.js';
 
-export const FIT_HELP = `Usage: trendbrief fit FILE.csv [options]
+export const FIT_HELP = `Usage: trendbrief fit FILE.csv|FILE.xlsx [options]
 
 Fits the deterministic trend (levels on [1, t] with ARMA errors) and the stochastic trend
 (differences on a drift with ARMA errors), each with its own AICc order search, and
@@ -20,7 +20,14 @@ meaning, with the same range and default.
 Options:
   --column NAME             value column (default: the first column after the period)
   --period-column NAME      period column (default: the first column)
-  --frequency F             annual, quarterly or monthly (default: inferred from the periods)
+  --frequency F             annual, quarterly or monthly (default: inferred from the periods,
+                            or from the spacing of dates such as 2003-01-31)
+  --sheet NAME              the workbook's sheet holding the series (default: the first sheet)
+  --delimiter D             auto, comma, semicolon or tab: what separates a CSV file's cells
+                            (default: auto, read from the header line)
+  --decimal-mark M          auto, point or comma: the decimal mark of values written as text
+                            (default: auto, read from the values; thousands separators are
+                            never read)
   --transform T             none, log or box-cox:LAMBDA (default: ${BUILT_IN.transform})
   --through PERIOD          the last period to forecast, e.g. 2030, 2030-Q4 or 2030-12 (default: the
                             end of the calendar year ${YEARS.monthly} years after the last observation's for
@@ -64,11 +71,14 @@ export async function runFit(args: readonly string[], io: { stdout(text: string)
   }
   const request = parseFitOptions(args);
   const reading = readingSettings(request.settings);
-  const series = readSeriesCsv(request.file, {
+  const series = await readSeriesFile(request.file, {
     column: request.column,
     periodColumn: request.periodColumn,
     frequency: request.frequency,
     minObservations: requiredObservations(reading.max_p, reading.max_q),
+    sheet: request.sheet,
+    delimiter: request.delimiter,
+    decimalMark: request.decimalMark,
     transform: reading.transform,
     missing: reading.missing,
   });

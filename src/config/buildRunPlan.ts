@@ -2,7 +2,7 @@
 // else the one under defaults) with the position that set each, and every path resolved
 // against the config's folder. Built-in values are applied later, by resolveSettings.
 import { isAbsolute, resolve } from 'node:path';
-import { DEFAULT_OUTPUT_FOLDER, OUTPUT_FORMATS, type ConfigDocument, type SeriesEntry, type SettingsEntry } from './configSpec.js';
+import { DEFAULT_OUTPUT_FOLDER, DEFAULT_OUTPUT_FORMATS, type ConfigDocument, type SeriesEntry, type SettingsEntry } from './configSpec.js';
 import type { Position } from './readYamlTree.js';
 import type { WrittenSettings } from './resolveSettings.js';
 import type { ConfigPlace, OutputPlan, RunPlan, SeriesPlan } from './runPlan.js';
@@ -57,7 +57,7 @@ function outputPlan(doc: ConfigDocument, baseDir: string, placeOf: (field: strin
     folderAsWritten,
     folderAt: output.folder === undefined ? undefined : placeOf('output.folder'),
     memoFolder: resolve(folder, doc.memo.id),
-    formats: output.formats ?? [...OUTPUT_FORMATS],
+    formats: output.formats ?? [...DEFAULT_OUTPUT_FORMATS],
     paper: output.paper ?? 'A4',
     templates:
       output.templates === undefined
@@ -115,6 +115,9 @@ function seriesPlan(
     periodColumn: entry.period_column,
     column: entry.column,
     frequency: entry.frequency,
+    sheet: entry.sheet,
+    delimiter: entry.delimiter,
+    decimalMark: entry.decimal_mark,
     at: placeOf(`series[${index}]`),
     // The spec validated every value; the merge keeps each under its own key.
     settings: merged as WrittenSettings,

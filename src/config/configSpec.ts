@@ -4,7 +4,9 @@ import { choice, list, object, period, text, type ValueOf } from './keySpec.js';
 import { DEFAULTS_SPEC, SETTINGS_FIELDS } from './settingsSpec.js';
 
 export const MAX_SERIES = 200;
-export const OUTPUT_FORMATS = ['html', 'pdf', 'json', 'csv'] as const;
+export const OUTPUT_FORMATS = ['html', 'pdf', 'json', 'csv', 'xlsx'] as const;
+/** What a config that names no formats gets: the forecasts workbook (xlsx) is asked for by name. */
+export const DEFAULT_OUTPUT_FORMATS = ['html', 'pdf', 'json', 'csv'] as const;
 export const DEFAULT_OUTPUT_FOLDER = 'out';
 
 const slug = (doc: string) => text(`${doc} Lowercase letters, digits and single hyphens.`, { form: 'slug', maxLength: 64 });
@@ -56,13 +58,24 @@ const memo = object(
 /** The frequency of a series, also read by the command line's --frequency. */
 export const FREQUENCY = choice('Frequency of the series.', FREQUENCIES, { defaultText: 'read from the period labels' });
 
+/** How a series file's cells and decimals are written, also read by fit's --delimiter and --decimal-mark. */
+export const DELIMITER = choice('What separates the cells of a CSV file; auto reads it from the header line and refuses a file that could be read with two.', ['auto', 'comma', 'semicolon', 'tab'], { default: 'auto' });
+export const DECIMAL_MARK = choice(
+  'The decimal mark of values written as text (1234.5 or 1234,5); auto reads it from the values and refuses a column that could be read both ways. Thousands separators are never read.',
+  ['auto', 'point', 'comma'],
+  { default: 'auto' },
+);
+
 const seriesEntry = object(
   'One series to forecast; any key of defaults may be overridden here.',
   {
     id: slug('Identifier of the series, unique in this config.'),
     title: text('Title of the series in the memo.', { defaultText: 'the id' }),
     units: text('Units of the values, e.g. megalitres per day.'),
-    file: path('CSV file holding the series, relative to this config file.'),
+    file: path('CSV file or .xlsx workbook holding the series, relative to this config file.'),
+    sheet: text('Sheet of the workbook holding the series.', { defaultText: 'the first sheet' }),
+    delimiter: DELIMITER,
+    decimal_mark: DECIMAL_MARK,
     period_column: text('Column holding the period labels.', { defaultText: 'the first column' }),
     column: text('Column holding the values.', { defaultText: 'the first column after the period column' }),
     frequency: FREQUENCY,
@@ -78,12 +91,12 @@ const output = object(
   'Where and in which forms the memo is written.',
   {
     folder: path('Folder the memo folder is written into, relative to this config file.', { default: DEFAULT_OUTPUT_FOLDER }),
-    formats: list('Files to produce.', choice('An output format.', OUTPUT_FORMATS), {
+    formats: list('Files to produce: html (memo.html), pdf (memo.pdf), json (record.json), csv (forecasts.csv), xlsx (forecasts.xlsx, a workbook of the forecasts for the client).', choice('An output format.', OUTPUT_FORMATS), {
       minItems: 1,
       maxItems: OUTPUT_FORMATS.length,
       unique: true,
       example: '[html, pdf]',
-      default: OUTPUT_FORMATS,
+      default: DEFAULT_OUTPUT_FORMATS,
     }),
     paper: choice('Paper size of the PDF.', ['A4', 'Letter'], { default: 'A4' }),
     templates: path('Folder of templates that replace the built-in ones, relative to this config file.', {

@@ -14,7 +14,8 @@ import { assumptionsRegister } from './assumptionsRegister.js';
 import type { ComparableDocument } from './comparableDocument.js';
 import { compareRecords } from './compareRecords.js';
 import { contentDigest } from './contentDigest.js';
-import { forecastsCsv } from './forecastsCsv.js';
+import { forecastsCsv, type UnitsById } from './forecastsCsv.js';
+import { forecastsWorkbook, WORKBOOK_FILE } from './forecastsWorkbook.js';
 import { judgeSignOffs } from './judgeSignOffs.js';
 import { buildManifest, manifestText, type ManifestInput } from './manifest.js';
 import type { PlannedSeries } from './readPlannedSeries.js';
@@ -45,11 +46,16 @@ export interface AssembledMemo {
   digest: string;
 }
 
+/** The series' units by id, from the config. */
+export function unitsOf(plan: RunPlan): UnitsById {
+  return new Map(plan.series.map((series) => [series.id, series.units]));
+}
+
 /** The files the content digest covers, as the formats ask for them. */
-export function contentFiles(document: RecordDocument, formats: readonly OutputFormat[]): OutputFile[] {
+export function contentFiles(document: RecordDocument, formats: readonly OutputFormat[], units: UnitsById): OutputFile[] {
   const content: OutputFile[] = [];
   if (formats.includes('json')) content.push({ name: 'record.json', content: recordDocumentText(document) });
-  if (formats.includes('csv')) content.push({ name: 'forecasts.csv', content: forecastsCsv(document.records) });
+  if (formats.includes('csv')) content.push({ name: 'forecasts.csv', content: forecastsCsv(document.records, units) });
   return content;
 }
 
@@ -57,7 +63,7 @@ export function contentFiles(document: RecordDocument, formats: readonly OutputF
 export async function assembleMemo(plan: RunPlan, loaded: readonly PlannedSeries[], document: RecordDocument, options: AssembleOptions): Promise<AssembledMemo> {
   const { formats } = options;
   const { records, memo, run_date: date } = document;
-  const content = contentFiles(document, formats);
+  const content = contentFiles(document, formats, unitsOf(plan));
   const digest = contentDigest(options.inputs, new Map(content.map((file) => [file.name, file.content])));
   const configName = basename(plan.configFile);
   const input: MemoInput = {
@@ -101,6 +107,8 @@ export async function assembleMemo(plan: RunPlan, loaded: readonly PlannedSeries
     }
   }
   files.push(...content);
+  // The workbook repeats forecasts.csv's numbers for the client; outside the content digest, like the rendering.
+  if (formats.includes('xlsx')) files.push({ name: WORKBOOK_FILE, content: await forecastsWorkbook(document, unitsOf(plan)) });
   if (options.signOffs.text !== '') files.push({ name: SIGN_OFF_LOG, content: options.signOffs.text });
   if (options.supersedes !== null) files.push({ name: SUPERSEDES_FILE, content: supersedesText(options.supersedes) });
   const manifest = buildManifest({ tool: toolVersion(), run_date: date, command: options.command, inputs: [...options.inputs] }, files);

@@ -164,6 +164,7 @@ export const verifyReport = {
   more: (count: number) => `  ... and ${count} more`,
   outputChanged: (file: string, expected: string, actual: string) => `${file}: SHA-256 ${actual}, the manifest records ${expected}`,
   outputMissing: (file: string) => `${file}: listed in the manifest but missing`,
+  workbookDiffers: (file: string) => `${file}: the rerun's workbook differs from the stored one`,
   bytesDiffer: (file: string, line: number) => `${file}: the rerun differs from the stored file from line ${line}`,
   numberDiffers: (path: string, stored: string, rerun: string) => `${path}: ${stored} vs ${rerun}`,
   originals: (found: number, missing: number) =>

@@ -10,7 +10,7 @@ import { monthlyMessages } from './messages.js';
 import type { PdfPrinter } from '../memo/print/pdfPrinter.js';
 import { checkRunPaths, writeFailure } from './checkRunPaths.js';
 import { asOfFolders, findEarlierRecords } from './findEarlierRecord.js';
-import { assembleMemo, contentFiles } from './assembleMemo.js';
+import { assembleMemo, contentFiles, unitsOf } from './assembleMemo.js';
 import { contentDigest } from './contentDigest.js';
 import { inputCopyFiles } from './inputCopies.js';
 import { publication, type Publication } from './issuedMemo.js';
@@ -75,7 +75,7 @@ export async function runMemo(configFile: string, options: RunMemoOptions = {}):
   const formats = options.formats ?? plan.output.formats;
   attachTrackRecord(document, earlierMemos);
   const inputs = runInputs(plan, loaded, paths.memoFolder, earlierMemos);
-  const content = contentFiles(document, formats);
+  const content = contentFiles(document, formats, unitsOf(plan));
   const digest = contentDigest(inputs, new Map(content.map((file) => [file.name, file.content])));
   // An issued memo is kept, revised or left alone (exit 2) before anything is rendered; no
   // review may record a sign-off between reading the folder and replacing it.

@@ -46,6 +46,6 @@ export function readStoredMemo(folder: string): StoredMemo | null {
 
 /** The formats a memo folder was written in, read from its manifest's outputs. */
 export function storedFormats(manifest: Manifest): OutputFormat[] {
-  const byFile: Record<string, OutputFormat> = { 'memo.html': 'html', 'memo.pdf': 'pdf', 'record.json': 'json', 'forecasts.csv': 'csv' };
+  const byFile: Record<string, OutputFormat> = { 'memo.html': 'html', 'memo.pdf': 'pdf', 'record.json': 'json', 'forecasts.csv': 'csv', 'forecasts.xlsx': 'xlsx' };
   return manifest.outputs.flatMap((output) => (Object.hasOwn(byFile, output.file) ? [byFile[output.file]] : []));
 }

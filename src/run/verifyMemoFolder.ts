@@ -159,13 +159,14 @@ export async function verifyMemoFolder(folderArgument: string): Promise<VerifyRe
   }
   differences.push(...numberDifferences.map((d) => verifyReport.numberDiffers(d.path, d.stored, d.rerun)));
   const bytes: string[] = [];
-  for (const file of ['memo.html', 'record.json', 'forecasts.csv']) {
+  for (const file of ['memo.html', 'record.json', 'forecasts.csv', 'forecasts.xlsx']) {
     const stored = memo.stored.get(file);
     const again = rebuilt.get(file);
     if (stored === undefined || again === undefined) continue;
     const same = stored.equals(again);
     bytes.push(same ? verifyReport.identical(file) : verifyReport.differs(file));
     // record.json and forecasts.csv are judged number by number above; the memo's text has no tolerance.
+    if (!same && file === 'forecasts.xlsx') differences.push(verifyReport.workbookDiffers(file));
     if (!same && file === 'memo.html') differences.push(verifyReport.bytesDiffer(file, firstDifferentLine(stored.toString('utf8'), again.toString('utf8'))));
   }
   if (templatesMissing && templates !== undefined) bytes.push(verifyReport.templatesMissing(shownPath(templates.folder)));

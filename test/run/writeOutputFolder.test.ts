@@ -107,13 +107,15 @@ describe('runDate', () => {
 });
 
 describe('forecastsCsv', () => {
-  it('writes one row per model and horizon with every level, quoting text (RFC 4180)', () => {
-    const row = (h: number) => ({ h, period: `20${30 + h}`, point: 10 + h, intervals: { '80': [9, 11] as [number, number], '95': [8, 12] as [number, number] }, model_scale: { mean: 10 + h, se_process: 1, se_total: 1.1 } });
-    const record = { series: { id: 'a,b' }, settings: { levels: [80, 95] }, forecasts: { deterministic: [row(1)], stochastic: [row(1), row(2)] } };
-    const csv = forecastsCsv([record as unknown as Parameters<typeof forecastsCsv>[0][number]]);
+  it('writes one row per model and horizon with every level, the units, the recommended flag and the period start, quoting text (RFC 4180)', () => {
+    const row = (h: number) => ({ h, period: `20${30 + h}`, point: 10 + h + 1 / 3, intervals: { '80': [9, 11] as [number, number], '95': [8, 12] as [number, number] }, model_scale: { mean: 10 + h, se_process: 1, se_total: 1.1 } });
+    const record = { series: { id: 'a,b' }, settings: { levels: [80, 95] }, forecasts: { deterministic: [row(1)], stochastic: [row(1), row(2)] }, recommendation: { model: 'stochastic' } };
+    const csv = forecastsCsv([record as unknown as Parameters<typeof forecastsCsv>[0][number]], new Map([['a,b', 'ML a "year"']]));
     const lines = csv.trimEnd().split('\r\n');
-    expect(lines[0]).toBe('series_id,model,h,period,point,lower_80,upper_80,lower_95,upper_95,model_scale_mean,se_process,se_total');
+    expect(lines[0]).toBe('series_id,units,model,recommended,h,period,period_start,point,lower_80,upper_80,lower_95,upper_95,model_scale_mean,se_process,se_total');
     expect(lines).toHaveLength(4);
-    expect(lines[1]).toBe('"a,b",deterministic,1,2031,11,9,11,8,12,11,1,1.1');
+    // 11.333… to six significant digits.
+    expect(lines[1]).toBe('"a,b","ML a ""year""",deterministic,no,1,2031,2031-01-01,11.3333,9,11,8,12,11,1,1.1');
+    expect(lines[3]).toBe('"a,b","ML a ""year""",stochastic,yes,2,2032,2032-01-01,12.3333,9,11,8,12,12,1,1.1');
   });
 });
