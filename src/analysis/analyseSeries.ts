@@ -37,6 +37,8 @@ export interface AnalysisRun {
   /** Threads for the two models' searches and the backtest, and a pool for the backtest; the record does not depend on them. */
   threads?: BacktestRun['threads'];
   pool?: BacktestRun['pool'];
+  /** Hears the backtest's progress, origins done of all (a progress display only). */
+  onBacktestProgress?: BacktestRun['onProgress'];
   /** KPSS lag truncation (reference checks only). */
   kpssLagRule?: EvidenceOptions['kpssLagRule'];
 }
@@ -133,7 +135,7 @@ async function backtestOrReason(
   // The backtest (and its thread pool) loads only for an analysis that runs one.
   const { runBacktest } = await import('../backtest/runBacktest.js');
   try {
-    return { record: await runBacktest({ values: series.values, periods: series.periods }, settings, { orders, threads: run.threads, pool: run.pool, ...seasonalRun }) };
+    return { record: await runBacktest({ values: series.values, periods: series.periods }, settings, { orders, threads: run.threads, pool: run.pool, onProgress: run.onBacktestProgress, ...seasonalRun }) };
   } catch (error) {
     if (!(error instanceof InputError)) throw error;
     return { record: null, reason: error.problems.map((problem) => formatProblem({ ...problem, file: undefined })).join(' ') };

@@ -54,6 +54,8 @@ export interface BacktestRun {
    * notes). Absent: no seasonal part.
    */
   seasonal?: Record<TrendModelKind, SeasonalSearchSpec | FixedSeasonalPart>;
+  /** Hears how many origins have both models' forecasts, of how many, as they finish (for a progress display; the record does not depend on it). */
+  onProgress?: (originsDone: number, originsTotal: number) => void;
 }
 
 export async function runBacktest(input: BacktestInput, settings: AnalysisSettings, run: BacktestRun = {}): Promise<BacktestRecord> {
@@ -113,7 +115,7 @@ export async function runBacktest(input: BacktestInput, settings: AnalysisSettin
     throw new InputError(backtestMessages.seasonUnseen(data.periods?.[end - 1] ?? `at observation ${end}`));
   });
   const threads = run.threads ?? Math.min(availableParallelism(), plan.origins.length);
-  const results = await runOriginTasks(tasks, threads, run.pool);
+  const results = await runOriginTasks(tasks, threads, run.pool, originProgress(plan.origins.length, run.onProgress));
   const collected = collectForecasts(data, plan.origins, results, settings, period);
 
   const perHorizon = {} as BacktestRecord['per_horizon'];
@@ -159,6 +161,22 @@ export async function runBacktest(input: BacktestInput, settings: AnalysisSettin
     per_horizon: perHorizon,
     comparison,
     forecasts: collected.forecasts,
+  };
+}
+
+/** Counts the origins whose every task has finished, for `onProgress`; tasks are laid out origin by origin, one per model. */
+function originProgress(origins: number, onProgress: BacktestRun['onProgress']): ((taskIndices: readonly number[]) => void) | undefined {
+  if (onProgress === undefined) return undefined;
+  const finished = new Array<number>(origins).fill(0);
+  let done = 0;
+  onProgress(0, origins);
+  return (taskIndices) => {
+    for (const index of taskIndices) {
+      const origin = Math.floor(index / TREND_MODELS.length);
+      finished[origin]++;
+      if (finished[origin] === TREND_MODELS.length) done++;
+    }
+    onProgress(done, origins);
   };
 }
 

@@ -9,9 +9,12 @@ import Tinypool from 'tinypool';
 import { workerModule } from '../base/workerModule.js';
 import { forecastChain, type OriginForecast, type OriginTask } from './forecastAtOrigin.js';
 
+/** Called as each chain of tasks finishes, with the chain's task indices; for progress only. */
+export type ChainsDone = (taskIndices: readonly number[]) => void;
+
 export interface OriginPool {
   readonly threads: number;
-  run(tasks: readonly OriginTask[]): Promise<OriginForecast[]>;
+  run(tasks: readonly OriginTask[], onChainDone?: ChainsDone): Promise<OriginForecast[]>;
   close(): Promise<void>;
 }
 
@@ -20,18 +23,18 @@ export function openOriginPool(threads: number): OriginPool {
   const pool = new Tinypool({ filename: workerModule(import.meta.url, 'forecastAtOrigin', 'forecastChain'), name: 'forecastChain', minThreads: threads, maxThreads: threads });
   return {
     threads,
-    run: (tasks) => inChains(tasks, (chain) => pool.run(chain) as Promise<OriginForecast[]>),
+    run: (tasks, onChainDone) => inChains(tasks, (chain) => pool.run(chain) as Promise<OriginForecast[]>, onChainDone),
     close: () => pool.destroy(),
   };
 }
 
-export async function runOriginTasks(tasks: readonly OriginTask[], threads: number, shared?: OriginPool): Promise<OriginForecast[]> {
+export async function runOriginTasks(tasks: readonly OriginTask[], threads: number, shared?: OriginPool, onChainDone?: ChainsDone): Promise<OriginForecast[]> {
   const chains = chainsOf(tasks);
-  if (shared !== undefined && chains.length > 1) return shared.run(tasks);
-  if (threads <= 1 || chains.length <= 1) return inChains(tasks, (chain) => Promise.resolve(forecastChain(chain)));
+  if (shared !== undefined && chains.length > 1) return shared.run(tasks, onChainDone);
+  if (threads <= 1 || chains.length <= 1) return inChains(tasks, (chain) => Promise.resolve(forecastChain(chain)), onChainDone);
   const pool = openOriginPool(Math.min(threads, chains.length));
   try {
-    return await pool.run(tasks);
+    return await pool.run(tasks, onChainDone);
   } finally {
     await pool.close();
   }
@@ -57,11 +60,17 @@ function chainsOf(tasks: readonly OriginTask[]): number[][] {
   return chains;
 }
 
-/** Runs each chain with `run` and puts the forecasts back in task order. */
-async function inChains(tasks: readonly OriginTask[], run: (chain: OriginTask[]) => Promise<OriginForecast[]>): Promise<OriginForecast[]> {
+/** Runs each chain with `run` and puts the forecasts back in task order; `onChainDone` hears of each chain as it finishes. */
+async function inChains(tasks: readonly OriginTask[], run: (chain: OriginTask[]) => Promise<OriginForecast[]>, onChainDone?: ChainsDone): Promise<OriginForecast[]> {
   const chains = chainsOf(tasks);
   const results = new Array<OriginForecast>(tasks.length);
-  const done = await Promise.all(chains.map((chain) => run(chain.map((index) => tasks[index]))));
+  const done = await Promise.all(
+    chains.map(async (chain) => {
+      const forecasts = await run(chain.map((index) => tasks[index]));
+      onChainDone?.(chain);
+      return forecasts;
+    }),
+  );
   chains.forEach((chain, c) => chain.forEach((index, i) => (results[index] = done[c][i])));
   return results;
 }

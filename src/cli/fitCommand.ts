@@ -8,6 +8,7 @@ import { readSeriesFile } from '../data/readSeriesFile.js';
 import { formatSummary } from './formatSummary.js';
 import { fitOptionPlace, parseFitOptions } from './parseFitOptions.js';
 import { EXIT } from './exitCodes.js';
+import { fitProgress } from './progressReporter.js';
 import { MIN_BACKTEST_ORIGINS } from '../base/settings.js';
 
 export const FIT_HELP = `Usage: trendbrief fit FILE.csv|FILE.xlsx [options]
@@ -63,7 +64,7 @@ Options:
   -h, --help                this text
 `;
 
-export async function runFit(args: readonly string[], io: { stdout(text: string): void }): Promise<number> {
+export async function runFit(args: readonly string[], io: { stdout(text: string): void; stderr?(text: string): void; isTTY?: boolean }): Promise<number> {
   // Help comes before the options are checked, so `fit --help` works whatever else is written.
   if (args.includes('--help') || args.includes('-h')) {
     io.stdout(FIT_HELP);
@@ -84,7 +85,17 @@ export async function runFit(args: readonly string[], io: { stdout(text: string)
   });
   const settings = resolveSettings(request.settings, series, fitOptionPlace);
   const identity = { id: series.column, title: series.column, file: series.file };
-  const record = await analyseSeries(series, settings, identity, { backtest: request.backtest });
+  // Progress only on a terminal, on stderr: stdout stays the summary or the record alone.
+  const stderr = io.stderr;
+  const progress = fitProgress(io.isTTY === true && stderr !== undefined ? { write: (text) => stderr(text), isTTY: true } : undefined);
+  progress.stage('fitting both models');
+  let backtestShown = false;
+  const onBacktestProgress = (done: number, total: number): void => {
+    if (!backtestShown) progress.stage('backtest');
+    backtestShown = true;
+    progress.origins(done, total);
+  };
+  const record = await analyseSeries(series, settings, identity, { backtest: request.backtest, ...(request.backtest ? { onBacktestProgress } : {}) }).finally(() => progress.finish());
   io.stdout(request.json ? `${JSON.stringify(record, null, 2)}\n` : formatSummary(record));
   return EXIT.ok;
 }

@@ -1,82 +1,102 @@
-// The backtest block of the terminal summary: what was run, the notes, accuracy per horizon
-// for each method and the comparison tests. Plain text, fixed-width columns.
-import type { BacktestMethod, BacktestRecord, ComparisonRow, JsonNumber } from '../analysis/record.js';
-import { backtestMethods, scoresOf } from '../memo/backtestMethods.js';
+// The backtest block of the terminal summary: what was run and its notes, then by horizon the
+// three methods' RMSE and interval score at the scored level and the models' coverage at every
+// level, and the comparison tests. The other scores (MAE, MASE, MAPE, widths, CRPS) are in the
+// record (`fit --json`), as in the memo's record.json.
+import type { BacktestMethod, BacktestRecord, ComparisonRow } from '../analysis/record.js';
 import { levelKey, type RefitPolicy } from '../base/settings.js';
+import { backtestMethods, scoresOf } from '../memo/backtestMethods.js';
+import { decimalsForScale } from '../memo/format/formatNumber.js';
+import { MODEL_IN_TEXT, TEMPLATE_TEXT } from '../memo/wording.js';
+import { fixed, levelText, NO_VALUE, pCell, percent, renderTable, wrap, type Column } from './textTable.js';
 
-const METHOD_NAMES: Record<BacktestMethod, string> = { deterministic: 'deterministic', stochastic: 'stochastic', naive: 'no change', seasonal_naive: 'seasonal naive' };
+const SHORT: Record<BacktestMethod, string> = TEMPLATE_TEXT.methodShort;
+
 function lossName(loss: ComparisonRow['loss']): string {
-  return loss === 'squared_error' ? 'squared error' : `${loss.slice('interval_score_'.length)}% interval score`;
+  return loss === 'squared_error' ? TEMPLATE_TEXT.squaredErrorLoss : TEMPLATE_TEXT.intervalScoreLoss(Number(loss.slice('interval_score_'.length)));
 }
 
-export function formatBacktest(record: BacktestRecord): string[] {
+/** Decimals that show the smallest positive value of a column group to about three significant digits. */
+function decimalsOf(values: readonly (number | null | undefined)[]): number {
+  const positive = values.filter((v): v is number => typeof v === 'number' && Number.isFinite(v) && v > 0);
+  return positive.length === 0 ? 2 : decimalsForScale(Math.min(...positive));
+}
+
+/** `scoredLevel`: the level whose interval score the recommendation compares (by default the widest). */
+export function formatBacktest(record: BacktestRecord, scoredLevel = Math.max(...record.settings.levels)): string[] {
   const { settings, origins } = record;
   const first = origins[0];
   const last = origins[origins.length - 1];
   const span = first.period === null || last.period === null ? `observations ${first.length} to ${last.length}` : `${first.period} to ${last.period}`;
-  const lines = [
-    `Backtest: ${settings.origins} origins (${span}), horizons 1 to ${settings.horizon}, ${settings.window} window, step ${settings.step}`,
-    `  ${describeRefit(settings.refit)}; training windows of at least ${settings.min_training_length} observations`,
+  const lines = [`Backtest: ${settings.origins} origins (${span}), ${settings.horizon === 1 ? '1 step' : `1 to ${settings.horizon} steps`} ahead, ${settings.window} window`];
+  lines.push(...wrap(`${describeRefit(settings.refit)}; training windows of at least ${settings.min_training_length} observations.`));
+  for (const note of record.notes) lines.push(...wrap(`Note: ${note}`, '    ', undefined, '  '));
+
+  const methods = backtestMethods(record);
+  const models = methods.filter((m) => m === 'deterministic' || m === 'stochastic');
+  const scored = levelKey(scoredLevel);
+  const all = methods.flatMap((method) => scoresOf(record, method));
+  const rmseDecimals = decimalsOf(all.map((s) => s.rmse));
+  const scoreDecimals = decimalsOf(all.map((s) => s.interval_score[scored]));
+  const isHead = `${levelText(scoredLevel)} interval score`;
+  const columns: Column[] = [
+    { head: 'h', align: 'right' },
+    ...methods.map((m) => ({ head: SHORT[m], align: 'right' as const, group: 'RMSE' })),
+    ...methods.map((m) => ({ head: SHORT[m], align: 'right' as const, group: isHead })),
+    ...settings.levels.flatMap((level) => models.map((m) => ({ head: SHORT[m], align: 'right' as const, group: `${levelText(level)} cover` }))),
   ];
-  for (const note of record.notes) lines.push(`  Note: ${note}`);
-  lines.push('');
-  lines.push('Accuracy by horizon (data scale, CRPS on the model scale; lower is better, coverage should match its level):');
-  const levels = settings.levels.map(levelKey);
-  const header = ['h', 'method', 'MAE', 'RMSE', 'MASE', 'MAPE %', ...levels.map((l) => `cover ${l}%`), ...levels.map((l) => `IS ${l}%`), 'CRPS'];
-  const rows: string[][] = [header];
+  const rows: string[][] = [];
   for (let h = 1; h <= settings.horizon; h++) {
-    for (const method of backtestMethods(record)) {
-      const s = scoresOf(record, method)[h - 1];
-      rows.push([
-        String(h),
-        METHOD_NAMES[method],
-        ...[s.mae, s.rmse, s.mase, s.mape].map((v) => formatNumber(v)),
-        ...levels.map((l) => formatNumber(s.coverage[l], 2)),
-        ...levels.map((l) => formatNumber(s.interval_score[l])),
-        formatNumber(s.crps),
-      ]);
-    }
+    const at = (method: BacktestMethod) => scoresOf(record, method)[h - 1];
+    rows.push([
+      String(h),
+      ...methods.map((m) => fixed(at(m).rmse, rmseDecimals)),
+      ...methods.map((m) => fixed(at(m).interval_score[scored], scoreDecimals)),
+      ...settings.levels.flatMap((level) => models.map((m) => percent(at(m).coverage[levelKey(level)]))),
+    ]);
   }
-  lines.push(...alignColumns(rows, 2).map((line) => `  ${line}`));
-  lines.push('');
-  lines.push(`Deterministic vs stochastic trend, Diebold-Mariano test with the small-sample correction (p-values; ${settings.significance * 100}% level):`);
+  lines.push('', ...wrap('Accuracy by horizon (in the series\u2019 units; lower RMSE and interval score are better; cover should be near its level)', '  ', undefined, ''));
+  lines.push(...renderTable(columns, rows, '  '));
+  const benchmark = methods.find((m) => m !== 'deterministic' && m !== 'stochastic');
+  lines.push(
+    ...wrap(
+      `Det.: deterministic trend. Stoch.: stochastic trend.${benchmark === undefined ? '' : ` Bench.: the ${MODEL_IN_TEXT[benchmark]}.`} Cover: the share of outcomes inside the interval. The interval score is the interval's width plus a penalty for each outcome outside it. MAE, MASE, MAPE, widths, CRPS and the other levels' scores: fit --json.`,
+    ),
+  );
+
+  lines.push('', ...wrap(`${TEMPLATE_TEXT.comparisonCaption}: Diebold-Mariano test of equal accuracy, deterministic against stochastic trend`, '  ', undefined, ''));
   const losses = [...new Set(record.comparison.map((row) => row.loss))];
-  const table: string[][] = [['h', ...losses.map((loss) => lossName(loss))]];
+  const table: string[][] = [];
   for (let h = 1; h <= settings.horizon; h++) {
-    table.push([String(h), ...losses.map((loss) => describeComparison(record.comparison.find((row) => row.h === h && row.loss === loss), settings.significance))]);
+    table.push([String(h), ...losses.flatMap((loss) => comparisonCells(record.comparison.find((row) => row.h === h && row.loss === loss), settings.significance))]);
   }
-  lines.push(...alignColumns(table, table[0].length).map((line) => `  ${line}`));
-  for (const row of record.comparison.filter((c) => !c.available)) lines.push(`  Not available at h = ${row.h} (${lossName(row.loss)}): ${row.reason ?? ''}`);
+  const comparisonColumns: Column[] = [
+    { head: 'h', align: 'right' },
+    ...losses.flatMap((loss) => [
+      { head: 'p-value', align: 'right' as const, group: lossName(loss) },
+      { head: 'lower for', align: 'left' as const, group: lossName(loss) },
+    ]),
+  ];
+  lines.push(...renderTable(comparisonColumns, table, '  '));
+  lines.push(...wrap(`* significant at the ${fixed(settings.significance * 100, 0)}% level. A small p-value means the difference in average loss is unlikely to be chance.`));
+  // One line per reason a test is missing, with the horizons it applies to.
+  const missing = new Map<string, string[]>();
+  for (const row of record.comparison.filter((c) => !c.available)) {
+    const key = `${lossName(row.loss)}: ${row.reason ?? 'not available'}`;
+    missing.set(key, [...(missing.get(key) ?? []), String(row.h)]);
+  }
+  for (const [reason, hs] of missing) lines.push(...wrap(`${NO_VALUE} no test at h = ${hs.join(', ')} (${reason}).`));
   return lines;
 }
 
-function describeComparison(row: ComparisonRow | undefined, significance: number): string {
-  if (row === undefined || !row.available || row.p_value === null) return 'not available';
-  const lower = row.better === null ? 'equal means' : `${row.better} lower`;
-  return `p = ${row.p_value.toFixed(3)}, ${lower}${row.p_value < significance ? ' (significant)' : ''}`;
-}
-
-function formatNumber(value: JsonNumber | undefined, digits = 4): string {
-  if (value === null || value === undefined) return 'n/a';
-  const size = Math.abs(value);
-  if (size !== 0 && (size >= 1e7 || size < 1e-4)) return value.toExponential(digits - 1);
-  return Number(value.toPrecision(digits)).toString();
-}
-
-/** Pads every column to its widest cell: the first `textColumns` to the left, the rest (numbers) to the right. */
-function alignColumns(rows: readonly string[][], textColumns: number): string[] {
-  const widths = rows[0].map((_, column) => Math.max(...rows.map((row) => row[column].length)));
-  return rows.map((row) =>
-    row
-      .map((cell, column) => (column < textColumns ? cell.padEnd(widths[column]) : cell.padStart(widths[column])))
-      .join('  ')
-      .trimEnd(),
-  );
+function comparisonCells(row: ComparisonRow | undefined, significance: number): [string, string] {
+  if (row === undefined || !row.available || row.p_value === null) return [NO_VALUE, ''];
+  const lower = row.better === null ? 'neither' : row.better;
+  return [pCell(row.p_value), `${lower}${row.p_value < significance ? ' *' : ''}`];
 }
 
 /** One line on how each origin refits the models, for the summary. */
 export function describeRefit(refit: RefitPolicy): string {
-  if (refit === 'reselect') return 'orders re-selected by AICc and parameters re-estimated at every origin';
-  if (refit === 'reestimate') return 'orders fixed from the full sample, parameters re-estimated at every origin';
-  return 'orders and parameters fixed from the full sample';
+  if (refit === 'reselect') return 'Orders re-selected by AICc and parameters re-estimated at every origin';
+  if (refit === 'reestimate') return 'Orders fixed from the full sample, parameters re-estimated at every origin';
+  return 'Orders and parameters fixed from the full sample';
 }

@@ -1,71 +1,155 @@
-// The evidence block of the terminal summary: unit-root tests, their reading, residual checks.
-import type { AnalysisRecord } from '../analysis/record.js';
+// The evidence block of the terminal summary, in the memo's words: the unit-root checks as a
+// table with their plain outcomes and the combined reading, the seasonal checks, each model's
+// one-step forecast errors with findings in plain words, and trend stability.
+import type { AdfResult, AnalysisRecord, KpssResult, ResidualChecks, SupWaldPBound } from '../analysis/record.js';
 import { addPeriods } from '../base/period.js';
-import type { AdfResult, KpssResult } from '../analysis/record.js';
-import { formatPValue } from '../base/pValueText.js';
+import { TREND_MODELS } from '../base/settings.js';
+import { evidenceWording, UNIT_ROOT_ROWS } from '../memo/evidenceWording.js';
+import { formatP } from '../memo/format/formatNumber.js';
+import { HEADINGS, LABELS, MODEL_NAME } from '../memo/wording.js';
+import { fixed, pCell, renderTable, significant, wrap, type Column } from './textTable.js';
+
+/** A sup-Wald p-value known only between critical values, as a cell. */
+const P_BOUND_CELL: Record<SupWaldPBound, string> = {
+  'p < 0.01': '< 0.01',
+  '0.01 < p < 0.05': '0.01 to 0.05',
+  '0.05 < p < 0.10': '0.05 to 0.10',
+  'p > 0.10': '> 0.10',
+};
 
 export function formatEvidence(record: AnalysisRecord): string[] {
-  const { evidence } = record;
-  const lines = ['Evidence on the kind of trend (model scale):'];
-  lines.push(`  KPSS, null: stationary around a level   ${kpss(evidence.kpss.level)}`);
-  lines.push(`  KPSS, null: stationary around a line    ${kpss(evidence.kpss.trend)}`);
-  lines.push(`  ADF, null: unit root (constant)         ${adf(evidence.adf.constant)}`);
-  lines.push(`  ADF, null: unit root (constant + trend) ${adf(evidence.adf.trend)}`);
-  lines.push(`  Reading (${evidence.reading.verdict}): ${evidence.reading.text}`);
-  for (const problem of evidence.unavailable) lines.push(`  Not available: ${problem.test} (${problem.reason})`);
-  const seasonal = evidence.seasonal;
-  if (seasonal !== undefined) {
-    if (seasonal.unit_root !== null) lines.push(`  Seasonal test: ${seasonal.unit_root.text}`);
-    if (seasonal.strength !== null) lines.push(`  Seasonal strength: ${seasonal.strength.text}`);
-    for (const problem of seasonal.unavailable) lines.push(`  Not available: ${problem.test} (${problem.reason})`);
-  }
-  lines.push('');
-  lines.push('Residual checks (one-step forecast errors):');
-  for (const kind of ['deterministic', 'stochastic'] as const) {
-    const checks = evidence.residuals[kind];
-    const lb = checks.ljung_box;
-    const ljung = lb === null ? 'Ljung-Box n/a' : `Ljung-Box Q = ${lb.stat.toFixed(2)} on ${lb.df} df, ${formatPValue(lb)}`;
-    const jb = `Jarque-Bera ${formatPValue(checks.jarque_bera)}`;
-    const flags = checks.findings.filter((f) => f.flagged).map((f) => f.check);
-    lines.push(`  ${kind.padEnd(13)} ${ljung}; ${jb}; ${flags.length === 0 ? 'no flags' : `FLAGGED: ${flags.join(', ')}`}`);
-  }
-  lines.push('');
-  lines.push('Trend stability:');
-  const stability = evidence.stability;
-  if (stability === null) {
-    lines.push('  not available');
-  } else {
-    // A model with a seasonal part keeps it in every window and in the break test; on seasonal
-    // differences the drift is still per period, the mean change over a year divided by s.
-    const seasonal = record.models.deterministic.seasonal !== null || record.models.stochastic.seasonal !== null;
-    const yearSteps = record.models.stochastic.seasonal?.seasonal_differences === true ? record.models.stochastic.seasonal.period : undefined;
-    for (const kind of ['deterministic', 'stochastic'] as const) {
-      const test = stability.break_test[kind];
-      const at = addPeriods(record.series.first, test.break_index);
-      const over = kind === 'stochastic' && yearSteps !== undefined ? ', on the changes over a year' : '';
-      lines.push(`  ${kind.padEnd(13)} sup-Wald ${test.stat.toFixed(2)} (${test.restrictions} restriction${test.restrictions > 1 ? 's' : ''}${over}), ${test.p_bound}, most likely break from ${at}`);
-    }
-    const slope = stability.windows.deterministic;
-    const drift = stability.windows.stochastic;
-    const driftUnit = yearSteps === undefined ? '' : ` per period (change over a year / ${yearSteps})`;
-    if (slope.length <= 1) lines.push(`  expanding windows: none, the series is no longer than the shortest window (${stability.windows.min_window} observations)`);
-    else lines.push(`  expanding windows (${slope.length}${seasonal ? ', seasonal parts kept' : ''}): slope ${range(slope.map((w) => w.slope))}, drift ${range(drift.map((w) => w.drift))}${driftUnit}`);
+  return [...unitRootSection(record), '', ...residualSection(record), '', ...stabilitySection(record)];
+}
+
+function kpssRejects(result: KpssResult, level: number): boolean {
+  if (result.p_bound === 'below') return true;
+  if (result.p_bound === 'above') return false;
+  return result.p_value < level;
+}
+
+function unitRootSection(record: AnalysisRecord): string[] {
+  const { kpss, adf, reading, unavailable } = record.evidence;
+  const level = reading.level;
+  const rows: string[][] = [];
+  // The outcome in a few words, of the row's name: a steady level or line ("it"), lasting shocks ("them").
+  const row = (name: string, result: KpssResult | AdfResult | null, rejects: boolean, words: [string, string]): void => {
+    if (result === null) return;
+    rows.push([name, fixed(result.stat, 3), String(result.lags), pCell(result.p_value, 'p_bound' in result ? result.p_bound : undefined), rejects ? words[0] : words[1]]);
+  };
+  const steady: [string, string] = ['rules it out', 'no evidence against it'];
+  const shocks: [string, string] = ['rules them out', 'cannot rule them out'];
+  row(UNIT_ROOT_ROWS.kpssLevel.name, kpss.level, kpss.level !== null && kpssRejects(kpss.level, level), steady);
+  row(UNIT_ROOT_ROWS.kpssTrend.name, kpss.trend, kpss.trend !== null && kpssRejects(kpss.trend, level), steady);
+  row(UNIT_ROOT_ROWS.adfConstant.name, adf.constant, adf.constant !== null && adf.constant.p_value < level, shocks);
+  row(UNIT_ROOT_ROWS.adfTrend.name, adf.trend, adf.trend !== null && adf.trend.p_value < level, shocks);
+  const columns: Column[] = [
+    { head: LABELS.test, align: 'left' },
+    { head: LABELS.statistic, align: 'right' },
+    { head: LABELS.lags, align: 'right' },
+    { head: LABELS.pValue, align: 'right' },
+    { head: `${LABELS.outcome} at ${fixed(level * 100, 0)}%`, align: 'left' },
+  ];
+  const lines = [`${HEADINGS.evidence} (on the modelling scale)`, ...renderTable(columns, rows, '  ')];
+  lines.push(...wrap(`KPSS starts from a steady level or line and looks for evidence against it; ADF starts from shocks that never fade (a unit root) and looks for evidence against them.`));
+  lines.push(...wrap(`Reading: ${reading.text}`));
+  for (const problem of unavailable) lines.push(...wrap(evidenceWording.unavailable(problem.test, problem.reason)));
+  const seasonal = record.evidence.seasonal;
+  const setting = record.seasonal;
+  if (setting !== undefined && setting.period > 1) {
+    const sentences = [
+      ...(setting.reason === null ? [] : [setting.reason]),
+      ...(setting.setting === 'none' ? [evidenceWording.seasonalNone] : []),
+      ...(seasonal?.unit_root?.text === undefined ? [] : [seasonal.unit_root.text]),
+      ...(setting.differences_decided_by === 'config' ? [evidenceWording.seasonalDifferencesByConfig(setting.seasonal_differences === true)] : []),
+      ...(seasonal?.strength?.text === undefined ? [] : [seasonal.strength.text]),
+      ...(seasonal?.unavailable ?? []).map((u) => evidenceWording.unavailable(u.test, u.reason)),
+    ];
+    if (sentences.length > 0) lines.push(`  ${evidenceWording.seasonalHeading}:`, ...sentences.flatMap((s) => wrap(s, '    ')));
   }
   return lines;
 }
 
-function range(values: number[]): string {
-  const finite = values.filter(Number.isFinite);
-  if (finite.length === 0) return 'n/a';
-  return `${Math.min(...finite).toPrecision(3)} to ${Math.max(...finite).toPrecision(3)}`;
+/** What a flagged check found, in plain words with its p-value. */
+function findingWords(checks: ResidualChecks): string[] {
+  return checks.findings
+    .filter((finding) => finding.flagged)
+    .map((finding) => {
+      if (finding.check === 'ljung_box' && checks.ljung_box !== null)
+        return `autocorrelation remains in the one-step errors (Ljung-Box over ${checks.ljung_box.lags} lags, ${formatP(checks.ljung_box.p_value)}): the model has not caught all of the series' memory`;
+      if (finding.check === 'acf')
+        return `${checks.acf_outside.length} of ${checks.acf.lag.length} error autocorrelations lie outside their 95% bounds (lag ${checks.acf_outside.join(', ')}), more than chance would put there`;
+      if (finding.check === 'normality')
+        return `the errors are not bell-shaped (Jarque-Bera ${formatP(checks.jarque_bera.p_value)}), so the normal-based intervals may misstate the chance of large surprises`;
+      return finding.text;
+    });
 }
 
-function kpss(result: KpssResult | null): string {
-  if (result === null) return 'not available';
-  return `stat ${result.stat.toFixed(4)}, ${result.lags} lags, ${formatPValue(result)}`;
+function residualSection(record: AnalysisRecord): string[] {
+  const { residuals } = record.evidence;
+  const columns: Column[] = [
+    { head: '', align: 'left' },
+    { head: 'Q', align: 'right', group: 'Ljung-Box' },
+    { head: 'df', align: 'right', group: 'Ljung-Box' },
+    { head: LABELS.pValue, align: 'right', group: 'Ljung-Box' },
+    { head: 'outside', align: 'right', group: 'Autocorrelations' },
+    { head: 'skewness', align: 'right', group: 'Jarque-Bera' },
+    { head: 'kurtosis', align: 'right', group: 'Jarque-Bera' },
+    { head: LABELS.pValue, align: 'right', group: 'Jarque-Bera' },
+  ];
+  const rows = TREND_MODELS.map((kind) => {
+    const checks = residuals[kind];
+    const lb = checks.ljung_box;
+    const jb = checks.jarque_bera;
+    return [
+      MODEL_NAME[kind],
+      lb === null ? '' : fixed(lb.stat, 2),
+      lb === null ? '' : String(lb.df),
+      lb === null ? 'too few' : pCell(lb.p_value),
+      `${checks.acf_outside.length} of ${checks.acf.lag.length}`,
+      fixed(jb.skewness, 2),
+      fixed(jb.kurtosis, 2),
+      pCell(jb.p_value),
+    ];
+  });
+  const lines = [HEADINGS.residualChecks, ...renderTable(columns, rows, '  ')];
+  const findings = TREND_MODELS.flatMap((kind) => findingWords(residuals[kind]).map((words) => `${MODEL_NAME[kind]}: ${words}.`));
+  if (findings.length === 0) lines.push('  No finding against either model\u2019s errors.');
+  for (const finding of findings) lines.push(...wrap(finding));
+  lines.push(...wrap(`Autocorrelations: of lags 1 to ${residuals.deterministic.acf.lag.length}, those outside \u00b11.96/\u221an; kurtosis is 3 for a bell shape.`));
+  return lines;
 }
 
-function adf(result: AdfResult | null): string {
-  if (result === null) return 'not available';
-  return `stat ${result.stat.toFixed(3)}, ${result.lags} lags, ${formatPValue(result)} (5% critical ${result.critical['5'].toFixed(2)})`;
+function stabilitySection(record: AnalysisRecord): string[] {
+  const stability = record.evidence.stability;
+  if (stability === null) return [HEADINGS.stability, '  Not available for this series (see the reasons above).'];
+  const yearSteps = record.models.stochastic.seasonal?.seasonal_differences === true ? record.models.stochastic.seasonal.period : undefined;
+  const columns: Column[] = [
+    { head: '', align: 'left' },
+    { head: 'Break test', align: 'right' },
+    { head: 'Allowed to change', align: 'left' },
+    { head: LABELS.pValue, align: 'right' },
+    { head: 'Most likely break from', align: 'left' },
+  ];
+  const rows = TREND_MODELS.map((kind) => {
+    const test = stability.break_test[kind];
+    const changes = kind === 'deterministic' ? 'level and slope' : yearSteps === undefined ? 'drift' : 'drift (changes over a year)';
+    return [MODEL_NAME[kind], fixed(test.stat, 2), changes, P_BOUND_CELL[test.p_bound], addPeriods(record.series.first, test.break_index)];
+  });
+  const lines = [HEADINGS.stability, ...renderTable(columns, rows, '  ')];
+  const summary = evidenceWording.stabilitySummary(
+    TREND_MODELS.filter((model) => stability.break_test[model].reject['5']),
+    TREND_MODELS.filter((model) => stability.break_test[model].reject['10'] && !stability.break_test[model].reject['5']),
+  );
+  // The memo's sentence points to its appendix; here the table is above.
+  lines.push(...wrap(`${summary.replace(/ \(chart and tests in the technical appendix\)/, '')} Break test: the largest Wald statistic over the possible break dates (sup-Wald).`));
+  const slope = stability.windows.deterministic.map((w) => w.slope);
+  const drift = stability.windows.stochastic.map((w) => w.drift);
+  if (slope.length <= 1) lines.push(...wrap(`Expanding windows: none, as the series is no longer than the shortest window (${stability.windows.min_window} observations).`));
+  else {
+    const range = (values: number[]): string => `${significant(Math.min(...values), 3)} to ${significant(Math.max(...values), 3)}`;
+    const unit = yearSteps === undefined ? '' : ` per period (the change over a year / ${yearSteps})`;
+    const seasonal = record.models.deterministic.seasonal !== null || record.models.stochastic.seasonal !== null;
+    lines.push(...wrap(`Expanding windows (${slope.length}, from ${stability.windows.min_window} observations${seasonal ? ', seasonal parts kept' : ''}): slope ${range(slope)}, drift ${range(drift)}${unit}.`));
+  }
+  return lines;
 }

@@ -45,3 +45,42 @@ export function progressReporter(totalSeries: number, totalMemos: number, target
     },
   };
 }
+
+/** Progress of one `fit`: the stage it is at and, during a backtest, the origins done. */
+export interface FitProgress {
+  stage(name: string): void;
+  origins(done: number, total: number): void;
+  finish(): void;
+}
+
+/**
+ * On a terminal one line redrawn in place (the stage, origins done of all, the time elapsed)
+ * and wiped at the end, so what stays on the screen is the summary; elsewhere one line per
+ * stage. Only ever written to stderr: stdout holds the summary or the record alone.
+ */
+export function fitProgress(target: ProgressTarget | undefined, now: () => number = Date.now): FitProgress {
+  if (target === undefined) return { stage: () => undefined, origins: () => undefined, finish: () => undefined };
+  const started = now();
+  let shown = 0;
+  let current = '';
+  const elapsed = (): string => `${((now() - started) / 1000).toFixed(1)} s`;
+  const draw = (text: string): void => {
+    const line = `${text}, ${elapsed()}`;
+    target.write(`\r${line.padEnd(shown)}`);
+    shown = line.length;
+  };
+  return {
+    stage(name) {
+      current = name;
+      if (target.isTTY) draw(name);
+      else target.write(`${name}\n`);
+    },
+    origins(done, total) {
+      if (target.isTTY) draw(`${current}: ${done}/${total} origins`);
+    },
+    finish() {
+      if (target.isTTY && shown > 0) target.write(`\r${' '.repeat(shown)}\r`);
+      shown = 0;
+    },
+  };
+}

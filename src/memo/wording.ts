@@ -82,6 +82,31 @@ export const HEADINGS = {
   detail: 'Technical appendix: models and checks in detail',
 } as const;
 
+/**
+ * Names of the models' coefficients and fit figures, as the memo's model tables and the
+ * terminal summary of `fit` both print them.
+ */
+export const COEFFICIENT_NAME = {
+  intercept: 'Intercept (level at t = 0)',
+  slope: 'Slope per period',
+  drift: 'Drift per period',
+  ar: (lag: number) => `AR ${lag} (\u03c6${lag})`,
+  ma: (lag: number) => `MA ${lag} (\u03b8${lag})`,
+  seasonalAr: (period: number) => `Seasonal AR (\u03a6, lag ${period})`,
+  seasonalMa: (period: number) => `Seasonal MA (\u0398, lag ${period})`,
+} as const;
+
+export const FIT_FIGURE_NAME = {
+  order: 'ARMA order (p, q)',
+  seasonalPart: 'Seasonal part',
+  sigma2: 'Innovation variance',
+  loglik: 'Log-likelihood',
+  aicc: 'AICc',
+  nobs: 'Observations',
+  estimation: 'Estimated by',
+  converged: 'Converged',
+} as const;
+
 export const LABELS = {
   client: 'Client',
   preparedBy: 'Prepared by',

@@ -22,9 +22,9 @@ function lineStarting(text: string, start: RegExp): string {
   return line;
 }
 
-/** The levels a line names before `what`, e.g. "det. 90%", in order. */
+/** The levels a line names, e.g. "90% interval", in order. */
 function levelsIn(line: string, before: string): number[] {
-  return Array.from(line.matchAll(new RegExp(`${before} (\\d+(?:\\.\\d+)?)%`, 'g')), (m) => Number(m[1]));
+  return Array.from(line.matchAll(new RegExp(`${before}(\\d+(?:\\.\\d+)?)%`, 'g')), (m) => Number(m[1]));
 }
 
 describe('fit --backtest at other levels', () => {
@@ -52,13 +52,16 @@ describe('fit --backtest at other levels', () => {
       const run = await runCli(['fit', SERIES, ...QUICK_BACKTEST, ...c.options]);
       expect(run.stderr).toBe('');
       expect(run.code).toBe(0);
-      const forecastHeader = lineStarting(run.stdout, /^period\s+h\s/);
-      expect(levelsIn(forecastHeader, 'det\\.')).toEqual(c.levels);
-      expect(levelsIn(forecastHeader, 'stoch\\.')).toEqual(c.levels);
-      const accuracyHeader = lineStarting(run.stdout, /^h\s+method\s/);
-      expect(levelsIn(accuracyHeader, 'cover')).toEqual(c.levels);
-      expect(levelsIn(accuracyHeader, 'IS')).toEqual(c.levels);
-      expect(lineStarting(run.stdout, /^h\s+squared error\s/)).toContain(`${c.scored}% interval score`);
+      const lines = run.stdout.split('\n');
+      const forecastHeader = lineStarting(run.stdout, /^Period\s+h\s/);
+      // Side by side (one set of levels per model) or one block per model, each with the same heads.
+      const perModel = lines.filter((line) => /^\s+Period\s+h\s/.test(line));
+      const levelsShown = perModel.length === 1 ? levelsIn(forecastHeader, '') : perModel.flatMap((line) => levelsIn(line, ''));
+      expect(levelsShown).toEqual([...c.levels, ...c.levels]);
+      const accuracyHeader = lines.findIndex((line) => /^\s+h\s+Det\.\s+Stoch\./.test(line));
+      expect(levelsIn(lines[accuracyHeader - 1], '')).toEqual([c.scored, ...c.levels]);
+      const comparisonHeader = lines.findIndex((line) => /^\s+h\s+p-value\s/.test(line));
+      expect(lines[comparisonHeader - 1]).toContain(`${c.scored}% interval score`);
       expect(run.stdout).toContain(`at h = 2, 3 the average ${c.scored}% interval score`);
     });
   }

@@ -23,23 +23,25 @@ describe('formatBacktest', () => {
 
   it('states the origins by period, the horizons, the refit policy and the notes', () => {
     // Origins 92..97 end at 1962..1967.
-    expect(lines[0]).toBe('Backtest: 6 origins (1962 to 1967), horizons 1 to 3, expanding window, step 1');
-    expect(lines[1]).toContain(describeRefit('fixed'));
-    expect(lines).toContain(`  Note: ${backtestNotes.lookAhead('fixed')}`);
+    expect(lines[0]).toBe('Backtest: 6 origins (1962 to 1967), 1 to 3 steps ahead, expanding window');
+    const text = lines.join(' ').replace(/\s+/g, ' ');
+    expect(text).toContain(describeRefit('fixed'));
+    expect(text).toContain(`Note: ${backtestNotes.lookAhead('fixed')}`);
   });
 
-  it('prints one accuracy row per horizon and method, with the record’s figures', () => {
-    const header = lines.find((line) => line.includes('MAE')) ?? '';
-    expect(header.split(/\s{2,}/).map((cell) => cell.trim())).toEqual(
-      expect.arrayContaining(['h', 'method', 'MAE', 'RMSE', 'MASE', 'MAPE %', 'cover 80%', 'cover 95%', 'IS 80%', 'IS 95%', 'CRPS']),
-    );
-    const start = lines.indexOf(header);
-    const rows = lines.slice(start + 1, start + 10).map((line) => line.trim().split(/\s{2,}/));
-    expect(rows.map((cells) => `${cells[0]} ${cells[1]}`)).toEqual(
-      [1, 2, 3].flatMap((h) => [`${h} deterministic`, `${h} stochastic`, `${h} no change`]),
-    );
-    const naiveAtTwo = record.per_horizon.naive[1];
-    expect(Number(rows[5][2])).toBe(Number((naiveAtTwo.mae ?? Number.NaN).toPrecision(4)));
+  it('prints one accuracy row per horizon, the three methods side by side, with the record’s figures', () => {
+    const head = lines.findIndex((line) => /^\s+h\s+Det\./.test(line));
+    expect(lines[head - 1].trim().split(/\s{2,}/)).toEqual(['RMSE', '95% interval score', '80% cover', '95% cover']);
+    expect(lines[head].trim().split(/\s+/)).toEqual(['h', 'Det.', 'Stoch.', 'Bench.', 'Det.', 'Stoch.', 'Bench.', 'Det.', 'Stoch.', 'Det.', 'Stoch.']);
+    const rows = lines.slice(head + 1, head + 4).map((line) => line.trim().split(/\s+/));
+    expect(rows.map((cells) => cells[0])).toEqual(['1', '2', '3']);
+    // RMSE of the no-change benchmark at h = 2 and coverage as whole percentages; decimals
+    // show the smallest RMSE to three significant digits (the memo's decimalsForScale).
+    const rmse = record.per_horizon.naive[1].rmse ?? Number.NaN;
+    const smallest = Math.min(...(['deterministic', 'stochastic', 'naive'] as const).flatMap((m) => record.per_horizon[m].map((s) => s.rmse ?? Infinity)));
+    const decimals = Math.min(6, Math.max(0, 2 - Math.floor(Math.log10(smallest))));
+    expect(rows[1][3].replace(/,/g, '')).toBe(rmse.toFixed(decimals));
+    expect(rows[1][7]).toBe(`${Math.round((record.per_horizon.deterministic[1].coverage['80'] ?? Number.NaN) * 100)}%`);
   });
 
   it('prints the comparison per horizon, and why a test is not available', () => {
@@ -51,7 +53,10 @@ describe('formatBacktest', () => {
     };
     const text = formatBacktest(altered);
     const first = record.comparison.find((row) => row.h === 1 && row.loss === 'squared_error');
-    expect(text.some((line) => line.includes(`p = ${first?.p_value?.toFixed(3)}, ${first?.better} lower`))).toBe(true);
-    expect(text).toContain(`  Not available at h = 3 (squared error): ${comparisonReasons.varianceNotPositive}`);
+    const head = text.findIndex((line) => /^\s+h\s+p-value\s+lower for/.test(line));
+    const p = first?.p_value ?? Number.NaN;
+    expect(text[head + 1].trim().split(/\s{2,}/).slice(0, 3)).toEqual(['1', p < 0.001 ? '< 0.001' : p.toFixed(3), `${first?.better}${p < 0.05 ? ' *' : ''}`]);
+    expect(text[head + 3].trim().split(/\s{2,}/)[1]).toBe('\u2014');
+    expect(text.join(' ').replace(/\s+/g, ' ')).toContain(`\u2014 no test at h = 3 (Squared error: ${comparisonReasons.varianceNotPositive}).`);
   });
 });

@@ -68,10 +68,10 @@ describe('a monthly flow, its total', () => {
     const run = await runCli(['fit', DEATHS, '--year-figure', 'total', '--max-p', '1', '--max-q', '1']);
     expect(run.code).toBe(0);
     const lines = run.stdout.split('\n');
-    const at = lines.indexOf('Next full year 1979, the total of 1979-01 to 1979-12 (exact, from the joint forecast errors):');
+    const at = lines.indexOf('Next full year 1979: the total of 1979-01 to 1979-12 (exact, from the joint forecast errors)');
     expect(at).toBeGreaterThan(0);
-    expect(lines[at + 1].trim().split(/\s+/)).toEqual(['point', '80%', '95%']);
-    expect(lines[at + 3].startsWith('stochastic')).toBe(true);
+    expect(lines[at + 1].trim().split(/\s{2,}/)).toEqual(['Point', '80% interval', '95% interval']);
+    expect(lines[at + 3].trim().startsWith('Stochastic trend')).toBe(true);
   }, 60_000);
 
   it('says plainly when the horizon stops inside the year, and gives no partial year', async () => {

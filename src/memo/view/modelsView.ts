@@ -4,7 +4,7 @@ import { evidenceWording } from '../evidenceWording.js';
 import { formatSignificant } from '../format/formatNumber.js';
 import type { AnalysisRecord } from '../../analysis/record.js';
 import type { TrendModelKind } from '../../base/settings.js';
-import { MODEL_GLOSS, MODEL_NAME, scaleName } from '../wording.js';
+import { COEFFICIENT_NAME, MODEL_GLOSS, MODEL_NAME, scaleName } from '../wording.js';
 
 export interface CoefficientRow {
   name: string;
@@ -24,12 +24,6 @@ export interface ModelView {
   notes: string[];
 }
 
-const REGRESSION_NAMES: Record<string, string> = {
-  intercept: 'Intercept (level at t = 0)',
-  slope: 'Slope per period',
-  drift: 'Drift per period',
-};
-
 function coefficientRow(name: string, estimate: number | undefined, stderr: number | null | undefined): CoefficientRow {
   const ratio = estimate !== undefined && typeof stderr === 'number' && stderr > 0 ? estimate / stderr : null;
   return { name, estimate: formatSignificant(estimate), stderr: formatSignificant(stderr), ratio: formatSignificant(ratio, 3) };
@@ -41,19 +35,19 @@ export function modelView(record: AnalysisRecord, kind: TrendModelKind): ModelVi
   const regression =
     kind === 'deterministic'
       ? [
-          coefficientRow(REGRESSION_NAMES.intercept, deterministic.coefficients.intercept, deterministic.stderr.intercept),
-          coefficientRow(REGRESSION_NAMES.slope, deterministic.coefficients.slope, deterministic.stderr.slope),
+          coefficientRow(COEFFICIENT_NAME.intercept, deterministic.coefficients.intercept, deterministic.stderr.intercept),
+          coefficientRow(COEFFICIENT_NAME.slope, deterministic.coefficients.slope, deterministic.stderr.slope),
         ]
-      : [coefficientRow(REGRESSION_NAMES.drift, stochastic.coefficients.drift, stochastic.stderr.drift)];
-  const ar = model.coefficients.ar.map((v, i) => coefficientRow(`AR ${i + 1} (\u03c6${i + 1})`, v, model.stderr.ar[i]));
-  const ma = model.coefficients.ma.map((v, i) => coefficientRow(`MA ${i + 1} (\u03b8${i + 1})`, v, model.stderr.ma[i]));
+      : [coefficientRow(COEFFICIENT_NAME.drift, stochastic.coefficients.drift, stochastic.stderr.drift)];
+  const ar = model.coefficients.ar.map((v, i) => coefficientRow(COEFFICIENT_NAME.ar(i + 1), v, model.stderr.ar[i]));
+  const ma = model.coefficients.ma.map((v, i) => coefficientRow(COEFFICIENT_NAME.ma(i + 1), v, model.stderr.ma[i]));
   const seasonal = model.seasonal;
   const seasonalRows =
     seasonal === null
       ? []
       : [
-          ...seasonal.seasonal_ar.map((v, i) => coefficientRow(`Seasonal AR (\u03a6, lag ${seasonal.period})`, v, seasonal.stderr.seasonal_ar[i])),
-          ...seasonal.seasonal_ma.map((v, i) => coefficientRow(`Seasonal MA (\u0398, lag ${seasonal.period})`, v, seasonal.stderr.seasonal_ma[i])),
+          ...seasonal.seasonal_ar.map((v, i) => coefficientRow(COEFFICIENT_NAME.seasonalAr(seasonal.period), v, seasonal.stderr.seasonal_ar[i])),
+          ...seasonal.seasonal_ma.map((v, i) => coefficientRow(COEFFICIENT_NAME.seasonalMa(seasonal.period), v, seasonal.stderr.seasonal_ma[i])),
         ];
   return {
     kind,
