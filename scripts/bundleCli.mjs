@@ -29,9 +29,10 @@ await build({
   platform: 'node',
   format: 'esm',
   target: 'node20',
-  // puppeteer-core loads only to print a PDF; tinypool starts its workers from its own
-  // entry file, found beside its module.
-  external: ['puppeteer-core', 'tinypool'],
+  // puppeteer-core loads only to print a PDF and exceljs only to read a workbook (each a large
+  // package of its own, found in node_modules when needed); tinypool starts its workers from
+  // its own entry file, found beside its module.
+  external: ['puppeteer-core', 'exceljs', 'tinypool'],
   legalComments: 'none',
   logLevel: 'warning',
   // The CommonJS packages inside an ESM bundle call require() for Node's own modules.

@@ -3,7 +3,7 @@
 //
 //   config.yaml ─loadConfig─▶ RunPlan ──────────────────────────────┐  (config/: YAML, spec, plan)
 //                                                                   │
-//   series.csv ─readSeriesCsv─▶ Series ──┐                          │  (data/: CSV, periods, checks)
+//   series file ─readSeriesFile─▶ Series ┐                          │  (data/: CSV and .xlsx, periods, checks)
 //   written settings ─resolveSettings────┴─▶ AnalysisSettings       │  (config/: one complete value)
 //                                               │                   │
 //   Series + AnalysisSettings ─analyseSeries─▶ AnalysisRecord       │  (models/, evidence/, backtest/ → analysis/)
@@ -45,6 +45,7 @@ export { readingSettings, resolveSettings, type WrittenSettings } from './config
 export { configSchemaText } from './config/toJsonSchema.js';
 
 export { readSeriesCsv } from './data/readSeriesCsv.js';
+export { readSeriesFile } from './data/readSeriesFile.js';
 export { parseSeriesCsv, type SeriesOptions } from './data/parseSeriesCsv.js';
 
 export { analyseSeries, requiredObservations, type AnalysisRun, type SeriesIdentity } from './analysis/analyseSeries.js';

@@ -26,12 +26,23 @@ export interface InputFile {
 export function readInputFile(file: string, limitBytes: number, messages: FileMessages): InputFile {
   const read = readRegularFile(file, limitBytes);
   if (read.fault !== undefined) throw new InputError(faultProblem(file, read.fault, limitBytes, messages));
-  const { bytes } = read;
+  return decodeInputText(file, read.bytes, messages);
+}
+
+/** Bytes already read, decoded as readInputFile decodes them. */
+export function decodeInputText(file: string, bytes: Buffer, messages: Pick<FileMessages, 'notUtf8'>): InputFile {
   try {
     return { bytes, text: new TextDecoder('utf-8', { fatal: true }).decode(bytes) };
   } catch {
     throw new InputError(messages.notUtf8(file, firstInvalidUtf8(bytes)));
   }
+}
+
+/** The bytes of a binary input (a workbook), with the same refusals as readInputFile before any decoding. */
+export function readInputBytes(file: string, limitBytes: number, messages: FileMessages): Buffer {
+  const read = readRegularFile(file, limitBytes);
+  if (read.fault !== undefined) throw new InputError(faultProblem(file, read.fault, limitBytes, messages));
+  return read.bytes;
 }
 
 function faultProblem(file: string, fault: FileFault, limitBytes: number, messages: FileMessages): InputProblem {

@@ -30,7 +30,7 @@ function describeSeries(id: string, series: Series): string {
 }
 
 /** The OK line with any warnings (data ending well before memo.as_of), or every problem of the config and its series files. */
-function checkOne(file: string): { ok: string; warnings: InputProblem[] } | { problems: readonly InputProblem[] } {
+async function checkOne(file: string): Promise<{ ok: string; warnings: InputProblem[] } | { problems: readonly InputProblem[] }> {
   let plan: RunPlan;
   try {
     plan = loadConfig(file);
@@ -41,7 +41,7 @@ function checkOne(file: string): { ok: string; warnings: InputProblem[] } | { pr
   let described: string[];
   const warnings: InputProblem[] = [];
   try {
-    described = readAllSeries(plan).map(({ plan: series, series: read, asOfGap }) => {
+    described = (await readAllSeries(plan)).map(({ plan: series, series: read, asOfGap }) => {
       if (asOfGap !== undefined) warnings.push(asOfGap.warning);
       return describeSeries(series.id, read);
     });
@@ -63,7 +63,7 @@ export async function runCheck(args: readonly string[], io: Io): Promise<number>
   if (problems.length > 0) throw new InputError(problems);
   let failed = false;
   for (const file of positionals) {
-    const result = checkOne(file);
+    const result = await checkOne(file);
     if ('ok' in result) {
       for (const warning of result.warnings) io.stderr(`${formatProblem(warning)}\n`);
       io.stdout(`${result.ok}\n`);

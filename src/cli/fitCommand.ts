@@ -76,10 +76,10 @@ export async function runFit(args: readonly string[], io: { stdout(text: string)
     column: request.column,
     periodColumn: request.periodColumn,
     frequency: request.frequency,
-    minObservations: requiredObservations(reading.max_p, reading.max_q),
     sheet: request.sheet,
     delimiter: request.delimiter,
     decimalMark: request.decimalMark,
+    minObservations: requiredObservations(reading.max_p, reading.max_q),
     transform: reading.transform,
     missing: reading.missing,
   });

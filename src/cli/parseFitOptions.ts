@@ -6,7 +6,7 @@ import type { Frequency } from '../base/period.js';
 import { InputError, type InputLocation, type InputProblem } from '../base/problem.js';
 import type { WrittenSettings } from '../config/resolveSettings.js';
 import { numberFault, type ChoiceSpec, type NumericSpec, type Spec, type ValueOf } from '../config/keySpec.js';
-import { FREQUENCY } from '../config/configSpec.js';
+import { DECIMAL_MARK, DELIMITER, FREQUENCY } from '../config/configSpec.js';
 import { BACKTEST_FIELDS as BACKTEST, BOX_COX_LAMBDA, LEVEL, SETTINGS_FIELDS } from '../config/settingsSpec.js';
 import { cliMessages } from './messages.js';
 import { splitOptions, type OptionSpec } from './splitOptions.js';
@@ -16,6 +16,10 @@ export interface FitRequest {
   column?: string;
   periodColumn?: string;
   frequency?: Frequency;
+  /** How the file is read (--sheet, --delimiter, --decimal-mark), as the series keys sheet, delimiter and decimal_mark. */
+  sheet?: string;
+  delimiter?: ValueOf<typeof DELIMITER>;
+  decimalMark?: ValueOf<typeof DECIMAL_MARK>;
   /** The settings the options give, in the config's shape; what they leave out is absent. */
   settings: WrittenSettings;
   /** Run the backtest and the recommendation rule (--backtest, or one of its options). */
@@ -52,6 +56,9 @@ const FIT_OPTIONS: Readonly<Record<string, OptionSpec>> = {
   column: { type: 'string' },
   'period-column': { type: 'string' },
   frequency: { type: 'string' },
+  sheet: { type: 'string' },
+  delimiter: { type: 'string' },
+  'decimal-mark': { type: 'string' },
   transform: { type: 'string' },
   horizon: { type: 'string' },
   through: { type: 'string' },
@@ -122,6 +129,9 @@ export function parseFitOptions(args: readonly string[]): FitRequest {
     column: text('column'),
     periodColumn: text('period-column'),
     frequency: choice('frequency', FREQUENCY),
+    sheet: text('sheet'),
+    delimiter: choice('delimiter', DELIMITER),
+    decimalMark: choice('decimal-mark', DECIMAL_MARK),
     settings,
     backtest: given.get('backtest') === true || origins !== undefined || backtestHorizon !== undefined || refit !== undefined || scoredLevel !== undefined,
     json: given.get('json') === true,

@@ -2,7 +2,7 @@
 // its file and the settings the config writes for it, with where each is written, so the memo
 // can print each choice with "set by: config" or "set by: default".
 import type { Frequency } from '../base/period.js';
-import type { OUTPUT_FORMATS } from './configSpec.js';
+import type { OUTPUT_FORMATS, SeriesEntry } from './configSpec.js';
 import type { WrittenSettings } from './resolveSettings.js';
 
 /** Where in the config a value is written. */
@@ -33,6 +33,10 @@ export interface SeriesPlan {
   periodColumn?: string;
   column?: string;
   frequency?: Frequency;
+  /** How the file is read: a workbook's sheet, a CSV file's delimiter, the decimal mark of values written as text. */
+  sheet?: string;
+  delimiter?: SeriesEntry['delimiter'];
+  decimalMark?: SeriesEntry['decimal_mark'];
   /** Where the series entry starts. */
   at: ConfigPlace;
   /** The series' own settings over those under `defaults`, as written; what neither sets is absent (resolveSettings fills it). */

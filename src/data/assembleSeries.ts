@@ -17,10 +17,10 @@ import type { SeriesOptions } from './seriesOptions.js';
 export interface SeriesRow {
   /** Line of a CSV file, row of a sheet. */
   line: number;
-  /** The period cell as text; `date` when a workbook stores it as a date. */
-  period: { text: string; date?: CalendarDate };
+  /** The period cell as text; `date` when a workbook stores it as a date; `problem` when the cell cannot be read at all (a formula without its result). */
+  period: { text: string; date?: CalendarDate; problem?: InputProblem };
   periodAt: InputLocation;
-  value: { text: string; parsed: ParsedValue };
+  value: { text: string; parsed: ParsedValue; problem?: InputProblem };
   valueAt: InputLocation;
 }
 
@@ -38,9 +38,10 @@ export interface SeriesSource {
   sha256: string;
 }
 
-type PeriodReading = { kind: 'empty' } | { kind: 'label'; period: Period } | { kind: 'date'; date: CalendarDate } | { kind: 'no-such-day' } | { kind: 'bad' };
+type PeriodReading = { kind: 'unreadable'; problem: InputProblem } | { kind: 'empty' } | { kind: 'label'; period: Period } | { kind: 'date'; date: CalendarDate } | { kind: 'no-such-day' } | { kind: 'bad' };
 
 function readPeriodCell(cell: SeriesRow['period']): PeriodReading {
+  if (cell.problem !== undefined) return { kind: 'unreadable', problem: cell.problem };
   if (cell.date !== undefined) return { kind: 'date', date: cell.date };
   if (cell.text === '') return { kind: 'empty' };
   const period = parsePeriod(cell.text);
@@ -55,6 +56,7 @@ const REPEATED_BAD_LABELS = 3;
 
 function valueOf(cell: SeriesRow['value'], at: InputLocation, allowMissing: boolean, mark: DecimalMark): { value?: number; problem?: InputProblem } {
   const { parsed, text } = cell;
+  if (cell.problem !== undefined) return { problem: cell.problem };
   switch (parsed.kind) {
     case 'number':
       return { value: parsed.value };
@@ -128,7 +130,8 @@ export function assembleSeries(rows: readonly SeriesRow[], source: SeriesSource,
     else if (reading.kind === 'date' && form === 'date') dates.push({ row, date: reading.date, value: values[i] });
     else {
       unreadable.push(row.line);
-      if (reading.kind === 'empty') problems.push(dataMessages.emptyPeriod(row.periodAt));
+      if (reading.kind === 'unreadable') problems.push(reading.problem);
+      else if (reading.kind === 'empty') problems.push(dataMessages.emptyPeriod(row.periodAt));
       else if (reading.kind === 'bad') problems.push(dataMessages.badPeriod(row.periodAt, row.period.text));
       else if (reading.kind === 'no-such-day') problems.push(dataMessages.noSuchDay(row.periodAt, row.period.text));
       else {

@@ -137,6 +137,48 @@ export const dataMessages = {
   sheetForText(file: string, sheet: string): InputProblem {
     return problem('csv.sheet-for-text', `sheet ${quotedCell(sheet)} is asked for, but the file is text (CSV), which has no sheets`, `remove ${setting('sheet')}, or name the workbook (.xlsx) that holds it`, { file });
   },
+  notAWorkbook(file: string, kind: 'xls' | 'ods' | 'xlsb' | 'zip' | 'corrupt' | 'encrypted' | 'not-zip', detail?: string): InputProblem {
+    const what = {
+      xls: 'is an Excel 97-2003 workbook (.xls) or a password-protected one, which is not read',
+      ods: 'is an OpenDocument spreadsheet (.ods), which is not read',
+      xlsb: 'is a binary workbook (.xlsb), which is not read',
+      zip: 'is a ZIP archive but not an .xlsx workbook',
+      corrupt: `is not a valid .xlsx workbook${detail === undefined ? '' : ` (${detail})`}`,
+      encrypted: 'is an encrypted archive, which is not read',
+      'not-zip': 'has a workbook name but is not a workbook (an .xlsx file is a ZIP archive)',
+    }[kind];
+    return problem('workbook.unreadable', what, 'save the sheet as an .xlsx workbook (Excel 2007 or later) without a password, or as CSV', { file });
+  },
+  workbookTooLarge(file: string, limitBytes: number): InputProblem {
+    return problem('workbook.too-large', `unpacks to more than ${limitBytes / MEBIBYTE} MB, above the limit for a series workbook`, 'copy the series to a workbook of its own, or save it as CSV', { file });
+  },
+  noSuchSheet(file: string, sheet: string, sheets: readonly string[], suggestion: string | undefined): InputProblem {
+    const hint = suggestion === undefined ? `name one of the sheets with ${setting('sheet')}` : `did you mean ${quotedCell(suggestion)}?`;
+    return problem('workbook.no-such-sheet', `has no sheet ${quotedCell(sheet)}; its sheets are ${abbreviateList(sheets.map(quotedCell))}`, hint, { file });
+  },
+  noSheets(file: string): InputProblem {
+    return problem('workbook.no-sheets', 'has no sheets', 'save a workbook with the series on its first sheet', { file });
+  },
+  emptySheet(file: string, sheet: string): InputProblem {
+    return problem('workbook.empty-sheet', 'the sheet is empty', 'put a header row (period, value) in row 1 and one row per period below it, or name another sheet', { file, sheet });
+  },
+  formulaWithoutResult(at: InputLocation, formula: string): InputProblem {
+    return problem(
+      'workbook.formula-without-result',
+      `the cell holds the formula ${quotedCell(`=${formula}`)} with no saved result`,
+      'open the workbook in a spreadsheet program and save it again, so every formula keeps its result; or paste the values',
+      at,
+    );
+  },
+  errorCell(at: InputLocation, error: string): InputProblem {
+    return problem('workbook.error-cell', `the cell shows the error ${error}`, 'correct the formula or the cell it refers to', at);
+  },
+  dateValue(at: InputLocation, date: string): InputProblem {
+    return problem('csv.bad-value', `the cell holds the date ${date}, not a number`, 'check that the value column is chosen (column in the config, --column for fit)', at);
+  },
+  delimiterForWorkbook(file: string): InputProblem {
+    return problem('workbook.delimiter', 'a delimiter is set, but the file is a workbook, whose cells need none', `remove ${setting('delimiter')}`, { file });
+  },
   emptyPeriod(at: InputLocation): InputProblem {
     return problem('csv.empty-period', 'the period cell is empty', `${PERIOD_FORMS}, or delete the line`, at);
   },

@@ -41,13 +41,14 @@ function nameProblem(name: string, position: number, at: InputLocation): InputPr
 }
 
 /**
+ * `sheet`: the workbook sheet the header row is in, for messages.
  * Default choice: the first column holds the periods and the first other column the values.
  * A first line that looks like data means the header is missing; that and every column
  * problem throw, since no row can be read without both columns.
  */
-export function selectColumns(headerRow: CsvRow, file: string, wanted: { column?: string; periodColumn?: string }): ColumnChoice {
+export function selectColumns(headerRow: CsvRow, file: string, wanted: { column?: string; periodColumn?: string }, sheet?: string): ColumnChoice {
   const header = headerRow.cells;
-  const at: InputLocation = { file, line: headerRow.line };
+  const at: InputLocation = sheet === undefined ? { file, line: headerRow.line } : { file, line: headerRow.line, sheet };
   // Only the first cell is judged: a value column may be named like a year ("2019").
   const first = header[0];
   if (parsePeriod(first) !== null || parseIsoDate(first) !== null || parseValue(first).kind === 'number') throw new InputError(dataMessages.headerLooksLikeData(at, first));

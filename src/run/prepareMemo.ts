@@ -2,7 +2,7 @@
 // does before anything is rendered. The files are assembled from the document afterwards
 // (assembleMemo.ts), so `run` can weigh the new content against an issued memo first, and
 // `review` can render again from a stored record.json without analysing anything.
-//   RunPlan ─readSeriesCsv─▶ Series[] ─completeAnalysis─▶ AnalysisRecord[] ─▶ RecordDocument
+//   RunPlan ─readSeriesFile─▶ Series[] ─completeAnalysis─▶ AnalysisRecord[] ─▶ RecordDocument
 import type { AnalysisRecord } from '../analysis/record.js';
 import type { InputProblem } from '../base/problem.js';
 import type { RunPlan } from '../config/runPlan.js';
@@ -34,7 +34,7 @@ export interface PreparedMemo {
 
 export async function prepareMemo(plan: RunPlan, options: PrepareMemoOptions): Promise<PreparedMemo> {
   const date = options.runDate;
-  const loaded = readAllSeries(plan);
+  const loaded = await readAllSeries(plan);
   // Series are independent: on a pool they run side by side, and their order is kept.
   const analyse = options.pool?.analyse ?? ((task: SeriesTask) => analysePlannedSeries({ ...task, threads: options.threads }));
   const records = await Promise.all(

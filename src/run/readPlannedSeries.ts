@@ -9,7 +9,7 @@ import { requiredObservations } from '../analysis/analyseSeries.js';
 import { readingSettings, resolveSettings } from '../config/resolveSettings.js';
 import type { RunPlan, SeriesPlan } from '../config/runPlan.js';
 import { dataMessages } from '../data/messages.js';
-import { readSeriesCsv } from '../data/readSeriesCsv.js';
+import { readSeriesFile } from '../data/readSeriesFile.js';
 import { checkAsOf, type AsOfCheck } from './checkAsOf.js';
 
 export interface PlannedSeries {
@@ -27,17 +27,20 @@ const WEB_ADDRESS = /^[A-Za-z][A-Za-z0-9+.-]*:\/\//;
 const UNREADABLE_FILE: ReadonlySet<string> = new Set(['csv.file-missing', 'csv.not-a-file', 'csv.bad-link', 'csv.name-too-long', 'csv.unreadable', 'csv.too-large']);
 
 /** `configFile` names the config in messages about the series file as a whole (missing, too large) and about its settings. */
-export function readPlannedSeries(plan: SeriesPlan, configFile: string): PlannedSeries {
+export async function readPlannedSeries(plan: SeriesPlan, configFile: string): Promise<PlannedSeries> {
   const reading = readingSettings(plan.settings);
   const entry = { file: configFile, ...(plan.fileAt ?? { ...plan.at, field: `${plan.at.field}.file` }) };
   // A web address would otherwise be read as a relative path and reported as a missing file.
   if (WEB_ADDRESS.test(plan.fileAsWritten)) throw new InputError(dataMessages.atFileEntry(dataMessages.webAddress(shownPath(plan.file)), plan.fileAsWritten, entry));
   let series: Series;
   try {
-    series = readSeriesCsv(shownPath(plan.file), {
+    series = await readSeriesFile(shownPath(plan.file), {
       column: plan.column,
       periodColumn: plan.periodColumn,
       frequency: plan.frequency,
+      sheet: plan.sheet,
+      delimiter: plan.delimiter,
+      decimalMark: plan.decimalMark,
       minObservations: requiredObservations(reading.max_p, reading.max_q),
       transform: reading.transform,
       missing: reading.missing,
@@ -62,12 +65,12 @@ export function readPlannedSeries(plan: SeriesPlan, configFile: string): Planned
  * Every series of a config read and its settings resolved, the problems of all of them collected
  * before failing; with memo.as_of each series' last observation is checked against it.
  */
-export function readAllSeries(plan: RunPlan): PlannedSeries[] {
+export async function readAllSeries(plan: RunPlan): Promise<PlannedSeries[]> {
   const problems: InputProblem[] = [];
   const loaded: PlannedSeries[] = [];
   for (const seriesPlan of plan.series) {
     try {
-      const planned = readPlannedSeries(seriesPlan, plan.configFile);
+      const planned = await readPlannedSeries(seriesPlan, plan.configFile);
       const { asOf, asOfAt } = plan.memo;
       const check = asOf === undefined ? null : checkAsOf(asOf, { file: plan.configFile, ...(asOfAt ?? { field: 'memo.as_of' }) }, seriesPlan.id, seriesPlan.fileAsWritten, planned.series);
       if (check?.refusal != null) problems.push(check.refusal);

@@ -131,7 +131,7 @@ async function record(folder: string, request: SignOffRequest): Promise<Recorded
 
   const stored = storedDocument(memo);
   // Without a stored record.json the document is analysed again from the copied inputs.
-  const loaded = stored === null ? null : readAllSeries(plan);
+  const loaded = stored === null ? null : await readAllSeries(plan);
   const prepared = loaded === null || stored === null ? await prepareMemo(plan, { runDate: manifest.run_date }) : { loaded, document: stored };
   // A stored record.json carries its track record; one analysed again reads the earlier records' copies.
   if (stored === null) attachTrackRecord(prepared.document, earlierFromCopies(folder, manifest, manifestFile));
