@@ -6,7 +6,8 @@
 //                                                                        └─ recommendModel
 //   ─▶ the record, built once as a new value
 import { addPeriods } from '../base/period.js';
-import { formatProblem, InputError } from '../base/problem.js';
+import { InputError } from '../base/problem.js';
+import { backtestUnavailableReason } from '../backtest/messages.js';
 import type { Series } from '../base/series.js';
 import { TREND_MODELS, type AnalysisSettings, type TrendModelKind } from '../base/settings.js';
 import { backTransformForecast, transformValue } from '../base/transform.js';
@@ -138,7 +139,8 @@ async function backtestOrReason(
     return { record: await runBacktest({ values: series.values, periods: series.periods }, settings, { orders, threads: run.threads, pool: run.pool, onProgress: run.onBacktestProgress, ...seasonalRun }) };
   } catch (error) {
     if (!(error instanceof InputError)) throw error;
-    return { record: null, reason: error.problems.map((problem) => formatProblem({ ...problem, file: undefined })).join(' ') };
+    // For the memo's reader: what is wrong, without the config keys and the fixes, which `check` gives the analyst.
+    return { record: null, reason: backtestUnavailableReason(error.problems) };
   }
 }
 

@@ -120,3 +120,11 @@ export const backtestMessages = {
     );
   },
 };
+
+/**
+ * Why a series has no backtest, for the memo's reader (the record's `backtest_unavailable`):
+ * what stands in the way, without the settings to change, which `check` tells the analyst.
+ */
+export function backtestUnavailableReason(problems: readonly InputProblem[]): string {
+  return problems.map((p) => p.message).join('; ');
+}

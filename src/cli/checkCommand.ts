@@ -5,6 +5,7 @@ import { loadConfig } from '../config/loadConfig.js';
 import type { RunPlan } from '../config/runPlan.js';
 import type { Series } from '../base/series.js';
 import { readAllSeries } from '../run/readPlannedSeries.js';
+import { preflightWarnings } from '../run/preflight.js';
 import { formatProblem, InputError, type InputProblem } from '../base/problem.js';
 import { configCommandMessages } from './messages.js';
 import { splitOptions } from './splitOptions.js';
@@ -13,8 +14,11 @@ import { EXIT } from './exitCodes.js';
 export const CHECK_HELP = `Usage: trendbrief check CONFIG.yaml...
 
 Checks each config and every series file it names, as a run would, without fitting any model.
-Prints one line per config that passes and every problem of those that do not.
-Exit code 0 when all pass, 2 otherwise.
+Prints one line per config that passes and every problem of those that do not. Warns (on
+stderr, one line each) about what the run will do but the memo will be weaker for: a history
+too short for a backtest or for enough origins, a horizon beyond what the backtest can score
+or longer than half the history, data ending well before memo.as_of, and a clear seasonal
+pattern under seasonal: none. Exit code 0 when all pass, warnings or not; 2 otherwise.
 
 Options:
   -h, --help                this text
@@ -41,9 +45,10 @@ async function checkOne(file: string): Promise<{ ok: string; warnings: InputProb
   let described: string[];
   const warnings: InputProblem[] = [];
   try {
-    described = (await readAllSeries(plan)).map(({ plan: series, series: read, asOfGap }) => {
-      if (asOfGap !== undefined) warnings.push(asOfGap.warning);
-      return describeSeries(series.id, read);
+    described = (await readAllSeries(plan)).map((planned) => {
+      if (planned.asOfGap !== undefined) warnings.push(planned.asOfGap.warning);
+      warnings.push(...preflightWarnings(planned, plan.configFile));
+      return describeSeries(planned.plan.id, planned.series);
     });
   } catch (error) {
     if (error instanceof InputError) return { problems: error.problems };

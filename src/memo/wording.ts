@@ -143,7 +143,7 @@ export const LABELS = {
   signature: 'Signature',
   notSigned: 'Not yet signed',
   tool: 'Tool',
-  command: 'Command',
+  command: 'Reproduce (in the config\u2019s folder)',
   runDate: 'Run date',
   config: 'Configuration file',
   sha256: 'SHA-256',

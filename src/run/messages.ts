@@ -113,6 +113,9 @@ export const verifyMessages = {
   extraArguments(extra: readonly string[]): InputProblem {
     return problem('verify.extra-arguments', `unexpected argument${extra.length > 1 ? 's' : ''} ${extra.join(' ')}`, `give one memo folder; ${VERIFY_HELP}`);
   },
+  notFound(folder: string): InputProblem {
+    return problem('verify.not-found', `'${folder}' is not found`, 'check the path and its spelling; give the memo folder a run wrote, e.g. out/lake-outlook/2026-01', { file: folder });
+  },
   noManifest(folder: string, asOfFolders: readonly string[]): InputProblem {
     const hint = asOfFolders.length > 0 ? `it holds as-of memos: give one of them, e.g. ${folder}/${asOfFolders[0]}` : 'give the folder a run wrote, the one with manifest.json in it';
     return problem('verify.no-manifest', `'${folder}' has no manifest.json`, hint, { file: folder });
@@ -149,7 +152,7 @@ export const verifyMessages = {
 
 /** The lines of the verify report on stdout; numbers appear as JSON writes them. */
 export const verifyReport = {
-  header: (folder: string, runDate: string, tool: string, command: string) => `verify ${folder}: run on ${runDate} with ${tool}: ${command}`,
+  header: (folder: string, runDate: string, tool: string, command: string) => `verify ${folder}: run on ${runDate} with ${tool}; reproduce in the config's folder with: ${command}`,
   otherVersion: (recorded: string, current: string) =>
     `note: recorded with ${recorded}, verified with ${current}; wording or numbers of another version may differ`,
   inputs: (count: number) => `inputs: ${count} file${count === 1 ? '' : 's'} with the SHA-256 the manifest records`,
@@ -342,5 +345,49 @@ export const containmentMessages = {
 export const lockMessages = {
   busy(folder: string): InputProblem {
     return problem('run.memo-busy', `another run or review is writing the memo in '${folder}'`, 'wait for it to finish, then try again; nothing was changed', { file: folder });
+  },
+};
+
+/** `check`'s warnings about a config that runs but whose memo would be weaker than it looks (the run goes on; exit 0). */
+export const preflightMessages = {
+  noBacktest(at: InputLocation, seriesId: string, n: number, minTrain: number, steps: number, minTrainWritten: boolean): InputProblem {
+    return problem(
+      'check.no-backtest',
+      `warning: series '${seriesId}' has ${plural(n, 'observation')}, too few for a backtest, which needs ${minTrain + steps} (${minTrain} to train on, ${steps} to score); the memo will say that neither model's accuracy has been checked`,
+      minTrainWritten ? 'supply a longer history, or lower backtest.min_train' : 'supply a longer history, or lower max_p and max_q (the shortest training window is max(20, 3 × (max_p + max_q + 3)))',
+      at,
+    );
+  },
+  thinBacktest(at: InputLocation, seriesId: string, origins: number, needed: number, n: number, minTrain: number): InputProblem {
+    return problem(
+      'check.thin-backtest',
+      `warning: series '${seriesId}' leaves room for ${plural(origins, 'backtest origin')} (${plural(n, 'observation')}, training windows of at least ${minTrain}), fewer than the ${needed} a comparison needs to count; the memo will call the backtest a rough guide`,
+      'supply a longer history, or lower backtest.min_train or max_p and max_q',
+      at,
+    );
+  },
+  horizonBeyondBacktest(at: InputLocation, seriesId: string, horizon: number, scored: number): InputProblem {
+    return problem(
+      'check.horizon-beyond-backtest',
+      `warning: series '${seriesId}' is forecast ${plural(horizon, 'step')} ahead, but its history lets the backtest score only ${scored}; beyond ${scored} neither model's accuracy is checked and the choice rests on the models' assumptions`,
+      'supply a longer history, or shorten horizon; the memo says how far the backtest reached',
+      at,
+    );
+  },
+  horizonLong(at: InputLocation, seriesId: string, horizon: number, n: number): InputProblem {
+    return problem(
+      'check.horizon-long',
+      `warning: series '${seriesId}' is forecast ${plural(horizon, 'step')} ahead from ${plural(n, 'observation')}, more than half its history; the trends are extrapolated further than the data reach back`,
+      `consider a horizon of at most ${Math.floor(n / 2)}, and read the far end of the memo's intervals as the models' assumptions rather than evidence`,
+      at,
+    );
+  },
+  seasonalIgnored(at: InputLocation, seriesId: string, frequency: Frequency, strength: number): InputProblem {
+    return problem(
+      'check.seasonal-none',
+      `warning: series '${seriesId}' is ${frequency} and shows a clear seasonal pattern (STL seasonal strength ${strength.toFixed(2)} on a scale from 0 to 1), but seasonal: none leaves it out of both models`,
+      'seasonal: none is for seasonally adjusted data; if these data are not adjusted, remove the key or write seasonal: auto so that the models carry the pattern',
+      at,
+    );
   },
 };

@@ -23,7 +23,7 @@ import { inputCopyFiles } from './inputCopies.js';
 import { REVISIONS_FOLDER } from './issuedMemo.js';
 import { judgeSignOffs } from './judgeSignOffs.js';
 import { sha256 } from './manifest.js';
-import { reviewMessages } from './messages.js';
+import { reviewMessages, verifyMessages } from './messages.js';
 import { earlierFromCopies, earlierFromCopy, planFromCopies } from './planFromCopies.js';
 import { attachTrackRecord } from './trackRecord.js';
 import { prepareMemo } from './prepareMemo.js';
@@ -89,6 +89,7 @@ export async function recordSignOff(request: SignOffRequest): Promise<RecordedSi
 }
 
 async function record(folder: string, request: SignOffRequest): Promise<RecordedSignOffResult> {
+  if (!existsSync(folder)) throw new InputError(verifyMessages.notFound(shownPath(folder)));
   const memo = readStoredMemo(folder);
   if (memo === null) throw new InputError(reviewMessages.notAMemo(shownPath(folder)));
   // A revision kept under revisions/N/ of a memo folder is superseded: its sign-offs stay as they were.

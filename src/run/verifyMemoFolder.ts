@@ -89,6 +89,39 @@ function csvRows(text: string): Record<string, unknown>[] {
   return rows.map((row) => Object.fromEntries(Object.entries(row).map(([key, cell]) => [key, NUMBER.test(cell) ? Number(cell) : cell])));
 }
 
+/**
+ * forecasts.csv row by row, each difference named by its series, model and period
+ * (`forecasts.csv metered-connections stochastic 2027: point`) rather than a row number.
+ */
+function compareCsvRows(stored: readonly Record<string, unknown>[], rerun: readonly Record<string, unknown>[]): Difference[] {
+  const differences: Difference[] = [];
+  for (let i = 0; i < Math.max(stored.length, rerun.length); i++) {
+    const row = stored[i] ?? rerun[i];
+    const name = ['series_id', 'model', 'period'].map((key) => String(row[key] ?? '')).join(' ');
+    for (const difference of compareJson(stored[i], rerun[i]).differences) {
+      differences.push({ ...difference, path: `forecasts.csv ${name}${difference.path === '' ? '' : `: ${difference.path}`}` });
+    }
+  }
+  return differences;
+}
+
+/**
+ * A path in record.json with the series' id for its index in `records` and the period for a
+ * forecast row's index: `records[0].forecasts.stochastic[3].point` reads
+ * `metered-connections: forecasts.stochastic 2028: point`.
+ */
+export function readableRecordPath(path: string, document: unknown): string {
+  const records = (document as { records?: { series?: { id?: string }; forecasts?: Record<string, { period?: string }[]> }[] } | null)?.records;
+  const match = /^records\[(\d+)\]\.?(.*)$/.exec(path);
+  if (match === null || records === undefined) return path;
+  const record = records[Number(match[1])];
+  const rest = match[2].replace(/^forecasts\.(\w+)\[(\d+)\]\.?/, (whole, model: string, index: string) => {
+    const period = record?.forecasts?.[model]?.[Number(index)]?.period;
+    return period === undefined ? whole : `forecasts.${model} ${period}: `;
+  });
+  return `${record?.series?.id ?? `records[${match[1]}]`}: ${rest.replace(/: $/, '')}`;
+}
+
 function firstDifferentLine(a: string, b: string): number {
   const left = a.split('\n');
   const right = b.split('\n');
@@ -108,6 +141,7 @@ function parsedJson(bytes: Buffer): unknown {
 export async function verifyMemoFolder(folderArgument: string): Promise<VerifyResult> {
   const folder = resolve(folderArgument);
   const shown = shownPath(folder);
+  if (!existsSync(folder)) throw new InputError(verifyMessages.notFound(shown));
   const memo = readStoredMemo(folder);
   if (memo === null) throw new InputError(verifyMessages.noManifest(shown, asOfFolders(folder)));
   const { manifest, manifestFile } = memo;
@@ -146,8 +180,9 @@ export async function verifyMemoFolder(folderArgument: string): Promise<VerifyRe
   const storedRecord = memo.stored.get('record.json');
   const rerunRecord = rebuilt.get('record.json');
   if (storedRecord !== undefined && rerunRecord !== undefined) {
-    const comparison = compareJson(parsedJson(storedRecord), parsedJson(rerunRecord));
-    numberDifferences.push(...comparison.differences);
+    const storedDocument = parsedJson(storedRecord);
+    const comparison = compareJson(storedDocument, parsedJson(rerunRecord));
+    numberDifferences.push(...comparison.differences.map((difference) => ({ ...difference, path: `record.json ${readableRecordPath(difference.path, storedDocument)}` })));
     lines.push(verifyReport.records(prepared.records.length, comparison.numbers, TOLERANCE_TEXT));
   } else {
     lines.push(verifyReport.noRecord);
@@ -155,7 +190,7 @@ export async function verifyMemoFolder(folderArgument: string): Promise<VerifyRe
   const storedCsv = memo.stored.get('forecasts.csv');
   const rerunCsv = rebuilt.get('forecasts.csv');
   if (storedCsv !== undefined && rerunCsv !== undefined) {
-    numberDifferences.push(...compareJson(csvRows(storedCsv.toString('utf8')), csvRows(rerunCsv.toString('utf8')), 'forecasts.csv').differences);
+    numberDifferences.push(...compareCsvRows(csvRows(storedCsv.toString('utf8')), csvRows(rerunCsv.toString('utf8'))));
   }
   differences.push(...numberDifferences.map((d) => verifyReport.numberDiffers(d.path, d.stored, d.rerun)));
   const bytes: string[] = [];

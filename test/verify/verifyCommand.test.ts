@@ -43,7 +43,7 @@ describe('verify on an untouched memo', () => {
     expect(run.stderr).toBe('');
     expect(run.code).toBe(0);
     const lines = run.stdout.trimEnd().split('\n');
-    expect(lines[0]).toMatch(/: run on 2026-01-01 with trendbrief \d+\.\d+\.\d+: trendbrief run memo\.yaml$/);
+    expect(lines[0]).toMatch(/: run on 2026-01-01 with trendbrief \d+\.\d+\.\d+; reproduce in the config's folder with: trendbrief run memo\.yaml$/);
     expect(lines).toContain('inputs: 2 files with the SHA-256 the manifest records');
     expect(lines).toContain('outputs: 3 of 3 with the SHA-256 the manifest records');
     expect(lines.find((line) => line.startsWith('records:'))).toMatch(/^records: 1 series recomputed; \d+ numbers compared within relative 1e-9 \(absolute 1e-12 near zero\)$/);
@@ -66,8 +66,10 @@ describe('verify finds differences (exit 3)', () => {
   it('lists a changed number by its path with the stored and the recomputed value, and the changed hash', async () => {
     const { folder } = await issuedMemo();
     const text = readFileSync(join(folder, 'record.json'), 'utf8');
-    const document = JSON.parse(text) as { records: { forecasts: { stochastic: { point: number }[] } }[] };
+    const document = JSON.parse(text) as { records: { series: { id: string }; forecasts: { stochastic: { point: number; period: string }[] } }[] };
     const original = document.records[0].forecasts.stochastic[3].point;
+    const { period } = document.records[0].forecasts.stochastic[3];
+    const { id } = document.records[0].series;
     document.records[0].forecasts.stochastic[3].point = original + 0.3;
     const changed = `${JSON.stringify(document, null, 2)}\n`;
     writeFileSync(join(folder, 'record.json'), changed);
@@ -76,7 +78,8 @@ describe('verify finds differences (exit 3)', () => {
     const recorded = readManifest(folder).outputs.find((output) => output.file === 'record.json')?.sha256 ?? '';
     expect(run.stdout).toContain('differences (2), stored vs recomputed:');
     expect(run.stdout).toContain(`  record.json: SHA-256 ${sha256(changed)}, the manifest records ${recorded}`);
-    expect(run.stdout).toContain(`  records[0].forecasts.stochastic[3].point: ${original + 0.3} vs ${original}`);
+    // Named by the series and the period, not by list positions.
+    expect(run.stdout).toContain(`  record.json ${id}: forecasts.stochastic ${period}: point: ${original + 0.3} vs ${original}`);
     expect(run.stdout.trimEnd().split('\n').at(-1)).toBe(`mismatch: ${folder} differs from what its inputs give in 2 places`);
   });
 
@@ -155,5 +158,25 @@ describe('verify refuses changed or missing inputs (exit 2)', () => {
     expect(run.errorLines).toEqual([
       `${folder}/manifest.json: inputs[1]: does not say where the input lies relative to the memo folder (from_output); the memo was written by an earlier version; rerun it with this version, then verify`,
     ]);
+  });
+});
+
+describe('verify names what it could not find (exit 2)', () => {
+  it('says a folder that does not exist is not found, and names a changed forecasts.csv cell by series, model and period', async () => {
+    const missing = await runCli(['verify', '/nonexistent/memo']);
+    expect(missing.code).toBe(2);
+    expect(missing.errorLines).toEqual(["/nonexistent/memo: '/nonexistent/memo' is not found; check the path and its spelling; give the memo folder a run wrote, e.g. out/lake-outlook/2026-01"]);
+    const { folder } = await issuedMemo();
+    const csv = readFileSync(join(folder, 'forecasts.csv'), 'utf8').split('\r\n');
+    const header = csv[0].split(',');
+    const cells = csv[3].split(',');
+    const point = header.indexOf('point');
+    const stored = Number(cells[point]);
+    cells[point] = String(stored + 1);
+    replaceOutput(folder, 'forecasts.csv', [csv[0], csv[1], csv[2], cells.join(','), ...csv.slice(4)].join('\r\n'));
+    const run = await runCli(['verify', folder]);
+    expect(run.code).toBe(3);
+    const [id, model, period] = ['series_id', 'model', 'period'].map((name) => cells[header.indexOf(name)]);
+    expect(run.stdout).toContain(`  forecasts.csv ${id} ${model} ${period}: point: ${stored + 1} vs ${stored}\n`);
   });
 });
