@@ -163,7 +163,7 @@ export function assembleSeries(rows: readonly SeriesRow[], source: SeriesSource,
   const observed = Float64Array.from(valued, (entry) => entry.value ?? Number.NaN);
   const { field, sheet } = source.valueColumnAt;
   const column = field ?? source.column;
-  problems.push(...checkSeries({ file, column, values: observed, lines: valued.map((entry) => entry.line), sheet, unreadableRows: unreadable.length }, options));
+  problems.push(...checkSeries({ file, column, values: observed, lines: valued.map((entry) => entry.line), sheet, pendingRows: unreadable.length + observations.filter((entry) => entry.value === undefined).length }, options));
   const ends = [observations[0], observations[observations.length - 1]];
   if (allowMissing && ends.every((entry) => entry !== undefined)) {
     ends.forEach((entry, i) => {

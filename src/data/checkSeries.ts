@@ -18,8 +18,8 @@ export interface SeriesValues {
   lines?: readonly number[];
   /** The workbook sheet the values came from. */
   sheet?: string;
-  /** Rows whose period could not be read: the count of observations judged is the values' and theirs, since each would be one once its period is corrected. */
-  unreadableRows?: number;
+  /** Rows with a period or value cell that could not be read: the count of observations judged is the values' and theirs, since each would be one once its cell is corrected. */
+  pendingRows?: number;
 }
 
 function isConstant(values: ArrayLike<number>): boolean {
@@ -66,7 +66,7 @@ export function checkSeries(series: SeriesValues, rules: SeriesRules = {}): Inpu
   const { file, column, values, sheet } = series;
   const problems: InputProblem[] = [];
   const n = values.length;
-  const rows = n + (series.unreadableRows ?? 0);
+  const rows = n + (series.pendingRows ?? 0);
   if (rules.minObservations !== undefined && rows < rules.minObservations) {
     problems.push(dataMessages.tooFew({ file, field: column, sheet }, rows, rules.minObservations));
   }
