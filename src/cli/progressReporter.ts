@@ -1,9 +1,13 @@
-// Progress of a batch on stderr: on a terminal one line redrawn in place (a bar, counts and
-// the time left at the pace so far); elsewhere one plain line per finished memo; nothing
-// with --quiet. Only for people watching: nothing here reaches an output file.
+// Progress of a batch: on a terminal one line on stderr redrawn in place (a bar, what is done
+// out of how many, the time left at the pace so far); elsewhere (a log, a CI job) a line when
+// the run starts and one per finished series and memo, each with the time since the start;
+// nothing with --quiet. Only for people watching: nothing here reaches an output file.
 export interface ProgressReporter {
+  /** Outside a terminal, the opening line: how much the run will do. */
+  start(): void;
   seriesDone(memoId: string, seriesId: string): void;
-  memoDone(memoId: string, ok: boolean): void;
+  /** `name`: the memo id when it ran, the config's path when it failed before one was known; `outcome`: written, kept, revised or failed. */
+  memoDone(name: string, outcome: string): void;
   finish(): void;
 }
 
@@ -14,29 +18,38 @@ export interface ProgressTarget {
 
 const BAR_WIDTH = 24;
 
+function plural(count: number, word: string): string {
+  return `${count} ${word}${count === 1 ? '' : 's'}`;
+}
+
 export function progressReporter(totalSeries: number, totalMemos: number, target: ProgressTarget | undefined, now: () => number = Date.now): ProgressReporter {
-  if (target === undefined) return { seriesDone: () => undefined, memoDone: () => undefined, finish: () => undefined };
+  if (target === undefined) return { start: () => undefined, seriesDone: () => undefined, memoDone: () => undefined, finish: () => undefined };
   const started = now();
   let series = 0;
   let memos = 0;
   let drawn = false;
+  const seconds = (): string => `${((now() - started) / 1000).toFixed(1)} s`;
   const draw = (): void => {
     drawn = true;
     const share = totalSeries === 0 ? 1 : series / totalSeries;
     const filled = Math.round(share * BAR_WIDTH);
     const elapsed = (now() - started) / 1000;
-    const left = series === 0 ? '' : `, about ${Math.ceil((elapsed / series) * (totalSeries - series))} s left`;
-    target.write(`\r[${'#'.repeat(filled)}${'.'.repeat(BAR_WIDTH - filled)}] ${series}/${totalSeries} series, ${memos}/${totalMemos} memos${left}   `);
+    const left = series === 0 || series === totalSeries ? '' : `, about ${Math.ceil((elapsed / series) * (totalSeries - series))} s left`;
+    target.write(`\r[${'#'.repeat(filled)}${'.'.repeat(BAR_WIDTH - filled)}] ${series} of ${totalSeries} series analysed, ${memos} of ${plural(totalMemos, 'memo')} finished${left}   `);
   };
   return {
-    seriesDone() {
+    start() {
+      if (!target.isTTY) target.write(`run: ${plural(totalMemos, 'memo')}, ${totalSeries} series to analyse\n`);
+    },
+    seriesDone(memoId, seriesId) {
       series++;
       if (target.isTTY) draw();
+      else target.write(`series ${series} of ${totalSeries} analysed: ${seriesId} (memo ${memoId}), ${seconds()}\n`);
     },
-    memoDone(memoId, ok) {
+    memoDone(name, outcome) {
       memos++;
       if (target.isTTY) draw();
-      else target.write(`${ok ? 'done' : 'failed'}: memo ${memoId} (${memos}/${totalMemos} memos, ${series}/${totalSeries} series)\n`);
+      else target.write(`memo ${memos} of ${totalMemos} ${outcome}: ${name}${outcome === 'failed' ? ' (see the problems above)' : ''}, ${seconds()}\n`);
     },
     finish() {
       // End the redrawn line, once, so whatever is printed next starts on a fresh line.

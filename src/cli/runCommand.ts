@@ -93,12 +93,9 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
   const previews = positionals.map((config) => previewConfig(config, typeof out === 'string' ? resolve(out) : undefined));
   const totalSeries = previews.reduce((sum, preview) => sum + preview.series, 0);
   const claimed = new Map<string, number>();
-  // On a terminal the bar is drawn on stderr; elsewhere progress is plain lines among the output.
-  const progress = progressReporter(
-    totalSeries,
-    positionals.length,
-    quiet ? undefined : { write: (text) => (io.isTTY === true ? io.stderr(text) : io.stdout(text)), isTTY: io.isTTY === true },
-  );
+  // Progress goes to stderr, a bar on a terminal and plain lines elsewhere; stdout keeps the summary.
+  const progress = progressReporter(totalSeries, positionals.length, quiet ? undefined : { write: (text) => io.stderr(text), isTTY: io.isTTY === true });
+  progress.start();
   let printer: Promise<PdfPrinter> | undefined;
   let noBrowser: InputProblem | null | undefined;
   // The browser driver loads, and Chromium starts, only when the first PDF is printed.
@@ -152,7 +149,7 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
       if (step + window < order.length) launch(order[step + window]);
       if (result !== undefined) {
         for (const warning of result.warnings) io.stderr(`${formatProblem(warning)}\n`);
-        progress.memoDone(result.memoId, true);
+        progress.memoDone(result.memoId, result.outcome);
         outcomes.push({ config, memo: result.memoId, series: result.series, result: outcomeText(result), folder: shownPath(result.folder) });
         continue;
       }
@@ -161,20 +158,20 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
         io.stderr(`${config}: internal error: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}\n`);
         exitCode = worseExit(exitCode, EXIT.internal);
         outcomes.push({ config, memo: '-', series: null, result: 'failed: internal error (see above)', folder: '-' });
-        progress.memoDone(config, false);
+        progress.memoDone(config, 'failed');
         continue;
       }
       if (error instanceof EnvironmentError) {
         // One browser serves the whole batch: its failure is reported once, and each memo that needed it says so.
         if (!environmentReported) for (const problem of error.problems) io.stderr(`${formatProblem(problem)}\n`);
         environmentReported = true;
-        progress.memoDone(config, false);
+        progress.memoDone(config, 'failed');
         exitCode = worseExit(exitCode, EXIT.environment);
         outcomes.push({ config, memo: '-', series: null, result: 'failed: no browser for the PDF (see above; nothing written)', folder: '-' });
         continue;
       }
       for (const problem of error.problems) io.stderr(`${formatProblem(problem)}\n`);
-      progress.memoDone(config, false);
+      progress.memoDone(config, 'failed');
       exitCode = worseExit(exitCode, EXIT.input);
       const count = error.problems.length;
       outcomes.push({ config, memo: '-', series: null, result: `failed: ${count} input problem${count === 1 ? '' : 's'} (see above)`, folder: '-' });

@@ -3,27 +3,42 @@ import { describe, expect, it } from 'vitest';
 import { fitProgress, progressReporter } from '../../src/cli/progressReporter.js';
 
 describe('progressReporter', () => {
-  it('draws counts and the time left on a terminal, and ends the line once', () => {
+  it('draws what is done out of how many and the time left on a terminal, and ends the line once', () => {
     let out = '';
     let clock = 0;
     const progress = progressReporter(4, 2, { write: (text) => (out += text), isTTY: true }, () => clock);
+    progress.start();
     clock = 2000;
     progress.seriesDone('a', 's1');
-    expect(out).toContain('1/4 series, 0/2 memos, about 6 s left');
+    // 2 s for the first of four series: about 6 s for the other three.
+    expect(out).toContain('1 of 4 series analysed, 0 of 2 memos finished, about 6 s left');
     progress.finish();
     progress.finish();
     expect(out.endsWith('\n')).toBe(true);
     expect(out.split('\n')).toHaveLength(2);
   });
 
-  it('prints one plain line per memo when not on a terminal', () => {
+  it('prints a line when it starts and one per series and memo, each with the time since the start, when not on a terminal', () => {
     let out = '';
-    const progress = progressReporter(3, 2, { write: (text) => (out += text), isTTY: false });
-    progress.seriesDone('a', 's1');
-    progress.memoDone('a', true);
-    progress.memoDone('b', false);
+    let clock = 0;
+    const progress = progressReporter(3, 2, { write: (text) => (out += text), isTTY: false }, () => clock);
+    progress.start();
+    clock = 1250;
+    progress.seriesDone('harbour-outlook', 'cargo');
+    clock = 2000;
+    progress.memoDone('harbour-outlook', 'written');
+    clock = 2100;
+    progress.memoDone('configs/broken.yaml', 'failed');
     progress.finish();
-    expect(out).toBe('done: memo a (1/2 memos, 1/3 series)\nfailed: memo b (2/2 memos, 1/3 series)\n');
+    expect(out).toBe(
+      [
+        'run: 2 memos, 3 series to analyse',
+        'series 1 of 3 analysed: cargo (memo harbour-outlook), 1.3 s',
+        'memo 1 of 2 written: harbour-outlook, 2.0 s',
+        'memo 2 of 2 failed: configs/broken.yaml (see the problems above), 2.1 s',
+        '',
+      ].join('\n'),
+    );
   });
 });
 
