@@ -116,9 +116,6 @@ export const verifyMessages = {
   notFound(folder: string): InputProblem {
     return problem('verify.not-found', `'${folder}' is not found`, 'check the path and its spelling; give the memo folder a run wrote, e.g. out/lake-outlook/2026-01', { file: folder });
   },
-  notFound(folder: string): InputProblem {
-    return problem('verify.not-found', `'${folder}' is not found`, 'check the path and its spelling; give the memo folder a run wrote, e.g. out/lake-outlook/2026-01', { file: folder });
-  },
   noManifest(folder: string, asOfFolders: readonly string[]): InputProblem {
     const hint = asOfFolders.length > 0 ? `it holds as-of memos: give one of them, e.g. ${folder}/${asOfFolders[0]}` : 'give the folder a run wrote, the one with manifest.json in it';
     return problem('verify.no-manifest', `'${folder}' has no manifest.json`, hint, { file: folder });

@@ -31,7 +31,7 @@ afterAll(() => rmSync(root, { recursive: true, force: true }));
 
 async function workbookAt(file: string): Promise<ExcelJS.Workbook> {
   const workbook = new ExcelJS.Workbook();
-  await workbook.xlsx.load(readFileSync(file));
+  await workbook.xlsx.load(readFileSync(file) as unknown as ExcelJS.Buffer);
   return workbook;
 }
 
@@ -91,7 +91,7 @@ describe('forecasts.xlsx', () => {
     for (let at = stamped.indexOf(Buffer.from([0x50, 0x4b, 0x03, 0x04])); at >= 0; at = stamped.indexOf(Buffer.from([0x50, 0x4b, 0x03, 0x04]), at + 4)) dates.add(stamped.readUInt16LE(at + 12));
     expect([...dates]).toEqual([0x5d7e]);
     const back = new ExcelJS.Workbook();
-    await back.xlsx.load(stamped);
+    await back.xlsx.load(stamped as unknown as ExcelJS.Buffer);
     expect(back.getWorksheet('x')?.getRow(1).getCell(1).value).toBe(1);
   });
 });
