@@ -176,6 +176,9 @@ export const dataMessages = {
   dateValue(at: InputLocation, date: string): InputProblem {
     return problem('csv.bad-value', `the cell holds the date ${date}, not a number`, 'check that the value column is chosen (column in the config, --column for fit)', at);
   },
+  workbookForText(file: string): InputProblem {
+    return problem('workbook.not-text', 'is a workbook (a ZIP archive), not CSV text', 'read it with readSeriesFile, which reads .xlsx workbooks too', { file });
+  },
   delimiterForWorkbook(file: string): InputProblem {
     return problem('workbook.delimiter', 'a delimiter is set, but the file is a workbook, whose cells need none', `remove ${setting('delimiter')}`, { file });
   },

@@ -2,15 +2,20 @@
 
 import { createHash } from 'node:crypto';
 import { dataMessages } from './messages.js';
-import { readInputFile } from '../base/readInputFile.js';
+import { decodeInputText, readInputBytes } from '../base/readInputFile.js';
+import { InputError } from '../base/problem.js';
+import { isZip } from './zipArchive.js';
 import type { Series } from '../base/series.js';
 import { parseSeriesCsv, type SeriesOptions } from './parseSeriesCsv.js';
 
 /** Largest series file accepted, in bytes; larger files are refused before they are read. */
 export const MAX_SERIES_FILE_BYTES = 20 * 1024 * 1024;
 
-/** Reads, checks and returns one series; throws InputError listing every problem found. */
+/** Reads, checks and returns one series from CSV text; throws InputError listing every problem found. readSeriesFile reads workbooks too. */
 export function readSeriesCsv(file: string, options: SeriesOptions): Series {
-  const { bytes, text } = readInputFile(file, MAX_SERIES_FILE_BYTES, dataMessages);
+  const bytes = readInputBytes(file, MAX_SERIES_FILE_BYTES, dataMessages);
+  // A workbook would otherwise be reported as text that is not UTF-8.
+  if (isZip(bytes)) throw new InputError(dataMessages.workbookForText(file));
+  const { text } = decodeInputText(file, bytes, dataMessages);
   return { ...parseSeriesCsv(text, file, options), sha256: createHash('sha256').update(bytes).digest('hex') };
 }

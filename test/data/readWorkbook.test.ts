@@ -11,6 +11,7 @@ import { deflateRawSync } from 'node:zlib';
 import ExcelJS from 'exceljs';
 import { afterAll, describe, expect, it } from 'vitest';
 import { formatProblem, InputError, type InputProblem } from '../../src/base/problem.js';
+import { readSeriesCsv } from '../../src/data/readSeriesCsv.js';
 import { readSeriesFile } from '../../src/data/readSeriesFile.js';
 import type { SeriesOptions } from '../../src/data/seriesOptions.js';
 import { readZipEntries } from '../../src/data/zipArchive.js';
@@ -135,6 +136,11 @@ describe('readSeriesFile on workbooks', () => {
     });
     const found = await problemsOf(file, { sheet: 'sales' });
     expect(found.map(formatProblem)).toEqual([`${file}: has no sheet 'sales'; its sheets are 'Sales', 'Sales 2020'; did you mean 'Sales'?`]);
+  });
+
+  it('is refused by the CSV-only reader as a workbook, not as text that is not UTF-8', async () => {
+    const { file } = await workbook('for-csv-reader.xlsx', (book) => monthlySheet(book));
+    expect(() => readSeriesCsv(file, { missing: 'error' })).toThrow(`${file}: is a workbook (a ZIP archive), not CSV text; read it with readSeriesFile, which reads .xlsx workbooks too`);
   });
 
   it('refuses a CSV setting on a workbook and a sheet on a CSV file', async () => {
