@@ -1,6 +1,7 @@
 // Progress of a batch: on a terminal one line on stderr redrawn in place (a bar, what is done
-// out of how many, the time left at the pace so far); elsewhere (a log, a CI job) a line when
-// the run starts and one per finished series and memo, each with the time since the start;
+// out of how many, the time left at the pace so far); elsewhere (a log, a CI job) a line on
+// stdout when the run starts and one per finished series and memo, each with the time since
+// the start, before the summary;
 // nothing with --quiet. Only for people watching: nothing here reaches an output file.
 export interface ProgressReporter {
   /** Outside a terminal, the opening line: how much the run will do. */

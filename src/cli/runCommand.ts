@@ -93,8 +93,12 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
   const previews = positionals.map((config) => previewConfig(config, typeof out === 'string' ? resolve(out) : undefined));
   const totalSeries = previews.reduce((sum, preview) => sum + preview.series, 0);
   const claimed = new Map<string, number>();
-  // Progress goes to stderr, a bar on a terminal and plain lines elsewhere; stdout keeps the summary.
-  const progress = progressReporter(totalSeries, positionals.length, quiet ? undefined : { write: (text) => io.stderr(text), isTTY: io.isTTY === true });
+  // On a terminal the bar is drawn on stderr; elsewhere (a log) progress is plain lines before the summary on stdout.
+  const progress = progressReporter(
+    totalSeries,
+    positionals.length,
+    quiet ? undefined : { write: (text) => (io.isTTY === true ? io.stderr(text) : io.stdout(text)), isTTY: io.isTTY === true },
+  );
   progress.start();
   let printer: Promise<PdfPrinter> | undefined;
   let noBrowser: InputProblem | null | undefined;

@@ -18,6 +18,6 @@ describe('the stability settings sentence', () => {
       'The history is too short for growing stretches: the shortest the check uses is 20 observations, the whole series, so the charts show the full-history estimates alone and only the break tests speak to stability.',
     );
     // The terminal says the same.
-    expect(formatEvidence(record)).toContain('  expanding windows: none, the series is no longer than the shortest window (20 observations)');
+    expect(formatEvidence(record)).toContain('  Expanding windows: none, as the series is no longer than the shortest window (20 observations).');
   }, 60_000);
 });

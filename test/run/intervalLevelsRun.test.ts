@@ -80,10 +80,11 @@ describe('run at other interval levels', () => {
       it('writes a lower and an upper column per level to forecasts.csv, with the record numbers', () => {
         const [header, first] = read('forecasts.csv').split('\r\n');
         const bounds = c.levels.flatMap((level) => [`lower_${level}`, `upper_${level}`]);
-        expect(header).toBe(['series_id', 'model', 'h', 'period', 'point', ...bounds, 'model_scale_mean', 'se_process', 'se_total'].join(','));
+        expect(header).toBe(['series_id', 'units', 'model', 'recommended', 'h', 'period', 'period_start', 'point', ...bounds, 'model_scale_mean', 'se_process', 'se_total'].join(','));
         const { records } = JSON.parse(read('record.json')) as RecordDocument;
         const row = records[0].forecasts.deterministic[0];
-        expect(first.split(',').slice(5, 5 + bounds.length).map(Number)).toEqual(c.levels.flatMap((level) => row.intervals[String(level)]));
+        // forecasts.csv rounds to 6 significant digits (src/run/forecastsCsv.ts).
+        expect(first.split(',').slice(8, 8 + bounds.length).map(Number)).toEqual(c.levels.flatMap((level) => row.intervals[String(level)].map((value) => Number(value.toPrecision(6)))));
       });
 
       it('names exactly those levels in the tables, the chart descriptions and the shading key', () => {
