@@ -6,6 +6,7 @@ import { addPeriods } from '../base/period.js';
 import { TREND_MODELS } from '../base/settings.js';
 import { evidenceWording, UNIT_ROOT_ROWS } from '../memo/evidenceWording.js';
 import { formatP } from '../memo/format/formatNumber.js';
+import { seasonalReadings } from '../memo/view/evidenceView.js';
 import { HEADINGS, LABELS, MODEL_NAME } from '../memo/wording.js';
 import { fixed, pCell, renderTable, significant, wrap, type Column } from './textTable.js';
 
@@ -53,19 +54,8 @@ function unitRootSection(record: AnalysisRecord): string[] {
   lines.push(...wrap(`KPSS starts from a steady level or line and looks for evidence against it; ADF starts from shocks that never fade (a unit root) and looks for evidence against them.`));
   lines.push(...wrap(`Reading: ${reading.text}`));
   for (const problem of unavailable) lines.push(...wrap(evidenceWording.unavailable(problem.test, problem.reason)));
-  const seasonal = record.evidence.seasonal;
-  const setting = record.seasonal;
-  if (setting !== undefined && setting.period > 1) {
-    const sentences = [
-      ...(setting.reason === null ? [] : [setting.reason]),
-      ...(setting.setting === 'none' ? [evidenceWording.seasonalNone] : []),
-      ...(seasonal?.unit_root?.text === undefined ? [] : [seasonal.unit_root.text]),
-      ...(setting.differences_decided_by === 'config' ? [evidenceWording.seasonalDifferencesByConfig(setting.seasonal_differences === true)] : []),
-      ...(seasonal?.strength?.text === undefined ? [] : [seasonal.strength.text]),
-      ...(seasonal?.unavailable ?? []).map((u) => evidenceWording.unavailable(u.test, u.reason)),
-    ];
-    if (sentences.length > 0) lines.push(`  ${evidenceWording.seasonalHeading}:`, ...sentences.flatMap((s) => wrap(s, '    ')));
-  }
+  const seasonal = seasonalReadings(record);
+  if (seasonal.length > 0) lines.push(`  ${evidenceWording.seasonalHeading}:`, ...seasonal.flatMap((sentence) => wrap(sentence, '    ')));
   return lines;
 }
 

@@ -89,11 +89,18 @@ export function evidenceView(record: AnalysisRecord): EvidenceView {
 
 /** The seasonal test's and the STL strength's readings, or why the models have no seasonal part. */
 function seasonalSentences(record: AnalysisRecord): EvidenceView['seasonal'] {
+  const sentences = seasonalReadings(record);
+  if (sentences.length === 0) return null;
+  return { heading: evidenceWording.seasonalHeading, sentences: sentences.map(noLinks), pattern: patternTable(record) };
+}
+
+/** The seasonal readings in words, for the memo and the terminal alike; none for an annual series. */
+export function seasonalReadings(record: AnalysisRecord): string[] {
   const { seasonal } = record;
   // Records written before the seasonal part have no `seasonal` key.
-  if (seasonal === undefined || seasonal.period === 1) return null;
+  if (seasonal === undefined || seasonal.period === 1) return [];
   const found = record.evidence.seasonal;
-  const sentences = [
+  return [
     ...(seasonal.reason === null ? [] : [seasonal.reason]),
     ...(seasonal.setting === 'none' ? [evidenceWording.seasonalNone] : []),
     ...(found?.unit_root?.text === undefined ? [] : [found.unit_root.text]),
@@ -101,8 +108,6 @@ function seasonalSentences(record: AnalysisRecord): EvidenceView['seasonal'] {
     ...(found?.strength?.text === undefined ? [] : [found.strength.text]),
     ...(found?.unavailable ?? []).map((u) => evidenceWording.unavailable(u.test, u.reason)),
   ];
-  if (sentences.length === 0) return null;
-  return { heading: evidenceWording.seasonalHeading, sentences: sentences.map(noLinks), pattern: patternTable(record) };
 }
 
 function patternTable(record: AnalysisRecord): SeasonalPatternTable | null {
