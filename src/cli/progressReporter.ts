@@ -50,7 +50,7 @@ export function progressReporter(totalSeries: number, totalMemos: number, target
     memoDone(name, outcome) {
       memos++;
       if (target.isTTY) draw();
-      else target.write(`memo ${memos} of ${totalMemos} ${outcome}: ${name}${outcome === 'failed' ? ' (see the problems above)' : ''}, ${seconds()}\n`);
+      else target.write(`memo ${memos} of ${totalMemos} ${outcome}: ${outcome === 'failed' ? `config ${name} (see the problems above)` : name}, ${seconds()}\n`);
     },
     finish() {
       // End the redrawn line, once, so whatever is printed next starts on a fresh line.

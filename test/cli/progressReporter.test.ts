@@ -35,7 +35,7 @@ describe('progressReporter', () => {
         'run: 2 memos, 3 series to analyse',
         'series 1 of 3 analysed: cargo (memo harbour-outlook), 1.3 s',
         'memo 1 of 2 written: harbour-outlook, 2.0 s',
-        'memo 2 of 2 failed: configs/broken.yaml (see the problems above), 2.1 s',
+        'memo 2 of 2 failed: config configs/broken.yaml (see the problems above), 2.1 s',
         '',
       ].join('\n'),
     );

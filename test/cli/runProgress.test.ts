@@ -30,7 +30,7 @@ describe('run outside a terminal', () => {
     expect(progress.slice(1).map((line) => line.replace(/, \d+\.\d s$/, ', T'))).toEqual([
       'series 1 of 2 analysed: cargo (memo tarnwick-cargo), T',
       'memo 1 of 3 written: tarnwick-cargo, T',
-      `memo 2 of 3 failed: ${missing} (see the problems above), T`,
+      `memo 2 of 3 failed: config ${missing} (see the problems above), T`,
       'series 2 of 2 analysed: cargo (memo tarnwick-cargo-second), T',
       'memo 3 of 3 written: tarnwick-cargo-second, T',
     ]);
