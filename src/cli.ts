@@ -32,7 +32,7 @@ const MAIN_HELP = `trendbrief: compare deterministic and stochastic trend extrap
 
 Usage:
   trendbrief run CONFIG.yaml...       write the forecast memo of each config
-  trendbrief fit FILE.csv [options]   fit both trend models to one series and forecast
+  trendbrief fit FILE [options]       fit both trend models to one series (.csv or .xlsx) and forecast
   trendbrief check CONFIG.yaml...     check configs and their series files without fitting
   trendbrief verify MEMO_FOLDER       check an issued memo against its inputs and a rerun
   trendbrief review MEMO_FOLDER --reviewer NAME --decision approve|approve-with-changes|return
