@@ -60,7 +60,7 @@ describe('help and version', () => {
     expect(run.code).toBe(0);
     expect(run.stderr).toBe('');
     expect(run.stdout).toMatch(/^Usage:$/m);
-    expect(run.stdout).toContain('trendbrief fit FILE.csv');
+    expect(run.stdout).toContain('trendbrief fit FILE [options]');
   });
 
   it('prints the version from package.json with --version', async () => {
