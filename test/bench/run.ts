@@ -5,6 +5,7 @@ import { cpus } from 'node:os';
 import { backtestBench } from './backtestBench.js';
 import { batchBench } from './batchBench.js';
 import { engineBench } from './engineBench.js';
+import { peersBench } from './peersBench.js';
 import { seasonalBench } from './seasonalBench.js';
 import { startupBench } from './startupBench.js';
 import type { BenchRow } from './timing.js';
@@ -15,6 +16,7 @@ const suites: [string, () => BenchRow[] | Promise<BenchRow[]>][] = [
   ['seasonal', seasonalBench],
   ['backtest', backtestBench],
   ['batch', batchBench],
+  ['peers', peersBench],
 ];
 // `npm run bench -- engine` runs the named suites only.
 const only = process.argv.slice(2);
@@ -29,7 +31,9 @@ for (const [name, suite] of suites) {
   for (const row of rows) {
     const verdict = row.target === undefined ? '' : row.ms <= row.target ? `  target ${row.target} ms: met` : `  target ${row.target} ms: MISSED`;
     const extra = row.extra === undefined ? '' : `  ${Object.entries(row.extra).map(([k, v]) => `${k} ${v.toFixed(1)}`).join(', ')}`;
-    console.log(`  ${row.name.padEnd(width)}  ${row.ms.toFixed(3).padStart(10)} ms${verdict}${extra}`);
+    // NaN: a row for work that did not run (a peer library not installed).
+    const time = Number.isNaN(row.ms) ? 'not run'.padStart(13) : `${row.ms.toFixed(3).padStart(10)} ms`;
+    console.log(`  ${row.name.padEnd(width)}  ${time}${verdict}${extra}`);
   }
 }
 mkdirSync('out/bench', { recursive: true });
