@@ -77,6 +77,8 @@ export interface FitOptions extends LikelihoodOptions {
    * near (REML from the exact-ML optimum), where the usual starts would find it again.
    */
   startsOnly?: boolean;
+  /** `olsFit(y, regressors)` already computed by the caller (an order search fits every candidate on the same y and regressors). */
+  ols?: OlsPart;
 }
 
 export function fitRegressionArma(
@@ -89,7 +91,7 @@ export function fitRegressionArma(
   // Filter the OLS residuals rather than y itself: the GLS step then solves for a small
   // correction to the OLS coefficients, and Σv²/F does not lose digits to a large level
   // (a series near 580 would otherwise leave SSR as the difference of two numbers ~1e7).
-  const ols = olsFit(y, regressors);
+  const ols = options.ols ?? olsFit(y, regressors);
   const likelihood = createProfileLikelihood(ols.residuals, regressors, p, q, {
     accumulateGaps: options.accumulateGaps,
     gapPeriod: options.gapPeriod,

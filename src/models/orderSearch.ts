@@ -9,7 +9,7 @@
 // orders held, and every start carries the neighbour's seasonal coefficients along.
 import { admissibility, type InadmissibleReason } from './admissibility.js';
 import { unconstrainAr, unconstrainMa } from './constraints.js';
-import { countObserved, fitRegressionArma, type RegressionArmaFit } from './fitRegressionArma.js';
+import { countObserved, fitRegressionArma, olsFit, type RegressionArmaFit } from './fitRegressionArma.js';
 import { type WorkspaceOptions } from '../statespace/filterWorkspace.js';
 import type { SeasonalPart } from './profileLikelihood.js';
 import type { SeasonalArmaOrder } from './seasonalArma.js';
@@ -97,12 +97,14 @@ export function fitGrid(y: Float64Array, regressors: readonly Float64Array[], ma
   const seasonalCount = (seasonal?.P ?? 0) + (seasonal?.Q ?? 0);
   const grid: GridFit[] = [];
   const nobs = countObserved(y);
+  // The trend regression that starts every candidate is the same for all of them.
+  const ols = olsFit(y, regressors);
   for (let p = 0; p <= maxP; p++) {
     for (let q = 0; q <= maxQ; q++) {
       const parameters = p + q + seasonalCount + regressors.length + 1;
       if (nobs - parameters - 1 <= 0) continue;
       const starts = neighbourStarts((a, b) => fits.get(key(a, b)), p, q);
-      const fit = fitRegressionArma(y, regressors, p, q, { ...workspace, seasonal, starts });
+      const fit = fitRegressionArma(y, regressors, p, q, { ...workspace, seasonal, starts, ols });
       fits.set(key(p, q), fit);
       const value = aicc(fit.loglik, parameters, fit.nobs);
       const { admissible, reason } = admissibility(fit, differenced);
