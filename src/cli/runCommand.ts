@@ -24,7 +24,8 @@ export const RUN_HELP = `Usage: trendbrief run CONFIG.yaml... [options]
 
 Analyses every series of each config (both trend models, evidence, backtest, recommendation)
 and writes the memo into <output folder>/<memo id>/<as-of>/ (<output folder>/<memo id>/ without
-memo.as_of): memo.html, memo.pdf, record.json, forecasts.csv and manifest.json. A memo with an
+memo.as_of): memo.html, memo.pdf, record.json, forecasts.csv and manifest.json (and the
+forecasts as a workbook, forecasts.xlsx, with --formats ...,xlsx). A memo with an
 as-of period compares itself with the latest earlier as-of memo beside it and shows how the
 forecasts of all the earlier ones fared. A folder appears only when all its files are complete,
 and carries copies of its config and data under inputs/.
@@ -45,6 +46,10 @@ Options:
 With several configs (e.g. configs/*.yaml) every memo is attempted; one that fails does not
 stop the others, and the summary at the end says which failed and why. As-of memos of one
 memo id run in period order, so each sees the earlier ones of the same run.
+
+Exit codes: 0 done; 2 bad input; 4 no Chromium for the PDF (install Debian's chromium, set
+TRENDBRIEF_CHROMIUM, or leave pdf out of --formats); 1 a defect in trendbrief. A batch exits
+with the worst of its memos.
 `;
 
 interface Io {
