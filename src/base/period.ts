@@ -76,3 +76,17 @@ export function addPeriods(label: string, k: number): string {
 export function harmonicColumnCount(period: number, harmonics: number): number {
   return 2 * harmonics - (2 * harmonics === period ? 1 : 0);
 }
+
+/** The first day of the period at 00:00 UTC (2025-Q3 → 2025-07-01), for spreadsheets, which sort and chart real dates. */
+export function periodStartDate(label: string): Date {
+  const period = parsePeriod(label);
+  if (period === null) throw new RangeError(`periodStartDate needs a period label, got '${label}'`);
+  const date = new Date(Date.UTC(2000, (period.sub - 1) * (12 / periodsPerYear(period.frequency)), 1));
+  date.setUTCFullYear(period.year);
+  return date;
+}
+
+/** The first day of the period as YYYY-MM-DD. */
+export function periodStart(label: string): string {
+  return periodStartDate(label).toISOString().slice(0, 10);
+}

@@ -24,9 +24,7 @@ export interface InputFile {
 }
 
 export function readInputFile(file: string, limitBytes: number, messages: FileMessages): InputFile {
-  const read = readRegularFile(file, limitBytes);
-  if (read.fault !== undefined) throw new InputError(faultProblem(file, read.fault, limitBytes, messages));
-  return decodeInputText(file, read.bytes, messages);
+  return decodeInputText(file, readInputBytes(file, limitBytes, messages), messages);
 }
 
 /** Bytes already read, decoded as readInputFile decodes them. */

@@ -78,7 +78,7 @@ function modelSection(record: AnalysisRecord): string[] {
     COEFFICIENT_NAME.drift,
     ...Array.from({ length: Math.max(dm.p, sm.p) }, (_, i) => COEFFICIENT_NAME.ar(i + 1)),
     ...Array.from({ length: Math.max(dm.q, sm.q) }, (_, i) => COEFFICIENT_NAME.ma(i + 1)),
-    ...new Set([...det, ...sto].map((c) => c.name)),
+    ...[...det, ...sto].map((c) => c.name),
   ].filter((name, i, all) => all.indexOf(name) === i && [...det, ...sto].some((c) => c.name === name));
   const cells = (list: CoefficientCells[], name: string): [string, string] => {
     const found = list.find((c) => c.name === name);

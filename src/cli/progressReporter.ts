@@ -3,6 +3,8 @@
 // stdout when the run starts and one per finished series and memo, each with the time since
 // the start, before the summary;
 // nothing with --quiet. Only for people watching: nothing here reaches an output file.
+import { plural } from '../base/problem.js';
+
 export interface ProgressReporter {
   /** Outside a terminal, the opening line: how much the run will do. */
   start(): void;
@@ -18,10 +20,6 @@ export interface ProgressTarget {
 }
 
 const BAR_WIDTH = 24;
-
-function plural(count: number, word: string): string {
-  return `${count} ${word}${count === 1 ? '' : 's'}`;
-}
 
 export function progressReporter(totalSeries: number, totalMemos: number, target: ProgressTarget | undefined, now: () => number = Date.now): ProgressReporter {
   if (target === undefined) return { start: () => undefined, seriesDone: () => undefined, memoDone: () => undefined, finish: () => undefined };

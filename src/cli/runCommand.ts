@@ -6,7 +6,7 @@ import { join, resolve } from 'node:path';
 import { OUTPUT_FORMATS } from '../config/configSpec.js';
 import { loadConfig } from '../config/loadConfig.js';
 import type { OutputFormat } from '../config/runPlan.js';
-import { formatProblem, InputError, type InputProblem } from '../base/problem.js';
+import { formatProblem, InputError, plural, type InputProblem } from '../base/problem.js';
 import { cliMessages, configCommandMessages } from './messages.js';
 import { runMessages } from '../run/messages.js';
 import type { PdfPrinter } from '../memo/print/pdfPrinter.js';
@@ -183,7 +183,7 @@ export async function runRun(args: readonly string[], io: Io): Promise<number> {
       progress.memoDone(config, 'failed');
       exitCode = worseExit(exitCode, EXIT.input);
       const count = error.problems.length;
-      outcomes.push({ config, memo: '-', series: null, result: `failed: ${count} input problem${count === 1 ? '' : 's'} (see above)`, folder: '-' });
+      outcomes.push({ config, memo: '-', series: null, result: `failed: ${plural(count, 'input problem')} (see above)`, folder: '-' });
     }
   } finally {
     progress.finish();
@@ -213,7 +213,7 @@ function previewConfig(config: string, outputFolder: string | undefined): { seri
 
 /** The run's line in the summary: what happened to the memo folder. */
 function outcomeText(result: MemoRunResult): string {
-  if (result.outcome === 'kept') return `kept (same content as the issued memo; ${result.signOffs} sign-off${result.signOffs === 1 ? '' : 's'} carried, nothing changed)`;
+  if (result.outcome === 'kept') return `kept (same content as the issued memo; ${plural(result.signOffs, 'sign-off')} carried, nothing changed)`;
   if (result.outcome === 'revised') return `revised (revision ${String(result.revision)} kept; ${result.files.join(', ')})`;
   return `written (${result.files.join(', ')})`;
 }

@@ -4,7 +4,7 @@
 // numbers are right-aligned, or aligned on the decimal point where one column mixes scales
 // (coefficients). Headings can span columns (a model's group). No colour: the summary is
 // the same on a terminal and in a file.
-import { formatNumber, formatPCell } from '../memo/format/formatNumber.js';
+import { formatNumber, formatPCell, withoutTrailingZeros } from '../memo/format/formatNumber.js';
 
 /** Widest line the summary aims for; tables wider than this are laid out another way. */
 export const TARGET_WIDTH = 100;
@@ -38,10 +38,9 @@ export function significant(value: number | null | undefined, digits = 4): strin
   const magnitude = Math.floor(Math.log10(Math.abs(value)));
   if (magnitude < -4 || magnitude >= 7) {
     const [mantissa, exponent] = value.toExponential(digits - 1).split('e');
-    return `${mantissa.replace(/\.?0+$/, '')}e${Number(exponent)}`;
+    return `${withoutTrailingZeros(mantissa)}e${Number(exponent)}`;
   }
-  const text = fixed(value, Math.max(0, digits - 1 - magnitude));
-  return text.includes('.') ? text.replace(/\.?0+$/, '') : text;
+  return withoutTrailingZeros(fixed(value, Math.max(0, digits - 1 - magnitude)));
 }
 
 /** A fraction as a whole percentage: 0.8 → "80%". */

@@ -1,6 +1,7 @@
 // Every word of the track record section: how the earlier as-of memos' forecasts fared against
 // what has since been observed. Kept apart from wording.ts so the section reads (and can be
 // reworded) in one place. Numbers arrive formatted.
+import { plural } from '../base/problem.js';
 import type { TrendModelKind } from '../base/settings.js';
 import { MODEL_NAME } from './wording.js';
 
@@ -15,8 +16,8 @@ export const MIN_OUTCOMES_TO_JUDGE = 20;
 /** How each model looks in the chart (palette.ts: colour, MODEL_SHAPE, MODEL_DASH). */
 const CHART_KEY: Record<TrendModelKind, string> = { deterministic: 'green circles for the deterministic trend', stochastic: 'amber squares for the stochastic trend' };
 
-const memos = (count: number) => `${count} earlier memo${count === 1 ? '' : 's'}`;
-const forecasts = (count: number) => `${count} forecast${count === 1 ? '' : 's'}`;
+const memos = (count: number) => plural(count, 'earlier memo');
+const forecasts = (count: number) => plural(count, 'forecast');
 
 export const trackRecordWording = {
   heading: 'How earlier forecasts fared',

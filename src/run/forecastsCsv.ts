@@ -5,7 +5,7 @@
 // text cells.
 import type { AnalysisRecord } from '../analysis/record.js';
 import { levelKey, TREND_MODELS } from '../base/settings.js';
-import { periodStart } from './periodDates.js';
+import { periodStart } from '../base/period.js';
 
 /** Significant digits of every number in forecasts.csv and forecasts.xlsx: more than any forecast can claim, few enough to read. */
 export const FORECAST_DIGITS = 6;

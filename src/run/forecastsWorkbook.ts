@@ -10,7 +10,7 @@ import type { AnalysisRecord } from '../analysis/record.js';
 import { levelKey, TREND_MODELS } from '../base/settings.js';
 import { CAUTIONS, FREQUENCY_NAME, MODEL_NAME } from '../memo/wording.js';
 import { recommendedFlag, roundedForecast, type UnitsById } from './forecastsCsv.js';
-import { periodStartDate } from './periodDates.js';
+import { periodStartDate } from '../base/period.js';
 import type { RecordDocument } from './recordDocument.js';
 import { stampZipDates } from './stampZipDates.js';
 

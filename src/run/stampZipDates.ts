@@ -3,9 +3,7 @@
 // 4.3.7 and 4.3.12). The library that writes the workbook stamps the moment of writing, the
 // only bytes that differ between two runs; this sets them all to the run date at 00:00, in
 // place, so the same memo gives the same workbook byte for byte.
-const END_OF_CENTRAL_DIRECTORY = 0x06054b50;
-const CENTRAL_HEADER = 0x02014b50;
-const LOCAL_HEADER = 0x04034b50;
+import { zipDirectory } from '../base/zipDirectory.js';
 
 /** DOS date and time fields of `runDate` (YYYY-MM-DD) at midnight. */
 function dosStamp(runDate: string): { date: number; time: number } {
@@ -19,21 +17,13 @@ function dosStamp(runDate: string): { date: number; time: number } {
 export function stampZipDates(archive: Uint8Array, runDate: string): Buffer {
   const zip = Buffer.from(archive);
   const { date, time } = dosStamp(runDate);
-  // The end record sits in the last 22 bytes when the archive has no comment, as written here.
-  let end = zip.length - 22;
-  while (end >= 0 && zip.readUInt32LE(end) !== END_OF_CENTRAL_DIRECTORY) end--;
-  if (end < 0) throw new Error('stampZipDates: no end of central directory');
-  const entries = zip.readUInt16LE(end + 10);
-  let at = zip.readUInt32LE(end + 16);
-  for (let i = 0; i < entries; i++) {
-    if (zip.readUInt32LE(at) !== CENTRAL_HEADER) throw new Error(`stampZipDates: no central header at ${at}`);
-    zip.writeUInt16LE(time, at + 12);
-    zip.writeUInt16LE(date, at + 14);
-    const local = zip.readUInt32LE(at + 42);
-    if (zip.readUInt32LE(local) !== LOCAL_HEADER) throw new Error(`stampZipDates: no local header at ${local}`);
+  const directory = zipDirectory(zip);
+  if ('fault' in directory) throw new Error(`stampZipDates: the archive cannot be walked (${directory.fault})`);
+  for (const { header, local } of directory.entries) {
+    zip.writeUInt16LE(time, header + 12);
+    zip.writeUInt16LE(date, header + 14);
     zip.writeUInt16LE(time, local + 10);
     zip.writeUInt16LE(date, local + 12);
-    at += 46 + zip.readUInt16LE(at + 28) + zip.readUInt16LE(at + 30) + zip.readUInt16LE(at + 32);
   }
   return zip;
 }

@@ -70,7 +70,7 @@ export function formatSignificant(value: JsonNumber | undefined, digits = 4): st
 }
 
 /** "0.4630" → "0.463", "2.00" → "2": significant digits say how precise a figure is, so zeros after the last digit that counts are dropped. */
-function withoutTrailingZeros(text: string): string {
+export function withoutTrailingZeros(text: string): string {
   return text.includes('.') ? text.replace(/\.?0+$/, '') : text;
 }
 
