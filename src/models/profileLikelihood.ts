@@ -4,7 +4,7 @@
 // η follows the multiplicative ARMA of seasonalArma.ts and the filter runs its expansion.
 import { createWorkspace, profileLoglik, restrictedLoglik, runFilter, setArma } from '../statespace/kalmanFilter.js';
 import { createAdjointScratch, createSensitivities, filterSensitivities } from '../statespace/filterAdjoint.js';
-import { runChandrasekhar, SCALAR_STATE } from '../statespace/filterRecursions.js';
+import { runChandrasekhar } from '../statespace/filterRecursions.js';
 import { stateDimension } from '../statespace/armaStateSpace.js';
 import { isStationary } from './constraints.js';
 import { type FilterWorkspace, type WorkspaceOptions } from '../statespace/filterWorkspace.js';
@@ -60,8 +60,7 @@ export interface ProfileLikelihood {
   /**
    * The gradient of `atUnconstrained` at x into `out`, by the filter's adjoint (filterAdjoint.ts)
    * and forward differences of the data-free part alone; false where that route does not apply
-   * (missing values, or the scalar column pass of small models), and the caller differences the
-   * whole likelihood instead.
+   * (missing values), and the caller differences the whole likelihood instead.
    */
   gradientAtUnconstrained(x: Float64Array, out: Float64Array): boolean;
   /** The process's AR and MA coefficients for unconstrained `x`. */
@@ -108,23 +107,38 @@ export function createProfileLikelihood(
     evaluatedAt?.set(x);
     return value;
   };
-  // The adjoint route needs the Chandrasekhar run of a complete series and the generic column pass.
+  // The adjoint route needs the Chandrasekhar run of a complete series.
   const adjoint =
-    workspace.complete && workspace.gaps === undefined && (workspace.r > SCALAR_STATE || workspace.ncol > 3)
-      ? { gainRun: createWorkspace(workspace.r, [y]), sensitivities: createSensitivities(workspace.r, workspace.n), scratch: createAdjointScratch(workspace.r, workspace.ncol, workspace.n) }
+    workspace.complete && workspace.gaps === undefined
+      ? { gainRun: createWorkspace(workspace.r, [y]), sensitivities: createSensitivities(workspace.stride, workspace.n), scratch: createAdjointScratch(workspace.r, workspace.ncol, workspace.n) }
       : undefined;
   if (adjoint !== undefined) evaluatedAt = new Float64Array(parameterCount(order)).fill(Number.NaN);
-  /** Σ of the sensitivities times the data-free quantities of a run (`source`: its coefficients, gains and variances). */
-  const linearised = (source: FilterWorkspace, steadyFrom: number): number => {
+  /**
+   * Σ of the sensitivities times the change in the data-free quantities (coefficients, gains,
+   * variances) from the workspace's run to `shifted`'s: term by term up to the later of the two
+   * steady points, then the settled change times the sensitivities' sum over the rest.
+   */
+  const directional = (shifted: FilterWorkspace, shiftedSteady: number): number => {
     const { sensitivities } = adjoint as NonNullable<typeof adjoint>;
-    const { r, stride, n } = workspace;
+    const { r, stride } = workspace;
+    const baseSteady = workspace.steadyFrom;
+    const base = workspace;
     let total = 0;
-    for (let i = 0; i < r; i++) total += sensitivities.phi[i] * source.phi[i];
-    for (let t = 0; t < n; t++) {
-      const row = (t < steadyFrom ? t : steadyFrom) * stride;
-      const at = t * r;
-      for (let i = 0; i < r; i++) total += sensitivities.gains[at + i] * source.gains[row + i];
-      total += sensitivities.variances[t] * source.variances[t];
+    for (let i = 0; i < r; i++) total += sensitivities.phi[i] * (shifted.phi[i] - base.phi[i]);
+    const settled = Math.max(baseSteady, shiftedSteady);
+    for (let t = 0; t < settled; t++) {
+      const baseRow = (t < baseSteady ? t : baseSteady) * stride;
+      const shiftedRow = (t < shiftedSteady ? t : shiftedSteady) * stride;
+      const at = t * stride;
+      for (let i = 0; i < r; i++) total += sensitivities.gains[at + i] * (shifted.gains[shiftedRow + i] - base.gains[baseRow + i]);
+      total += sensitivities.variances[t] * (shifted.variances[t] - base.variances[t]);
+    }
+    if (settled < workspace.n) {
+      const baseRow = baseSteady * stride;
+      const shiftedRow = shiftedSteady * stride;
+      const at = settled * stride;
+      for (let i = 0; i < r; i++) total += sensitivities.gainsFrom[at + i] * (shifted.gains[shiftedRow + i] - base.gains[baseRow + i]);
+      total += sensitivities.variancesFrom[settled] * (shifted.variances[settled] - base.variances[settled]);
     }
     return total;
   };
@@ -156,7 +170,6 @@ export function createProfileLikelihood(
       if (!same && !Number.isFinite(atUnconstrained(x))) return false;
       if (!(workspace.steadyFrom >= 0)) return false;
       filterSensitivities(workspace, columns, estimation, process.p, adjoint.scratch, adjoint.sensitivities);
-      const base = linearised(workspace, workspace.steadyFrom);
       const shifted = Float64Array.from(x);
       const { gainRun } = adjoint;
       for (let j = 0; j < x.length; j++) {
@@ -167,7 +180,7 @@ export function createProfileLikelihood(
         if (!setArma(gainRun, ar, process.p, ma, process.q, true)) return false;
         const steadyFrom = runChandrasekhar(gainRun);
         if (steadyFrom < 0) return false;
-        out[j] = (linearised(gainRun, steadyFrom) - base) / h;
+        out[j] = directional(gainRun, steadyFrom) / h;
       }
       // `ar` and `ma` back at x, as after an evaluation there.
       fill(x);

@@ -19,22 +19,30 @@
 import type { Estimation } from '../base/settings.js';
 import { choleskySolveInPlace } from '../linalg/smallSpd.js';
 import type { FilterWorkspace } from './filterWorkspace.js';
+import { SCALAR_STATE } from './filterRecursions.js';
 
 /** The sensitivities, per time where they vary with it. */
 export interface FilterSensitivities {
-  /** ∂ℓ/∂φ_i, i < r. */
+  /** ∂ℓ/∂φ_i, i < r (stride entries, 0 beyond r). */
   phi: Float64Array;
-  /** ∂ℓ/∂g_t[i] at [t·r + i]. */
+  /** ∂ℓ/∂g_t[i] at [t·stride + i], the layout of the workspace's gains (i ≥ r unused). */
   gains: Float64Array;
   /** ∂ℓ/∂F_t. */
   variances: Float64Array;
+  /**
+   * Σ_{s ≥ t} of `gains` at [t·stride + i] and of `variances` at [t], for t ≤ n (zero at n): what
+   * a run that has settled by time t contributes from there on, in one product.
+   */
+  gainsFrom: Float64Array;
+  variancesFrom: Float64Array;
 }
 
-export function createSensitivities(r: number, n: number): FilterSensitivities {
-  return { phi: new Float64Array(r), gains: new Float64Array(n * r), variances: new Float64Array(n) };
+/** Sensitivities for a workspace with the given stride (its gain rows' length) and n. */
+export function createSensitivities(stride: number, n: number): FilterSensitivities {
+  return { phi: new Float64Array(stride), gains: new Float64Array(n * stride), variances: new Float64Array(n), gainsFrom: new Float64Array((n + 1) * stride), variancesFrom: new Float64Array(n + 1) };
 }
 
-/** Scratch for `filterSensitivities`: the adjoint ring, per-column terms and a GLS solve. */
+/** Scratch for `filterSensitivities`: the adjoint ring, per-column terms and G⁻¹. */
 export interface AdjointScratch {
   ring: Float64Array;
   direct: Float64Array;
@@ -42,56 +50,112 @@ export interface AdjointScratch {
   shifted: Float64Array;
   innovation: Float64Array;
   predicted: Float64Array;
+  /** G⁻¹, k×k, for REML. */
+  gramInverse: Float64Array;
   solve: Float64Array;
 }
 
 export function createAdjointScratch(r: number, ncol: number, n: number): AdjointScratch {
-  return { ring: new Float64Array(r * ncol), direct: new Float64Array(ncol * n), column: new Float64Array(ncol), shifted: new Float64Array(ncol), innovation: new Float64Array(ncol), predicted: new Float64Array(ncol), solve: new Float64Array(Math.max(1, ncol - 1)) };
+  const k = Math.max(1, ncol - 1);
+  return {
+    ring: new Float64Array(r * ncol),
+    direct: new Float64Array(Math.max(ncol, 3) * n),
+    column: new Float64Array(ncol),
+    shifted: new Float64Array(ncol),
+    innovation: new Float64Array(ncol),
+    predicted: new Float64Array(ncol),
+    gramInverse: new Float64Array(k * k),
+    solve: new Float64Array(k),
+  };
 }
 
 /**
  * Fills `out` for the workspace's last run (complete series, covariance not kept), whose
  * log-likelihood was computed by `estimation`'s function (so ws.gramRhs holds β̂ and
  * ws.gramFactor the Cholesky factor of G). `arLength`: the AR coefficients that can be
- * nonzero (the process's p); ∂ℓ/∂φ_i stays 0 beyond them.
+ * nonzero (the process's p); ∂ℓ/∂φ_i stays 0 beyond them. State dimensions up to four with
+ * at most three columns take a backward pass on scalars, the mirror of the forward one
+ * (filterRecursions.ts); it gives the same sensitivities as the ring to rounding.
  */
 export function filterSensitivities(ws: FilterWorkspace, columns: readonly Float64Array[], estimation: Estimation, arLength: number, scratch: AdjointScratch, out: FilterSensitivities): void {
-  const { n, ncol, r, stride, phi, gains, variances, innovations: v, gramRhs: beta, gramFactor, steadyFrom } = ws;
+  if (estimation === 'reml' && ws.ncol > 1) gramInverse(ws, scratch);
+  if (ws.stride === SCALAR_STATE && ws.ncol <= 3) {
+    backwardScalar(ws, columns, estimation, arLength, scratch.gramInverse, out);
+    return;
+  }
+  directSensitivities(ws, estimation, scratch, out);
+  backwardGeneric(ws, columns, arLength, scratch, out);
+  const { n, stride } = ws;
+  out.gainsFrom.fill(0, n * stride, (n + 1) * stride);
+  out.variancesFrom[n] = 0;
+  for (let t = n - 1; t >= 0; t--) {
+    const at = t * stride;
+    for (let i = 0; i < stride; i++) out.gainsFrom[at + i] = out.gainsFrom[at + stride + i] + out.gains[at + i];
+    out.variancesFrom[t] = out.variancesFrom[t + 1] + out.variances[t];
+  }
+}
+
+/** G⁻¹ (k×k) into scratch.gramInverse from the Cholesky factor the restricted likelihood left. */
+function gramInverse(ws: FilterWorkspace, scratch: AdjointScratch): void {
+  const k = ws.ncol - 1;
+  const { gramInverse: inverse, solve } = scratch;
+  for (let c = 0; c < k; c++) {
+    solve.fill(0, 0, k);
+    solve[c] = 1;
+    choleskySolveInPlace(ws.gramFactor, k, solve);
+    for (let d = 0; d < k; d++) inverse[d * k + c] = solve[d];
+  }
+}
+
+/** The residual sum S = Σ e_t²/F_t at β̂, from the cross-products the likelihood solved with. */
+function residualSum(ws: FilterWorkspace): number {
+  const { ncol, cross, gramRhs: beta } = ws;
+  let explained = 0;
+  for (let c = 1; c < ncol; c++) explained += beta[c - 1] * cross[c];
+  return cross[0] - explained;
+}
+
+/** ∂ℓ/∂v_{c,t} with β̂ held (into scratch.direct, laid out like the innovations) and ∂ℓ/∂F_t (into out.variances). */
+function directSensitivities(ws: FilterWorkspace, estimation: Estimation, scratch: AdjointScratch, out: FilterSensitivities): void {
+  const { n, ncol, variances, innovations: v, gramRhs: beta } = ws;
   const k = ncol - 1;
   const m = ws.nobs;
-  const { ring, direct, column, shifted, innovation, predicted, solve } = scratch;
-  // e_t and S.
-  let ssr = 0;
+  const { direct, gramInverse: inverse } = scratch;
+  const reml = estimation === 'reml' && k > 0;
   for (let t = 0; t < n; t++) {
     let e = v[t];
     for (let c = 0; c < k; c++) e -= beta[c] * v[(c + 1) * n + t];
     direct[t] = e;
-    ssr += (e * e) / variances[t];
   }
+  const ssr = residualSum(ws);
   const dof = estimation === 'reml' ? m - k : m;
   const dS = -dof / (2 * ssr);
-  // Direct sensitivities to the innovations (laid out like them) and to F_t.
   for (let t = 0; t < n; t++) {
     const f = variances[t];
     const e = direct[t];
     const we = e / f;
     let dF = -dS * (e * e) / (f * f) - 0.5 / f;
     for (let c = 0; c < k; c++) direct[(c + 1) * n + t] = -2 * dS * we * beta[c];
-    if (estimation === 'reml' && k > 0) {
+    if (reml) {
       // −½ log det G: ∂/∂x̃_t = −(G⁻¹x̃_t)/F_t, ∂/∂F_t = +½ x̃_t'G⁻¹x̃_t / F_t².
-      for (let c = 0; c < k; c++) solve[c] = v[(c + 1) * n + t];
-      choleskySolveInPlace(gramFactor, k, solve);
       let quadratic = 0;
       for (let c = 0; c < k; c++) {
-        const x = v[(c + 1) * n + t];
-        quadratic += x * solve[c];
-        direct[(c + 1) * n + t] -= solve[c] / f;
+        let product = 0;
+        for (let d = 0; d < k; d++) product += inverse[c * k + d] * v[(d + 1) * n + t];
+        quadratic += v[(c + 1) * n + t] * product;
+        direct[(c + 1) * n + t] -= product / f;
       }
       dF += (0.5 * quadratic) / (f * f);
     }
     direct[t] = 2 * dS * we;
     out.variances[t] = dF;
   }
+}
+
+/** The backward pass over the ring of λ, every column at once. */
+function backwardGeneric(ws: FilterWorkspace, columns: readonly Float64Array[], arLength: number, scratch: AdjointScratch, out: FilterSensitivities): void {
+  const { n, ncol, r, stride, phi, gains, innovations: v, steadyFrom } = ws;
+  const { ring, direct, column, shifted, innovation, predicted } = scratch;
   // The backward pass: logical row i of λ at physical row (head + i) mod r.
   ring.fill(0, 0, r * ncol);
   out.phi.fill(0);
@@ -105,7 +169,7 @@ export function filterSensitivities(ws: FilterWorkspace, columns: readonly Float
       innovation[c] = vc;
       predicted[c] = columns[c][t] - vc;
     }
-    const sensitivity = t * r;
+    const sensitivity = t * stride;
     for (let i = 0; i < r; i++) {
       let physical = head + i;
       if (physical >= r) physical -= r;
@@ -137,4 +201,110 @@ export function filterSensitivities(ws: FilterWorkspace, columns: readonly Float
     const base = head * ncol;
     for (let c = 0; c < ncol; c++) ring[base + c] = shifted[c] - column[c];
   }
+}
+
+/**
+ * The same for state dimensions up to four and at most three columns, in one backward sweep
+ * on scalars: the direct terms, λ of each column in four locals (y, x1, x2; an absent column's
+ * innovations and λ stay 0) as the forward pass keeps its states, and the running sums from
+ * the end. Rows at or beyond r only ever meet φ_i = g_i = 0. `inverse`: G⁻¹ for REML.
+ */
+function backwardScalar(ws: FilterWorkspace, columns: readonly Float64Array[], estimation: Estimation, arLength: number, inverse: Float64Array, out: FilterSensitivities): void {
+  const { n, ncol, phi, gains, weights, innovations: v, gramRhs: beta, steadyFrom } = ws;
+  const k = ncol - 1;
+  const y = columns[0];
+  const x1 = ncol > 1 ? columns[1] : ws.zeros;
+  const x2 = ncol > 2 ? columns[2] : ws.zeros;
+  const o1 = n;
+  const o2 = 2 * n;
+  const reml = estimation === 'reml' && k > 0;
+  const dS = -(reml ? ws.nobs - k : ws.nobs) / (2 * residualSum(ws));
+  const beta1 = k > 0 ? beta[0] : 0;
+  const beta2 = k > 1 ? beta[1] : 0;
+  // G⁻¹ for REML's −½ log det G: ∂/∂x̃_t = −(G⁻¹x̃_t)/F_t, ∂/∂F_t = +½ x̃_t'G⁻¹x̃_t / F_t².
+  const i11 = reml ? inverse[0] : 0;
+  const i12 = reml && k > 1 ? inverse[1] : 0;
+  const i22 = reml && k > 1 ? inverse[3] : 0;
+  const f0 = phi[0], f1 = phi[1], f2 = phi[2], f3 = phi[3];
+  // λ_{t+1}: a* for y, b* for x1, c* for x2; d*: ∂ℓ/∂φ; s*, sv: the sums from t + 1 on.
+  let a0 = 0, a1 = 0, a2 = 0, a3 = 0;
+  let b0 = 0, b1 = 0, b2 = 0, b3 = 0;
+  let c0 = 0, c1 = 0, c2 = 0, c3 = 0;
+  let d0 = 0, d1 = 0, d2 = 0, d3 = 0;
+  let s0 = 0, s1 = 0, s2 = 0, s3 = 0, sv = 0;
+  const { gains: dgains, variances: dvariances, gainsFrom, variancesFrom } = out;
+  gainsFrom.fill(0, n * SCALAR_STATE, (n + 1) * SCALAR_STATE);
+  variancesFrom[n] = 0;
+  for (let t = n - 1; t >= 0; t--) {
+    const row = (t < steadyFrom ? t : steadyFrom) * SCALAR_STATE;
+    const g0 = gains[row], g1 = gains[row + 1], g2 = gains[row + 2], g3 = gains[row + 3];
+    const invF = weights[t];
+    const u = v[t];
+    const w = v[o1 + t];
+    const z = v[o2 + t];
+    // Direct terms: ∂S/∂v = 2e/F for y and −2βe/F for the regressors; ∂ℓ/∂F_t.
+    const we = (u - beta1 * w - beta2 * z) * invF;
+    const two = 2 * dS * we;
+    let dw = -two * beta1;
+    let dz = -two * beta2;
+    let dF = -dS * we * we - 0.5 * invF;
+    if (reml) {
+      const pw = i11 * w + i12 * z;
+      const pz = i12 * w + i22 * z;
+      dw -= pw * invF;
+      dz -= pz * invF;
+      dF += 0.5 * (w * pw + z * pz) * invF * invF;
+    }
+    const at = t * SCALAR_STATE;
+    const e0 = a0 * u + b0 * w + c0 * z;
+    const e1 = a1 * u + b1 * w + c1 * z;
+    const e2 = a2 * u + b2 * w + c2 * z;
+    const e3 = a3 * u + b3 * w + c3 * z;
+    dgains[at] = e0;
+    dgains[at + 1] = e1;
+    dgains[at + 2] = e2;
+    dgains[at + 3] = e3;
+    dvariances[t] = dF;
+    s0 += e0;
+    s1 += e1;
+    s2 += e2;
+    s3 += e3;
+    sv += dF;
+    gainsFrom[at] = s0;
+    gainsFrom[at + 1] = s1;
+    gainsFrom[at + 2] = s2;
+    gainsFrom[at + 3] = s3;
+    variancesFrom[t] = sv;
+    const pu = y[t] - u;
+    const pw = x1[t] - w;
+    const pz = x2[t] - z;
+    d0 += a0 * pu + b0 * pw + c0 * pz;
+    d1 += a1 * pu + b1 * pw + c1 * pz;
+    d2 += a2 * pu + b2 * pw + c2 * pz;
+    d3 += a3 * pu + b3 * pw + c3 * pz;
+    // λ_t[0] = Σ_i (φ_i − g_i) λ_{t+1}[i] − ∂ℓ/∂v_t; the other rows shift down.
+    const h0 = f0 - g0, h1 = f1 - g1, h2 = f2 - g2, h3 = f3 - g3;
+    const na = h0 * a0 + h1 * a1 + h2 * a2 + h3 * a3 - two;
+    const nb = h0 * b0 + h1 * b1 + h2 * b2 + h3 * b3 - dw;
+    const nc = h0 * c0 + h1 * c1 + h2 * c2 + h3 * c3 - dz;
+    a3 = a2;
+    a2 = a1;
+    a1 = a0;
+    a0 = na;
+    b3 = b2;
+    b2 = b1;
+    b1 = b0;
+    b0 = nb;
+    c3 = c2;
+    c2 = c1;
+    c1 = c0;
+    c0 = nc;
+  }
+  // Every entry written on every call (φ has four at least), so the stores always carry type feedback.
+  const dphi = out.phi;
+  const p = Math.min(arLength, ws.r);
+  dphi[0] = p > 0 ? d0 : 0;
+  dphi[1] = p > 1 ? d1 : 0;
+  dphi[2] = p > 2 ? d2 : 0;
+  dphi[3] = p > 3 ? d3 : 0;
 }

@@ -2,7 +2,8 @@
 // filterAdjoint.ts, profileLikelihood.ts) against central differences of the likelihood itself
 // (the usual gradient check; common practice), on the Nottingham temperatures (monthly,
 // test/fixtures/seasonal-models/, provenance in test/fixtures/README.md) with harmonic columns
-// and seasonal factors, at points away from any optimum.
+// and seasonal factors, and on the Lake Huron levels without them, at points away from any
+// optimum.
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import type { Estimation, TrendModelKind } from '../../src/base/settings.js';
@@ -42,8 +43,38 @@ describe('the adjoint gradient', () => {
     }
   });
 
-  it('declines where it does not apply: the scalar column pass of a small plain model', () => {
-    const design = trendDesign('deterministic', w);
+  // The backward pass on scalars (state dimension ≤ 4, at most three columns), on the Lake Huron
+  // levels (test/fixtures/lake-huron.csv, provenance in test/fixtures/README.md).
+  const huron = Float64Array.from(readFileSync(new URL('../fixtures/lake-huron.csv', import.meta.url), 'utf8').trim().split('\n').slice(1), (line) => Number(line.split(',')[1]));
+  const PLAIN: [TrendModelKind, number, number, Estimation][] = [
+    ['deterministic', 1, 0, 'ml'],
+    ['deterministic', 2, 1, 'reml'],
+    ['deterministic', 3, 3, 'ml'],
+    ['stochastic', 0, 2, 'ml'],
+    ['stochastic', 1, 2, 'reml'],
+    ['stochastic', 3, 0, 'ml'],
+  ];
+  it.each(PLAIN)('%s model on Lake Huron, (%i,%i), %s: the scalar pass matches central differences', (kind, p, q, estimation) => {
+    const design = trendDesign(kind, huron);
+    const likelihood = createProfileLikelihood(olsFit(design.response, design.regressors).residuals, design.regressors, p, q, { estimation });
+    const x = Float64Array.from({ length: p + q }, (_, i) => 0.3 * Math.sin(i + 1));
+    likelihood.atUnconstrained(x);
+    const gradient = new Float64Array(p + q);
+    expect(likelihood.gradientAtUnconstrained(x, gradient)).toBe(true);
+    for (let j = 0; j < p + q; j++) {
+      const up = Float64Array.from(x);
+      const down = Float64Array.from(x);
+      up[j] += 1e-5;
+      down[j] -= 1e-5;
+      const central = (likelihood.atUnconstrained(up) - likelihood.atUnconstrained(down)) / 2e-5;
+      expect(Math.abs(gradient[j] - central)).toBeLessThan(1e-5 * Math.max(1, Math.abs(central)));
+    }
+  });
+
+  it('declines where it does not apply: a series with missing values', () => {
+    const gappy = huron.slice();
+    gappy[40] = Number.NaN;
+    const design = trendDesign('deterministic', gappy);
     const likelihood = createProfileLikelihood(olsFit(design.response, design.regressors).residuals, design.regressors, 1, 1);
     const x = Float64Array.from([0.2, -0.1]);
     likelihood.atUnconstrained(x);
