@@ -3,8 +3,7 @@
 // the full (exact ML) one, or the restricted one that REML maximises. With a seasonal part,
 // η follows the multiplicative ARMA of seasonalArma.ts and the filter runs its expansion.
 import { createWorkspace, profileLoglik, restrictedLoglik, runFilter, setArma } from '../statespace/kalmanFilter.js';
-import { createAdjointScratch, createSensitivities, filterSensitivities } from '../statespace/filterAdjoint.js';
-import { runChandrasekhar } from '../statespace/filterRecursions.js';
+import { createAdjointScratch, createGainScratch, createSensitivities, filterSensitivities, gainRecursionAdjoint } from '../statespace/filterAdjoint.js';
 import { stateDimension } from '../statespace/armaStateSpace.js';
 import { isStationary } from './constraints.js';
 import { type FilterWorkspace, type WorkspaceOptions } from '../statespace/filterWorkspace.js';
@@ -110,38 +109,16 @@ export function createProfileLikelihood(
   // The adjoint route needs the Chandrasekhar run of a complete series.
   const adjoint =
     workspace.complete && workspace.gaps === undefined
-      ? { gainRun: createWorkspace(workspace.r, [y]), sensitivities: createSensitivities(workspace.stride, workspace.n), scratch: createAdjointScratch(workspace.r, workspace.ncol, workspace.n) }
+      ? {
+          shiftedRun: createWorkspace(workspace.r, [y]),
+          sensitivities: createSensitivities(workspace.stride, workspace.n),
+          scratch: createAdjointScratch(workspace.r, workspace.ncol, workspace.n),
+          gainScratch: createGainScratch(workspace.r, workspace.n),
+          phiBar: new Float64Array(workspace.stride),
+          columnBar: new Float64Array(workspace.r),
+        }
       : undefined;
   if (adjoint !== undefined) evaluatedAt = new Float64Array(parameterCount(order)).fill(Number.NaN);
-  /**
-   * Σ of the sensitivities times the change in the data-free quantities (coefficients, gains,
-   * variances) from the workspace's run to `shifted`'s: term by term up to the later of the two
-   * steady points, then the settled change times the sensitivities' sum over the rest.
-   */
-  const directional = (shifted: FilterWorkspace, shiftedSteady: number): number => {
-    const { sensitivities } = adjoint as NonNullable<typeof adjoint>;
-    const { r, stride } = workspace;
-    const baseSteady = workspace.steadyFrom;
-    const base = workspace;
-    let total = 0;
-    for (let i = 0; i < r; i++) total += sensitivities.phi[i] * (shifted.phi[i] - base.phi[i]);
-    const settled = Math.max(baseSteady, shiftedSteady);
-    for (let t = 0; t < settled; t++) {
-      const baseRow = (t < baseSteady ? t : baseSteady) * stride;
-      const shiftedRow = (t < shiftedSteady ? t : shiftedSteady) * stride;
-      const at = t * stride;
-      for (let i = 0; i < r; i++) total += sensitivities.gains[at + i] * (shifted.gains[shiftedRow + i] - base.gains[baseRow + i]);
-      total += sensitivities.variances[t] * (shifted.variances[t] - base.variances[t]);
-    }
-    if (settled < workspace.n) {
-      const baseRow = baseSteady * stride;
-      const shiftedRow = shiftedSteady * stride;
-      const at = settled * stride;
-      for (let i = 0; i < r; i++) total += sensitivities.gainsFrom[at + i] * (shifted.gains[shiftedRow + i] - base.gains[baseRow + i]);
-      total += sensitivities.variancesFrom[settled] * (shifted.variances[settled] - base.variances[settled]);
-    }
-    return total;
-  };
   return {
     p: process.p,
     q: process.q,
@@ -169,18 +146,23 @@ export function createProfileLikelihood(
       for (let j = 0; j < x.length; j++) if (evaluatedAt?.[j] !== x[j]) same = false;
       if (!same && !Number.isFinite(atUnconstrained(x))) return false;
       if (!(workspace.steadyFrom >= 0)) return false;
-      filterSensitivities(workspace, columns, estimation, process.p, adjoint.scratch, adjoint.sensitivities);
+      const { sensitivities, phiBar, columnBar, shiftedRun } = adjoint;
+      filterSensitivities(workspace, columns, estimation, process.p, adjoint.scratch, sensitivities);
+      phiBar.set(sensitivities.phi);
+      gainRecursionAdjoint(workspace, sensitivities, adjoint.gainScratch, phiBar, columnBar);
+      // ℓ depends on the parameters only through φ and the first column of the stationary P:
+      // each parameter's derivative is their change, by forward differences, times the sensitivities.
+      const { r } = workspace;
       const shifted = Float64Array.from(x);
-      const { gainRun } = adjoint;
       for (let j = 0; j < x.length; j++) {
         const h = 1e-7 * Math.max(1, Math.abs(x[j]));
         shifted[j] = x[j] + h;
         fill(shifted);
         shifted[j] = x[j];
-        if (!setArma(gainRun, ar, process.p, ma, process.q, true)) return false;
-        const steadyFrom = runChandrasekhar(gainRun);
-        if (steadyFrom < 0) return false;
-        out[j] = directional(gainRun, steadyFrom) / h;
+        if (!setArma(shiftedRun, ar, process.p, ma, process.q, true)) return false;
+        let change = 0;
+        for (let i = 0; i < r; i++) change += phiBar[i] * (shiftedRun.phi[i] - workspace.phi[i]) + columnBar[i] * (shiftedRun.pmat[i * r] - workspace.pmat[i * r]);
+        out[j] = change / h;
       }
       // `ar` and `ma` back at x, as after an evaluation there.
       fill(x);

@@ -308,3 +308,150 @@ function backwardScalar(ws: FilterWorkspace, columns: readonly Float64Array[], e
   dphi[2] = p > 2 ? d2 : 0;
   dphi[3] = p > 3 ? d3 : 0;
 }
+
+/** Scratch for `gainRecursionAdjoint`: the recursion's states up to the steady point, and adjoints. */
+export interface GainScratch {
+  f: Float64Array;
+  m: Float64Array;
+  k: Float64Array;
+  w: Float64Array;
+  tw: Float64Array;
+  kBar: Float64Array;
+  wBar: Float64Array;
+  twBar: Float64Array;
+}
+
+export function createGainScratch(r: number, n: number): GainScratch {
+  return {
+    f: new Float64Array(n + 1),
+    m: new Float64Array(n + 1),
+    k: new Float64Array((n + 1) * r),
+    w: new Float64Array((n + 1) * r),
+    tw: new Float64Array(r),
+    kBar: new Float64Array(r),
+    wBar: new Float64Array(r),
+    twBar: new Float64Array(r),
+  };
+}
+
+/**
+ * Reverse mode through the Chandrasekhar recursions (filterRecursions.ts) of the workspace's last
+ * run: from `sens`, the sensitivities of ℓ to F_t and the gains g_t = K_t / F_t (and their sums
+ * from the steady point on, which apply to the settled state), adds ∂ℓ/∂φ_i through the gains to
+ * `phiBar` and writes ∂ℓ/∂P_1[i,0] (the stationary covariance's first column, which is all of
+ * the start the recursions read) into `columnBar`. With them the gradient in any parameter needs
+ * only that parameter's change in φ and in the first column, not a rerun of the recursions.
+ * The recursion, per step, from (F, K, w, m):
+ *   F' = F + m (w₀)²,  Tw_i = φ_i w₀ + w_{i+1},  K'_i = K_i + m w₀ Tw_i,
+ *   w'_i = Tw_i − K'_i w₀ / F',  m' = m + m² (w₀)² / F,
+ * from F = P[0,0], K_i = φ_i P[0,0] + P[i+1,0], w = K, m = −1/F; its adjoint below is the
+ * chain rule applied to these lines in reverse (Griewank & Walther 2008, ch. 3).
+ */
+export function gainRecursionAdjoint(ws: FilterWorkspace, sens: FilterSensitivities, scratch: GainScratch, phiBar: Float64Array, columnBar: Float64Array): void {
+  const { r, stride, phi, pmat, steadyFrom, n } = ws;
+  const { f: fs, m: ms, k: ks, w: wsr, tw, kBar, wBar, twBar } = scratch;
+  // Forward again, keeping every state: the same operations as the run, so the same values.
+  let f = pmat[0];
+  for (let i = 0; i < r; i++) {
+    const k = phi[i] * pmat[0] + (i + 1 < r ? pmat[(i + 1) * r] : 0);
+    ks[i] = k;
+    wsr[i] = k;
+  }
+  let m = -1 / f;
+  fs[0] = f;
+  ms[0] = m;
+  for (let t = 0; t < steadyFrom; t++) {
+    const at = t * r;
+    const next = at + r;
+    const zw = wsr[at];
+    const nextF = f + m * zw * zw;
+    for (let i = 0; i < r; i++) {
+      const value = phi[i] * zw + (i + 1 < r ? wsr[at + i + 1] : 0);
+      tw[i] = value;
+      ks[next + i] = ks[at + i] + m * zw * value;
+    }
+    for (let i = 0; i < r; i++) wsr[next + i] = tw[i] - (ks[next + i] * zw) / nextF;
+    m += (m * m * zw * zw) / f;
+    f = nextF;
+    fs[t + 1] = f;
+    ms[t + 1] = m;
+  }
+  // The adjoint of the state at the steady point: its outputs serve every t from there on.
+  let fBar = 0;
+  let mBar = 0;
+  kBar.fill(0);
+  wBar.fill(0);
+  if (steadyFrom < n) {
+    const at = steadyFrom * r;
+    const invF = 1 / fs[steadyFrom];
+    let fromGains = 0;
+    for (let i = 0; i < r; i++) {
+      const weight = sens.gainsFrom[steadyFrom * stride + i];
+      kBar[i] = weight * invF;
+      fromGains += weight * ks[at + i];
+    }
+    fBar = sens.variancesFrom[steadyFrom] - fromGains * invF * invF;
+  }
+  for (let t = steadyFrom - 1; t >= 0; t--) {
+    const at = t * r;
+    const next = at + r;
+    const fPrev = fs[t];
+    const mPrev = ms[t];
+    const zw = wsr[at];
+    const nextF = fs[t + 1];
+    for (let i = 0; i < r; i++) tw[i] = phi[i] * zw + (i + 1 < r ? wsr[at + i + 1] : 0);
+    // m' = m + m² w₀² / F: the part of m̄ and F̄ that comes through m'.
+    const mNextBar = mBar;
+    mBar = mNextBar * (1 + (2 * mPrev * zw * zw) / fPrev);
+    let zwBar = (mNextBar * 2 * mPrev * mPrev * zw) / fPrev;
+    let prevFBar = (-mNextBar * mPrev * mPrev * zw * zw) / (fPrev * fPrev);
+    // w'_i = Tw_i − K'_i c, c = w₀ / F'.
+    const c = zw / nextF;
+    let cBar = 0;
+    for (let i = 0; i < r; i++) {
+      twBar[i] = wBar[i];
+      cBar -= ks[next + i] * wBar[i];
+      kBar[i] -= c * wBar[i];
+    }
+    zwBar += cBar / nextF;
+    const nextFBar = fBar - (cBar * zw) / (nextF * nextF);
+    // K'_i = K_i + m w₀ Tw_i (K̄_i carries over as it is).
+    for (let i = 0; i < r; i++) {
+      mBar += kBar[i] * zw * tw[i];
+      zwBar += kBar[i] * mPrev * tw[i];
+      twBar[i] += kBar[i] * mPrev * zw;
+    }
+    // Tw_i = φ_i w₀ + w_{i+1}.
+    wBar.fill(0);
+    for (let i = 0; i < r; i++) {
+      phiBar[i] += twBar[i] * zw;
+      zwBar += twBar[i] * phi[i];
+      if (i + 1 < r) wBar[i + 1] += twBar[i];
+    }
+    // F' = F + m w₀².
+    prevFBar += nextFBar;
+    mBar += nextFBar * zw * zw;
+    zwBar += nextFBar * 2 * mPrev * zw;
+    wBar[0] += zwBar;
+    // The outputs at t: F_t and g_t = K_t / F_t.
+    const invF = 1 / fPrev;
+    let fromGains = 0;
+    for (let i = 0; i < r; i++) {
+      const weight = sens.gains[t * stride + i];
+      kBar[i] += weight * invF;
+      fromGains += weight * ks[at + i];
+    }
+    fBar = prevFBar + sens.variances[t] - fromGains * invF * invF;
+  }
+  // The start: w = K, m = −1/F, F = P[0,0], K_i = φ_i P[0,0] + P[i+1,0].
+  for (let i = 0; i < r; i++) kBar[i] += wBar[i];
+  fBar += mBar / (fs[0] * fs[0]);
+  columnBar.fill(0);
+  let p00Bar = fBar;
+  for (let i = 0; i < r; i++) {
+    phiBar[i] += kBar[i] * pmat[0];
+    p00Bar += kBar[i] * phi[i];
+    if (i + 1 < r) columnBar[i + 1] += kBar[i];
+  }
+  columnBar[0] += p00Bar;
+}
