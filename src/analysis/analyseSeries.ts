@@ -67,7 +67,7 @@ export async function analyseSeries(series: Series, settings: AnalysisSettings, 
     P: model.fit.order.P,
     Q: model.fit.order.Q,
     estimation: model.fit.estimation,
-    ...(model.seasonal === null ? {} : { seasonal: { design: model.design, fit: model.fit }, windows: model.windows }),
+    ...(model.seasonal === null ? { fit: model.fit } : { seasonal: { design: model.design, fit: model.fit }, windows: model.windows }),
   });
   const evidence = collectEvidence(
     w,

@@ -9,6 +9,7 @@ import { kpssTest } from './kpssTest.js';
 import { residualChecks, type ResidualChecks } from './residualChecks.js';
 import { seasonalEvidence, type SeasonalEvidenceOptions, type SeasonalEvidenceRecord } from './seasonalEvidence.js';
 import { breakTestSummary, evidenceNotes } from './messages.js';
+import type { RegressionArmaFit } from '../models/fitRegressionArma.js';
 import { seasonalTrendStability, trendStability, type ModelWindows, type SeasonalTrendFit } from './trendStability.js';
 import { trendVerdict } from './trendVerdict.js';
 import type { AdfResult, KpssLagRule, KpssResult, StabilityRecord, TrendVerdictKind } from './types.js';
@@ -54,6 +55,8 @@ export interface FittedResiduals {
   estimation?: Estimation;
   /** A model with a seasonal part: its design and fit, which the trend-stability checks keep whole. */
   seasonal?: SeasonalTrendFit;
+  /** A model without one: its fit to the whole series, which the trend-stability checks start from. */
+  fit?: RegressionArmaFit;
   /** Its stability windows, if computed ahead (`seasonalModelWindows`). */
   windows?: ModelWindows;
 }
@@ -110,10 +113,14 @@ export function collectEvidence(
       const stability =
         deterministic !== undefined && stochastic !== undefined
           ? seasonalTrendStability(w, { deterministic, stochastic }, { deterministic: fits.deterministic.windows, stochastic: fits.stochastic.windows })
-          : trendStability(w, {
-              deterministic: { p: fits.deterministic.p, q: fits.deterministic.q, estimation: fits.deterministic.estimation },
-              stochastic: { p: fits.stochastic.p, q: fits.stochastic.q, estimation: fits.stochastic.estimation },
-            });
+          : trendStability(
+              w,
+              {
+                deterministic: { p: fits.deterministic.p, q: fits.deterministic.q, estimation: fits.deterministic.estimation },
+                stochastic: { p: fits.stochastic.p, q: fits.stochastic.q, estimation: fits.stochastic.estimation },
+              },
+              { deterministic: fits.deterministic.fit, stochastic: fits.stochastic.fit },
+            );
       const periodOf = options.periodOf;
       if (periodOf === undefined) return stability;
       for (const kind of ['deterministic', 'stochastic'] as const) {

@@ -29,9 +29,12 @@ export interface StabilityOrders {
 
 /**
  * Expanding-window slope and drift, and a break test for each model, at fixed ARMA orders,
- * estimated as the models were (exact ML unless an order says REML).
+ * estimated as the models were (exact ML unless an order says REML). `given`: a model's fit to
+ * the whole of w at those orders (the order search's own), which then serves as the full-sample
+ * window and the break test's whitening instead of a refit, so the checks describe the model the
+ * memo reports and its windows start from that optimum.
  */
-export function trendStability(w: ArrayLike<number>, orders: StabilityOrders): StabilityRecord {
+export function trendStability(w: ArrayLike<number>, orders: StabilityOrders, given: Partial<Record<TrendModelKind, RegressionArmaFit>> = {}): StabilityRecord {
   const series = finiteSeries(w, 'trendStability');
   const n = series.length;
   let fewest = 0;
@@ -47,7 +50,10 @@ export function trendStability(w: ArrayLike<number>, orders: StabilityOrders): S
   const schedule = expandingWindowSchedule(n, fewest);
   const fitted = (kind: TrendModelKind): { fit: RegressionArmaFit; test: BreakTestResult } => {
     const design = trendDesign(kind, series);
-    const fit = fitRegressionArma(design.response, design.regressors, orders[kind].p, orders[kind].q, { estimation: orders[kind].estimation });
+    const { p, q, estimation = 'ml' } = orders[kind];
+    const own = given[kind];
+    const usable = own !== undefined && own.order.p === p && own.order.q === q && own.order.P + own.order.Q === 0 && own.estimation === estimation && own.residuals.length === design.response.length;
+    const fit = usable ? own : fitRegressionArma(design.response, design.regressors, p, q, { estimation });
     return { fit, test: trendBreakTest(kind, design, fit) };
   };
   const deterministic = fitted('deterministic');

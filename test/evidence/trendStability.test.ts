@@ -50,6 +50,17 @@ describe('trendStability on a seeded trend-stationary AR(1) series, n = 120', ()
     expectRelative(lastDrift?.se ?? Number.NaN, stochastic.stderr.regression.drift, 1e-12);
   });
 
+  it('takes a given full-sample fit at the same orders as it is, and refits one of other orders', () => {
+    const deterministic = fitTrendModelAtOrder('deterministic', w, 1, 0, { estimation: 'ml' });
+    // A copy whose slope is marked, to see which fit the full-sample window reports.
+    const marked = { ...deterministic.fit, beta: Float64Array.from(deterministic.fit.beta, (b, i) => (i === 1 ? b + 1 : b)) };
+    const given = trendStability(w, ORDERS, { deterministic: marked });
+    expect(given.windows.deterministic.at(-1)?.slope).toBe(marked.beta[1]);
+    expect(given.windows.stochastic).toEqual(record.windows.stochastic);
+    const other = fitTrendModelAtOrder('deterministic', w, 2, 0, { estimation: 'ml' });
+    expect(trendStability(w, ORDERS, { deterministic: other.fit }).windows.deterministic).toEqual(record.windows.deterministic);
+  });
+
   it('each window agrees with a fit at the same orders on the first `end` observations', () => {
     const window = record.windows.deterministic[5];
     const fit = fitTrendModelAtOrder('deterministic', w.slice(0, window.end), 1, 0, { estimation: 'ml' });
