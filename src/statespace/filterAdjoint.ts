@@ -30,16 +30,16 @@ export interface FilterSensitivities {
   /** ∂ℓ/∂F_t. */
   variances: Float64Array;
   /**
-   * Σ_{s ≥ t} of `gains` at [t·stride + i] and of `variances` at [t], for t ≤ n (zero at n): what
-   * a run that has settled by time t contributes from there on, in one product.
+   * Σ_{t ≥ steady point} of `gains` (stride entries) and of `variances`: the sensitivity to the
+   * settled gain and variance, which every time from the filter's steady point on uses.
    */
-  gainsFrom: Float64Array;
-  variancesFrom: Float64Array;
+  settledGains: Float64Array;
+  settledVariance: number;
 }
 
 /** Sensitivities for a workspace with the given stride (its gain rows' length) and n. */
 export function createSensitivities(stride: number, n: number): FilterSensitivities {
-  return { phi: new Float64Array(stride), gains: new Float64Array(n * stride), variances: new Float64Array(n), gainsFrom: new Float64Array((n + 1) * stride), variancesFrom: new Float64Array(n + 1) };
+  return { phi: new Float64Array(stride), gains: new Float64Array(n * stride), variances: new Float64Array(n), settledGains: new Float64Array(stride), settledVariance: 0 };
 }
 
 /** Scratch for `filterSensitivities`: the adjoint ring, per-column terms and G⁻¹. */
@@ -85,13 +85,12 @@ export function filterSensitivities(ws: FilterWorkspace, columns: readonly Float
   }
   directSensitivities(ws, estimation, scratch, out);
   backwardGeneric(ws, columns, arLength, scratch, out);
-  const { n, stride } = ws;
-  out.gainsFrom.fill(0, n * stride, (n + 1) * stride);
-  out.variancesFrom[n] = 0;
-  for (let t = n - 1; t >= 0; t--) {
-    const at = t * stride;
-    for (let i = 0; i < stride; i++) out.gainsFrom[at + i] = out.gainsFrom[at + stride + i] + out.gains[at + i];
-    out.variancesFrom[t] = out.variancesFrom[t + 1] + out.variances[t];
+  const { n, stride, steadyFrom } = ws;
+  out.settledGains.fill(0);
+  out.settledVariance = 0;
+  for (let t = steadyFrom; t < n; t++) {
+    for (let i = 0; i < stride; i++) out.settledGains[i] += out.gains[t * stride + i];
+    out.settledVariance += out.variances[t];
   }
 }
 
@@ -206,8 +205,8 @@ function backwardGeneric(ws: FilterWorkspace, columns: readonly Float64Array[], 
 /**
  * The same for state dimensions up to four and at most three columns, in one backward sweep
  * on scalars: the direct terms, λ of each column in four locals (y, x1, x2; an absent column's
- * innovations and λ stay 0) as the forward pass keeps its states, and the running sums from
- * the end. Rows at or beyond r only ever meet φ_i = g_i = 0. `inverse`: G⁻¹ for REML.
+ * innovations and λ stay 0) as the forward pass keeps its states, and the sums from the steady
+ * point on. Rows at or beyond r only ever meet φ_i = g_i = 0. `inverse`: G⁻¹ for REML.
  */
 function backwardScalar(ws: FilterWorkspace, columns: readonly Float64Array[], estimation: Estimation, arLength: number, inverse: Float64Array, out: FilterSensitivities): void {
   const { n, ncol, phi, gains, weights, innovations: v, gramRhs: beta, steadyFrom } = ws;
@@ -226,15 +225,13 @@ function backwardScalar(ws: FilterWorkspace, columns: readonly Float64Array[], e
   const i12 = reml && k > 1 ? inverse[1] : 0;
   const i22 = reml && k > 1 ? inverse[3] : 0;
   const f0 = phi[0], f1 = phi[1], f2 = phi[2], f3 = phi[3];
-  // λ_{t+1}: a* for y, b* for x1, c* for x2; d*: ∂ℓ/∂φ; s*, sv: the sums from t + 1 on.
+  // λ_{t+1}: a* for y, b* for x1, c* for x2; d*: ∂ℓ/∂φ; s*, sv: the sums from the steady point on.
   let a0 = 0, a1 = 0, a2 = 0, a3 = 0;
   let b0 = 0, b1 = 0, b2 = 0, b3 = 0;
   let c0 = 0, c1 = 0, c2 = 0, c3 = 0;
   let d0 = 0, d1 = 0, d2 = 0, d3 = 0;
   let s0 = 0, s1 = 0, s2 = 0, s3 = 0, sv = 0;
-  const { gains: dgains, variances: dvariances, gainsFrom, variancesFrom } = out;
-  gainsFrom.fill(0, n * SCALAR_STATE, (n + 1) * SCALAR_STATE);
-  variancesFrom[n] = 0;
+  const { gains: dgains, variances: dvariances } = out;
   for (let t = n - 1; t >= 0; t--) {
     const row = (t < steadyFrom ? t : steadyFrom) * SCALAR_STATE;
     const g0 = gains[row], g1 = gains[row + 1], g2 = gains[row + 2], g3 = gains[row + 3];
@@ -265,16 +262,13 @@ function backwardScalar(ws: FilterWorkspace, columns: readonly Float64Array[], e
     dgains[at + 2] = e2;
     dgains[at + 3] = e3;
     dvariances[t] = dF;
-    s0 += e0;
-    s1 += e1;
-    s2 += e2;
-    s3 += e3;
-    sv += dF;
-    gainsFrom[at] = s0;
-    gainsFrom[at + 1] = s1;
-    gainsFrom[at + 2] = s2;
-    gainsFrom[at + 3] = s3;
-    variancesFrom[t] = sv;
+    if (t >= steadyFrom) {
+      s0 += e0;
+      s1 += e1;
+      s2 += e2;
+      s3 += e3;
+      sv += dF;
+    }
     const pu = y[t] - u;
     const pw = x1[t] - w;
     const pz = x2[t] - z;
@@ -300,6 +294,12 @@ function backwardScalar(ws: FilterWorkspace, columns: readonly Float64Array[], e
     c1 = c0;
     c0 = nc;
   }
+  const settled = out.settledGains;
+  settled[0] = s0;
+  settled[1] = s1;
+  settled[2] = s2;
+  settled[3] = s3;
+  out.settledVariance = sv;
   // Every entry written on every call (φ has four at least), so the stores always carry type feedback.
   const dphi = out.phi;
   const p = Math.min(arLength, ws.r);
@@ -386,11 +386,11 @@ export function gainRecursionAdjoint(ws: FilterWorkspace, sens: FilterSensitivit
     const invF = 1 / fs[steadyFrom];
     let fromGains = 0;
     for (let i = 0; i < r; i++) {
-      const weight = sens.gainsFrom[steadyFrom * stride + i];
+      const weight = sens.settledGains[i];
       kBar[i] = weight * invF;
       fromGains += weight * ks[at + i];
     }
-    fBar = sens.variancesFrom[steadyFrom] - fromGains * invF * invF;
+    fBar = sens.settledVariance - fromGains * invF * invF;
   }
   for (let t = steadyFrom - 1; t >= 0; t--) {
     const at = t * r;
