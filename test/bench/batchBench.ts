@@ -53,7 +53,7 @@ export function batchBench(): BenchRow[] {
   try {
     const configs = writeBatch(root);
     const html = timeChild(['run', ...configs, '--quiet'], root);
-    rows.push({ name: '100-series batch, 10 configs, HTML', ms: html.ms, target: 60_000, extra: { 'peak MB': html.peakMb, 'target MB': 500 } });
+    rows.push({ name: '100-series batch, 10 configs, HTML', ms: html.ms, target: 25_000, extra: { 'peak MB': html.peakMb, 'target MB': 400 } });
     const pdf = timeChild(['run', ...configs, '--formats', 'html,pdf', '--quiet'], root);
     rows.push({ name: '100-series batch, 10 configs, HTML + PDF', ms: pdf.ms, extra: { 'peak MB': pdf.peakMb } });
   } finally {
