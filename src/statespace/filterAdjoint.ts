@@ -176,7 +176,7 @@ function backwardGeneric(ws: FilterWorkspace, columns: readonly Float64Array[], 
       const g = gains[row + i];
       const f = phi[i];
       let dg = 0;
-      if (i < arLength) {
+      if (i < arLength && f !== 0) {
         let dphi = 0;
         for (let c = 0; c < ncol; c++) {
           const lambda = ring[base + c];
@@ -184,6 +184,16 @@ function backwardGeneric(ws: FilterWorkspace, columns: readonly Float64Array[], 
           dphi += lambda * predicted[c];
           column[c] += g * lambda;
           shifted[c] += f * lambda;
+        }
+        out.phi[i] += dphi;
+      } else if (i < arLength) {
+        // φ_i = 0 adds nothing to λ (±0 · λ leaves the sums as they are), but ∂ℓ/∂φ_i still counts.
+        let dphi = 0;
+        for (let c = 0; c < ncol; c++) {
+          const lambda = ring[base + c];
+          dg += lambda * innovation[c];
+          dphi += lambda * predicted[c];
+          column[c] += g * lambda;
         }
         out.phi[i] += dphi;
       } else {

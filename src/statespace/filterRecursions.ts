@@ -323,8 +323,13 @@ export function filterColumnsGeneric(ws: FilterWorkspace, columns: readonly Floa
       const base = physical * ncol;
       const g = gains[row + i];
       const f = phi[i];
-      // In the order of the one-column recursion, φ_i a_0 + a_{i+1} + g_i v, so the sums round alike.
-      for (let c = 0; c < ncol; c++) ring[base + c] = f * scratch[c] + ring[base + c] + g * scratch[ncol + c];
+      if (f !== 0) {
+        // In the order of the one-column recursion, φ_i a_0 + a_{i+1} + g_i v, so the sums round alike.
+        for (let c = 0; c < ncol; c++) ring[base + c] = f * scratch[c] + ring[base + c] + g * scratch[ncol + c];
+      } else {
+        // A zero coefficient (most of a seasonal model's expanded ones): the same sums, as ±0 + x = x.
+        for (let c = 0; c < ncol; c++) ring[base + c] = ring[base + c] + g * scratch[ncol + c];
+      }
     }
     // The old first row becomes the last: nothing shifts into it.
     const g = gains[row + r - 1];
