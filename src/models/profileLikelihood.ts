@@ -57,8 +57,9 @@ export interface ProfileLikelihood {
   /** Log-likelihood at unconstrained parameters in the same layout. */
   atUnconstrained(x: ArrayLike<number>): number;
   /**
-   * The gradient of `atUnconstrained` at x into `out`, by the filter's adjoint (filterAdjoint.ts)
-   * and forward differences of the data-free part alone; false where that route does not apply
+   * The gradient of `atUnconstrained` at x into `out`, by the filter's adjoint (filterAdjoint.ts:
+   * the columns, then the gain recursion) and forward differences of what the parameters move,
+   * φ and the stationary covariance's first column; false where that route does not apply
    * (missing values), and the caller differences the whole likelihood instead.
    */
   gradientAtUnconstrained(x: Float64Array, out: Float64Array): boolean;
