@@ -2,9 +2,11 @@
 // reads: the AR coefficients φ (the transition T), the gains g_t = K_t / F_t and the
 // innovation variances F_t, by one backward (adjoint) pass over the columns, reverse-mode
 // differentiation of the filter (Griewank & Walther 2008, ch. 3, for the method; the
-// recursions below are ours). With them the gradient in any parameter costs only a rerun of
-// the data-free part (the stationary start and the gain recursion, a few percent of an
-// evaluation) instead of a whole evaluation per parameter (profileLikelihood.ts).
+// recursions below are ours); then a second backward pass through the gain recursion
+// (`gainRecursionAdjoint`) carries the gains' and variances' sensitivities back to φ and to the
+// stationary covariance's first column. The gradient in any parameter then costs only that
+// parameter's change in those two (a stationary-moment solve), not an evaluation
+// (profileLikelihood.ts).
 //
 // After `runFilter` on a complete series (the Chandrasekhar path), with β̂ in ws.gramRhs:
 //   ML:   ℓ = −½ m (log 2π + 1 + log(S/m)) − ½ Σ log F_t,        S = Σ_t e_t² / F_t,
