@@ -26,7 +26,7 @@ export async function backtestBench(): Promise<BenchRow[]> {
   const nile = readSeriesCsv(new URL('../fixtures/nile.csv', import.meta.url).pathname, { missing: 'error' });
   const settings = resolveSettings({ max_p: 3, max_q: 3, backtest: { refit: 'reselect', origins: 20, horizon: 5 } }, nile);
   const threads = Math.min(availableParallelism(), settings.backtest.origins);
-  const pooled = await timeAsync(() => runBacktest(nile, settings), REPEATS);
+  const pooled = await timeAsync(() => runBacktest(nile, settings, { threads }), REPEATS);
   const inline = await timeAsync(() => runBacktest(nile, settings, { threads: 1 }), REPEATS);
   const pool = openOriginPool(threads);
   const warm = await timeAsync(() => runBacktest(nile, settings, { pool }), REPEATS);
