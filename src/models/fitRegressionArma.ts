@@ -33,8 +33,10 @@ const SEASONAL_HEAT_ITERATIONS = 4;
  * time. Heats of 4 or 6 iterations instead of 8 lost an optimum (0.97 units). Seasonal searches
  * keep one: their start set was tuned against exhaustive references (seasonalSearch.ts).
  */
-const PLAIN_FINALISTS = 2;
-const SECOND_FINALIST_FROM = 4;
+function finalistCount(seasonalFit: boolean, parameters: number): number {
+  return !seasonalFit && parameters >= 4 ? 2 : 1;
+}
+
 /**
  * Plain fits take the adjoint gradient from this many parameters (p + q) on. Below, forward
  * differences cost about as much per gradient or less (Lake Huron, in evaluations: 1.4–1.8
@@ -43,7 +45,6 @@ const SECOND_FINALIST_FROM = 4;
  * grids.
  */
 const ADJOINT_FROM = 3;
-const SEASONAL_FINALISTS = 1;
 
 export interface RegressionArmaFit {
   /**
@@ -147,7 +148,7 @@ export function fitRegressionArma(
     evaluations += result.evaluations;
     return result;
   });
-  const finalists = [...heats.slice(0, baseStarts), ...heats.slice(baseStarts).sort((a, b) => a.value - b.value).slice(0, seasonalFit ? SEASONAL_FINALISTS : order.p + order.q >= SECOND_FINALIST_FROM ? PLAIN_FINALISTS : 1)];
+  const finalists = [...heats.slice(0, baseStarts), ...heats.slice(baseStarts).sort((a, b) => a.value - b.value).slice(0, finalistCount(seasonalFit, p + q))];
   let best: { x: Float64Array; value: number; converged: boolean } | undefined;
   for (const heat of finalists) {
     const result = heat.converged ? heat : minimizeBfgs(objective, heat.x, { gradient });

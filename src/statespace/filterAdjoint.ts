@@ -27,9 +27,12 @@ import { SCALAR_STATE } from './filterRecursions.js';
 export interface FilterSensitivities {
   /** ∂ℓ/∂φ_i, i < r (stride entries, 0 beyond r). */
   phi: Float64Array;
-  /** ∂ℓ/∂g_t[i] at [t·stride + i], the layout of the workspace's gains (i ≥ r unused). */
+  /**
+   * ∂ℓ/∂g_t[i] at [t·stride + i], the layout of the workspace's gains (i ≥ r unused), for t
+   * before the steady point; later times count only in `settledGains`.
+   */
   gains: Float64Array;
-  /** ∂ℓ/∂F_t. */
+  /** ∂ℓ/∂F_t, for t before the steady point; later times count only in `settledVariance`. */
   variances: Float64Array;
   /**
    * Σ_{t ≥ steady point} of `gains` (stride entries) and of `variances`: the sensitivity to the
@@ -61,7 +64,7 @@ export function createAdjointScratch(r: number, ncol: number, n: number): Adjoin
   const k = Math.max(1, ncol - 1);
   return {
     ring: new Float64Array(r * ncol),
-    direct: new Float64Array(Math.max(ncol, 3) * n),
+    direct: new Float64Array(ncol * n),
     column: new Float64Array(ncol),
     shifted: new Float64Array(ncol),
     innovation: new Float64Array(ncol),
@@ -178,18 +181,7 @@ function backwardGeneric(ws: FilterWorkspace, columns: readonly Float64Array[], 
       const g = gains[row + i];
       const f = phi[i];
       let dg = 0;
-      if (i < arLength && f !== 0) {
-        let dphi = 0;
-        for (let c = 0; c < ncol; c++) {
-          const lambda = ring[base + c];
-          dg += lambda * innovation[c];
-          dphi += lambda * predicted[c];
-          column[c] += g * lambda;
-          shifted[c] += f * lambda;
-        }
-        out.phi[i] += dphi;
-      } else if (i < arLength) {
-        // φ_i = 0 adds nothing to λ (±0 · λ leaves the sums as they are), but ∂ℓ/∂φ_i still counts.
+      if (i < arLength) {
         let dphi = 0;
         for (let c = 0; c < ncol; c++) {
           const lambda = ring[base + c];
@@ -205,6 +197,8 @@ function backwardGeneric(ws: FilterWorkspace, columns: readonly Float64Array[], 
           column[c] += g * lambda;
         }
       }
+      // φ_i = 0 (most of a seasonal model's expanded coefficients) adds nothing to λ: ±0 · λ leaves the sums as they are.
+      if (f !== 0) for (let c = 0; c < ncol; c++) shifted[c] += f * ring[base + c];
       out.gains[sensitivity + i] = dg;
     }
     // λ_t: rows shift down one (the head moves back), and the new row 0 takes the row that held logical r − 1.
@@ -269,17 +263,18 @@ function backwardScalar(ws: FilterWorkspace, columns: readonly Float64Array[], e
     const e1 = a1 * u + b1 * w + c1 * z;
     const e2 = a2 * u + b2 * w + c2 * z;
     const e3 = a3 * u + b3 * w + c3 * z;
-    dgains[at] = e0;
-    dgains[at + 1] = e1;
-    dgains[at + 2] = e2;
-    dgains[at + 3] = e3;
-    dvariances[t] = dF;
     if (t >= steadyFrom) {
       s0 += e0;
       s1 += e1;
       s2 += e2;
       s3 += e3;
       sv += dF;
+    } else {
+      dgains[at] = e0;
+      dgains[at + 1] = e1;
+      dgains[at + 2] = e2;
+      dgains[at + 3] = e3;
+      dvariances[t] = dF;
     }
     const pu = y[t] - u;
     const pw = x1[t] - w;
