@@ -322,10 +322,8 @@ export interface GainScratch {
   m: Float64Array;
   k: Float64Array;
   w: Float64Array;
-  tw: Float64Array;
   kBar: Float64Array;
   wBar: Float64Array;
-  twBar: Float64Array;
 }
 
 export function createGainScratch(r: number, n: number): GainScratch {
@@ -334,10 +332,8 @@ export function createGainScratch(r: number, n: number): GainScratch {
     m: new Float64Array(n + 1),
     k: new Float64Array((n + 1) * r),
     w: new Float64Array((n + 1) * r),
-    tw: new Float64Array(r),
     kBar: new Float64Array(r),
     wBar: new Float64Array(r),
-    twBar: new Float64Array(r),
   };
 }
 
@@ -356,11 +352,12 @@ export function createGainScratch(r: number, n: number): GainScratch {
  */
 export function gainRecursionAdjoint(ws: FilterWorkspace, sens: FilterSensitivities, scratch: GainScratch, phiBar: Float64Array, columnBar: Float64Array): void {
   const { r, stride, phi, pmat, steadyFrom, n } = ws;
-  const { f: fs, m: ms, k: ks, w: wsr, tw, kBar, wBar, twBar } = scratch;
+  const { f: fs, m: ms, k: ks, w: wsr, kBar, wBar } = scratch;
+  const last = r - 1;
   // Forward again, keeping every state: the same operations as the run, so the same values.
   let f = pmat[0];
   for (let i = 0; i < r; i++) {
-    const k = phi[i] * pmat[0] + (i + 1 < r ? pmat[(i + 1) * r] : 0);
+    const k = phi[i] * pmat[0] + (i < last ? pmat[(i + 1) * r] : 0);
     ks[i] = k;
     wsr[i] = k;
   }
@@ -373,11 +370,11 @@ export function gainRecursionAdjoint(ws: FilterWorkspace, sens: FilterSensitivit
     const zw = wsr[at];
     const nextF = f + m * zw * zw;
     for (let i = 0; i < r; i++) {
-      const value = phi[i] * zw + (i + 1 < r ? wsr[at + i + 1] : 0);
-      tw[i] = value;
-      ks[next + i] = ks[at + i] + m * zw * value;
+      const tw = phi[i] * zw + (i < last ? wsr[at + i + 1] : 0);
+      const k = ks[at + i] + m * zw * tw;
+      ks[next + i] = k;
+      wsr[next + i] = tw - (k * zw) / nextF;
     }
-    for (let i = 0; i < r; i++) wsr[next + i] = tw[i] - (ks[next + i] * zw) / nextF;
     m += (m * m * zw * zw) / f;
     f = nextF;
     fs[t + 1] = f;
@@ -399,6 +396,7 @@ export function gainRecursionAdjoint(ws: FilterWorkspace, sens: FilterSensitivit
     }
     fBar = sens.settledVariance - fromGains * invF * invF;
   }
+  const { gains, variances } = sens;
   for (let t = steadyFrom - 1; t >= 0; t--) {
     const at = t * r;
     const next = at + r;
@@ -406,49 +404,38 @@ export function gainRecursionAdjoint(ws: FilterWorkspace, sens: FilterSensitivit
     const mPrev = ms[t];
     const zw = wsr[at];
     const nextF = fs[t + 1];
-    for (let i = 0; i < r; i++) tw[i] = phi[i] * zw + (i + 1 < r ? wsr[at + i + 1] : 0);
-    // m' = m + m² w₀² / F: the part of m̄ and F̄ that comes through m'.
-    const mNextBar = mBar;
-    mBar = mNextBar * (1 + (2 * mPrev * zw * zw) / fPrev);
-    let zwBar = (mNextBar * 2 * mPrev * mPrev * zw) / fPrev;
-    let prevFBar = (-mNextBar * mPrev * mPrev * zw * zw) / (fPrev * fPrev);
-    // w'_i = Tw_i − K'_i c, c = w₀ / F'.
     const c = zw / nextF;
-    let cBar = 0;
-    for (let i = 0; i < r; i++) {
-      twBar[i] = wBar[i];
-      cBar -= ks[next + i] * wBar[i];
-      kBar[i] -= c * wBar[i];
-    }
-    zwBar += cBar / nextF;
-    const nextFBar = fBar - (cBar * zw) / (nextF * nextF);
-    // K'_i = K_i + m w₀ Tw_i (K̄_i carries over as it is).
-    for (let i = 0; i < r; i++) {
-      mBar += kBar[i] * zw * tw[i];
-      zwBar += kBar[i] * mPrev * tw[i];
-      twBar[i] += kBar[i] * mPrev * zw;
-    }
-    // Tw_i = φ_i w₀ + w_{i+1}.
-    wBar.fill(0);
-    for (let i = 0; i < r; i++) {
-      phiBar[i] += twBar[i] * zw;
-      zwBar += twBar[i] * phi[i];
-      if (i + 1 < r) wBar[i + 1] += twBar[i];
-    }
-    // F' = F + m w₀².
-    prevFBar += nextFBar;
-    mBar += nextFBar * zw * zw;
-    zwBar += nextFBar * 2 * mPrev * zw;
-    wBar[0] += zwBar;
-    // The outputs at t: F_t and g_t = K_t / F_t.
+    const mz = mPrev * zw;
     const invF = 1 / fPrev;
+    const row = t * stride;
+    // One pass over i, from the top so that w̄_{i+1} is read before it is overwritten, through
+    // the lines of the step in reverse: the outputs g_t = K_t / F_t; w'_i = Tw_i − K'_i c with
+    // c = w₀ / F'; K'_i = K_i + m w₀ Tw_i; Tw_i = φ_i w₀ + w_{i+1}. The scalar adjoints
+    // (through c, F', m' and w₀) are summed on the way and finished after it.
+    let cBar = 0;
+    let kTw = 0;
+    let twPhi = 0;
     let fromGains = 0;
-    for (let i = 0; i < r; i++) {
-      const weight = sens.gains[t * stride + i];
-      kBar[i] += weight * invF;
+    for (let i = last; i >= 0; i--) {
+      const wb = wBar[i];
+      cBar -= ks[next + i] * wb;
+      const kb = kBar[i] - c * wb;
+      const tw = phi[i] * zw + (i < last ? wsr[at + i + 1] : 0);
+      kTw += kb * tw;
+      const twb = wb + kb * mz;
+      phiBar[i] += twb * zw;
+      twPhi += twb * phi[i];
+      if (i < last) wBar[i + 1] = twb;
+      const weight = gains[row + i];
+      kBar[i] = kb + weight * invF;
       fromGains += weight * ks[at + i];
     }
-    fBar = prevFBar + sens.variances[t] - fromGains * invF * invF;
+    // F' = F + m w₀² and m' = m + m² w₀² / F.
+    const nextFBar = fBar - (cBar * zw) / (nextF * nextF);
+    const mNextBar = mBar;
+    mBar = mNextBar * (1 + (2 * mz * zw) * invF) + zw * kTw + nextFBar * zw * zw;
+    wBar[0] = mNextBar * 2 * mPrev * mz * invF + cBar / nextF + mPrev * kTw + twPhi + nextFBar * 2 * mz;
+    fBar = nextFBar - mNextBar * mz * mz * invF * invF + variances[t] - fromGains * invF * invF;
   }
   // The start: w = K, m = −1/F, F = P[0,0], K_i = φ_i P[0,0] + P[i+1,0].
   for (let i = 0; i < r; i++) kBar[i] += wBar[i];
