@@ -114,7 +114,7 @@ export function createProfileLikelihood(
           shiftedRun: createWorkspace(workspace.r, [y]),
           sensitivities: createSensitivities(workspace.stride, workspace.n),
           scratch: createAdjointScratch(workspace.r, workspace.ncol, workspace.n),
-          gainScratch: createGainScratch(workspace.r, workspace.n),
+          gainScratch: createGainScratch(workspace.r),
           phiBar: new Float64Array(workspace.stride),
           columnBar: new Float64Array(workspace.r),
         }

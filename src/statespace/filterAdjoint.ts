@@ -21,7 +21,7 @@
 import type { Estimation } from '../base/settings.js';
 import { choleskySolveInPlace } from '../linalg/smallSpd.js';
 import type { FilterWorkspace } from './filterWorkspace.js';
-import { SCALAR_STATE } from './filterRecursions.js';
+import { ensureGainStates, runChandrasekharGeneric, SCALAR_STATE } from './filterRecursions.js';
 
 /** The sensitivities, per time where they vary with it. */
 export interface FilterSensitivities {
@@ -316,25 +316,14 @@ function backwardScalar(ws: FilterWorkspace, columns: readonly Float64Array[], e
   dphi[3] = p > 3 ? d3 : 0;
 }
 
-/** Scratch for `gainRecursionAdjoint`: the recursion's states up to the steady point, and adjoints. */
+/** Scratch for `gainRecursionAdjoint`: the adjoints of K and w. */
 export interface GainScratch {
-  f: Float64Array;
-  m: Float64Array;
-  k: Float64Array;
-  w: Float64Array;
   kBar: Float64Array;
   wBar: Float64Array;
 }
 
-export function createGainScratch(r: number, n: number): GainScratch {
-  return {
-    f: new Float64Array(n + 1),
-    m: new Float64Array(n + 1),
-    k: new Float64Array((n + 1) * r),
-    w: new Float64Array((n + 1) * r),
-    kBar: new Float64Array(r),
-    wBar: new Float64Array(r),
-  };
+export function createGainScratch(r: number): GainScratch {
+  return { kBar: new Float64Array(r), wBar: new Float64Array(r) };
 }
 
 /**
@@ -348,38 +337,17 @@ export function createGainScratch(r: number, n: number): GainScratch {
  *   F' = F + m (w₀)²,  Tw_i = φ_i w₀ + w_{i+1},  K'_i = K_i + m w₀ Tw_i,
  *   w'_i = Tw_i − K'_i w₀ / F',  m' = m + m² (w₀)² / F,
  * from F = P[0,0], K_i = φ_i P[0,0] + P[i+1,0], w = K, m = −1/F; its adjoint below is the
- * chain rule applied to these lines in reverse (Griewank & Walther 2008, ch. 3).
+ * chain rule applied to these lines in reverse (Griewank & Walther 2008, ch. 3), on the states
+ * the run kept (the generic run keeps them; after the scalar run, they are recorded here by the
+ * generic one, whose outputs are the same to rounding).
  */
 export function gainRecursionAdjoint(ws: FilterWorkspace, sens: FilterSensitivities, scratch: GainScratch, phiBar: Float64Array, columnBar: Float64Array): void {
   const { r, stride, phi, pmat, steadyFrom, n } = ws;
-  const { f: fs, m: ms, k: ks, w: wsr, kBar, wBar } = scratch;
+  const states = ensureGainStates(ws);
+  if (!states.current) runChandrasekharGeneric(ws, states);
+  const { f: fs, m: ms, k: ks, w: wsr } = states;
+  const { kBar, wBar } = scratch;
   const last = r - 1;
-  // Forward again, keeping every state: the same operations as the run, so the same values.
-  let f = pmat[0];
-  for (let i = 0; i < r; i++) {
-    const k = phi[i] * pmat[0] + (i < last ? pmat[(i + 1) * r] : 0);
-    ks[i] = k;
-    wsr[i] = k;
-  }
-  let m = -1 / f;
-  fs[0] = f;
-  ms[0] = m;
-  for (let t = 0; t < steadyFrom; t++) {
-    const at = t * r;
-    const next = at + r;
-    const zw = wsr[at];
-    const nextF = f + m * zw * zw;
-    for (let i = 0; i < r; i++) {
-      const tw = phi[i] * zw + (i < last ? wsr[at + i + 1] : 0);
-      const k = ks[at + i] + m * zw * tw;
-      ks[next + i] = k;
-      wsr[next + i] = tw - (k * zw) / nextF;
-    }
-    m += (m * m * zw * zw) / f;
-    f = nextF;
-    fs[t + 1] = f;
-    ms[t + 1] = m;
-  }
   // The adjoint of the state at the steady point: its outputs serve every t from there on.
   let fBar = 0;
   let mBar = 0;

@@ -6,7 +6,7 @@
 //   Kailath 1974);
 // - data: a_{t+1} = T a_t + K_t v_t for y and every regressor column, with the weighted
 //   cross-products of the innovations that GLS needs.
-import type { FilterWorkspace } from './filterWorkspace.js';
+import type { FilterWorkspace, GainStates } from './filterWorkspace.js';
 
 /** Largest change in P (σ² = 1 scale) below which the filter is taken as converged. */
 export const STEADY_TOLERANCE = 1e-13;
@@ -88,7 +88,7 @@ export function runCovariance(ws: FilterWorkspace, y: Float64Array): number {
  */
 export function runChandrasekhar(ws: FilterWorkspace): number {
   const { r, stride, n, phi, pmat, gains, variances, weights } = ws;
-  if (stride !== SCALAR_STATE) return runChandrasekharGeneric(ws);
+  if (stride !== SCALAR_STATE) return runChandrasekharGeneric(ws, ensureGainStates(ws));
   // State dimension ≤ 4: K, w and T w in locals, padded with zeros beyond r (φ_i = 0 for
   // i ≥ r keeps the padding at zero).
   const f0 = phi[0], f1 = phi[1], f2 = phi[2], f3 = phi[3];
@@ -154,19 +154,34 @@ export function runChandrasekhar(ws: FilterWorkspace): number {
   return t;
 }
 
-/** The same recursions with K, w and T w in arrays, for state dimensions above four. */
-function runChandrasekharGeneric(ws: FilterWorkspace): number {
-  const { r, stride, n, phi, pmat, gains, variances, weights, mmat } = ws;
-  // mmat (r² ≥ 3r entries for r > 4) holds K, w and T w side by side.
-  const kAt = 0;
-  const wAt = r;
-  const twAt = 2 * r;
+function createGainStates(r: number, n: number): GainStates {
+  return { f: new Float64Array(n + 1), m: new Float64Array(n + 1), k: new Float64Array((n + 1) * r), w: new Float64Array((n + 1) * r), current: false };
+}
+
+/** The workspace's per-time gain states, allocated on first use. */
+export function ensureGainStates(ws: FilterWorkspace): GainStates {
+  ws.gainStates ??= createGainStates(ws.r, ws.n);
+  return ws.gainStates;
+}
+
+/**
+ * The same recursions with K and w in per-time rows of `states`, for state dimensions above
+ * four, where the gain recursion's adjoint (filterAdjoint.ts) reads them back; for smaller ones
+ * the adjoint runs this to have them. `states.current` says they belong to the last run.
+ */
+export function runChandrasekharGeneric(ws: FilterWorkspace, states: GainStates): number {
+  const { r, stride, n, phi, pmat, gains, variances, weights } = ws;
+  const { f: fs, m: ms, k: ks, w: wsr } = states;
+  const last = r - 1;
   let f = pmat[0];
   for (let i = 0; i < r; i++) {
-    mmat[kAt + i] = phi[i] * pmat[0] + (i + 1 < r ? pmat[(i + 1) * r] : 0);
-    mmat[wAt + i] = mmat[kAt + i];
+    const k = phi[i] * pmat[0] + (i < last ? pmat[(i + 1) * r] : 0);
+    ks[i] = k;
+    wsr[i] = k;
   }
   let m = -1 / f;
+  fs[0] = f;
+  ms[0] = m;
   let logF = 0;
   let t = 0;
   let steady = false;
@@ -177,30 +192,36 @@ function runChandrasekharGeneric(ws: FilterWorkspace): number {
     weights[t] = invF;
     logF += Math.log(f);
     const row = t * stride;
-    for (let i = 0; i < r; i++) gains[row + i] = mmat[kAt + i] * invF;
-    const zw = mmat[wAt];
+    const at = t * r;
+    const next = at + r;
+    for (let i = 0; i < r; i++) gains[row + i] = ks[at + i] * invF;
+    const zw = wsr[at];
     const nextF = f + m * zw * zw;
     let change = 0;
     for (let i = 0; i < r; i++) {
-      const tw = phi[i] * zw + (i + 1 < r ? mmat[wAt + i + 1] : 0);
-      mmat[twAt + i] = tw;
-      mmat[kAt + i] += m * zw * tw;
-      change += mmat[wAt + i] * mmat[wAt + i];
+      const w = wsr[at + i];
+      change += w * w;
+      const tw = phi[i] * zw + (i < last ? wsr[at + i + 1] : 0);
+      const k = ks[at + i] + m * zw * tw;
+      ks[next + i] = k;
+      wsr[next + i] = tw - (k * zw) / nextF;
     }
-    for (let i = 0; i < r; i++) mmat[wAt + i] = mmat[twAt + i] - (mmat[kAt + i] * zw) / nextF;
     m += (m * m * zw * zw) / f;
     f = nextF;
+    fs[t + 1] = f;
+    ms[t + 1] = m;
     steady = Math.abs(m) * change < STEADY_TOLERANCE;
   }
   if (t < n) {
     const invF = 1 / f;
     const row = t * stride;
-    for (let i = 0; i < r; i++) gains[row + i] = mmat[kAt + i] * invF;
+    for (let i = 0; i < r; i++) gains[row + i] = ks[t * r + i] * invF;
     fillSteady(ws, t, f);
     logF += (n - t) * Math.log(f);
   }
   ws.sumLogF = logF;
   ws.nobs = n;
+  states.current = true;
   return t;
 }
 

@@ -48,6 +48,26 @@ export interface FilterWorkspace {
   steadyFrom: number;
   /** Observations that entered the likelihood (non-missing y). */
   nobs: number;
+  /**
+   * The Chandrasekhar recursions' states per time up to the steady point, as the generic run
+   * leaves them (filterRecursions.ts; allocated by the first run that keeps them).
+   */
+  gainStates: GainStates | undefined;
+}
+
+/**
+ * F_t, m_t, K_t and w_t of the Chandrasekhar recursions (filterRecursions.ts) for t up to the
+ * steady point, which the gain recursion's adjoint (filterAdjoint.ts) runs back through.
+ */
+export interface GainStates {
+  readonly f: Float64Array;
+  readonly m: Float64Array;
+  /** K_t at [t·r, (t+1)·r). */
+  readonly k: Float64Array;
+  /** w_t at [t·r, (t+1)·r). */
+  readonly w: Float64Array;
+  /** True when they are those of the workspace's last run. */
+  current: boolean;
 }
 
 /** Scratch the gap filter needs beyond the workspace's own arrays, for state dimension r and `period` seasons. */

@@ -31,7 +31,7 @@ export function createWorkspace(r: number, columns: readonly Float64Array[], opt
     phi: new Float64Array(stride),
     rvec: new Float64Array(stride),
     pmat: new Float64Array(r * r),
-    mmat: new Float64Array(Math.max(r * r, 3 * r)),
+    mmat: new Float64Array(r * r),
     gains: new Float64Array((n + 1) * stride),
     variances: new Float64Array(n),
     weights: new Float64Array(n),
@@ -50,8 +50,10 @@ export function createWorkspace(r: number, columns: readonly Float64Array[], opt
     sumLogF: 0,
     steadyFrom: -1,
     nobs: 0,
+    gainStates: undefined,
   };
 }
+
 
 function hasMissing(y: Float64Array): boolean {
   for (let t = 0; t < y.length; t++) if (Number.isNaN(y[t])) return true;
@@ -92,6 +94,7 @@ export function setArma(
  */
 export function runFilter(ws: FilterWorkspace, columns: readonly Float64Array[], keepCovariance = false): boolean {
   ws.steadyFrom = -1;
+  if (ws.gainStates !== undefined) ws.gainStates.current = false;
   if (ws.gaps !== undefined) return runGapFilter(ws, ws.gaps, columns);
   const fast = !keepCovariance && ws.complete;
   const steadyFrom = fast ? runChandrasekhar(ws) : runCovariance(ws, columns[0]);

@@ -80,4 +80,29 @@ describe('the adjoint gradient', () => {
     likelihood.atUnconstrained(x);
     expect(likelihood.gradientAtUnconstrained(x, new Float64Array(2))).toBe(false);
   });
+
+  // The gain recursion's adjoint reads the per-time states the generic run keeps (state
+  // dimension above four); a run of the full covariance recursion in between leaves them stale,
+  // and the gradient must not read them then.
+  it.each([
+    ['seasonal, state dimension 14', 12, 1, 1, 1, 1],
+    ['plain, state dimension 4', 1, 3, 2, 0, 0],
+  ])('reads the gain states of the run it differentiates, whatever ran in between: %s', (_label, period, p, q, P, Q) => {
+    const series = period === 12 ? w : huron;
+    const design = period === 12 ? trendDesign('deterministic', series, { period: 12, firstSeason: 0, harmonics: 1, seasonalDifferencing: false }) : trendDesign('deterministic', series);
+    const likelihood = createProfileLikelihood(olsFit(design.response, design.regressors).residuals, design.regressors, p, q, P + Q > 0 ? { seasonal: { period, P, Q } } : {});
+    const count = p + q + P + Q;
+    const x = Float64Array.from({ length: count }, (_, i) => 0.3 * Math.sin(i + 1));
+    const elsewhere = Float64Array.from({ length: count }, (_, i) => -0.2 * Math.cos(i + 1));
+    const direct = new Float64Array(count);
+    likelihood.atUnconstrained(x);
+    expect(likelihood.gradientAtUnconstrained(x, direct)).toBe(true);
+    likelihood.atUnconstrained(elsewhere);
+    const { ar, ma } = likelihood.coefficientsOf(x);
+    likelihood.atCoefficients(ar, ma, true);
+    expect(likelihood.workspace.gainStates?.current ?? false).toBe(false);
+    const again = new Float64Array(count);
+    expect(likelihood.gradientAtUnconstrained(x, again)).toBe(true);
+    expect(Array.from(again)).toEqual(Array.from(direct));
+  });
 });
