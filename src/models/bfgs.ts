@@ -16,6 +16,11 @@ export interface MinimizeOptions {
    * `out`; false where it cannot be had, and forward differences are used instead.
    */
   gradient?: (x: Float64Array, fx: number, out: Float64Array) => boolean;
+  /**
+   * An inverse Hessian to start from (k×k, row-major), e.g. the one a neighbouring problem's
+   * run ended with; the identity, scaled after the first step, when absent.
+   */
+  inverseHessian?: Float64Array;
 }
 
 export interface MinimizeResult {
@@ -25,6 +30,8 @@ export interface MinimizeResult {
   iterations: number;
   evaluations: number;
   converged: boolean;
+  /** The inverse-Hessian approximation at the end (k×k, row-major). */
+  inverseHessian: Float64Array;
 }
 
 const ARMIJO = 1e-4;
@@ -48,7 +55,7 @@ export function minimizeBfgs(objective: Objective, start: ArrayLike<number>, opt
   const x = Float64Array.from(start);
   let fx = evaluate(x);
   if (k === 0 || !Number.isFinite(fx)) {
-    return { x, value: fx, gradientNorm: 0, iterations: 0, evaluations, converged: k === 0 && Number.isFinite(fx) };
+    return { x, value: fx, gradientNorm: 0, iterations: 0, evaluations, converged: k === 0 && Number.isFinite(fx), inverseHessian: identity(k) };
   }
   const grad = new Float64Array(k);
   const nextGrad = new Float64Array(k);
@@ -58,7 +65,9 @@ export function minimizeBfgs(objective: Objective, start: ArrayLike<number>, opt
   const yv = new Float64Array(k);
   const hy = new Float64Array(k);
   const hinv = new Float64Array(k * k);
-  resetIdentity(hinv, k);
+  const given = options.inverseHessian;
+  if (given !== undefined && given.length === k * k) hinv.set(given);
+  else resetIdentity(hinv, k);
   const gradientAt = (point: Float64Array, value: number, out: Float64Array): void => {
     if (options.gradient !== undefined && options.gradient(point, value, out)) return;
     forwardGradient(evaluate, point, value, out);
@@ -66,7 +75,7 @@ export function minimizeBfgs(objective: Objective, start: ArrayLike<number>, opt
   gradientAt(x, fx, grad);
   let gnorm = maxAbs(grad);
   let iterations = 0;
-  let freshHessian = true;
+  let freshHessian = given === undefined || given.length !== k * k;
   let stalled = false;
   const history = new Float64Array(STALL_WINDOW).fill(Number.POSITIVE_INFINITY);
 
@@ -137,7 +146,7 @@ export function minimizeBfgs(objective: Objective, start: ArrayLike<number>, opt
   }
   // A stall at a small gradient is the forward-difference noise floor, not a failure.
   const converged = gnorm <= gtol || (stalled && gnorm <= STALL_GRADIENT);
-  return { x, value: fx, gradientNorm: gnorm, iterations, evaluations, converged };
+  return { x, value: fx, gradientNorm: gnorm, iterations, evaluations, converged, inverseHessian: hinv };
 }
 
 /** Forward differences with a step scaled to each coordinate (backward where forward is infeasible). */
@@ -174,6 +183,12 @@ function updateInverseHessian(hinv: Float64Array, s: Float64Array, y: Float64Arr
       hinv[i * k + j] += factor * s[i] * s[j] - rho * (hy[i] * s[j] + s[i] * hy[j]);
     }
   }
+}
+
+function identity(k: number): Float64Array {
+  const matrix = new Float64Array(k * k);
+  resetIdentity(matrix, k);
+  return matrix;
 }
 
 function resetIdentity(matrix: Float64Array, k: number): void {

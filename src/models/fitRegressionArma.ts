@@ -75,6 +75,8 @@ export interface RegressionArmaFit {
   converged: boolean;
   /** The optimum in the unconstrained space, laid out as (AR, MA, seasonal AR, seasonal MA) (a warm start for larger orders). */
   unconstrained: Float64Array;
+  /** The optimiser's inverse-Hessian approximation there, of −ℓ/n in the unconstrained space (a warm start's curvature). */
+  inverseHessian: Float64Array;
   /** One-step prediction errors of y − Xβ̂ (NaN where y is missing) and their variances / σ². */
   residuals: Float64Array;
   residualVariance: Float64Array;
@@ -98,6 +100,11 @@ export interface FitOptions extends LikelihoodOptions {
    * near (REML from the exact-ML optimum), where the usual starts would find it again.
    */
   startsOnly?: boolean;
+  /**
+   * With `startsOnly`: the inverse Hessian each start begins from, that of a neighbouring fit's
+   * optimum (the same order on the series one origin away), instead of the identity.
+   */
+  curvature?: Float64Array;
   /** `olsFit(y, regressors)` already computed by the caller (an order search fits every candidate on the same y and regressors). */
   ols?: OlsPart;
 }
@@ -143,24 +150,26 @@ export function fitRegressionArma(
   // Race the extra starts: a few iterations each, then only the most promising run to the
   // end. The zero and Hannan-Rissanen starts always run to the end.
   let evaluations = 0;
+  const heatIterations = seasonalFit ? SEASONAL_HEAT_ITERATIONS : HEAT_ITERATIONS;
   const heats = starts.map((start, index) => {
-    const result = minimizeBfgs(objective, start, { maxIterations: index < baseStarts ? 500 : seasonalFit ? SEASONAL_HEAT_ITERATIONS : HEAT_ITERATIONS, gradient });
+    const inverseHessian = options.startsOnly === true ? options.curvature : undefined;
+    const result = minimizeBfgs(objective, start, { maxIterations: index < baseStarts ? 500 : heatIterations, gradient, inverseHessian });
     evaluations += result.evaluations;
     return result;
   });
   const finalists = [...heats.slice(0, baseStarts), ...heats.slice(baseStarts).sort((a, b) => a.value - b.value).slice(0, finalistCount(seasonalFit, p + q))];
-  let best: { x: Float64Array; value: number; converged: boolean } | undefined;
+  let best: { x: Float64Array; value: number; converged: boolean; inverseHessian: Float64Array } | undefined;
   for (const heat of finalists) {
     const result = heat.converged ? heat : minimizeBfgs(objective, heat.x, { gradient });
     evaluations += heat.converged ? 0 : result.evaluations;
     if (best === undefined || result.value < best.value - 1e-12 || (result.value <= best.value && result.converged && !best.converged)) {
-      best = { x: result.x, value: result.value, converged: result.converged };
+      best = { x: result.x, value: result.value, converged: result.converged, inverseHessian: result.inverseHessian };
     }
   }
   if (best === undefined || !Number.isFinite(best.value)) {
     throw new Error(`fitRegressionArma: no start gave a finite likelihood for ARMA(${p},${q})(${order.P},${order.Q})`);
   }
-  const fit = summarise(likelihood, best.x, best.converged, evaluations);
+  const fit = { ...summarise(likelihood, best.x, best.converged, evaluations), inverseHessian: best.inverseHessian };
   // Back from the OLS residuals to y: β adds the OLS coefficients, and by linearity the
   // filtered state of y is that of the residuals plus X's states weighted by them.
   const yState = fit.finalState[0].slice();
@@ -178,7 +187,7 @@ export function fitRegressionArma(
   };
 }
 
-function summarise(likelihood: ProfileLikelihood, x: Float64Array, converged: boolean, evaluations: number): RegressionArmaFit {
+function summarise(likelihood: ProfileLikelihood, x: Float64Array, converged: boolean, evaluations: number): Omit<RegressionArmaFit, 'inverseHessian'> {
   const { ar, ma } = likelihood.coefficientsOf(x);
   const factors = likelihood.factorsOf(x);
   const loglik = likelihood.atCoefficients(ar, ma, true);

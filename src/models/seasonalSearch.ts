@@ -60,11 +60,11 @@ export interface SeasonalCandidate extends Candidate {
 }
 
 /**
- * The optimum (unconstrained parameters) of each candidate a search fitted, by candidate:
- * handed to a search on a series one observation longer (the next backtest origin), whose fits
- * then start there alone.
+ * The optimum (unconstrained parameters) of each candidate a search fitted, and the optimiser's
+ * inverse Hessian there, by candidate: handed to a search on a series one observation longer
+ * (the next backtest origin), whose fits then start there alone, with that curvature.
  */
-export type CandidateOptima = Record<string, Float64Array>;
+export type CandidateOptima = Record<string, { x: Float64Array; inverseHessian: Float64Array }>;
 
 export interface SeasonalSearchResult {
   best: RegressionArmaFit;
@@ -227,7 +227,7 @@ export function searchSeasonalModel(kind: TrendModelKind, w: Float64Array, maxP:
     const fit = fitRegressionArma(design.response, design.regressors, p, q, {
       ...designWorkspace(design),
       seasonal: { period: spec.period, P: choice.P, Q: choice.Q },
-      ...(near === undefined ? { starts } : { starts: [near], startsOnly: true }),
+      ...(near === undefined ? { starts } : { starts: [near.x], startsOnly: true, curvature: near.inverseHessian }),
     });
     return record(choice, fit);
   };
@@ -336,7 +336,7 @@ function resultOf(entries: readonly Entry[], best: Entry): Omit<SeasonalSearchRe
     if (reason !== null && reason !== 'not-converged' && value < best.candidate.aicc && value < (setAside?.candidate.aicc ?? Number.POSITIVE_INFINITY)) setAside = entry;
   }
   const optima: CandidateOptima = {};
-  for (const entry of entries) optima[entryKey(entry.choice, entry.fit.order.p, entry.fit.order.q)] = entry.fit.unconstrained;
+  for (const entry of entries) optima[entryKey(entry.choice, entry.fit.order.p, entry.fit.order.q)] = { x: entry.fit.unconstrained, inverseHessian: entry.fit.inverseHessian };
   return {
     best: best.fit,
     optima,

@@ -221,10 +221,12 @@ function restrictedFit(kind: TrendModelKind, design: TrendDesign, ml: Regression
     estimation: 'reml',
     seasonal,
     // REML moves the optimum a little from exact ML's; for a seasonal design the usual starts
-    // would only find it again (27% of those fits' time). A plain design keeps them, so annual
-    // and seasonally adjusted series are estimated exactly as before seasonal parts existed.
+    // would only find it again (27% of those fits' time), and it starts from that optimum's
+    // curvature as well. A plain design keeps them, so annual and seasonally adjusted series
+    // are estimated exactly as before seasonal parts existed.
     starts: [ml.unconstrained],
     startsOnly: design.seasonality !== undefined,
+    curvature: ml.inverseHessian,
   });
   if (!fit.converged) return 'not-converged';
   const verdict = admissibility(fit, kind === 'stochastic');
