@@ -160,7 +160,10 @@ export function fitRegressionArma(
   const finalists = [...heats.slice(0, baseStarts), ...heats.slice(baseStarts).sort((a, b) => a.value - b.value).slice(0, finalistCount(seasonalFit, p + q))];
   let best: { x: Float64Array; value: number; converged: boolean; inverseHessian: Float64Array } | undefined;
   for (const heat of finalists) {
-    const result = heat.converged ? heat : minimizeBfgs(objective, heat.x, { gradient });
+    // A raced start that ran out of heat iterations carries on with the curvature it had
+    // learnt; any other unconverged run (a stall) starts afresh from the identity.
+    const carried = heats.indexOf(heat) >= baseStarts && heat.iterations === heatIterations;
+    const result = heat.converged ? heat : minimizeBfgs(objective, heat.x, { gradient, inverseHessian: carried ? heat.inverseHessian : undefined });
     evaluations += heat.converged ? 0 : result.evaluations;
     if (best === undefined || result.value < best.value - 1e-12 || (result.value <= best.value && result.converged && !best.converged)) {
       best = { x: result.x, value: result.value, converged: result.converged, inverseHessian: result.inverseHessian };
