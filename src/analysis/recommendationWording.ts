@@ -1,6 +1,7 @@
 // The recommendation's sentences, written into the record (and so read by the memo and the
 // terminal summary alike). Each says what the data showed or what the policy decided, never
 // the one as the other.
+import { groupThousands } from '../base/groupThousands.js';
 import { formatPValue } from '../base/pValueText.js';
 import type { RecommendationRule, TrendModelKind } from '../base/settings.js';
 
@@ -12,9 +13,9 @@ function hList(hs: readonly number[]): string {
   return hs.length > 3 ? `${hs[0]} to ${hs[hs.length - 1]}` : hs.join(', ');
 }
 
-/** Four significant digits, never in exponent form: 10330, 5.346. */
+/** Four significant digits, thousands grouped as the memo prints numbers: 10,330, 5.346. */
 function fourDigits(value: number): string {
-  return String(Number(value.toPrecision(4)));
+  return groupThousands(String(Number(value.toPrecision(4))));
 }
 
 export const recommendationWording = {

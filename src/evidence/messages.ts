@@ -1,6 +1,7 @@
 // All wording this stage shows to readers of a memo, kept in one place so it can be reviewed
 // and reworded without touching the statistics. Written for a client reviewer: no test jargon
 // beyond naming the p-values.
+import { groupThousands } from '../base/groupThousands.js';
 import { formatPValue, type StatedPValue } from '../base/pValueText.js';
 import type { SeasonalPattern, SeasonalStrength, SupWaldPBound, TrendVerdictKind } from './types.js';
 
@@ -96,9 +97,9 @@ function seasonWord(period: number): string {
   return 'season';
 }
 
-/** Three significant figures, without a trailing exponent for ordinary sizes. */
+/** Three significant figures, without a trailing exponent for ordinary sizes, thousands grouped as the memo prints numbers. */
 function threeFigures(x: number): string {
-  return String(Number(x.toPrecision(3)));
+  return groupThousands(String(Number(x.toPrecision(3))));
 }
 
 /**

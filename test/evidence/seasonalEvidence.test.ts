@@ -235,3 +235,29 @@ describe('the strength summary of a weak pattern', () => {
     expect(seasonalStrengthSummary({ seasonal: 0.55, trend: 0.99 }, pattern)).not.toContain('poorly determined');
   });
 });
+
+describe('the strength summary of a pattern in thousands', () => {
+  // Invented monthly effects with the range (1,850) and largest change (144) that the demo memo
+  // reports for its bulk deliveries; the sentence groups thousands as every number in the memo
+  // is (memo/format/formatNumber.ts; common practice in English prose).
+  const pattern = {
+    period: 12,
+    season: [1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12],
+    mean_effect: [-900, -700, -300, 100, 500, 900, 950, 700, 300, -100, -500, -850],
+    amplitude: 1849.6,
+    complete_years: 10,
+    first_year: 2015,
+    last_year: 2024,
+    first_year_effect: [-900, -700, -300, 100, 500, 900, 950, 700, 300, -100, -500, -850],
+    last_year_effect: [-850, -700, -300, 100, 500, 900, 950, 700, 300, -100, -500, -994],
+    largest_change: 144.2,
+    largest_change_season: 12,
+    change_share: 0.078,
+  };
+
+  it('groups the range in thousands', () => {
+    expect(seasonalStrengthSummary({ seasonal: 0.99, trend: 0.91 }, pattern)).toBe(
+      "The seasonal pattern is strong (seasonal strength 0.99 on a scale from 0 to 1) and stable: between 2015 and 2024 no month's effect moved by more than 144, 8% of the pattern's range of 1,850. The trend's strength on the same scale is 0.91.",
+    );
+  });
+});

@@ -3,6 +3,7 @@
 // record holds no number. Plain code rather than Intl so the output never depends on the
 // machine's locale data.
 import type { JsonNumber } from '../../analysis/record.js';
+import { groupThousands } from '../../base/groupThousands.js';
 
 export const MISSING = 'n/a';
 const MINUS = '\u2212';
@@ -12,9 +13,7 @@ const MAX_DECIMALS = 6;
 export function formatNumber(value: JsonNumber | undefined, decimals: number): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return MISSING;
   const fixed = Math.abs(value).toFixed(decimals);
-  const [whole, fraction] = fixed.split('.');
-  const grouped = whole.replace(/\B(?=(\d{3})+(?!\d))/g, ',');
-  const body = fraction === undefined ? grouped : `${grouped}.${fraction}`;
+  const body = groupThousands(fixed);
   // A value that rounds to zero is printed without a sign.
   const negative = value < 0 && /[1-9]/.test(fixed);
   return negative ? `${MINUS}${body}` : body;
