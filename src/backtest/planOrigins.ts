@@ -9,6 +9,7 @@
 // once. The whole rule is
 // K' = min(max(K, s), available); when the series allows fewer than s origins, some seasons
 // are never an origin, which `originSeasons` counts and the record's notes say.
+import { availableOrigins } from '../base/backtestOrigins.js';
 import type { WindowKind } from '../base/settings.js';
 
 export interface PlannedOrigin {
@@ -36,12 +37,6 @@ export interface OriginPlanOptions {
   minTrainingLength: number;
   /** Seasonal period s (1: not seasonal); at least s origins are planned. */
   period?: number;
-}
-
-/** Origins available for a series of n observations (0 when none can be scored). */
-export function availableOrigins(n: number, options: Omit<OriginPlanOptions, 'origins' | 'window'>): number {
-  const spare = n - options.horizon - options.minTrainingLength;
-  return spare < 0 ? 0 : Math.floor(spare / options.step) + 1;
 }
 
 export function planOrigins(n: number, options: OriginPlanOptions): OriginPlan {

@@ -8,6 +8,7 @@
 //   values ─readBacktestInput─▶ y, w ─planOrigins─▶ origins ─runOriginTasks (threads)─▶
 //   model-scale forecasts ─backTransformForecast─▶ forecasts ─scoreHorizon / compareModels─▶ record
 import { availableParallelism } from 'node:os';
+import { ORIGIN_STEP } from '../base/backtestOrigins.js';
 import { InputError, type InputProblem } from '../base/problem.js';
 import { TREND_MODELS, type AnalysisSettings, type TrendModelKind } from '../base/settings.js';
 import { regressorsIdentified } from '../models/fitRegressionArma.js';
@@ -24,8 +25,6 @@ import { readBacktestInput, type BacktestInput } from './readBacktestInput.js';
 import { runOriginTasks, type OriginPool } from './runOriginTasks.js';
 import { scoreHorizon } from './scoreHorizon.js';
 
-/** Origins are one observation apart. */
-const ORIGIN_STEP = 1;
 /**
  * Longest chain of origins whose seasonal searches run warm, each from the one before: the
  * first of a chain searches cold. Each model's origins are cut into two chains (the two

@@ -125,7 +125,9 @@ function deepFreeze<T extends object>(value: T): T {
 /**
  * The backtest checks forecasts as far ahead as the memo makes them, where the series is long
  * enough to leave MIN_BACKTEST_ORIGINS origins after the shortest training window; a shorter
- * series gets a shorter backtest horizon (the memo says so on its first page).
+ * series gets a shorter backtest horizon (the memo says so on its first page). The longest such
+ * horizon solves `availableOrigins` (base/backtestOrigins.ts) ≥ MIN_BACKTEST_ORIGINS for origins
+ * one observation apart.
  */
 function backtestHorizon(horizon: number, n: number, minTrain: number): number {
   const longest = n - minTrain - (MIN_BACKTEST_ORIGINS - 1);

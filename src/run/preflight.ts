@@ -4,6 +4,7 @@
 // series entry when the setting took its default. None of them refuses the run: the memo
 // states each limitation too.
 import type { InputLocation, InputProblem } from '../base/problem.js';
+import { availableOrigins, ORIGIN_STEP } from '../base/backtestOrigins.js';
 import { MIN_BACKTEST_ORIGINS } from '../base/settings.js';
 import { seasonalStrengthOf } from '../analysis/seasonalStrengthCheck.js';
 import type { PlannedSeries } from './readPlannedSeries.js';
@@ -21,8 +22,7 @@ export function preflightWarnings({ plan, series, settings }: PlannedSeries, con
   const warnings: InputProblem[] = [];
   const n = series.n;
   const { horizon: scored, min_train: minTrain } = settings.backtest;
-  // Origins a backtest can have: the first trains on min_train observations, the last leaves `scored` to score.
-  const origins = n - scored - minTrain + 1;
+  const origins = availableOrigins(n, { horizon: scored, minTrainingLength: minTrain, step: ORIGIN_STEP });
   if (origins < 1) warnings.push(preflightMessages.noBacktest(placeOf('backtest.min_train'), plan.id, n, minTrain, scored, plan.settingPlaces.has('backtest.min_train')));
   else if (origins < MIN_BACKTEST_ORIGINS) warnings.push(preflightMessages.thinBacktest(placeOf('backtest.min_train'), plan.id, origins, MIN_BACKTEST_ORIGINS, n, minTrain));
   // The backtest horizon was shortened to keep its origins (resolveSettings), not asked for shorter.

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { availableOrigins, originSeasons, planOrigins } from '../../src/backtest/planOrigins.js';
+import { availableOrigins } from '../../src/base/backtestOrigins.js';
+import { originSeasons, planOrigins } from '../../src/backtest/planOrigins.js';
 
 // Expected origins from the definition in the issue: T = n − B − K + 1 .. n − B, step 1.
 describe('planOrigins', () => {
