@@ -75,20 +75,20 @@ export const dataMessages = {
     });
   },
   noData(at: InputLocation): InputProblem {
-    return problem('csv.no-data', 'has a header but no data lines', 'add one line per period below the header', at);
+    return problem('csv.no-data', `has a header but no data ${rows(at)}`, `add one ${row(at)} per period below the header`, at);
   },
   headerLooksLikeData(at: InputLocation, cell: string): InputProblem {
     return problem(
       'csv.no-header',
-      `the first line holds ${quotedCell(cell)}, which is data, not a column name`,
-      'add a header line naming the columns, such as period,value',
+      `the first ${row(at)} holds ${quotedCell(cell)}, which is data, not a column name`,
+      at.sheet === undefined ? 'add a header line naming the columns, such as period,value' : 'add a header row naming the columns, such as period and value',
       at,
     );
   },
   oneColumn(at: InputLocation, name: string): InputProblem {
     const other = name.includes(';') ? 'semicolon' : name.includes('\t') ? 'tab' : name.includes(',') ? 'comma' : undefined;
     const hint =
-      other === undefined ? 'add a value column: each line needs a period and a value' : `the header seems to separate cells with ${DELIMITER_NAMES[other]}: set ${setting('delimiter', other)}`;
+      other === undefined ? `add a value column: each ${row(at)} needs a period and a value` : `the header seems to separate cells with ${DELIMITER_NAMES[other]}: set ${setting('delimiter', other)}`;
     return problem('csv.one-column', `has a single column ${quotedCell(name)}`, hint, at);
   },
   unknownColumn(at: InputLocation, name: string, columns: readonly string[], suggestion: string | undefined): InputProblem {
@@ -99,7 +99,7 @@ export const dataMessages = {
     });
   },
   unnamedColumn(at: InputLocation, position: number): InputProblem {
-    return problem('csv.unnamed-column', `column ${position} has no name in the header`, 'give every column a name in the header line', {
+    return problem('csv.unnamed-column', `column ${position} has no name in the header`, `give every column a name in the header ${row(at)}`, {
       ...at,
       column: position,
     });
@@ -108,12 +108,12 @@ export const dataMessages = {
     return problem(
       'csv.bad-column-name',
       `the name of column ${position} holds the invisible control character ${codePointName(codePoint)} at character ${characterPosition}`,
-      'remove it from the header line: column names are printed in the memo',
+      `remove it from the header ${row(at)}: column names are printed in the memo`,
       { ...at, column: position },
     );
   },
   columnNameTooLong(at: InputLocation, position: number, length: number, max: number): InputProblem {
-    return problem('csv.bad-column-name', `the name of column ${position} is ${length} characters long; at most ${max} are allowed`, 'shorten it in the header line', {
+    return problem('csv.bad-column-name', `the name of column ${position} is ${length} characters long; at most ${max} are allowed`, `shorten it in the header ${row(at)}`, {
       ...at,
       column: position,
     });
@@ -183,7 +183,7 @@ export const dataMessages = {
     return problem('workbook.delimiter', 'a delimiter is set, but the file is a workbook, whose cells need none', `remove ${setting('delimiter')}`, { file });
   },
   emptyPeriod(at: InputLocation): InputProblem {
-    return problem('csv.empty-period', 'the period cell is empty', `${PERIOD_FORMS}, or delete the line`, at);
+    return problem('csv.empty-period', 'the period cell is empty', `${PERIOD_FORMS}, or delete the ${row(at)}`, at);
   },
   badPeriod(at: InputLocation, label: string): InputProblem {
     return problem('csv.bad-period', `${quotedCell(label)} is not a period`, PERIOD_FORMS, at);
@@ -203,7 +203,7 @@ export const dataMessages = {
     const [these, those] = isDate ? ['a date', 'a period label'] : ['a period label', 'a date'];
     return problem(
       'csv.mixed-period-form',
-      `${quotedCell(label)} is ${these}, but the first period ${quotedCell(first.label)} (line ${first.line}) is ${those}`,
+      `${quotedCell(label)} is ${these}, but the first period ${quotedCell(first.label)} (${row(at)} ${first.line}) is ${those}`,
       'write every period of the column in one form: all as period labels (2003-01) or all as dates (2003-01-31)',
       at,
     );
@@ -228,7 +228,7 @@ export const dataMessages = {
     return problem('csv.dates-finer', `dates ${first} and ${second} fall in one ${period}: the dates are ${apart}, but the frequency is set to ${given}`, hint, at);
   },
   dateInSamePeriod(at: InputLocation, label: string, period: string, first: { label: string; line: number }): InputProblem {
-    return problem('csv.duplicate-period', `date ${label} falls in ${period}, as does ${first.label} on line ${first.line}`, 'keep one line per period', at);
+    return problem('csv.duplicate-period', `date ${label} falls in ${period}, as does ${first.label} on ${row(at)} ${first.line}`, `keep one ${row(at)} per period`, at);
   },
   delimiterAmbiguous(at: InputLocation, candidates: readonly string[]): InputProblem {
     const names = candidates.map((name) => DELIMITER_NAMES[name] ?? name);
@@ -274,7 +274,7 @@ export const dataMessages = {
   frequencyMismatch(at: InputLocation, label: string, found: string, expected: string, lines: readonly number[]): InputProblem {
     return problem(
       'csv.frequency-mismatch',
-      `period ${quotedCell(label)} is ${found}, but the frequency is set to ${expected}${disagreeing(lines)}`,
+      `period ${quotedCell(label)} is ${found}, but the frequency is set to ${expected}${disagreeing(at, lines)}`,
       `set the frequency to ${found}, or write every period in the ${expected} form`,
       at,
     );
@@ -288,35 +288,35 @@ export const dataMessages = {
   ): InputProblem {
     return problem(
       'csv.mixed-frequency',
-      `period ${quotedCell(label)} is ${found}, but the first period ${quotedCell(first.label)} (line ${first.line}) is ${first.frequency}${disagreeing(lines)}`,
+      `period ${quotedCell(label)} is ${found}, but the first period ${quotedCell(first.label)} (${row(at)} ${first.line}) is ${first.frequency}${disagreeing(at, lines)}`,
       'write every period with the same frequency: one file holds one series',
       at,
     );
   },
   duplicatePeriod(at: InputLocation, label: string, firstLine: number): InputProblem {
-    return problem('csv.duplicate-period', `period ${label} already appears on line ${firstLine}`, 'keep one line per period', at);
+    return problem('csv.duplicate-period', `period ${label} already appears on ${row(at)} ${firstLine}`, `keep one ${row(at)} per period`, at);
   },
   unsorted(at: InputLocation, label: string, previous: { label: string; line: number }): InputProblem {
     return problem(
       'csv.unsorted',
-      `period ${label} comes after ${previous.label} (line ${previous.line})`,
-      'sort the lines by period, oldest first',
+      `period ${label} comes after ${previous.label} (${row(at)} ${previous.line})`,
+      `sort the ${rows(at)} by period, oldest first`,
       at,
     );
   },
   descending(at: InputLocation, first: string, last: string): InputProblem {
-    return problem('csv.descending', `periods run backwards, from ${first} down to ${last}`, 'sort the lines by period, oldest first', at);
+    return problem('csv.descending', `periods run backwards, from ${first} down to ${last}`, `sort the ${rows(at)} by period, oldest first`, at);
   },
   gap(at: InputLocation, missing: readonly string[], next: string): InputProblem {
     return problem(
       'csv.gap',
       `missing ${abbreviateList(missing)} before ${next}`,
-      'add a line for each missing period, or allow gaps (missing: allow in the config, --allow-missing for fit)',
+      `add a ${row(at)} for each missing period, or allow gaps (missing: allow in the config, --allow-missing for fit)`,
       at,
     );
   },
   missingEnd(at: InputLocation, which: 'first' | 'last', label: string): InputProblem {
-    return problem('series.missing-end', `the ${which} period, ${label}, has no value`, `start and end the file with observed values (remove the ${which} line)`, at);
+    return problem('series.missing-end', `the ${which} period, ${label}, has no value`, `start and end the ${at.sheet === undefined ? 'file' : 'sheet'} with observed values (remove the ${which} ${row(at)})`, at);
   },
   tooFew(at: InputLocation, count: number, minimum: number): InputProblem {
     return problem(
@@ -388,6 +388,15 @@ export const dataMessages = {
   },
 };
 
-function disagreeing(lines: readonly number[]): string {
-  return lines.length > 1 ? `; ${lines.length} lines disagree: ${abbreviateList(lines.map(String))}` : '';
+function disagreeing(at: InputLocation, lines: readonly number[]): string {
+  return lines.length > 1 ? `; ${lines.length} ${rows(at)} disagree: ${abbreviateList(lines.map(String))}` : '';
+}
+
+/** A place in a workbook is a row of its sheet; in a CSV file, a line. */
+function row(at: InputLocation): 'row' | 'line' {
+  return at.sheet === undefined ? 'line' : 'row';
+}
+
+function rows(at: InputLocation): 'rows' | 'lines' {
+  return at.sheet === undefined ? 'lines' : 'rows';
 }

@@ -118,6 +118,27 @@ describe('readSeriesFile on workbooks', () => {
     ]);
   });
 
+  it('speaks of rows, not lines, where a period repeats, is out of order or is missing', async () => {
+    const { file } = await workbook('rows.xlsx', (book) => {
+      const sheet = book.addWorksheet('Data');
+      sheet.addRow(['period', 'value']);
+      ['2010', '2011', '2011', '2013', '2012'].forEach((year, i) => sheet.addRow([year, 10 + i]));
+    });
+    const found = await problemsOf(file);
+    expect(found.map(formatProblem)).toEqual([
+      `${file}:4:1: Data!A4: period: period 2011 already appears on row 3; keep one row per period`,
+      `${file}:6:1: Data!A6: period: period 2012 comes after 2013 (row 5); sort the rows by period, oldest first`,
+    ]);
+    const { file: gappy } = await workbook('gap.xlsx', (book) => {
+      const sheet = book.addWorksheet('Data');
+      sheet.addRow(['period', 'value']);
+      ['2010', '2011', '2013', '2014'].forEach((year, i) => sheet.addRow([year, 10 + i]));
+    });
+    expect((await problemsOf(gappy)).map(formatProblem)).toEqual([
+      `${gappy}:4:1: Data!A4: period: missing 2012 before 2013; add a row for each missing period, or allow gaps (missing: allow in the config, --allow-missing for fit)`,
+    ]);
+  });
+
   it('reports a period column of text dates it cannot read once, at the first cell', async () => {
     const { file } = await workbook('text-dates.xlsx', (book) => {
       const sheet = book.addWorksheet('Sheet1');
