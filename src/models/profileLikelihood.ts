@@ -150,7 +150,7 @@ export function createProfileLikelihood(
       const { sensitivities, phiBar, columnBar, shiftedRun } = adjoint;
       filterSensitivities(workspace, columns, estimation, process.p, adjoint.scratch, sensitivities);
       phiBar.set(sensitivities.phi);
-      gainRecursionAdjoint(workspace, sensitivities, adjoint.gainScratch, phiBar, columnBar);
+      if (!gainRecursionAdjoint(workspace, sensitivities, adjoint.gainScratch, phiBar, columnBar)) return false;
       // ℓ depends on the parameters only through φ and the first column of the stationary P:
       // each parameter's derivative is their change, by forward differences, times the sensitivities.
       const { r } = workspace;

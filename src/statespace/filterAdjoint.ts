@@ -339,12 +339,18 @@ export function createGainScratch(r: number): GainScratch {
  * from F = P[0,0], K_i = φ_i P[0,0] + P[i+1,0], w = K, m = −1/F; its adjoint below is the
  * chain rule applied to these lines in reverse (Griewank & Walther 2008, ch. 3), on the states
  * the run kept (the generic run keeps them; after the scalar run, they are recorded here by the
- * generic one, whose outputs are the same to rounding).
+ * generic one, whose outputs are the same to rounding). False, with nothing added, where that
+ * recording settles at another step than the run did.
  */
-export function gainRecursionAdjoint(ws: FilterWorkspace, sens: FilterSensitivities, scratch: GainScratch, phiBar: Float64Array, columnBar: Float64Array): void {
+export function gainRecursionAdjoint(ws: FilterWorkspace, sens: FilterSensitivities, scratch: GainScratch, phiBar: Float64Array, columnBar: Float64Array): boolean {
   const { r, stride, phi, pmat, steadyFrom, n } = ws;
   const states = ensureGainStates(ws);
-  if (!states.current) runChandrasekharGeneric(ws, states);
+  // After the scalar run the generic one records the states. Its sums round differently, so on
+  // the threshold it could settle one step apart from the run; then the caller differences.
+  if (!states.current && runChandrasekharGeneric(ws, states) !== steadyFrom) {
+    states.current = false;
+    return false;
+  }
   const { f: fs, m: ms, k: ks, w: wsr } = states;
   const { kBar, wBar } = scratch;
   const last = r - 1;
@@ -416,4 +422,5 @@ export function gainRecursionAdjoint(ws: FilterWorkspace, sens: FilterSensitivit
     if (i + 1 < r) columnBar[i + 1] += kBar[i];
   }
   columnBar[0] += p00Bar;
+  return true;
 }
