@@ -160,8 +160,9 @@ export function fitRegressionArma(
   const finalists = [...heats.slice(0, baseStarts), ...heats.slice(baseStarts).sort((a, b) => a.value - b.value).slice(0, finalistCount(seasonalFit, p + q))];
   let best: { x: Float64Array; value: number; converged: boolean; inverseHessian: Float64Array } | undefined;
   for (const heat of finalists) {
-    // A raced start that ran out of heat iterations carries on with the curvature it had
-    // learnt; any other unconverged run (a stall) starts afresh from the identity.
+    // A raced start that ran all its heat iterations carries on with the curvature it had
+    // learnt; any other unconverged run (one that stalled before its last heat iteration, or a
+    // base start) starts afresh from the identity.
     const carried = heats.indexOf(heat) >= baseStarts && heat.iterations === heatIterations;
     const result = heat.converged ? heat : minimizeBfgs(objective, heat.x, { gradient, inverseHessian: carried ? heat.inverseHessian : undefined });
     evaluations += heat.converged ? 0 : result.evaluations;
