@@ -66,7 +66,8 @@ export function minimizeBfgs(objective: Objective, start: ArrayLike<number>, opt
   const hy = new Float64Array(k);
   const hinv = new Float64Array(k * k);
   const given = options.inverseHessian;
-  if (given !== undefined && given.length === k * k) hinv.set(given);
+  const warm = given !== undefined && given.length === k * k;
+  if (warm) hinv.set(given);
   else resetIdentity(hinv, k);
   const gradientAt = (point: Float64Array, value: number, out: Float64Array): void => {
     if (options.gradient !== undefined && options.gradient(point, value, out)) return;
@@ -75,7 +76,7 @@ export function minimizeBfgs(objective: Objective, start: ArrayLike<number>, opt
   gradientAt(x, fx, grad);
   let gnorm = maxAbs(grad);
   let iterations = 0;
-  let freshHessian = given === undefined || given.length !== k * k;
+  let freshHessian = !warm;
   let stalled = false;
   const history = new Float64Array(STALL_WINDOW).fill(Number.POSITIVE_INFINITY);
 

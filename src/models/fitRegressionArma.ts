@@ -151,19 +151,20 @@ export function fitRegressionArma(
   // end. The zero and Hannan-Rissanen starts always run to the end.
   let evaluations = 0;
   const heatIterations = seasonalFit ? SEASONAL_HEAT_ITERATIONS : HEAT_ITERATIONS;
+  const inverseHessian = options.startsOnly === true ? options.curvature : undefined;
   const heats = starts.map((start, index) => {
-    const inverseHessian = options.startsOnly === true ? options.curvature : undefined;
     const result = minimizeBfgs(objective, start, { maxIterations: index < baseStarts ? 500 : heatIterations, gradient, inverseHessian });
     evaluations += result.evaluations;
     return result;
   });
-  const finalists = [...heats.slice(0, baseStarts), ...heats.slice(baseStarts).sort((a, b) => a.value - b.value).slice(0, finalistCount(seasonalFit, p + q))];
+  const raced = heats.slice(baseStarts).sort((a, b) => a.value - b.value).slice(0, finalistCount(seasonalFit, p + q));
+  const finalists = [...heats.slice(0, baseStarts), ...raced];
   let best: { x: Float64Array; value: number; converged: boolean; inverseHessian: Float64Array } | undefined;
   for (const heat of finalists) {
     // A raced start that ran all its heat iterations carries on with the curvature it had
     // learnt; any other unconverged run (one that stalled before its last heat iteration, or a
     // base start) starts afresh from the identity.
-    const carried = heats.indexOf(heat) >= baseStarts && heat.iterations === heatIterations;
+    const carried = raced.includes(heat) && heat.iterations === heatIterations;
     const result = heat.converged ? heat : minimizeBfgs(objective, heat.x, { gradient, inverseHessian: carried ? heat.inverseHessian : undefined });
     evaluations += heat.converged ? 0 : result.evaluations;
     if (best === undefined || result.value < best.value - 1e-12 || (result.value <= best.value && result.converged && !best.converged)) {

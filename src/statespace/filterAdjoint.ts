@@ -258,7 +258,6 @@ function backwardScalar(ws: FilterWorkspace, columns: readonly Float64Array[], e
       dz -= pz * invF;
       dF += 0.5 * (w * pw + z * pz) * invF * invF;
     }
-    const at = t * SCALAR_STATE;
     const e0 = a0 * u + b0 * w + c0 * z;
     const e1 = a1 * u + b1 * w + c1 * z;
     const e2 = a2 * u + b2 * w + c2 * z;
@@ -270,6 +269,7 @@ function backwardScalar(ws: FilterWorkspace, columns: readonly Float64Array[], e
       s3 += e3;
       sv += dF;
     } else {
+      const at = t * SCALAR_STATE;
       dgains[at] = e0;
       dgains[at + 1] = e1;
       dgains[at + 2] = e2;
